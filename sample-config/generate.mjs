@@ -1,0 +1,267 @@
+// Generates the demo data of Tarnwick Outdoor Co., an invented regional outdoor-gear retailer.
+//
+//   node sample-config/generate.mjs
+//
+// Writes sample-config/data/trading.csv (wide, monthly), data/web.csv (long, monthly, dates like `Oct 2026`)
+// and data/quarterly.csv (wide, quarterly, `;` delimiter and `,` decimal mark). Plain Node, no dependencies,
+// seeded PRNG: the same script always writes the same bytes.
+//
+// What is planted (the report should find these; README.md lists them too):
+//   Business cycle (multiplicative, % deviation from trend; extremes exactly at these months):
+//     peak   2019-04  +3%
+//     trough 2020-05  -9%   (regional slowdown)
+//     peak   2022-10  +6%
+//     trough 2024-07  -4%
+//     2026-10 recovering, +2% and rising (no turn after 2024-07)
+//   Level shift: new shop opens 2021-04 (net sales +7%, footfall +9%, payroll +8%, inventory +6% from then on).
+//   One-off spikes: flash sale 2023-11 (net sales +14%, web orders +35%, web sessions +20%);
+//     stock-count correction 2024-03 (inventory +18% for that month only);
+//     faulty jacket batch 2022-01 (returns rate +3.5 percentage points);
+//     social-media mention 2025-06 (web sessions +40%).
+//   Working days: shop series scale with the month's trading-day weight (Mon–Fri 1.0, Sat 1.5, Sun 0.5;
+//     closed 25-26 Dec and 1 Jan); web series scale with the number of days in the month.
+//   Easter: the 10 days before Easter Sunday lift sales by 5% of a month's sales, split between March and April
+//     by how many of those days fall in each month (Easter dates by the Gregorian computus).
+//   Gaps: footfall is blank for 2019-08, 2023-02 and 2023-03 (door counter fault).
+//   Budget: sales_budget runs to 2027-03 (the end of fiscal year 2026/27; the fiscal year starts in April).
+import {mkdirSync, writeFileSync} from 'node:fs';
+import {dirname, join} from 'node:path';
+import {fileURLToPath} from 'node:url';
+
+const here = dirname(fileURLToPath(import.meta.url));
+const MONTHS = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'];
+
+/** mulberry32: small seeded PRNG, uniform on [0, 1). */
+function mulberry32(seed) {
+  let a = seed >>> 0;
+  return () => {
+    a = (a + 0x6d2b79f5) >>> 0;
+    let t = a;
+    t = Math.imul(t ^ (t >>> 15), t | 1);
+    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
+    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
+  };
+}
+
+/** Standard normal deviates by Box–Muller from a uniform generator. */
+function normal(rng) {
+  const u = Math.max(rng(), 1e-12);
+  return Math.sqrt(-2 * Math.log(u)) * Math.cos(2 * Math.PI * rng());
+}
+
+/** Easter Sunday (Gregorian computus, anonymous algorithm): {month, day}. */
+function easter(year) {
+  const a = year % 19;
+  const b = Math.floor(year / 100);
+  const c = year % 100;
+  const d = Math.floor(b / 4);
+  const e = b % 4;
+  const f = Math.floor((b + 8) / 25);
+  const g = Math.floor((b - f + 1) / 3);
+  const h = (19 * a + b - d - g + 15) % 30;
+  const i = Math.floor(c / 4);
+  const k = c % 4;
+  const l = (32 + 2 * e + 2 * i - h - k) % 7;
+  const m = Math.floor((a + 11 * h + 22 * l) / 451);
+  const month = Math.floor((h + l - 7 * m + 114) / 31);
+  const day = ((h + l - 7 * m + 114) % 31) + 1;
+  return {month, day};
+}
+
+const daysInMonth = (y, m) => new Date(Date.UTC(y, m, 0)).getUTCDate();
+
+/** Trading-day weight of a month: Mon–Fri 1, Sat 1.5, Sun 0.5; shops shut on 25–26 Dec and 1 Jan. */
+function tradingWeight(y, m) {
+  const weights = [0.5, 1, 1, 1, 1, 1, 1.5]; // getUTCDay: 0 = Sunday
+  let w = 0;
+  for (let d = 1; d <= daysInMonth(y, m); d++) {
+    if ((m === 12 && (d === 25 || d === 26)) || (m === 1 && d === 1)) continue;
+    w += weights[new Date(Date.UTC(y, m - 1, d)).getUTCDay()];
+  }
+  return w;
+}
+// Average monthly trading weight (over a 28-year calendar cycle), to centre the effect on 1.
+const MEAN_WEIGHT = (() => {
+  let s = 0;
+  for (let y = 2000; y < 2028; y++) for (let m = 1; m <= 12; m++) s += tradingWeight(y, m);
+  return s / (28 * 12);
+})();
+
+/** Share of the 10 days before Easter Sunday that fall in March and in April. */
+function easterShares(year) {
+  const {month, day} = easter(year);
+  const sunday = Date.UTC(year, month - 1, day);
+  let march = 0;
+  for (let k = 1; k <= 10; k++) if (new Date(sunday - k * 86400000).getUTCMonth() === 2) march++;
+  return {march: march / 10, april: 1 - march / 10};
+}
+
+// Business cycle knots: month index (year*12 + month-1) and % deviation; cosine interpolation between knots
+// keeps each knot an exact local extreme.
+const mi = (y, m) => y * 12 + m - 1;
+const KNOTS = [
+  [mi(2015, 1), 0],
+  [mi(2019, 4), 3],
+  [mi(2020, 5), -9],
+  [mi(2022, 10), 6],
+  [mi(2024, 7), -4],
+  [mi(2027, 7), 4],
+];
+function cyclePct(t) {
+  for (let k = 0; k < KNOTS.length - 1; k++) {
+    const [t0, v0] = KNOTS[k];
+    const [t1, v1] = KNOTS[k + 1];
+    if (t >= t0 && t <= t1) {
+      const x = (t - t0) / (t1 - t0);
+      return v0 + ((v1 - v0) * (1 - Math.cos(Math.PI * x))) / 2;
+    }
+  }
+  return 0;
+}
+
+// Seasonal factors for outdoor gear (spring/summer peak, December gifts), normalised to mean 1.
+const RAW_SEASON = [0.74, 0.78, 0.96, 1.06, 1.14, 1.17, 1.13, 1.04, 0.93, 0.88, 0.96, 1.28];
+const SEASON = RAW_SEASON.map((s) => (s * 12) / RAW_SEASON.reduce((a, b) => a + b, 0));
+
+const rng = mulberry32(20261031);
+const round = (x, digits) => {
+  const f = 10 ** digits;
+  return Math.round(x * f) / f;
+};
+
+const START = mi(2018, 1);
+const END = mi(2026, 10);
+const BUDGET_END = mi(2027, 3);
+const SHOP_OPENING = mi(2021, 4);
+
+const trading = [];
+const web = [];
+for (let t = START; t <= BUDGET_END; t++) {
+  const y = Math.floor(t / 12);
+  const m = (t % 12) + 1;
+  const years = (t - START) / 12;
+  const season = SEASON[m - 1];
+  const cycle = 1 + cyclePct(t) / 100;
+  const working = tradingWeight(y, m) / MEAN_WEIGHT;
+  const days = daysInMonth(y, m) / 30.436875;
+  const shares = easterShares(y);
+  const easterLift = m === 3 ? 1 + 0.05 * shares.march : m === 4 ? 1 + 0.05 * shares.april : 1;
+  const shop = t >= SHOP_OPENING;
+  const label = `${y}-${String(m).padStart(2, '0')}`;
+
+  // Budget: planned trend and seasonality with a 4% stretch, no cycle and no noise; set per fiscal year (April).
+  const fyStart = m >= 4 ? mi(y, 4) : mi(y - 1, 4);
+  const plannedYears = (fyStart - START) / 12 + 0.5;
+  const budget = 1480 * Math.pow(1.035, plannedYears) * (t >= SHOP_OPENING ? 1.07 : 1) * 1.04 * season;
+  if (t > END) {
+    trading.push({month: label, sales_budget: round(budget, 1)});
+    continue;
+  }
+
+  const noise = (sd) => 1 + sd * normal(rng);
+  const netSales =
+    1480 *
+    Math.pow(1.035, years) *
+    season *
+    cycle *
+    working *
+    easterLift *
+    (shop ? 1.07 : 1) *
+    (t === mi(2023, 11) ? 1.14 : 1) *
+    noise(0.015);
+  const footfall =
+    61000 *
+    Math.pow(1.012, years) *
+    Math.pow(season, 0.8) *
+    Math.pow(cycle, 0.7) *
+    working *
+    easterLift *
+    (shop ? 1.09 : 1) *
+    noise(0.02);
+  const basket = 38.5 * Math.pow(1.028, years) * Math.pow(season, 0.35) * Math.pow(cycle, 0.4) * noise(0.012);
+  const returnsRate =
+    6.2 + 0.8 * Math.sin((2 * Math.PI * (m - 2)) / 12) + (t === mi(2022, 1) ? 3.5 : 0) + 0.25 * normal(rng);
+  const payroll =
+    410 * Math.pow(1.038, years) * (1 + 0.06 * (season - 1)) * (shop ? 1.08 : 1) * (m === 12 ? 1.05 : 1) * noise(0.008);
+  // Stock is built ahead of the peaks: month-end inventory leads sales seasonality by about a month.
+  const inventory =
+    2650 *
+    Math.pow(1.03, years) *
+    (1 + 0.35 * (SEASON[m % 12] - 1)) *
+    Math.pow(cycle, 1.5) *
+    (shop ? 1.06 : 1) *
+    (t === mi(2024, 3) ? 1.18 : 1) *
+    noise(0.012);
+  const marketing = 92 * Math.pow(1.04, years) * (1 + 0.6 * (season - 1)) * Math.pow(cycle, 1.2) * noise(0.05);
+  const webSessions =
+    182000 *
+    Math.pow(1.09, years) *
+    Math.pow(season, 0.9) *
+    Math.pow(cycle, 0.6) *
+    days *
+    (t === mi(2023, 11) ? 1.2 : 1) *
+    (t === mi(2025, 6) ? 1.4 : 1) *
+    noise(0.03);
+  const webOrders =
+    webSessions *
+    0.021 *
+    Math.pow(1.02, years) *
+    Math.pow(season, 0.2) *
+    easterLift *
+    (t === mi(2023, 11) ? 1.35 / 1.2 : 1) *
+    noise(0.02);
+
+  const gap = t === mi(2019, 8) || t === mi(2023, 2) || t === mi(2023, 3);
+  trading.push({
+    month: label,
+    net_sales: round(netSales, 1),
+    footfall: gap ? '' : Math.round(footfall),
+    avg_basket: round(basket, 2),
+    returns_rate: round(returnsRate, 2),
+    payroll: round(payroll, 1),
+    inventory: round(inventory, 1),
+    marketing: round(marketing, 1),
+    sales_budget: round(budget, 1),
+  });
+  const when = `${MONTHS[m - 1]} ${y}`;
+  web.push([when, 'Web sessions', Math.round(webSessions)]);
+  web.push([when, 'Web orders', Math.round(webOrders)]);
+}
+
+// Quarterly regional summaries, 2016Q1–2026Q3: the same cycle, quarterly seasonality, one regional shift.
+const quarterly = [];
+const REGIONS = [
+  ['sales_north', 1450, 0.025],
+  ['sales_lakes', 1120, 0.03],
+  ['sales_coast', 980, 0.04],
+  ['sales_online', 610, 0.1],
+];
+const Q_SEASON = [0.86, 1.1, 1.06, 0.98];
+for (let q = 2016 * 4; q <= 2026 * 4 + 2; q++) {
+  const y = Math.floor(q / 4);
+  const quarter = (q % 4) + 1;
+  const midMonth = mi(y, quarter * 3 - 1);
+  const years = (q - 2016 * 4) / 4;
+  const cycle = 1 + cyclePct(midMonth) / 100;
+  const row = {quarter: `${y}-Q${quarter}`};
+  for (const [name, base, growth] of REGIONS) {
+    const season = name === 'sales_online' ? [0.92, 1.0, 0.96, 1.12][quarter - 1] : Q_SEASON[quarter - 1];
+    const opening = name === 'sales_lakes' && midMonth >= SHOP_OPENING ? 1.2 : 1;
+    row[name] = round(3 * base * Math.pow(1 + growth, years) * season * cycle * opening * (1 + 0.015 * normal(rng)), 1);
+  }
+  row.gross_margin_pct = round(44.5 - 0.25 * (y - 2016) + [-1.2, 0.6, 0.9, -0.3][quarter - 1] + 0.4 * normal(rng), 2);
+  row.headcount = Math.round((118 + 2.1 * years) * (midMonth >= SHOP_OPENING ? 1.11 : 1) * Math.pow(cycle, 0.5));
+  quarterly.push(row);
+}
+
+function wideCsv(rows, delimiter = ',', decimal = '.') {
+  const columns = [...new Set(rows.flatMap((r) => Object.keys(r)))];
+  const cell = (v) => (v === undefined || v === '' ? '' : typeof v === 'number' ? String(v).replace('.', decimal) : v);
+  return [columns.join(delimiter), ...rows.map((r) => columns.map((c) => cell(r[c])).join(delimiter))].join('\n') + '\n';
+}
+
+const dataDir = join(here, 'data');
+mkdirSync(dataDir, {recursive: true});
+writeFileSync(join(dataDir, 'trading.csv'), wideCsv(trading));
+writeFileSync(join(dataDir, 'web.csv'), ['date,series,value', ...web.map((r) => r.join(','))].join('\n') + '\n');
+writeFileSync(join(dataDir, 'quarterly.csv'), wideCsv(quarterly, ';', ','));

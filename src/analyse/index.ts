@@ -1,0 +1,38 @@
+import type {Plan} from '../config/plan.js';
+import type {Dataset} from '../ingest/types.js';
+import type {Logger} from '../log.js';
+import {analyseSeries} from './analyse.js';
+import {runPool} from './pool.js';
+import type {SeriesAnalysis, SeriesInput} from './types.js';
+
+export {analyseSeries};
+export type {SeriesAnalysis, SeriesInput};
+
+/**
+ * Analyse every series of a pack, in pack order. With `jobs` > 1 (and compiled code) the series are spread over a
+ * worker-thread pool; results are identical either way because `analyseSeries` is pure.
+ */
+export async function analyseAll(
+  plan: Plan,
+  data: Dataset,
+  {jobs, log}: {jobs: number; log: Logger},
+): Promise<SeriesAnalysis[]> {
+  const byId = new Map(data.series.map((s) => [s.id, s]));
+  const inputs: SeriesInput[] = plan.series.map((sp) => {
+    const series = byId.get(sp.id);
+    if (!series) throw new Error(`series ${sp.id} missing after ingest`);
+    const target = sp.target ? byId.get(sp.target) : undefined;
+    return {
+      id: sp.id,
+      frequency: plan.frequency,
+      start: series.start,
+      values: series.values,
+      kind: sp.kind,
+      fiscalYearStart: plan.fiscalYearStart,
+      target: target ? {start: target.start, values: target.values} : null,
+      options: sp.analysis,
+      residualSigma: plan.thresholds.residualSigma,
+    };
+  });
+  return runPool(inputs, {jobs, log});
+}

@@ -1,0 +1,147 @@
+import type {Frequency} from '../time/period.js';
+
+/**
+ * The fully-defaulted pack, produced by `loadPlan`. Nothing after config reads YAML or guesses defaults.
+ * Paths are absolute. `line` fields point at the pack-file line that defined the item, for error messages.
+ */
+export interface Plan {
+  /** Absolute path of the pack file. */
+  packFile: string;
+  /** Pack identifier used for the archive folder: `pack.id`, else the pack file name without extension. */
+  id: string;
+  title: string;
+  subtitle: string | null;
+  organisation: string | null;
+  preparedBy: string | null;
+  confidentiality: string | null;
+  frequency: Frequency;
+  /** Review period index (see time/period.ts); null = the last period with data in any series. */
+  period: number | null;
+  formats: OutputFormat[];
+  /** BCP 47 locale for numbers and dates, e.g. `en-GB`. Default: `en-GB`. */
+  locale: string;
+  /** First month (1–12) of the fiscal year. Default: 1. */
+  fiscalYearStart: number;
+  branding: Branding;
+  thresholds: Thresholds;
+  /** Folder under which `<id>/<period>/` is written. Default: `out` beside the current directory. */
+  outDir: string;
+  /** Chromium/Chrome executable; null = look for one (EBBFLOW_CHROMIUM, CHROME_PATH, /usr/bin/chromium…). */
+  browser: string | null;
+  sources: SourcePlan[];
+  series: SeriesPlan[];
+  /** Report sections, in order; series not named in any group get a section of their own. */
+  groups: GroupPlan[];
+}
+
+export type OutputFormat = 'html' | 'pdf' | 'json' | 'csv' | 'xlsx';
+
+export interface Branding {
+  /** Absolute path of a PNG, JPEG or SVG logo, or null. */
+  logo: string | null;
+  /** Accent colour as `#rrggbb`. */
+  accent: string;
+  /** Installed font family for text and charts. Default: `Liberation Sans`. */
+  font: string;
+  paper: 'A4' | 'Letter';
+  orientation: 'portrait' | 'landscape';
+  footer: string | null;
+  /** Absolute path of a folder of templates overriding the built-in ones, or null. */
+  templates: string | null;
+}
+
+export interface Thresholds {
+  /** An irregular beyond this many robust sigmas is flagged. Default: 3. */
+  residualSigma: number;
+  /** Callout when an adjusted figure is revised by more than this many percent. Default: 1. */
+  revisionPct: number;
+}
+
+export interface SourcePlan {
+  id: string;
+  /** Absolute path. */
+  file: string;
+  layout: 'wide' | 'long';
+  dateColumn: string;
+  /** Long layout: the column naming the series. */
+  keyColumn: string | null;
+  /** Long layout: the column holding the values. */
+  valueColumn: string | null;
+  /** Field delimiter; `auto` sniffs comma, semicolon or tab from the header line. */
+  delimiter: 'auto' | ',' | ';' | '\t';
+  /** Decimal mark of numbers in the file. Default: `.`. */
+  decimal: '.' | ',';
+  encoding: 'utf-8' | 'windows-1252';
+  line: number;
+}
+
+export interface SeriesPlan {
+  id: string;
+  label: string;
+  /** Unit shown after values, e.g. `EUR k`, `orders`. */
+  unit: string | null;
+  source: string;
+  /** Wide layout: column name; long layout: key value. */
+  column: string;
+  /** `flow` (sums over a period: sales, orders) or `stock` (a level at a date: headcount, inventory). */
+  kind: 'flow' | 'stock';
+  /** Id of another series holding the target/budget for this one, or null. */
+  target: string | null;
+  /** Hidden series are read (e.g. as targets) but get no section of their own. */
+  hidden: boolean;
+  analysis: AnalysisOptions;
+  line: number;
+}
+
+export interface GroupPlan {
+  id: string;
+  title: string;
+  series: string[];
+}
+
+/** Per-series analysis options after merging `defaults` with the series' own keys. */
+export interface AnalysisOptions {
+  decomposition: {
+    method: 'stl' | 'classical';
+    model: 'additive' | 'multiplicative' | 'auto';
+    /** `periodic` or an odd integer ≥ 7. Default: `periodic` for classical, 13 for STL (common practice). */
+    seasonalWindow: 'periodic' | number;
+    /** Odd integer; null = STL's default rule. */
+    trendWindow: number | null;
+    /** Odd integer; null = STL's default rule. */
+    lowpassWindow: number | null;
+    robust: boolean;
+    /** LOESS degree of the seasonal smoother (0 or 1); null = 0 (STL paper and R's default). */
+    seasonalDegree: 0 | 1 | null;
+    /** LOESS degree of the trend smoother; null = 1. */
+    trendDegree: 0 | 1 | null;
+    /** LOESS degree of the low-pass smoother; null = the trend degree. */
+    lowpassDegree: 0 | 1 | null;
+    /** STL inner-loop passes; null = 1 when robust, else 2 (STL paper). */
+    innerIterations: number | null;
+    /** STL robustness passes; null = 15 when robust, else 0 (R's default). */
+    outerIterations: number | null;
+  };
+  calendar: {
+    /** Working-day (day-of-week) regression: `auto` = flows only, kept when significant. */
+    workingDays: 'auto' | 'off';
+    /** Easter effect: `auto` = monthly/quarterly flows only, kept when significant. */
+    easter: 'auto' | 'off';
+    /** Extra holiday dates, ISO `YYYY-MM-DD`. */
+    holidays: string[];
+  };
+  outliers: {enabled: boolean};
+  forecast: {
+    method: 'auto' | 'ets' | 'theta' | 'seasonal-naive' | 'combination';
+    /** Periods ahead. Default: 12 monthly, 4 quarterly, 13 weekly. */
+    horizon: number;
+    levels: number[];
+    /** Rolling-origin back-test origins. Default: 6. */
+    backtestOrigins: number;
+  };
+  cycle: {
+    method: 'hp' | 'bandpass';
+    /** HP smoothing; null = 1600 quarterly, 129600 monthly (Ravn & Uhlig 2002), per-frequency default. */
+    lambda: number | null;
+  };
+}

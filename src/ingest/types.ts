@@ -1,0 +1,42 @@
+import type {Frequency} from '../time/period.js';
+
+/** One series on a regular calendar, ending at the review period. */
+export interface Series {
+  id: string;
+  frequency: Frequency;
+  /** Period index of values[0]. */
+  start: number;
+  /** One value per period up to and including the review period; NaN where missing (gaps are kept, never dropped). */
+  values: Float64Array;
+  sourceId: string;
+  /** Absolute path of the CSV it came from. */
+  file: string;
+  notes: DataNote[];
+}
+
+/** Something worth telling the reader about the data (not fatal). */
+export interface DataNote {
+  file: string;
+  line: number | null;
+  message: string;
+}
+
+/** An input file as read, for the manifest and the data-notes page. */
+export interface InputFile {
+  /** Absolute path. */
+  file: string;
+  sha256: string;
+  bytes: number;
+  /** Data rows read (header excluded). */
+  rows: number;
+}
+
+/** Everything ingest produced for one pack. */
+export interface Dataset {
+  /** Review period index: the pack's period, or the last period with data in any series. */
+  period: number;
+  /** Every series the pack names (visible and hidden), in pack order. */
+  series: Series[];
+  inputs: InputFile[];
+  notes: DataNote[];
+}

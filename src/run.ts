@@ -1,0 +1,130 @@
+import {loadPlan} from './config/index.js';
+import type {OutputFormat, Plan} from './config/plan.js';
+import {ingest} from './ingest/index.js';
+import type {Dataset} from './ingest/types.js';
+import {analyseAll} from './analyse/index.js';
+import {narrate} from './narrate/index.js';
+import {renderHtml, openBrowser, type PdfBrowser} from './render/index.js';
+import {exportTables} from './render/exports.js';
+import {toResults} from './render/results.js';
+import {archive, loadHistory} from './archive/index.js';
+import type {Report} from './render/types.js';
+import type {SeriesAnalysis} from './analyse/types.js';
+import type {History} from './archive/types.js';
+import {formatPeriod, periodStartDay, civilFromDays} from './time/period.js';
+import {toolVersion} from './version.js';
+import {InputError} from './errors.js';
+import type {Logger} from './log.js';
+
+export interface BuildRequest {
+  packFile: string;
+  /** Single period label; ranges are expanded by the CLI. */
+  period?: string;
+  outDir?: string;
+  formats?: OutputFormat[];
+  force: boolean;
+  /** Worker threads for the analyse stage. */
+  jobs: number;
+  /** A browser already open (batch builds reuse one); otherwise one is opened and closed here. */
+  browser?: PdfBrowser | {missing: string} | null;
+}
+
+export interface BuildSummary {
+  packId: string;
+  period: string;
+  folder: string;
+  outputs: string[];
+  /** Why the PDF was not written, or null. */
+  pdfSkipped: string | null;
+}
+
+/**
+ * One pack, one period:
+ *
+ *   pack.yaml ─► loadPlan ─► ingest ─► analyse ─► narrate ─► render ─► archive ─► out/<pack>/<period>/
+ */
+export async function build(request: BuildRequest, log: Logger): Promise<BuildSummary> {
+  const plan = await loadPlan(request.packFile, {period: request.period, outDir: request.outDir, formats: request.formats});
+  const data = await ingest(plan);
+  const periodLabel = formatPeriod(plan.frequency, data.period);
+  log.info(`${plan.id} ${periodLabel}: ${data.series.length} series read`);
+  const analyses = await analyseAll(plan, data, {jobs: request.jobs, log});
+  const draft = assemble(plan, data, analyses, null);
+  const history = await loadHistory(plan.outDir, plan.id, periodLabel, toResults(draft), plan.thresholds.revisionPct);
+  const report = assemble(plan, data, analyses, history);
+
+  const wantPdf = plan.formats.includes('pdf');
+  const html = plan.formats.includes('html') || wantPdf ? await renderHtml(report) : null;
+  let pdf: Uint8Array | null = null;
+  let pdfSkipped: string | null = null;
+  if (wantPdf && html) {
+    const browser = request.browser ?? (await openBrowser(plan.browser));
+    try {
+      if ('missing' in browser) pdfSkipped = browser.missing;
+      else pdf = await browser.pdf(html, pdfOptions(plan, data.period, periodLabel));
+    } finally {
+      if (!request.browser && !('missing' in browser)) await browser.close();
+    }
+    if (pdfSkipped) log.warn(pdfSkipped);
+  }
+  const tables = exportTables(report);
+  const exports: {name: string; content: string | Uint8Array}[] = [];
+  if (plan.formats.includes('csv')) exports.push(...tables.csv);
+  if (plan.formats.includes('xlsx')) exports.push({name: 'tables.xlsx', content: await tables.xlsx()});
+
+  const written = await archive({
+    report,
+    html: plan.formats.includes('html') ? html : null,
+    pdf,
+    exports,
+    outDir: plan.outDir,
+    force: request.force,
+    packYaml: JSON.stringify(plan, null, 2),
+    warnings: analyses.flatMap((a) => a.notes.map((note) => `${a.id}: ${note}`)),
+  });
+  log.info(`${plan.id} ${periodLabel}: written to ${written.folder}`);
+  return {packId: plan.id, period: periodLabel, folder: written.folder, outputs: written.outputs, pdfSkipped};
+}
+
+/** Validate config and data, build nothing. Throws InputError listing every problem. */
+export async function check(packFile: string, log: Logger): Promise<void> {
+  const plan = await loadPlan(packFile);
+  const data = await ingest(plan);
+  log.info(`${packFile}: ${data.series.length} series, review period ${formatPeriod(plan.frequency, data.period)}, no problems`);
+}
+
+function assemble(plan: Plan, data: Dataset, analyses: SeriesAnalysis[], history: History | null): Report {
+  const narration = narrate({
+    plan,
+    period: data.period,
+    series: plan.series.map((s, i) => ({plan: s, analysis: analyses[i]})),
+    history,
+  });
+  return {
+    plan,
+    period: data.period,
+    periodLabel: formatPeriod(plan.frequency, data.period),
+    toolVersion,
+    series: plan.series.map((s, i) => ({plan: s, analysis: analyses[i], callouts: narration.bySeries.get(s.id) ?? []})),
+    callouts: narration.pack,
+    inputs: data.inputs,
+    notes: data.notes,
+    history,
+  };
+}
+
+/** PDF dates come from the review period (the day after it ends), never from the clock. */
+function pdfOptions(plan: Plan, period: number, periodLabel: string) {
+  const {year, month, day} = civilFromDays(periodStartDay(plan.frequency, period + 1));
+  return {
+    title: plan.title,
+    periodLabel,
+    paper: plan.branding.paper,
+    orientation: plan.branding.orientation,
+    font: plan.branding.font,
+    footer: plan.branding.footer,
+    date: `${year}${String(month).padStart(2, '0')}${String(day).padStart(2, '0')}`,
+  };
+}
+
+export {InputError};
