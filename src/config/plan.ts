@@ -32,6 +32,23 @@ export interface Plan {
   series: SeriesPlan[];
   /** Report sections, in order; series not named in any group get a section of their own. */
   groups: GroupPlan[];
+  /**
+   * `{fromSource: ID}` entries of the pack's series list, for ingest to expand once it has read the
+   * source's keys. Empty when the pack has none. Group members and targets that name no explicit
+   * series are not checked by config when this is non-empty; ingest must check them after expanding.
+   */
+  fromSource?: FromSourcePlan[];
+}
+
+/** Every key of a long source becomes a series: id = `slugify(key)` (config/slug.ts), label = column = key. */
+export interface FromSourcePlan {
+  /** Id of the long source. */
+  source: string;
+  /** Settings shared by every series made from the source, fully resolved (target is always null). */
+  template: Omit<SeriesPlan, 'id' | 'label' | 'column'>;
+  /** Where the expanded series go in `Plan.series`: before the series at this index (= series.length to append). */
+  position: number;
+  line: number;
 }
 
 export type OutputFormat = 'html' | 'pdf' | 'json' | 'csv' | 'xlsx';

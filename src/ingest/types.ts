@@ -1,3 +1,4 @@
+import type {SeriesPlan} from '../config/plan.js';
 import type {Frequency} from '../time/period.js';
 
 /** One series on a regular calendar, ending at the review period. */
@@ -39,4 +40,9 @@ export interface Dataset {
   series: Series[];
   inputs: InputFile[];
   notes: DataNote[];
+  /**
+   * The plan of each series, index-aligned with `series`: the pack's own series and those expanded from
+   * `fromSource` entries (id = slug of the key, label = column = key), in pack order. Always set by `ingest`.
+   */
+  plans?: SeriesPlan[];
 }

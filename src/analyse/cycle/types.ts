@@ -16,6 +16,16 @@ export interface CycleResult {
   amplitudeRatio: number | null;
   stationarity: Stationarity | null;
   options: Record<string, unknown>;
+  /** What the turning points were dated on: the gap (growth cycle) by default. */
+  turningPointBasis?: 'gap' | 'level';
+  /** How the gap is scaled: percent of trend, or percent of the mean absolute value for series that reach zero. */
+  gapScale?: 'trend' | 'mean-absolute';
+  /** One-sided (real-time) trend for the latest periods: trend[i] belongs to index start + i (HP only). */
+  realTime?: {start: number; trend: number[]; gap: number[]};
+  /** End-point caution in plain words: the latest trend values are provisional. */
+  caution?: string;
+  /** What was done to the data (e.g. gaps filled), plain sentences. */
+  notes?: string[];
 }
 
 export interface TurningPoint {
@@ -30,4 +40,13 @@ export interface Stationarity {
   level: {statistic: number; pValue: number; stationary: boolean};
   differences: {statistic: number; pValue: number; stationary: boolean};
   variance: {test: string; statistic: number; pValue: number; constant: boolean};
+  /** Lags chosen by AIC for the level and difference regressions. */
+  lags?: {level: number; differences: number};
+  /** KPSS cross-check (H₀ stationary; p-value interpolated in the published table, clipped to 0.01–0.10). */
+  kpss?: {
+    level: {statistic: number; pValue: number; stationary: boolean};
+    differences: {statistic: number; pValue: number; stationary: boolean};
+  };
+  /** Plain words, e.g. `stationary in mean after differencing; stationary in variance`. */
+  summary?: string;
 }

@@ -1,0 +1,42 @@
+import type {Forecast} from './model.js';
+
+/**
+ * Equal-weight combination of forecasts: the mean of the point forecasts and, for each level, the mean of the
+ * lower and of the upper bounds (quantile averaging), optionally widened about the mean by `scale`.
+ *
+ * Why: combinations of a few good methods are more accurate than the methods alone (Makridakis & Hibon
+ * 2000; Petropoulos & Svetunkov 2020); averaging quantiles rather than probabilities keeps the intervals from
+ * becoming too wide (Lichtendahl, Grushka-Cockayne & Winkler 2013, Management Science 59, 1594–1611), and the
+ * scale, measured on the M3 data, corrects the remaining miscalibration.
+ * Complexity: O(k·h·levels). NaN policy: NaN in → NaN out. All forecasts must share h and levels.
+ */
+export function averageForecasts(forecasts: Forecast[], method: string, scale: Record<number, number> = {}): Forecast {
+  if (forecasts.length === 0) throw new RangeError('nothing to combine');
+  const h = forecasts[0].mean.length;
+  const levels = forecasts[0].levels;
+  const k = forecasts.length;
+  const mean = new Float64Array(h);
+  for (const f of forecasts) for (let i = 0; i < h; i++) mean[i] += f.mean[i] / k;
+  const lower = new Map<number, Float64Array>();
+  const upper = new Map<number, Float64Array>();
+  for (const level of levels) {
+    const lo = new Float64Array(h);
+    const hi = new Float64Array(h);
+    for (const f of forecasts) {
+      const fl = f.lower.get(level)!;
+      const fu = f.upper.get(level)!;
+      for (let i = 0; i < h; i++) {
+        lo[i] += fl[i] / k;
+        hi[i] += fu[i] / k;
+      }
+    }
+    const s = scale[level] ?? 1;
+    for (let i = 0; i < h; i++) {
+      lo[i] = mean[i] - s * (mean[i] - lo[i]);
+      hi[i] = mean[i] + s * (hi[i] - mean[i]);
+    }
+    lower.set(level, lo);
+    upper.set(level, hi);
+  }
+  return {method, mean, levels, lower, upper};
+}

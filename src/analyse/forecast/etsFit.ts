@@ -1,0 +1,173 @@
+import {nelderMead} from '../numeric/nelderMead.js';
+import {etsAdmissible} from './etsAdmissible.js';
+import {etsFilter, etsRecurse} from './etsFilter.js';
+import {etsInitialStates} from './etsInitialStates.js';
+import {completeStates, etsName, freeStateCount, type EtsParams, type EtsSpec} from './etsModel.js';
+
+/**
+ * Fit one ETS model by maximum likelihood: smoothing parameters and initial states are found together by
+ * Nelder-Mead from heuristic start values. Bounds are enforced by returning an infinite criterion outside
+ * the "usual" region (α, β ≤ α, γ ≤ 1 − α in [1e-4, 0.9999], φ in [0.8, 0.98]) or outside the admissible
+ * region, and for negative multiplicative seasonal states.
+ *
+ * Why: fit → forecast → accuracy; the fitted object carries everything forecasting and selection need.
+ * Reference: Hyndman et al. (2002), §2.6; Hyndman et al. (2008), ch. 5; start values, bounds, optimiser
+ * settings (relative tolerance √ε, 2000 evaluations) and information criteria as in the reference
+ * implementation, so that fitted models agree with it.
+ *
+ * Complexity: O(E·n) with E ≤ 2000 objective evaluations. NaN policy: rejects NaN (returns null when the
+ * model cannot be fitted, e.g. too many parameters for the data).
+ */
+export interface EtsFit {
+  method: string;
+  spec: EtsSpec;
+  params: EtsParams;
+  /** Full initial state vector [l, b?, s₀ … s_{m−1}]. */
+  initialStates: Float64Array;
+  finalStates: Float64Array;
+  /** −2·log-likelihood up to a constant (the reference's convention), and the criteria built on it. */
+  lik: number;
+  aic: number;
+  aicc: number;
+  bic: number;
+  /** Σ residuals² / (n − number of parameters). */
+  sigma2: number;
+  residuals: Float64Array;
+  fitted: Float64Array;
+  /** Resolved fitting options. */
+  options: {optCrit: 'lik' | 'mse'; evaluations: number};
+}
+
+export interface EtsFitOptions {
+  /** Fixed smoothing parameters (not estimated). */
+  fixed?: Partial<EtsParams>;
+  /** Criterion minimised: likelihood or one-step MSE. Default: 'lik'. */
+  optCrit?: 'lik' | 'mse';
+  /** Default: 2000. */
+  maxEvaluations?: number;
+}
+
+const LOWER = [1e-4, 1e-4, 1e-4, 0.8];
+const UPPER = [0.9999, 0.9999, 0.9999, 0.98];
+
+export function fitEts(y: Float64Array, spec: EtsSpec, {fixed = {}, optCrit = 'lik', maxEvaluations = 2000}: EtsFitOptions = {}): EtsFit | null {
+  const n = y.length;
+  const seasonal = spec.season !== 'N';
+  const hasTrend = spec.trend !== 'N';
+  const m = seasonal ? spec.period : 1;
+  const lower = LOWER.slice();
+  const upper = UPPER.slice();
+  if (fixed.alpha !== undefined) {
+    upper[1] = Math.min(fixed.alpha, upper[1]);
+    upper[2] = Math.min(1 - fixed.alpha, upper[2]);
+  }
+  if (fixed.beta !== undefined) lower[0] = Math.max(fixed.beta, lower[0]);
+  if (fixed.gamma !== undefined) upper[0] = Math.min(1 - fixed.gamma, upper[0]);
+  // Which smoothing parameters are estimated, in the order alpha, beta, gamma, phi.
+  const free = {
+    alpha: fixed.alpha === undefined,
+    beta: hasTrend && fixed.beta === undefined,
+    gamma: seasonal && fixed.gamma === undefined,
+    phi: hasTrend && spec.damped && fixed.phi === undefined,
+  };
+  const start: number[] = [];
+  let alpha0 = fixed.alpha ?? lower[0] + (0.2 * (upper[0] - lower[0])) / m;
+  if (free.alpha) {
+    if (alpha0 > 1 || alpha0 < 0) alpha0 = lower[0] + 2e-3;
+    start.push(alpha0);
+  }
+  if (free.beta) {
+    const up = Math.min(upper[1], alpha0);
+    let beta0 = lower[1] + 0.1 * (up - lower[1]);
+    if (beta0 < 0 || beta0 > alpha0) beta0 = alpha0 - 1e-3;
+    start.push(beta0);
+  }
+  if (free.gamma) {
+    const up = Math.min(upper[2], 1 - alpha0);
+    let gamma0 = lower[2] + 0.05 * (up - lower[2]);
+    if (gamma0 < 0 || gamma0 > 1 - alpha0) gamma0 = 1 - alpha0 - 1e-3;
+    start.push(gamma0);
+  }
+  if (free.phi) {
+    let phi0 = lower[3] + 0.99 * (upper[3] - lower[3]);
+    if (phi0 < 0 || phi0 > 1) phi0 = upper[3] - 1e-3;
+    start.push(phi0);
+  }
+  const nSmoothing = start.length;
+  const states0 = etsInitialStates(y, spec);
+  const nStates = freeStateCount(spec);
+  start.push(...states0);
+  const np = start.length;
+  if (np >= n - 1) return null;
+
+  const params: EtsParams = {alpha: fixed.alpha ?? NaN, beta: fixed.beta ?? 0, gamma: fixed.gamma ?? 0, phi: fixed.phi ?? 1};
+  const unpack = (par: Float64Array, into: EtsParams): void => {
+    let k = 0;
+    if (free.alpha) into.alpha = par[k++];
+    if (free.beta) into.beta = par[k++];
+    if (free.gamma) into.gamma = par[k++];
+    if (free.phi) into.phi = par[k++];
+  };
+  const full = new Float64Array(nStates + (seasonal ? 1 : 0));
+  const seasonBuffer = new Float64Array(m);
+  const firstSeason = hasTrend ? 2 : 1;
+  const objective = (par: Float64Array): number => {
+    unpack(par, params);
+    if (free.alpha && !(params.alpha >= lower[0] && params.alpha <= upper[0])) return Infinity;
+    if (free.beta && !(params.beta >= lower[1] && params.beta <= params.alpha && params.beta <= upper[1])) return Infinity;
+    if (free.phi && !(params.phi >= lower[3] && params.phi <= upper[3])) return Infinity;
+    if (free.gamma && !(params.gamma >= lower[2] && params.gamma <= 1 - params.alpha && params.gamma <= upper[2])) {
+      return Infinity;
+    }
+    if (!etsAdmissible(spec, params)) return Infinity;
+    let sum = 0;
+    for (let i = 0; i < nStates; i++) {
+      full[i] = par[nSmoothing + i];
+      if (i >= firstSeason) sum += full[i];
+    }
+    if (seasonal) {
+      full[nStates] = (spec.season === 'M' ? m : 0) - sum;
+      if (spec.season === 'M') for (let i = firstSeason; i <= nStates; i++) if (full[i] < 0) return Infinity;
+    }
+    const {lik, mse} = etsRecurse(y, spec, params, full, null, null, null, seasonBuffer);
+    let value = optCrit === 'lik' ? lik : mse;
+    if (value < -1e10) value = -1e10;
+    return Number.isNaN(value) ? Infinity : value;
+  };
+  let result;
+  try {
+    result = nelderMead(objective, Float64Array.from(start), {maxEvaluations});
+  } catch {
+    return null;
+  }
+  const best: EtsParams = {...params};
+  unpack(result.x, best);
+  const initialStates = completeStates(spec, result.x.subarray(nSmoothing));
+  const run = etsFilter(y, spec, best, initialStates);
+  if (Number.isNaN(run.lik) || run.lik === Infinity) return null;
+  const k = np + 1;
+  const aic = run.lik + 2 * k;
+  let sse = 0;
+  for (const e of run.residuals) sse += e * e;
+  const nFixed = [fixed.alpha, hasTrend ? fixed.beta : undefined, seasonal ? fixed.gamma : undefined, hasTrend && spec.damped ? fixed.phi : undefined].filter((v) => v !== undefined).length;
+  return {
+    method: etsName(spec),
+    spec,
+    params: {
+      alpha: best.alpha,
+      beta: hasTrend ? best.beta : 0,
+      gamma: seasonal ? best.gamma : 0,
+      phi: hasTrend && spec.damped ? best.phi : 1,
+    },
+    initialStates,
+    finalStates: run.finalStates,
+    lik: run.lik,
+    aic,
+    aicc: aic + (2 * k * (k + 1)) / (n - k - 1),
+    bic: run.lik + Math.log(n) * k,
+    sigma2: sse / (n - (np + nFixed)),
+    residuals: run.residuals,
+    fitted: run.fitted,
+    options: {optCrit, evaluations: result.evaluations},
+  };
+}

@@ -1,0 +1,47 @@
+import {fitEts, type EtsFit} from './etsFit.js';
+import type {EtsSpec} from './etsModel.js';
+
+/**
+ * Automatic ETS: fit every model of the stable subset and keep the one with the smallest AICc.
+ * The subset is error A/M × trend N/A/Ad × season N/A/M without additive error with multiplicative season,
+ * without multiplicative errors for data that are not all positive, and without seasonal models when
+ * m ≤ 1, m > 24 or n ≤ m. Models are tried in a fixed order (errors A, M; trends N, A with damped first;
+ * seasons N, A, M) and ties keep the earlier model.
+ *
+ * Reference: Hyndman et al. (2002), §3 (automatic forecasting with an information criterion); the model
+ * subset, order and criterion (AICc) of the reference implementation's defaults.
+ *
+ * Complexity: up to 15 fits of O(2000·n) each. NaN policy: rejects NaN. Returns null when no model fits.
+ */
+export interface EtsSelection {
+  best: EtsFit;
+  /** AICc of every model tried, by name (Infinity when it could not be fitted). */
+  candidates: {method: string; aicc: number}[];
+}
+
+export function selectEts(y: Float64Array, {period, seasonal = true}: {period: number; seasonal?: boolean}): EtsSelection | null {
+  const n = y.length;
+  let positive = true;
+  for (const v of y) if (!(v > 0)) positive = false;
+  const allowSeason = seasonal && period > 1 && period <= 24 && n > period;
+  const seasons: EtsSpec['season'][] = allowSeason ? ['N', 'A', 'M'] : ['N'];
+  let best: EtsFit | null = null;
+  const candidates: {method: string; aicc: number}[] = [];
+  for (const error of ['A', 'M'] as const) {
+    if (error === 'M' && !positive) continue;
+    for (const trend of ['N', 'A'] as const) {
+      for (const season of seasons) {
+        for (const damped of [true, false]) {
+          if (trend === 'N' && damped) continue;
+          if (error === 'A' && season === 'M') continue;
+          const spec: EtsSpec = {error, trend, damped, season, period: season === 'N' ? 1 : period};
+          const fit = fitEts(y, spec);
+          const aicc = fit && Number.isFinite(fit.aicc) ? fit.aicc : Infinity;
+          candidates.push({method: `ETS(${error},${trend}${damped ? 'd' : ''},${season})`, aicc});
+          if (fit && aicc < (best?.aicc ?? Infinity)) best = fit;
+        }
+      }
+    }
+  }
+  return best ? {best, candidates} : null;
+}

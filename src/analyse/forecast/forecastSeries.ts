@@ -1,0 +1,107 @@
+import type {AnalysisOptions} from '../../config/plan.js';
+import {periodsPerYear, type Frequency} from '../../time/period.js';
+import {rollingBacktest} from './backtest.js';
+import {runMethod, type MethodName, type MethodRun} from './methods.js';
+import type {Forecast} from './model.js';
+import {prepareSeries} from './prepareSeries.js';
+import type {ForecastResult} from './types.js';
+
+/**
+ * What-next forecast of one series: prepare the data (trim NaN at both ends, fill interior gaps), pick the
+ * method (falling back for short or constant series), forecast `horizon` periods with intervals at the
+ * requested levels, and back-test the same method from rolling origins.
+ *
+ * Methods: `auto` (the method that measured best on the M3 data, see {@link AUTO_METHOD}), `ets`, `theta`,
+ * `combination`, `seasonal-naive`. Fallbacks, each with a note: a constant series forecasts the constant;
+ * fewer than 4 values use the naive method; fewer than two full years exclude seasonal models; weekly data
+ * (m = 52) are seasonally adjusted before non-seasonal models.
+ *
+ * Complexity: one method run plus `backtestOrigins` refits of it and of two benchmarks.
+ * NaN policy: skips leading/trailing NaN, fills interior NaN by linear interpolation (noted). Throws when no
+ * value is present.
+ */
+export const AUTO_METHOD: MethodName = 'combination';
+
+export function forecastSeries(
+  values: Float64Array,
+  {frequency, options}: {frequency: Frequency; options: AnalysisOptions['forecast']},
+): ForecastResult {
+  const notes: string[] = [];
+  const {horizon, levels: requestedLevels, backtestOrigins} = options;
+  const levels = [...requestedLevels].sort((a, b) => a - b);
+  const prepared = prepareSeries(values);
+  const y = prepared.values;
+  const n = y.length;
+  if (n === 0) throw new RangeError('forecast needs at least one value');
+  if (prepared.filled > 0) notes.push(`Filled ${prepared.filled} missing value(s) by linear interpolation before forecasting.`);
+  if (prepared.first + n < values.length) notes.push('Forecast starts after the last period, beyond the last observed value.');
+  const period = periodsPerYear[frequency];
+  let method: MethodName = options.method === 'auto' ? AUTO_METHOD : options.method;
+  const constant = y.every((v) => v === y[0]);
+  // Steps between the last observation and the first forecast period (trailing NaN are forecast too).
+  const gap = values.length - (prepared.first + n);
+  const h = horizon + gap;
+  let run: MethodRun;
+  if (constant) {
+    notes.push('The series is constant; the forecast repeats the constant.');
+    const mean = new Float64Array(h).fill(y[0]);
+    const bounds = new Map(levels.map((l) => [l, Float64Array.from(mean)]));
+    run = {forecast: {method: 'Constant', mean, levels, lower: bounds, upper: new Map(bounds)}, details: {}};
+  } else if (n < 4) {
+    notes.push('Fewer than four values: the naive method (last value repeated) is used.');
+    method = 'naive';
+    run = runMethod('naive', y, {period, h, levels});
+  } else {
+    if (method === 'seasonal-naive' && n <= period) {
+      notes.push('Less than one full year: the naive method replaces the seasonal naive method.');
+    } else if (n < 2 * period && method !== 'seasonal-naive') {
+      notes.push('Fewer than two full years of data: seasonal models are not used.');
+    }
+    if (frequency === 'weekly' && (method === 'ets' || method === 'combination')) {
+      notes.push('Weekly data: ETS forecasts the seasonally adjusted series (classical decomposition over 52 weeks) and the seasonal pattern is added back.');
+    }
+    run = runMethod(method, y, {period, h, levels});
+    if (!isFinitePath(run.forecast)) {
+      notes.push(`The ${run.forecast.method} forecast was not finite; the naive method is used instead.`);
+      method = 'naive';
+      run = runMethod('naive', y, {period, h, levels});
+    }
+  }
+  const forecast = run.forecast;
+  const cut = (a: Float64Array): number[] => Array.from(a.subarray(gap));
+  const lower: Record<string, number[]> = {};
+  const upper: Record<string, number[]> = {};
+  for (const level of levels) {
+    lower[String(level)] = cut(forecast.lower.get(level)!);
+    upper[String(level)] = cut(forecast.upper.get(level)!);
+  }
+  const backtest =
+    constant || backtestOrigins < 1 || n < 5
+      ? null
+      : rollingBacktest(y, {method, period, horizon, origins: backtestOrigins, minTrain: 4, offset: prepared.first});
+  return {
+    method: forecast.method,
+    startOffset: values.length,
+    mean: cut(forecast.mean),
+    levels,
+    lower,
+    upper,
+    backtest,
+    options: {
+      method: options.method,
+      resolvedMethod: constant ? 'constant' : method,
+      horizon,
+      levels,
+      backtestOrigins,
+      period,
+      observations: n,
+      ...run.details,
+    },
+    notes,
+  };
+}
+
+function isFinitePath(f: Forecast): boolean {
+  const ok = (a: Float64Array) => a.every((v) => Number.isFinite(v));
+  return ok(f.mean) && f.levels.every((l) => ok(f.lower.get(l)!) && ok(f.upper.get(l)!));
+}

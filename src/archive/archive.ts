@@ -1,0 +1,103 @@
+import {mkdir, rename, rm, writeFile} from 'node:fs/promises';
+import {join} from 'node:path';
+import type {Report} from '../render/types.js';
+import {resultsJson} from '../render/results.js';
+import {InputError} from '../errors.js';
+import {buildManifest} from './manifest.js';
+import {recoverPackDir} from './recover.js';
+import {writeIndex} from './writeIndex.js';
+import {exists} from './exists.js';
+import {badExportName, folderExists} from './messages.js';
+
+export interface ArchiveArgs {
+  report: Report;
+  /** report.html, or null when not wanted. */
+  html: string | null;
+  /** report.pdf, or null when not wanted or no browser was found. */
+  pdf: Uint8Array | null;
+  /** Files for `exports/` (CSV, XLSX); plain file names. */
+  exports: {name: string; content: string | Uint8Array}[];
+  /** Folder holding `<pack-id>/<period>/`. */
+  outDir: string;
+  /** Replace an existing period folder instead of refusing. */
+  force: boolean;
+  /** The fully-defaulted plan as JSON or YAML, copied into the manifest. */
+  packYaml: string;
+  /** Warnings of the run, copied into the manifest. */
+  warnings: string[];
+  /**
+   * Called after each step with its name (`temp-written`, `old-moved`, `new-in-place`, `done`), and
+   * awaited. Default: none. Used by the crash-safety tests to stop the process between steps.
+   */
+  onStep?: (step: string) => void | Promise<void>;
+}
+
+/**
+ * Write one period's folder `<outDir>/<pack-id>/<period>/` (report.html, report.pdf, results.json,
+ * exports/, manifest.json), then regenerate the pack's index.html.
+ *
+ * Crash safety: everything is written into a hidden sibling `.<period>.tmp-<pid>` and renamed into
+ * place in one step, so the period folder is always either absent, the previous complete folder, or
+ * the new complete folder. With `force` the old folder is first renamed to `.<period>.old-<pid>` and
+ * deleted only after the new one is in place; a run that dies in between is repaired by the next
+ * run (see {@link recoverPackDir}). Without `force` an existing folder is a refusal ({@link InputError})
+ * and nothing is written.
+ *
+ * Determinism: no clock values are written anywhere; the same report gives the same bytes.
+ * Returns the period folder and the absolute paths of the files written in it.
+ */
+export async function archive(args: ArchiveArgs): Promise<{folder: string; outputs: string[]}> {
+  const {report, force} = args;
+  const step = args.onStep ?? (() => undefined);
+  const label = report.periodLabel;
+  const packDir = join(args.outDir, report.plan.id);
+  const folder = join(packDir, label);
+  for (const e of args.exports) {
+    if (!/^[^/\\]+$/.test(e.name) || e.name === '.' || e.name === '..') throw new Error(badExportName(e.name));
+  }
+
+  await mkdir(packDir, {recursive: true});
+  await recoverPackDir(packDir);
+  if (!force && (await exists(folder))) {
+    throw new InputError([{file: folder, line: null, column: null, message: folderExists()}]);
+  }
+
+  const files: {path: string; content: string | Uint8Array}[] = [];
+  if (args.html !== null) files.push({path: 'report.html', content: args.html});
+  if (args.pdf !== null) files.push({path: 'report.pdf', content: args.pdf});
+  files.push({path: 'results.json', content: resultsJson(report)});
+  for (const e of [...args.exports].sort((a, b) => (a.name < b.name ? -1 : a.name > b.name ? 1 : 0))) {
+    files.push({path: `exports/${e.name}`, content: e.content});
+  }
+  const manifest = buildManifest({report, packYaml: args.packYaml, outputs: files, warnings: args.warnings});
+  files.push({path: 'manifest.json', content: `${JSON.stringify(manifest, null, 2)}\n`});
+
+  const tmp = join(packDir, `.${label}.tmp-${process.pid}`);
+  const old = join(packDir, `.${label}.old-${process.pid}`);
+  try {
+    await rm(tmp, {recursive: true, force: true});
+    await mkdir(tmp);
+    if (args.exports.length > 0) await mkdir(join(tmp, 'exports'));
+    for (const f of files) await writeFile(join(tmp, f.path), f.content);
+    await step('temp-written');
+    if (await exists(folder)) {
+      await rename(folder, old);
+      await step('old-moved');
+      try {
+        await rename(tmp, folder);
+      } catch (e) {
+        await rename(old, folder);
+        throw e;
+      }
+      await step('new-in-place');
+      await rm(old, {recursive: true, force: true});
+    } else {
+      await rename(tmp, folder);
+    }
+  } finally {
+    await rm(tmp, {recursive: true, force: true});
+  }
+  await writeIndex(args.outDir, report.plan.id);
+  await step('done');
+  return {folder, outputs: files.map((f) => join(folder, f.path))};
+}

@@ -1,0 +1,21 @@
+import {readdir} from 'node:fs/promises';
+
+/**
+ * Names of the archived period folders of one pack (`out/<pack-id>/`), in ascending label order.
+ * Hidden entries (`.2026-10.tmp-123`, `.2026-10.old-123`) and files are left out. Canonical labels
+ * of one frequency (`2026-09`, `2026-Q3`, `2026-W41`) sort correctly as text, so no parsing is needed.
+ * A missing pack folder has no periods.
+ */
+export async function periodFolders(packDir: string): Promise<string[]> {
+  let entries;
+  try {
+    entries = await readdir(packDir, {withFileTypes: true});
+  } catch (e) {
+    if ((e as NodeJS.ErrnoException).code === 'ENOENT') return [];
+    throw e;
+  }
+  return entries
+    .filter((e) => e.isDirectory() && !e.name.startsWith('.'))
+    .map((e) => e.name)
+    .sort((a, b) => (a < b ? -1 : a > b ? 1 : 0));
+}

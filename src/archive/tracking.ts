@@ -1,0 +1,87 @@
+import {frequencyOf} from '../render/results.js';
+import {parsePeriod} from '../time/period.js';
+import type {TrackingRow, TrackingSummary} from './types.js';
+import type {ResultsLike} from './revisions.js';
+import {seasonalNaiveMae} from './seasonalNaiveMae.js';
+
+/**
+ * Every forecast published in an earlier pack whose actual is now known, set against that actual
+ * (the current pack's original value for the period). `error` = actual − forecast; `horizon` =
+ * periods between the publishing pack's review period and the forecast period; `inside[level]` is
+ * lower ≤ actual ≤ upper for each band the earlier pack published.
+ *
+ * Earlier packs of another frequency are ignored. Forecasts or actuals that are missing (null) are
+ * skipped. Rows come in the current pack's series order, then by publishing period, then by period.
+ * Pure; O(earlier packs × series × horizon).
+ */
+export function trackForecasts(earlier: ResultsLike[], current: ResultsLike): TrackingRow[] {
+  const freq = frequencyOf(current.pack.frequency);
+  const packs = earlier
+    .filter((e) => e.pack.frequency === current.pack.frequency)
+    .map((e) => ({pack: e, index: parsePeriod(freq, e.pack.period)}))
+    .filter((e): e is {pack: ResultsLike; index: number} => e.index !== undefined)
+    .sort((a, b) => a.index - b.index);
+  const rows: TrackingRow[] = [];
+  for (const s of current.series) {
+    const position = new Map(s.periods.map((label, j) => [label, j]));
+    for (const {pack, index: published} of packs) {
+      const fc = pack.series.find((x) => x.id === s.id)?.forecast;
+      if (fc == null) continue;
+      const levels = Object.keys(fc.lower).sort((a, b) => Number(a) - Number(b));
+      fc.periods.forEach((label, k) => {
+        const j = position.get(label);
+        const actual = j === undefined ? null : s.original[j];
+        const forecast = fc.mean[k];
+        const at = parsePeriod(freq, label);
+        if (actual === null || forecast === null || at === undefined) return;
+        const inside: Record<string, boolean> = {};
+        for (const level of levels) {
+          const lo = fc.lower[level]?.[k] ?? null;
+          const hi = fc.upper[level]?.[k] ?? null;
+          if (lo !== null && hi !== null) inside[level] = lo <= actual && actual <= hi;
+        }
+        rows.push({
+          seriesId: s.id,
+          publishedIn: pack.pack.period,
+          period: label,
+          horizon: at - published,
+          forecast,
+          actual,
+          error: actual - forecast,
+          inside,
+        });
+      });
+    }
+  }
+  return rows;
+}
+
+/**
+ * Accuracy of the published forecasts so far, per series with at least one tracked forecast:
+ * running MASE = mean |error| ÷ in-sample seasonal-naive MAE of the current original series
+ * (lag = periods per year; Hyndman & Koehler 2006), null when that scale is zero or cannot be
+ * computed; coverage[level] = share of tracked actuals inside the published band.
+ * Pure; O(rows + series length).
+ */
+export function summariseTracking(rows: TrackingRow[], current: ResultsLike): TrackingSummary[] {
+  const out: TrackingSummary[] = [];
+  for (const s of current.series) {
+    const mine = rows.filter((r) => r.seriesId === s.id);
+    if (mine.length === 0) continue;
+    const scale = seasonalNaiveMae(Float64Array.from(s.original, (v) => v ?? NaN), current.pack.frequency);
+    const mae = mine.reduce((sum, r) => sum + Math.abs(r.error), 0) / mine.length;
+    const levels = [...new Set(mine.flatMap((r) => Object.keys(r.inside)))].sort((a, b) => Number(a) - Number(b));
+    const coverage: Record<string, number> = {};
+    for (const level of levels) {
+      const judged = mine.filter((r) => level in r.inside);
+      coverage[level] = judged.filter((r) => r.inside[level]).length / judged.length;
+    }
+    out.push({
+      seriesId: s.id,
+      count: mine.length,
+      mase: Number.isFinite(scale) && scale > 0 ? mae / scale : null,
+      coverage,
+    });
+  }
+  return out;
+}

@@ -1,0 +1,157 @@
+import {stat} from 'node:fs/promises';
+import path from 'node:path';
+import {parsePeriod, type Frequency} from '../time/period.js';
+import type {PathProblem} from './issues.js';
+import {hint} from './suggest.js';
+
+/** How a review period is written for each frequency, for messages. */
+export const periodExample: Record<Frequency, string> = {monthly: '2026-10', quarterly: '2026-Q3', weekly: '2026-W41'};
+
+function record(x: unknown): Record<string, unknown> {
+  return typeof x === 'object' && x !== null && !Array.isArray(x) ? (x as Record<string, unknown>) : {};
+}
+
+function list(x: unknown): unknown[] {
+  return Array.isArray(x) ? x : [];
+}
+
+function text(x: unknown): string | undefined {
+  return typeof x === 'string' && x !== '' ? x : undefined;
+}
+
+async function kindOf(file: string): Promise<'file' | 'folder' | 'missing'> {
+  try {
+    const s = await stat(file);
+    return s.isDirectory() ? 'folder' : 'file';
+  } catch {
+    return 'missing';
+  }
+}
+
+/**
+ * The checks that relate one part of the pack to another or to the disk: unique ids, references
+ * between sources, series and groups, layout-dependent keys, the period label against the frequency,
+ * and the files the pack names. Works on the raw parsed YAML and skips anything of the wrong type
+ * (the schema reports those), so every problem in the file is found in one pass.
+ *
+ * Targets and group members that name no series are not reported when the pack has `fromSource`
+ * entries: those ids are known only once ingest has read the source's keys.
+ */
+export async function crossCheck(raw: unknown, packDir: string): Promise<PathProblem[]> {
+  const out: PathProblem[] = [];
+  const root = record(raw);
+
+  const sourceIndex = new Map<string, number>();
+  const layouts = new Map<string, unknown>();
+  const sources = list(root.sources);
+  for (const [i, s] of sources.map((x, i) => [i, record(x)] as const)) {
+    const id = text(s.id);
+    if (id !== undefined) {
+      const j = sourceIndex.get(id);
+      if (j !== undefined) out.push({path: ['sources', i, 'id'], message: `sources[${i}].id ${id} is already used by sources[${j}]`});
+      else sourceIndex.set(id, i);
+      layouts.set(id, s.layout);
+    }
+    if (s.layout === 'long') {
+      for (const key of ['keyColumn', 'valueColumn']) {
+        if (s[key] === undefined || s[key] === null)
+          out.push({path: ['sources', i, 'layout'], message: `sources[${i}] has layout long, which needs ${key}`});
+      }
+    } else {
+      for (const key of ['keyColumn', 'valueColumn']) {
+        if (s[key] !== undefined && s[key] !== null)
+          out.push({path: ['sources', i, key], message: `sources[${i}].${key} only applies to layout long`});
+      }
+    }
+    const file = text(s.file);
+    if (file !== undefined) {
+      const abs = path.resolve(packDir, file);
+      const k = await kindOf(abs);
+      if (k === 'missing') out.push({path: ['sources', i, 'file'], message: `sources[${i}].file not found: ${file} (looked for ${abs})`});
+      if (k === 'folder') out.push({path: ['sources', i, 'file'], message: `sources[${i}].file is a folder, not a file: ${file}`});
+    }
+  }
+  const sourceIds = [...sourceIndex.keys()];
+
+  const seriesIndex = new Map<string, number>();
+  const series = list(root.series).map(record);
+  const hasFromSource = series.some((s) => 'fromSource' in s);
+  series.forEach((s, i) => {
+    if ('fromSource' in s) {
+      const src = text(s.fromSource);
+      if (src === undefined) return;
+      if (!sourceIndex.has(src))
+        out.push({path: ['series', i, 'fromSource'], message: `series[${i}].fromSource names no source: ${src}${hint(src, sourceIds)}`});
+      else if (layouts.get(src) !== 'long')
+        out.push({path: ['series', i, 'fromSource'], message: `series[${i}].fromSource needs a source with layout long; ${src} is wide`});
+      return;
+    }
+    const id = text(s.id);
+    if (id !== undefined) {
+      const j = seriesIndex.get(id);
+      if (j !== undefined) out.push({path: ['series', i, 'id'], message: `series[${i}].id ${id} is already used by series[${j}]`});
+      else seriesIndex.set(id, i);
+    }
+    const src = text(s.source);
+    if (src !== undefined && !sourceIndex.has(src))
+      out.push({path: ['series', i, 'source'], message: `series[${i}].source names no source: ${src}${hint(src, sourceIds)}`});
+  });
+  const seriesIds = [...seriesIndex.keys()];
+  const unknownSeries = (id: string) => !seriesIndex.has(id) && !hasFromSource;
+
+  series.forEach((s, i) => {
+    const target = text(s.target);
+    if (target === undefined) return;
+    if (target === s.id) out.push({path: ['series', i, 'target'], message: `series[${i}].target cannot be the series itself`});
+    else if (unknownSeries(target))
+      out.push({path: ['series', i, 'target'], message: `series[${i}].target names no series: ${target}${hint(target, seriesIds)}`});
+  });
+
+  const groupIndex = new Map<string, number>();
+  list(root.groups)
+    .map(record)
+    .forEach((g, i) => {
+      const id = text(g.id);
+      if (id !== undefined) {
+        const j = groupIndex.get(id);
+        if (j !== undefined) out.push({path: ['groups', i, 'id'], message: `groups[${i}].id ${id} is already used by groups[${j}]`});
+        else groupIndex.set(id, i);
+      }
+      list(g.series).forEach((m, k) => {
+        const member = text(m);
+        if (member !== undefined && unknownSeries(member))
+          out.push({
+            path: ['groups', i, 'series', k],
+            message: `groups[${i}].series[${k}] names no series: ${member}${hint(member, seriesIds)}`,
+          });
+      });
+    });
+
+  const pack = record(root.pack);
+  const frequency = pack.frequency;
+  const period = text(pack.period);
+  if (period !== undefined && (frequency === 'monthly' || frequency === 'quarterly' || frequency === 'weekly')) {
+    if (parsePeriod(frequency, period) === undefined)
+      out.push({
+        path: ['pack', 'period'],
+        message: `pack.period ${period} is not a ${frequency} period; write it like ${periodExample[frequency]}`,
+      });
+  }
+
+  const branding = record(root.branding);
+  const logo = text(branding.logo);
+  if (logo !== undefined) {
+    const abs = path.resolve(packDir, logo);
+    if ((await kindOf(abs)) !== 'file')
+      out.push({path: ['branding', 'logo'], message: `branding.logo not found: ${logo} (looked for ${abs})`});
+    else if (!/\.(png|jpe?g|svg)$/i.test(logo))
+      out.push({path: ['branding', 'logo'], message: 'branding.logo must be a .png, .jpg or .svg file'});
+  }
+  const templates = text(branding.templates);
+  if (templates !== undefined) {
+    const abs = path.resolve(packDir, templates);
+    if ((await kindOf(abs)) !== 'folder')
+      out.push({path: ['branding', 'templates'], message: `branding.templates folder not found: ${templates} (looked for ${abs})`});
+  }
+  return out;
+}

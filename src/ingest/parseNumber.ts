@@ -1,0 +1,61 @@
+/**
+ * Numbers in CSV cells, per the source's decimal mark.
+ *
+ * Accepted: an optional sign (`-`, `+` or the minus sign U+2212), digits with the source's decimal mark,
+ * thousands grouped in threes by one consistent separator (`,` space, no-break space, narrow no-break
+ * space or `'` when the decimal mark is `.`; `.` space, no-break spaces or `'` when it is `,`), an
+ * exponent (`1.5e3`, only without grouping), and accounting negatives in parentheses (`(1,234.5)`).
+ *
+ * Missing (NaN, never 0): blank, `NA`, `N/A`, `#N/A`, `-`, `–`, `—`, `null`, `NaN` (any case).
+ *
+ * Rejected (undefined; {@link numberAdvice} says why): currency symbols and codes and a trailing `%`.
+ * They are not stripped because dropping them silently would change meaning: `12%` could be 12 or 0.12,
+ * and a symbol on some cells suggests a column that mixes currencies. Units belong in the series `unit`.
+ *
+ * Complexity: O(length of text).
+ */
+export function parseNumberCell(text: string, decimal: '.' | ','): number | undefined {
+  if (decimal === '.' && PLAIN.test(text)) return Number(text);
+  let s = text.trim();
+  if (MISSING.has(s.toLowerCase())) return NaN;
+  let sign = 1;
+  const bracketed = s.match(/^\((.*)\)$/);
+  if (bracketed) {
+    sign = -1;
+    s = bracketed[1].trim();
+  }
+  if (/^[-+\u2212]/.test(s)) {
+    if (s[0] !== '+') sign = -sign;
+    s = s.slice(1);
+  }
+  if (bracketed && sign > 0) return undefined;
+  const grouped = (decimal === '.' ? DOT_GROUPED : COMMA_GROUPED).exec(s);
+  if (grouped) {
+    const digits = grouped[1].replace(/[^0-9]/g, '');
+    return sign * Number(grouped[3] === undefined ? digits : `${digits}.${grouped[3]}`);
+  }
+  const plain = (decimal === '.' ? DOT_PLAIN : COMMA_PLAIN).exec(s);
+  if (plain) return sign * Number(decimal === '.' ? s : s.replace(',', '.'));
+  return undefined;
+}
+
+/** Why a cell that {@link parseNumberCell} rejected is not a number, and how to fix it. */
+export function numberAdvice(text: string, decimal: '.' | ','): string {
+  const s = text.trim();
+  if (/[€$£¥₹₣₤]|\b(EUR|USD|GBP|CHF|JPY|SEK|NOK|DKK)\b/i.test(s)) {
+    return 'remove the currency symbol or code and put the unit in the series `unit`';
+  }
+  if (/%$/.test(s)) return 'write percentages as plain numbers (12.5, not 12.5%) and put % in the series `unit`';
+  const other = decimal === '.' ? ',' : '.';
+  if (parseNumberCell(s, other as '.' | ',') !== undefined) {
+    return `it reads as a number with decimal mark "${other}": set \`decimal: "${other}"\` on the source`;
+  }
+  return 'write a number such as 1234.5, or leave the cell blank or NA when the value is missing';
+}
+
+const PLAIN = /^-?(?:\d+\.?\d*|\.\d+)(?:[eE][-+]?\d+)?$/;
+const DOT_PLAIN = /^(?:\d+\.?\d*|\.\d+)(?:[eE][-+]?\d+)?$/;
+const COMMA_PLAIN = /^(?:\d+,?\d*|,\d+)(?:[eE][-+]?\d+)?$/;
+const DOT_GROUPED = /^(\d{1,3}([, \u00a0\u202f'])\d{3}(?:\2\d{3})*)(?:\.(\d*))?$/;
+const COMMA_GROUPED = /^(\d{1,3}([. \u00a0\u202f'])\d{3}(?:\2\d{3})*)(?:,(\d*))?$/;
+const MISSING = new Set(['', 'na', 'n/a', '#n/a', '-', '\u2013', '\u2014', 'null', 'nan']);

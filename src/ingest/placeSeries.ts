@@ -1,0 +1,50 @@
+import {formatPeriod} from '../time/period.js';
+import type {Frequency} from '../time/period.js';
+import * as msg from './messages.js';
+import type {PeriodStore} from './periodStore.js';
+
+/** A series placed on the calendar, or why it could not be. */
+export type Placement =
+  | {ok: true; start: number; values: Float64Array; notes: string[]}
+  | {ok: false; problem: string};
+
+/**
+ * Place one series' values on a regular calendar from its first value to the review period.
+ *
+ * - Starts at the first period with a number (leading blanks dropped).
+ * - Periods with no number in between stay NaN and are listed in a note.
+ * - Values after the review period are dropped with a note: a pack built for an earlier period sees
+ *   only the data up to it.
+ * - A series ending before the review period is padded with NaN to it, with a note.
+ * - A review period before the first value is a problem.
+ *
+ * Complexity: O(n) for n periods from the first value to the review period.
+ */
+export function placeSeries(
+  id: string,
+  store: PeriodStore,
+  range: {first: number; last: number},
+  period: number,
+  frequency: Frequency,
+): Placement {
+  const label = (p: number): string => formatPeriod(frequency, p);
+  if (period < range.first) return {ok: false, problem: msg.periodBeforeData(id, label(period), label(range.first))};
+  const values = new Float64Array(period - range.first + 1);
+  const missing: string[] = [];
+  const end = Math.min(range.last, period);
+  for (let p = range.first; p <= period; p++) {
+    const v = store.get(p);
+    values[p - range.first] = v;
+    if (Number.isNaN(v) && p <= end) missing.push(label(p));
+  }
+  const notes: string[] = [];
+  if (missing.length > 0) notes.push(msg.gaps(frequency, missing));
+  if (range.last > period) {
+    let after = 0;
+    for (let p = period + 1; p <= range.last; p++) if (!Number.isNaN(store.get(p))) after++;
+    notes.push(msg.truncated(frequency, after, label(period), label(period + 1), label(range.last)));
+  } else if (range.last < period) {
+    notes.push(msg.padded(frequency, label(range.last), period - range.last, label(period)));
+  }
+  return {ok: true, start: range.first, values, notes};
+}

@@ -1,0 +1,143 @@
+import {createHash} from 'node:crypto';
+import {createReadStream} from 'node:fs';
+import {Readable} from 'node:stream';
+import {CsvError, parse} from 'csv-parse';
+import iconv from 'iconv-lite';
+import type {SourcePlan} from '../config/plan.js';
+import type {InputFile} from './types.js';
+import type {ProblemLog} from './problemLog.js';
+import {sniffDelimiter} from './sniffDelimiter.js';
+import * as msg from './messages.js';
+
+/** Receives the header, then each data record, with the 1-based line where the record ends. */
+export interface CsvVisitor {
+  /** Return false to stop reading (the header lacks a needed column). */
+  header(fields: string[], line: number): boolean;
+  record(fields: string[], line: number): void;
+}
+
+/**
+ * Stream one CSV source through a visitor, reading the file once: the raw bytes are hashed (SHA-256)
+ * and counted, decoded (UTF-8 validated strictly, or Windows-1252 through iconv-lite because Node 20's
+ * TextDecoder maps 0x80–0x9F to control characters), the delimiter is sniffed from the header line when
+ * `auto`, and csv-parse turns the text into records. Memory stays bounded by the stream's chunk size.
+ *
+ * File, decoding and CSV-syntax failures go to `problems`; the result is then undefined.
+ */
+export async function readCsv(source: SourcePlan, visitor: CsvVisitor, problems: ProblemLog): Promise<InputFile | undefined> {
+  const hash = createHash('sha256');
+  const counter = {bytes: 0, lines: 1};
+  const text = decodedText(source, hash, counter);
+  let rows = 0;
+  try {
+    let head = '';
+    for (;;) {
+      const next = await text.next();
+      if (next.done) break;
+      head += next.value;
+      if (/[\r\n]/.test(head)) break;
+    }
+    const headerLine = head.replace(/^\ufeff/, '').split(/\r\n|\r|\n/, 1)[0];
+    const delimiter = source.delimiter === 'auto' ? sniffDelimiter(headerLine) : source.delimiter;
+    const parser = parse({bom: true, info: true, delimiter, relax_column_count: true, relax_quotes: true, skip_empty_lines: true});
+    const input = Readable.from(prepend(head, text));
+    let headerSeen = false;
+    // Records are taken from 'data' events rather than async iteration: at a million rows the
+    // per-record promise of `for await` costs more than the parsing itself.
+    const stopped = await new Promise<boolean>((resolve, reject) => {
+      input.on('error', reject);
+      parser.on('error', reject);
+      parser.on('end', () => resolve(false));
+      parser.on('data', ({record, info}: {record: string[]; info: {lines: number}}) => {
+        if (headerSeen) {
+          rows++;
+          visitor.record(record, info.lines);
+        } else {
+          headerSeen = true;
+          if (!visitor.header(record.map((f) => f.trim()), info.lines)) {
+            input.destroy();
+            parser.destroy();
+            resolve(true);
+          }
+        }
+      });
+      input.pipe(parser);
+    });
+    if (stopped) return undefined;
+    if (!headerSeen) {
+      problems.add(source.file, null, null, msg.emptyFile());
+      return undefined;
+    }
+  } catch (e) {
+    if (e instanceof DecodeFailure) problems.add(source.file, e.line, null, e.message);
+    else if (e instanceof CsvError) problems.add(source.file, numberOr(e.lines), null, msg.csvSyntax(e.message));
+    else if (isFileError(e)) problems.add(source.file, null, null, msg.unreadableFile(e.code));
+    else throw e;
+    return undefined;
+  }
+  return {file: source.file, sha256: hash.digest('hex'), bytes: counter.bytes, rows};
+}
+
+class DecodeFailure extends Error {
+  constructor(
+    message: string,
+    readonly line: number,
+  ) {
+    super(message);
+  }
+}
+
+/** Raw chunks → hashed, counted, decoded text chunks. */
+async function* decodedText(
+  source: SourcePlan,
+  hash: ReturnType<typeof createHash>,
+  counter: {bytes: number; lines: number},
+): AsyncGenerator<string> {
+  const win1252 = source.encoding === 'windows-1252';
+  const decoder = win1252 ? iconv.getDecoder('win1252') : undefined;
+  const utf8 = new TextDecoder('utf-8', {fatal: true});
+  for await (const chunk of createReadStream(source.file) as AsyncIterable<Buffer>) {
+    if (counter.bytes === 0 && win1252 && chunk[0] === 0xef && chunk[1] === 0xbb && chunk[2] === 0xbf) {
+      throw new DecodeFailure(msg.utf8BomInWindows1252(), 1);
+    }
+    hash.update(chunk);
+    counter.bytes += chunk.length;
+    let text: string;
+    if (decoder) text = decoder.write(chunk);
+    else {
+      try {
+        text = utf8.decode(chunk, {stream: true});
+      } catch {
+        const partial = new TextDecoder('utf-8').decode(chunk);
+        const before = partial.slice(0, Math.max(0, partial.indexOf('\ufffd')));
+        throw new DecodeFailure(msg.notUtf8(), counter.lines + countNewlines(before));
+      }
+    }
+    counter.lines += countNewlines(text);
+    yield text;
+  }
+  try {
+    yield decoder ? (decoder.end() ?? '') : utf8.decode();
+  } catch {
+    throw new DecodeFailure(msg.notUtf8(), counter.lines);
+  }
+}
+
+async function* prepend(head: string, rest: AsyncIterable<string>): AsyncGenerator<string> {
+  if (head !== '') yield head;
+  yield* rest;
+}
+
+function countNewlines(text: string): number {
+  let n = 0;
+  for (let i = text.indexOf('\n'); i >= 0; i = text.indexOf('\n', i + 1)) n++;
+  return n;
+}
+
+function numberOr(x: unknown): number | null {
+  return typeof x === 'number' && Number.isFinite(x) ? x : null;
+}
+
+function isFileError(e: unknown): e is {code: string} {
+  return typeof e === 'object' && e !== null && typeof (e as {code?: unknown}).code === 'string' && /^E[A-Z]+$/.test((e as {code: string}).code);
+}

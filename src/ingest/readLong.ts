@@ -1,0 +1,68 @@
+import {didYouMean} from '../config/suggest.js';
+import {formatPeriod} from '../time/period.js';
+import type {CellReader} from './cells.js';
+import * as msg from './messages.js';
+import {PeriodStore} from './periodStore.js';
+import type {CsvVisitor} from './readCsv.js';
+import type {SourceData, Wanted} from './sourceData.js';
+
+/**
+ * Visitor for a long source: one row per (key, period) with date, key and value columns. Only the keys
+ * the pack asks for are kept (all of them for `fromSource`), each straight into its own store, so memory
+ * grows with keys × periods, not with rows. `finish` reports keys the pack names but the file lacks.
+ */
+export function longVisitor(cells: CellReader, wanted: Wanted, data: SourceData): CsvVisitor & {finish(): void} {
+  const {file, keyColumn: keyName, valueColumn: valueName} = cells.source;
+  const keyLabel = keyName ?? '';
+  const valueLabel = valueName ?? '';
+  let keyAt = -1;
+  let valueAt = -1;
+  let width = 0;
+  let outOfOrder = 0;
+  const skipped = new Set<string>();
+  return {
+    header(header, line) {
+      data.headerLine = line;
+      width = header.length;
+      cells.dateColumn = cells.column(header, line, 'date column', cells.source.dateColumn);
+      keyAt = cells.column(header, line, 'key column', keyLabel);
+      valueAt = cells.column(header, line, 'value column', valueLabel);
+      return cells.dateColumn >= 0 && keyAt >= 0 && valueAt >= 0;
+    },
+    record(fields, line) {
+      if (fields.length < width) {
+        if (fields.every((f) => f.trim() === '')) return;
+        cells.problems.add(file, line, null, msg.shortRow(fields.length, width));
+      }
+      const key = (fields[keyAt] ?? '').trim();
+      let store = data.stores.get(key);
+      if (store === undefined) {
+        if (key === '' || (!wanted.all && !wanted.names.has(key))) {
+          skipped.add(key);
+          return;
+        }
+        store = new PeriodStore();
+        data.stores.set(key, store);
+      }
+      const period = cells.period(fields[cells.dateColumn] ?? '', line);
+      if (period === undefined) return;
+      const value = cells.value(fields[valueAt] ?? '', line, valueAt, valueLabel);
+      if (value === undefined) return;
+      const before = store.set(period, value, line);
+      if (before !== 0) {
+        const label = formatPeriod(cells.frequency, period);
+        cells.problems.add(file, line, cells.dateColumn + 1, msg.duplicateKeyRow(key, label, before, line));
+      }
+      if (outOfOrder === 0 && store.outOfOrderLine !== 0) outOfOrder = store.outOfOrderLine;
+    },
+    finish() {
+      if (outOfOrder !== 0) data.notes.push({file, line: outOfOrder, message: msg.outOfOrder(outOfOrder)});
+      const keys = [...data.stores.keys(), ...skipped];
+      for (const [key, ids] of wanted.names) {
+        if (!data.stores.has(key)) {
+          cells.problems.add(file, null, null, msg.missingKey(keyLabel, key, ids.join(', '), didYouMean(key, keys)));
+        }
+      }
+    },
+  };
+}

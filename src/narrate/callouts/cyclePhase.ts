@@ -1,0 +1,65 @@
+import type {CycleResult} from '../../analyse/types.js';
+import {chartId, type Rule} from '../context.js';
+import {robustZ} from '../robustZ.js';
+import * as say from '../wording.js';
+
+type Phase = CycleResult['phase'];
+
+/**
+ * Where the series stands in its cycle (gap to the long-run trend, sign and direction), and whether that
+ * phase changed in the review period. A change is found by reading the previous period's phase from the gap
+ * with the same rule (above/below trend by the gap's sign, rising/falling by its last change) and is only
+ * reported when that rule agrees with the engine's current phase. Moving into a falling phase is watch,
+ * anything else info.
+ */
+export const cyclePhaseRule: Rule = {
+  name: 'cycle-phase',
+  run({analysis: a, series: s, fmt}) {
+    const c = a.cycle;
+    if (!c) return [];
+    const last = a.end - a.start;
+    const gap = c.gap[last];
+    if (!Number.isFinite(gap)) return [];
+    const z = robustZ(c.gap.slice(0, last), gap);
+    const magnitude = Number.isFinite(z) ? Math.abs(z) : 0;
+    const chart = chartId(s.id, 'cycle');
+    const current = phaseAt(c.gap, last);
+    const previous = phaseAt(c.gap, last - 1);
+    if (current === c.phase && previous !== null && previous !== current) {
+      return [
+        {
+          key: null,
+          severity: current.startsWith('falling') ? 'watch' : 'info',
+          text: say.cyclePhaseChange({
+            label: s.label,
+            from: say.phaseWords(previous),
+            to: say.phaseWords(current),
+            period: fmt.period(a.frequency, a.end),
+            gap: fmt.percent(gap),
+          }),
+          figures: {gap},
+          chart,
+          magnitude: Math.max(1, magnitude),
+          periodsAgo: 0,
+        },
+      ];
+    }
+    return [
+      {
+        key: null,
+        severity: 'info',
+        text: say.cyclePhase({label: s.label, phase: say.phaseWords(c.phase), gap: fmt.percent(gap)}),
+        figures: {gap},
+        chart,
+        magnitude: Math.min(magnitude, 2),
+        periodsAgo: 0,
+      },
+    ];
+  },
+};
+
+function phaseAt(gap: number[], i: number): Phase | null {
+  if (i < 1 || !Number.isFinite(gap[i]) || !Number.isFinite(gap[i - 1])) return null;
+  const rising = gap[i] >= gap[i - 1];
+  return gap[i] >= 0 ? (rising ? 'rising-above' : 'falling-above') : rising ? 'rising-below' : 'falling-below';
+}

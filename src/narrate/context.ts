@@ -1,0 +1,47 @@
+import type {Plan, SeriesPlan} from '../config/plan.js';
+import type {SeriesAnalysis} from '../analyse/types.js';
+import type {History} from '../archive/types.js';
+import type {Callout} from './types.js';
+import type {NarrateFormat} from './format.js';
+
+/** What a callout rule sees: one visible series with its analysis, the pack, and the archive history. */
+export interface RuleContext {
+  plan: Plan;
+  /** Review period index. */
+  period: number;
+  series: SeriesPlan;
+  analysis: SeriesAnalysis;
+  history: History | null;
+  fmt: NarrateFormat;
+  /** True when the series is a rate in percent (unit `%`): its changes are stated in percentage points. */
+  isRate: boolean;
+}
+
+/**
+ * A callout before ranking. `magnitude` is the size of what it reports relative to the series' usual
+ * variability (roughly: robust z-score, 0–10); `periodsAgo` is how far before the review period it happened.
+ */
+export interface Draft {
+  /** Suffix making the id unique when a rule yields several callouts (e.g. the period of an outlier). */
+  key: string | null;
+  severity: Callout['severity'];
+  text: string;
+  figures: Record<string, number>;
+  chart: string | null;
+  magnitude: number;
+  periodsAgo: number;
+}
+
+/** A rule turns one series into zero or more drafts. Pure and deterministic. */
+export interface Rule {
+  /** Rule name, e.g. `year-on-year`; becomes `Callout.rule` and part of the id. */
+  name: string;
+  run(ctx: RuleContext): Draft[];
+}
+
+/** Chart anchor ids in the HTML report: `chart-<series>-<part>`. */
+export type ChartPart = 'overview' | 'seasonal' | 'yoy' | 'irregular' | 'forecast' | 'cycle';
+
+export function chartId(seriesId: string, part: ChartPart): string {
+  return `chart-${seriesId}-${part}`;
+}

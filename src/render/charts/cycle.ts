@@ -1,0 +1,87 @@
+import type {TopLevelSpec} from 'vega-lite';
+import type {TurningPoint} from '../../analyse/cycle/types.js';
+import {SCHEMA, baseConfig, epoch, finite, round, timeX, type ChartContext} from './common.js';
+
+/** Deviation from long-run trend (percent) with dated turning points and the current phase. */
+export interface CycleInput {
+  start: number;
+  gap: number[];
+  turningPoints: TurningPoint[];
+  /** Plain-words label of the latest phase, e.g. `above trend, rising`. */
+  phaseLabel: string;
+  description: string;
+}
+
+export const TURN_KEYS = ['Peak', 'Trough', 'Peak (provisional)', 'Trough (provisional)'] as const;
+
+/**
+ * Cycle chart: the gap to the long-run trend as a shaded area around zero with its outline, peaks as
+ * downward triangles and troughs as upward triangles (hollow when provisional), and the latest point
+ * labelled with the current phase. O(n).
+ */
+export function cycleChart(input: CycleInput, ctx: ChartContext): TopLevelSpec {
+  const {theme, frequency} = ctx;
+  const t = (i: number) => epoch(frequency, input.start + i);
+  const values = input.gap.map((g, i) => ({t: t(i), v: round(finite(g))}));
+  const turns = input.turningPoints
+    .filter((p) => p.index >= 0 && p.index < input.gap.length && finite(input.gap[p.index]) !== null)
+    .map((p) => ({
+      t: t(p.index),
+      v: round(finite(input.gap[p.index])),
+      k: TURN_KEYS[(p.type === 'peak' ? 0 : 1) + (p.provisional ? 2 : 0)],
+    }));
+  const lastIndex = values.map((r) => r.v !== null).lastIndexOf(true);
+  const last = lastIndex >= 0 ? [{...values[lastIndex], label: `Now: ${input.phaseLabel}`}] : [];
+  return {
+    $schema: SCHEMA,
+    description: input.description,
+    width: ctx.width,
+    height: ctx.height,
+    autosize: {type: 'fit', contains: 'padding'},
+    config: baseConfig(theme),
+    layer: [
+      {
+        data: {values},
+        mark: {type: 'area', color: theme.tint, opacity: 0.9},
+        encoding: {
+          x: timeX(frequency, input.gap.length),
+          y: {field: 'v', type: 'quantitative', title: '% from long-run trend', axis: {format: ',~r'}},
+          y2: {datum: 0},
+        },
+      },
+      {data: {values}, mark: {type: 'line', color: theme.deep, strokeWidth: 1.6}, encoding: {x: {field: 't', type: 'temporal'}, y: {field: 'v', type: 'quantitative'}}},
+      {data: {values: [{}]}, mark: {type: 'rule', color: theme.ink, strokeWidth: 0.8}, encoding: {y: {datum: 0}}},
+      // Layers without rows are left out: vega warns about the empty extent otherwise.
+      ...(turns.length === 0 ? [] : [{
+        data: {values: turns},
+        mark: {type: 'point', size: 60, strokeWidth: 1.3, color: theme.contrast},
+        encoding: {
+          x: {field: 't', type: 'temporal'},
+          y: {field: 'v', type: 'quantitative'},
+          shape: {
+            field: 'k',
+            type: 'nominal',
+            scale: {domain: [...TURN_KEYS], range: ['triangle-down', 'triangle-up', 'triangle-down', 'triangle-up']},
+            legend: turns.length > 0 ? {symbolStrokeColor: theme.contrast} : null,
+          },
+          fill: {
+            field: 'k',
+            type: 'nominal',
+            scale: {domain: [...TURN_KEYS], range: [theme.contrast, theme.contrast, 'white', 'white']},
+            legend: null,
+          },
+        },
+      }]),
+      ...(last.length === 0 ? [] : [{
+        data: {values: last},
+        layer: [
+          {mark: {type: 'point', filled: true, size: 40, color: theme.deep}, encoding: {x: {field: 't', type: 'temporal'}, y: {field: 'v', type: 'quantitative'}}},
+          {
+            mark: {type: 'text', align: 'right', dx: -6, dy: -10, fontSize: 10, fontWeight: 'bold', color: theme.deep},
+            encoding: {x: {field: 't', type: 'temporal'}, y: {field: 'v', type: 'quantitative'}, text: {field: 'label'}},
+          },
+        ],
+      }]),
+    ],
+  };
+}

@@ -1,0 +1,97 @@
+import type {TopLevelSpec} from 'vega-lite';
+import type {ForecastResult} from '../../analyse/forecast/types.js';
+import {periodsPerYear} from '../../time/period.js';
+import {SCHEMA, VALUE_FORMAT, baseConfig, epoch, finite, round, timeX, unitTitle, type ChartContext} from './common.js';
+
+/** Recent actuals, the forecast with its bands, and the back-test's one-step-ahead forecasts. */
+export interface ForecastInput {
+  start: number;
+  original: number[];
+  forecast: ForecastResult;
+  /** Actual periods shown before the forecast. Default: three years (two for weekly). */
+  recent?: number;
+  description: string;
+}
+
+export const FORECAST_KEYS = ['Actual', 'Forecast', 'Back-test (one step ahead)'] as const;
+
+/**
+ * Forecast chart: the widest and narrowest interval as stacked shaded bands (outer band lighter), the
+ * central forecast as a dashed accent line joined to the last actual, recent actuals as a solid dark line,
+ * and the back-test's one-step forecasts as open circles. Band levels follow `forecast.levels` (at most the
+ * outer and inner one are drawn). O(n + h).
+ */
+export function forecastChart(input: ForecastInput, ctx: ChartContext): TopLevelSpec {
+  const {theme, frequency} = ctx;
+  const f = input.forecast;
+  const n = input.original.length;
+  const recent = input.recent ?? (frequency === 'weekly' ? 2 : 3) * periodsPerYear[frequency];
+  const first = Math.max(0, n - recent);
+  const t = (offset: number) => epoch(frequency, input.start + offset);
+  const levels = [...f.levels].sort((a, b) => b - a);
+  const shown = levels.length > 1 ? [levels[0], levels[levels.length - 1]] : levels;
+  const bandNames = shown.map((l) => `${l}% range`);
+  const bands = shown.flatMap((level, k) =>
+    f.mean.map((_, h) => ({
+      t: t(f.startOffset + h),
+      b: bandNames[k],
+      lo: round(finite(f.lower[String(level)]?.[h])),
+      hi: round(finite(f.upper[String(level)]?.[h])),
+    })),
+  );
+  const actual = input.original.slice(first).map((v, i) => ({t: t(first + i), s: FORECAST_KEYS[0], v: round(finite(v))}));
+  const lastActual = [...actual].reverse().find((r) => r.v !== null);
+  const mean = [
+    ...(lastActual && f.startOffset === n ? [{t: lastActual.t, s: FORECAST_KEYS[1], v: lastActual.v}] : []),
+    ...f.mean.map((v, h) => ({t: t(f.startOffset + h), s: FORECAST_KEYS[1], v: round(finite(v))})),
+  ];
+  const backtest = (f.backtest?.points ?? [])
+    .filter((p) => p.offset >= first)
+    .map((p) => ({t: t(p.offset), s: FORECAST_KEYS[2], v: round(finite(p.forecast))}));
+  const keys = [...FORECAST_KEYS.slice(0, 2), ...(backtest.length > 0 ? [FORECAST_KEYS[2]] : [])];
+  const bandColours = [theme.wash, theme.tint].slice(-bandNames.length);
+  const x = timeX(frequency, n - first + f.mean.length);
+  return {
+    $schema: SCHEMA,
+    description: input.description,
+    width: ctx.width,
+    height: ctx.height,
+    autosize: {type: 'fit', contains: 'padding'},
+    config: baseConfig(theme),
+    layer: [
+      // Outer band first so the inner band is drawn on top of it.
+      ...bandNames.map((name, k) => ({
+        data: {values: bands.filter((b) => b.b === name)},
+        mark: {type: 'area' as const},
+        encoding: {
+          x,
+          y: {
+            field: 'lo',
+            type: 'quantitative' as const,
+            scale: {zero: false},
+            title: unitTitle(ctx.unit),
+            axis: k === 0 ? {format: VALUE_FORMAT} : null,
+          },
+          y2: {field: 'hi'},
+          fill: {field: 'b', type: 'nominal' as const, scale: {domain: bandNames, range: bandColours}},
+        },
+      })),
+      {
+        data: {values: [...actual, ...mean]},
+        mark: {type: 'line'},
+        encoding: {
+          x: {field: 't', type: 'temporal'},
+          y: {field: 'v', type: 'quantitative'},
+          color: {field: 's', type: 'nominal', scale: {domain: keys, range: [theme.ink, theme.accent, theme.contrast].slice(0, keys.length)}},
+          strokeDash: {field: 's', type: 'ordinal', sort: [...FORECAST_KEYS.slice(0, 2)], scale: {domain: FORECAST_KEYS.slice(0, 2), range: [[1, 0], [5, 3]]}, legend: null},
+          strokeWidth: {field: 's', type: 'ordinal', sort: [...FORECAST_KEYS.slice(0, 2)], scale: {domain: FORECAST_KEYS.slice(0, 2), range: [1.4, 2]}, legend: null},
+        },
+      },
+      ...(backtest.length === 0 ? [] : [{
+        data: {values: backtest},
+        mark: {type: 'point', shape: 'circle', filled: false, size: 26, strokeWidth: 1.2},
+        encoding: {x: {field: 't', type: 'temporal'}, y: {field: 'v', type: 'quantitative'}, color: {field: 's', type: 'nominal' as const}},
+      }]),
+    ],
+  };
+}

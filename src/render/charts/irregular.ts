@@ -1,0 +1,93 @@
+import type {TopLevelSpec} from 'vega-lite';
+import type {Outlier} from '../../analyse/decompose/types.js';
+import {SCHEMA, baseConfig, epoch, finite, round, timeX, type ChartContext} from './common.js';
+
+/** Irregular component with the flagged points. */
+export interface IrregularInput {
+  start: number;
+  irregular: number[];
+  model: 'additive' | 'multiplicative';
+  outliers: Outlier[];
+  /** Locale labels of flagged periods, keyed by index into the series. */
+  labels: Record<number, string>;
+  description: string;
+}
+
+export const OUTLIER_KINDS: Record<Outlier['kind'], string> = {
+  additive: 'One-off',
+  'level-shift': 'Level shift',
+  temporary: 'Temporary change',
+};
+
+/**
+ * The irregular as thin stems from zero (percent for multiplicative factors, the unit for additive ones),
+ * with flagged points drawn as larger shapes (one shape per kind) in the contrast colour and labelled with
+ * their period. O(n).
+ */
+export function irregularChart(input: IrregularInput, ctx: ChartContext): TopLevelSpec {
+  const {theme, frequency} = ctx;
+  const scale = (v: number | null) => (v === null ? null : round(input.model === 'multiplicative' ? (v - 1) * 100 : v));
+  const values = input.irregular.map((value, i) => ({t: epoch(frequency, input.start + i), v: scale(finite(value))}));
+  const flagged = input.outliers
+    .filter((o) => o.index >= 0 && o.index < input.irregular.length && finite(input.irregular[o.index]) !== null)
+    .map((o) => ({
+      t: epoch(frequency, input.start + o.index),
+      v: scale(finite(input.irregular[o.index])),
+      k: OUTLIER_KINDS[o.kind],
+      label: input.labels[o.index] ?? '',
+      above: (input.irregular[o.index] ?? 0) >= (input.model === 'multiplicative' ? 1 : 0),
+    }));
+  const kinds = Object.values(OUTLIER_KINDS);
+  return {
+    $schema: SCHEMA,
+    description: input.description,
+    width: ctx.width,
+    height: ctx.height,
+    autosize: {type: 'fit', contains: 'padding'},
+    config: baseConfig(theme),
+    layer: [
+      {
+        data: {values},
+        mark: {type: 'rule', color: theme.neutral, strokeWidth: 1},
+        encoding: {
+          x: timeX(frequency, input.irregular.length),
+          y: {field: 'v', type: 'quantitative', title: input.model === 'multiplicative' ? '% irregular' : ctx.unit},
+          y2: {datum: 0},
+        },
+      },
+      {data: {values: [{}]}, mark: {type: 'rule', color: theme.ink, strokeWidth: 0.8}, encoding: {y: {datum: 0}}},
+      // Layers without rows are left out: vega warns about the empty extent otherwise.
+      ...(flagged.length === 0
+        ? []
+        : [
+      {
+        data: {values: flagged},
+        layer: [
+          {
+            mark: {type: 'point', filled: true, size: 70, color: theme.contrast, stroke: 'white', strokeWidth: 0.8},
+            encoding: {
+              x: {field: 't', type: 'temporal'},
+              y: {field: 'v', type: 'quantitative'},
+              shape: {
+                field: 'k',
+                type: 'nominal',
+                scale: {domain: kinds, range: ['circle', 'square', 'triangle-up']},
+                legend: flagged.length > 0 ? {symbolFillColor: theme.contrast, symbolStrokeColor: theme.contrast} : null,
+              },
+            },
+          },
+          ...[true, false].filter((above) => flagged.some((r) => r.above === above)).map((above) => ({
+            transform: [{filter: {field: 'above', equal: above}}],
+            mark: {type: 'text' as const, fontSize: 9, color: theme.ink, dy: above ? -10 : 12},
+            encoding: {
+              x: {field: 't', type: 'temporal' as const},
+              y: {field: 'v', type: 'quantitative' as const},
+              text: {field: 'label'},
+            },
+          })),
+        ],
+      },
+          ]),
+    ],
+  };
+}

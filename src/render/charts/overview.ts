@@ -1,0 +1,54 @@
+import type {TopLevelSpec} from 'vega-lite';
+import {SCHEMA, VALUE_FORMAT, baseConfig, epoch, finite, round, timeX, unitTitle, type ChartContext} from './common.js';
+
+/** Original values with, when available, the seasonally adjusted series and the trend-cycle. */
+export interface OverviewInput {
+  start: number;
+  original: number[];
+  adjusted: number[] | null;
+  trend: number[] | null;
+  description: string;
+}
+
+export const OVERVIEW_SERIES = ['Original', 'Seasonally adjusted', 'Trend-cycle'] as const;
+
+/**
+ * Line chart of the level of a series: original in light neutral (thin), seasonally adjusted in the accent
+ * (medium) and trend-cycle in the deep accent (thick), so the three read apart in greyscale by width and
+ * lightness. Missing values break the lines. O(n).
+ */
+export function overviewChart(input: OverviewInput, ctx: ChartContext): TopLevelSpec {
+  const {theme} = ctx;
+  const layers: [string, number[] | null][] = [
+    [OVERVIEW_SERIES[0], input.original],
+    [OVERVIEW_SERIES[1], input.adjusted],
+    [OVERVIEW_SERIES[2], input.trend],
+  ];
+  const present = layers.filter(([, values]) => values !== null) as [string, number[]][];
+  const values = present.flatMap(([s, v]) =>
+    v.map((value, i) => ({t: epoch(ctx.frequency, input.start + i), s, v: round(finite(value))})),
+  );
+  const styles: Record<string, [string, number]> = {
+    [OVERVIEW_SERIES[0]]: [theme.neutral, 1.1],
+    [OVERVIEW_SERIES[1]]: [theme.accent, 1.6],
+    [OVERVIEW_SERIES[2]]: [theme.deep, 2.6],
+  };
+  const domain = present.map(([s]) => s);
+  return {
+    $schema: SCHEMA,
+    description: input.description,
+    width: ctx.width,
+    height: ctx.height,
+    autosize: {type: 'fit', contains: 'padding'},
+    config: baseConfig(theme),
+    data: {values},
+    mark: {type: 'line', interpolate: 'linear'},
+    encoding: {
+      x: timeX(ctx.frequency, input.original.length),
+      y: {field: 'v', type: 'quantitative', scale: {zero: false}, title: unitTitle(ctx.unit), axis: {format: VALUE_FORMAT}},
+      color: {field: 's', type: 'nominal', scale: {domain, range: domain.map((s) => styles[s][0])}},
+      strokeWidth: {field: 's', type: 'ordinal', sort: domain, scale: {domain, range: domain.map((s) => styles[s][1])}, legend: null},
+      order: {field: 's', sort: 'ascending'},
+    },
+  };
+}

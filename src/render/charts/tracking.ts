@@ -1,0 +1,56 @@
+import type {TopLevelSpec} from 'vega-lite';
+import {SCHEMA, baseConfig, epoch, round, timeX, type ChartContext} from './common.js';
+
+/** Published forecasts set against the actuals that arrived since. */
+export interface TrackingPoint {
+  /** Period index of the forecast period. */
+  period: number;
+  series: string;
+  /** (actual − forecast) / |actual| × 100. */
+  errorPct: number;
+  /** Actual inside the inner published band. */
+  inside: boolean;
+}
+
+export interface TrackingInput {
+  points: TrackingPoint[];
+  /** Level of the inner band, e.g. 80. */
+  level: number;
+  description: string;
+}
+
+/**
+ * Forecast tracking: error of each published forecast in percent of the actual, by period, filled when the
+ * actual fell inside the published inner band and hollow when outside. O(n).
+ */
+export function trackingChart(input: TrackingInput, ctx: ChartContext): TopLevelSpec {
+  const {theme, frequency} = ctx;
+  const inside = `Inside ${input.level}% range`;
+  const outside = `Outside ${input.level}% range`;
+  const values = input.points
+    .filter((p) => Number.isFinite(p.errorPct))
+    .map((p) => ({t: epoch(frequency, p.period), v: round(p.errorPct), s: p.series, k: p.inside ? inside : outside}));
+  const periods = input.points.map((p) => p.period);
+  const span = periods.length > 0 ? Math.max(...periods) - Math.min(...periods) + 1 : 1;
+  return {
+    $schema: SCHEMA,
+    description: input.description,
+    width: ctx.width,
+    height: ctx.height,
+    autosize: {type: 'fit', contains: 'padding'},
+    config: baseConfig(theme),
+    layer: [
+      {data: {values: [{}]}, mark: {type: 'rule', color: theme.ink, strokeWidth: 0.8}, encoding: {y: {datum: 0}}},
+      {
+        data: {values},
+        mark: {type: 'point', size: 50, strokeWidth: 1.4, color: theme.accent},
+        encoding: {
+          x: timeX(frequency, Math.max(span, 3)),
+          y: {field: 'v', type: 'quantitative', title: '% actual above forecast', axis: {format: ',~r'}},
+          fill: {field: 'k', type: 'nominal', scale: {domain: [inside, outside], range: [theme.accent, 'white']}},
+          shape: {field: 'k', type: 'nominal', scale: {domain: [inside, outside], range: ['circle', 'diamond']}},
+        },
+      },
+    ],
+  };
+}

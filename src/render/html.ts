@@ -1,0 +1,95 @@
+import {existsSync, readdirSync, readFileSync, statSync} from 'node:fs';
+import {extname, join} from 'node:path';
+import Handlebars from 'handlebars';
+import {packageRoot} from '../version.js';
+import type {Report} from './types.js';
+import {buildView, pageGeometry, type FigureSlot} from './view.js';
+import {specToSvg} from './svg.js';
+import {themeFor, type Theme} from './theme.js';
+
+/**
+ * Report → one self-contained HTML file: charts drawn to inline SVG, CSS inlined, logo as a data: URI,
+ * no script and no network reference. Templates are handlebars files under `templates/`; a pack may name a
+ * folder (`branding.templates`) whose files replace ours by relative path (`report.hbs`, `styles.css`,
+ * `partials/<name>.hbs`) or add partials.
+ *
+ * Escaping: templates print with `{{…}}` only, so every string from the pack or the data is HTML-escaped;
+ * the only unescaped inserts are our own SVG and CSS, passed as `SafeString`. Templates compile in strict
+ * mode with known helpers only, so a misspelt field fails the build instead of printing nothing.
+ */
+export async function renderHtml(report: Report): Promise<string> {
+  const files = templateFiles(report.plan.branding.templates);
+  const env = Handlebars.create();
+  for (const [name, source] of files.partials) env.registerPartial(name, source);
+  const view = buildView(report, inlineLogo(report.plan.branding.logo));
+  const slots: FigureSlot[] = [...view.series.flatMap((s) => s.rows.flat()), ...(view.history?.chart ? [view.history.chart] : [])];
+  for (const slot of slots) {
+    const svg = await specToSvg(slot.chart.spec, {
+      locale: view.lang,
+      font: report.plan.branding.font,
+      idPrefix: slot.chart.id,
+      title: slot.chart.title,
+      description: typeof slot.chart.spec.description === 'string' ? slot.chart.spec.description : slot.chart.title,
+    });
+    slot.svg = new Handlebars.SafeString(svg);
+  }
+  const theme = themeFor(report.plan.branding.accent, report.plan.branding.font);
+  const css = pageCss(report, theme) + files.css;
+  const template = env.compile(files.report, {strict: true, knownHelpersOnly: true});
+  // `</` cannot end the style element early: CSS never needs it, so it is neutralised.
+  return template({...view, css: new Handlebars.SafeString(css.replace(/<\//g, '<\\/'))});
+}
+
+interface TemplateFiles {
+  report: string;
+  css: string;
+  partials: Map<string, string>;
+}
+
+/** Built-in templates, with any file of the same relative path in `overrideDir` taking its place. */
+export function templateFiles(overrideDir: string | null): TemplateFiles {
+  const builtIn = join(packageRoot(), 'templates');
+  const read = (rel: string) => {
+    const custom = overrideDir ? join(overrideDir, rel) : null;
+    return readFileSync(custom && existsSync(custom) ? custom : join(builtIn, rel), 'utf8');
+  };
+  const partials = new Map<string, string>();
+  for (const dir of [join(builtIn, 'partials'), ...(overrideDir ? [join(overrideDir, 'partials')] : [])]) {
+    if (!existsSync(dir) || !statSync(dir).isDirectory()) continue;
+    for (const file of readdirSync(dir).sort()) {
+      if (file.endsWith('.hbs')) partials.set(file.slice(0, -4), readFileSync(join(dir, file), 'utf8'));
+    }
+  }
+  return {report: read('report.hbs'), css: read('styles.css'), partials};
+}
+
+/** `@page` size and the colour variables, generated from the plan (values are validated colours and sizes). */
+function pageCss(report: Report, theme: Theme): string {
+  const {paper, orientation} = report.plan.branding;
+  const family = theme.font.replace(/[^A-Za-z0-9 _-]/g, '');
+  return (
+    `@page { size: ${paper} ${orientation}; }\n` +
+    `:root { --accent: ${theme.accent}; --deep: ${theme.deep}; --tint: ${theme.tint}; --wash: ${theme.wash}; ` +
+    `--contrast: ${theme.contrast}; --contrast-tint: ${theme.contrastTint}; --ink: ${theme.ink}; --muted: ${theme.muted}; ` +
+    `--rule: ${theme.rule}; --font: '${family}'; --content-width: ${pageGeometry(paper, orientation).width}px; }\n`
+  );
+}
+
+const IMAGE_TYPES: Record<string, string> = {'.png': 'image/png', '.jpg': 'image/jpeg', '.jpeg': 'image/jpeg', '.svg': 'image/svg+xml'};
+
+/**
+ * The logo as a base64 data: URI for an `<img>` element. An SVG logo is only ever shown through `<img>`,
+ * where browsers run no script and load nothing external; PNG and JPEG are checked by their magic bytes.
+ */
+export function inlineLogo(path: string | null): string | null {
+  if (!path) return null;
+  const type = IMAGE_TYPES[extname(path).toLowerCase()];
+  if (!type) throw new Error(`unsupported logo type: ${path}`);
+  const bytes = readFileSync(path);
+  const png = bytes.subarray(0, 8).equals(Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]));
+  const jpeg = bytes[0] === 0xff && bytes[1] === 0xd8;
+  const svg = /<svg[\s>]/i.test(bytes.subarray(0, 4096).toString('utf8'));
+  const ok = type === 'image/png' ? png : type === 'image/jpeg' ? jpeg : svg;
+  if (!ok) throw new Error(`logo content does not match its extension: ${path}`);
+  return `data:${type};base64,${bytes.toString('base64')}`;
+}

@@ -1,0 +1,160 @@
+import {accessSync, constants} from 'node:fs';
+import puppeteer, {type Browser} from 'puppeteer-core';
+import {escapeXml} from './svg.js';
+
+/**
+ * HTML → PDF with headless Chromium through puppeteer-core, safe and byte-reproducible.
+ *
+ * Safety: JavaScript is disabled in the page and every request other than `data:` and `about:` is aborted,
+ * so the report cannot reach the network or the file system even if a template tried. Reproducibility: a new
+ * page per PDF (tagged PDFs embed DOM node ids, which change when a page is reused), and `/CreationDate` and
+ * `/ModDate` are rewritten in place to the given date with a same-length replacement, so xref offsets stay
+ * valid and rebuilds are byte-identical.
+ */
+export interface PdfOptions {
+  title: string;
+  /** Canonical period label, e.g. `2026-10` (shown in the running header, formatted for `locale`). */
+  periodLabel: string;
+  paper: 'A4' | 'Letter';
+  orientation: 'portrait' | 'landscape';
+  font: string;
+  footer: string | null;
+  /** PDF CreationDate/ModDate, e.g. the day after the review period ends, as 'YYYYMMDD' */
+  date: string;
+  /** BCP 47 locale for the period in the running header. Default: `en-GB`. */
+  locale?: string;
+}
+
+export interface PdfBrowser {
+  pdf(html: string, opts: PdfOptions): Promise<Uint8Array>;
+  close(): Promise<void>;
+}
+
+const CANDIDATES = ['/usr/bin/chromium', '/usr/bin/chromium-browser', '/usr/bin/google-chrome'];
+
+export const LAUNCH_ARGS = [
+  '--no-sandbox',
+  '--disable-gpu',
+  '--disable-dev-shm-usage',
+  '--font-render-hinting=none',
+  '--disable-background-networking',
+  '--no-first-run',
+  '--disable-component-update',
+  '--disable-sync',
+];
+
+/** The browser to use: the given path, else EBBFLOW_CHROMIUM, CHROME_PATH, then the usual install paths. */
+export function findBrowser(executable: string | null, env: NodeJS.ProcessEnv = process.env): string | null {
+  const runnable = (path: string) => {
+    try {
+      accessSync(path, constants.X_OK);
+      return true;
+    } catch {
+      return false;
+    }
+  };
+  if (executable) return runnable(executable) ? executable : null;
+  const listed = [env.EBBFLOW_CHROMIUM, env.CHROME_PATH].filter((p): p is string => !!p);
+  return [...listed, ...CANDIDATES].find(runnable) ?? null;
+}
+
+/** Launch Chromium, or explain in one sentence why the PDF will be skipped. */
+export async function openBrowser(executable: string | null): Promise<PdfBrowser | {missing: string}> {
+  const path = findBrowser(executable);
+  if (!path) {
+    const named = executable ? `the browser named in the pack (${executable}) was not found or is not executable` : 'no Chromium or Chrome was found';
+    return {
+      missing: `PDF skipped: ${named}; install one with \`apt-get install chromium\`, or set EBBFLOW_CHROMIUM or the pack's browser key to its path.`,
+    };
+  }
+  const browser = await puppeteer.launch({executablePath: path, headless: true, args: LAUNCH_ARGS});
+  return {pdf: (html, opts) => printPdf(browser, html, opts), close: () => browser.close()};
+}
+
+/** The URLs a page asked for and was refused, for tests and diagnostics. */
+export interface PrintRecord {
+  blocked: string[];
+}
+
+export async function printPdf(browser: Browser, html: string, opts: PdfOptions, record?: PrintRecord): Promise<Uint8Array> {
+  const page = await browser.newPage();
+  try {
+    await page.setJavaScriptEnabled(false);
+    await page.setRequestInterception(true);
+    page.on('request', (request) => {
+      const url = request.url();
+      if (url.startsWith('data:') || url.startsWith('about:')) void request.continue();
+      else {
+        record?.blocked.push(url);
+        void request.abort('blockedbyclient');
+      }
+    });
+    await page.setContent(html, {waitUntil: 'load', timeout: 120_000});
+    const bytes = await page.pdf({
+      format: opts.paper,
+      landscape: opts.orientation === 'landscape',
+      printBackground: true,
+      preferCSSPageSize: true,
+      displayHeaderFooter: true,
+      headerTemplate: header(opts),
+      footerTemplate: footer(opts),
+      margin: {top: '18mm', bottom: '16mm', left: '16mm', right: '16mm'},
+      outline: true,
+      tagged: true,
+      timeout: 300_000,
+    });
+    return fixDates(bytes, opts.date);
+  } finally {
+    await page.close();
+  }
+}
+
+function family(font: string): string {
+  return escapeXml(font.replace(/[^A-Za-z0-9 _-]/g, ''));
+}
+
+function header(opts: PdfOptions): string {
+  return (
+    `<div style="font-family:'${family(opts.font)}',sans-serif;font-size:7.5px;color:#5b6168;width:100%;margin:0 16mm;display:flex;justify-content:space-between;">` +
+    `<span>${escapeXml(opts.title)}</span><span>${escapeXml(periodWords(opts.periodLabel, opts.locale ?? 'en-GB'))}</span></div>`
+  );
+}
+
+function footer(opts: PdfOptions): string {
+  return (
+    `<div style="font-family:'${family(opts.font)}',sans-serif;font-size:7.5px;color:#5b6168;width:100%;margin:0 16mm;display:flex;justify-content:space-between;">` +
+    `<span>${escapeXml(opts.footer ?? '')}</span>` +
+    `<span>Page <span class="pageNumber"></span> of <span class="totalPages"></span></span></div>`
+  );
+}
+
+/** `2026-10` → `October 2026` in the locale; quarter and week labels are returned as `Q3 2026`, `W41 2026`. */
+export function periodWords(label: string, locale: string): string {
+  let m = label.match(/^(\d{4})-(\d{2})$/);
+  if (m) {
+    const when = Date.UTC(Number(m[1]), Number(m[2]) - 1, 1);
+    try {
+      return new Intl.DateTimeFormat(locale, {month: 'long', year: 'numeric', timeZone: 'UTC'}).format(when);
+    } catch {
+      return new Intl.DateTimeFormat('en-GB', {month: 'long', year: 'numeric', timeZone: 'UTC'}).format(when);
+    }
+  }
+  if ((m = label.match(/^(\d{4})-Q([1-4])$/))) return `Q${m[2]} ${m[1]}`;
+  if ((m = label.match(/^(\d{4})-W(\d{2})$/))) return `W${Number(m[2])} ${m[1]}`;
+  return label;
+}
+
+/**
+ * Replace the clock time in `/CreationDate (D:…)` and `/ModDate (D:…)` with `date` at midnight UTC, keeping
+ * the byte length, so xref offsets stay valid. Dates that are not 'YYYYMMDD' are rejected.
+ */
+export function fixDates(pdf: Uint8Array, date: string): Uint8Array {
+  if (!/^\d{8}$/.test(date)) throw new RangeError(`invalid pdf date: ${date}`);
+  const buffer = Buffer.from(pdf);
+  const text = buffer.toString('latin1');
+  const fixed = text.replace(/\/(CreationDate|ModDate) \(D:(\d{14})([^)]*)\)/g, (whole, key: string, stamp: string, zone: string) => {
+    const replacement = `/${key} (D:${date}000000${"+00'00'".padEnd(zone.length, ' ').slice(0, zone.length)})`;
+    return replacement.length === whole.length ? replacement : whole;
+  });
+  return new Uint8Array(Buffer.from(fixed, 'latin1'));
+}

@@ -1,0 +1,80 @@
+import {describe, expect, it} from 'vitest';
+import {mkdir, writeFile} from 'node:fs/promises';
+import {join} from 'node:path';
+import {archive} from '../../src/archive/archive.js';
+import {loadHistory} from '../../src/archive/history.js';
+import {toResults} from '../../src/render/results.js';
+import {InputError} from '../../src/errors.js';
+import {report} from './fixtures/report.js';
+import {tempDir} from './helpers.js';
+
+async function archiveMonth(out: string, month: number): Promise<void> {
+  await archive({
+    report: report(2026, month, [{id: 'net-sales'}]),
+    html: null,
+    pdf: null,
+    exports: [],
+    outDir: out,
+    force: false,
+    packYaml: '{}',
+    warnings: [],
+  });
+}
+
+const packId = 'harbourline-monthly';
+
+describe('loadHistory', () => {
+  it('is null when no earlier period is archived', async () => {
+    const out = await tempDir();
+    await archiveMonth(out, 11);
+    expect(await loadHistory(out, packId, '2026-11', toResults(report(2026, 11, [{id: 'net-sales'}])), 1)).toBeNull();
+  });
+
+  it('compares with the latest earlier period and tracks the forecasts of every earlier one (hand-checked)', async () => {
+    const out = await tempDir();
+    for (const month of [8, 9, 10, 11, 12]) await archiveMonth(out, month);
+    await mkdir(join(out, packId, 'notes'));
+    const current = toResults(report(2026, 11, [{id: 'net-sales'}]));
+    const h = (await loadHistory(out, packId, '2026-11', current, 1))!;
+    // The fixture puts y = 100 + 0.5·t + seasonal with t counted from each pack's own start (48 months
+    // back), so a pack ending at e forecasts period p as 100 + 0.5·(p − e + 47) + s(p) while the 2026-11
+    // pack has 100 + 0.5·(p − 2026-11 + 47) + s(p): error = 0.5·(e − 2026-11).
+    //   2026-08 → 2026-09, -10, -11: error −1.5 each; 2026-09 → 2026-10, -11: −1; 2026-10 → 2026-11: −0.5.
+    // 2026-12 (later) and the `notes` folder are ignored.
+    expect(h.previousPeriod).toBe('2026-10');
+    expect(h.tracking.map((r) => [r.publishedIn, r.period, r.horizon])).toEqual([
+      ['2026-08', '2026-09', 1],
+      ['2026-08', '2026-10', 2],
+      ['2026-08', '2026-11', 3],
+      ['2026-09', '2026-10', 1],
+      ['2026-09', '2026-11', 2],
+      ['2026-10', '2026-11', 1],
+    ]);
+    const errors = h.tracking.map((r) => r.error);
+    [-1.5, -1.5, -1.5, -1, -1, -0.5].forEach((e, i) => expect(errors[i]).toBeCloseTo(e, 9));
+    // Seasonal naive scale: y[t] − y[t−12] = 0.5·12 = 6 for every t (the sine repeats).
+    // mean |error| = (3·1.5 + 2·1 + 0.5) / 6 = 7/6; MASE = (7/6) / 6 = 7/36. Bands ±5 and ±8: all inside.
+    expect(h.trackingSummary).toEqual([{seriesId: 'net-sales', count: 6, mase: expect.closeTo(7 / 36, 9), coverage: {'80': 1, '95': 1}}]);
+    // Each pack's t starts one month later, so every shared value is 0.5 lower: 12 data revisions.
+    expect(h.revisions).toHaveLength(12);
+    expect(new Set(h.revisions.map((r) => `${r.kind}/${r.measure}`))).toEqual(new Set(['data/original']));
+    expect(h.revisions[11]).toMatchObject({period: '2026-10', previous: expect.any(Number)});
+    expect((h.revisions[11].current as number) - (h.revisions[11].previous as number)).toBeCloseTo(-0.5, 9);
+  });
+
+  it('names the file when an earlier results.json is unreadable', async () => {
+    const out = await tempDir();
+    await archiveMonth(out, 9);
+    const file = join(out, packId, '2026-09', 'results.json');
+    await writeFile(file, '{"schema": "ebbflow/results/v1", "pack": {}}');
+    const current = toResults(report(2026, 10, [{id: 'net-sales'}]));
+    const error = await loadHistory(out, packId, '2026-10', current, 1).catch((e: unknown) => e);
+    expect(error).toBeInstanceOf(InputError);
+    expect((error as Error).message).toMatch(new RegExp(`^${file.replace(/[.]/g, '\\.')}: unreadable results file: pack\\.id: `));
+  });
+
+  it('rejects a period label that does not match the pack frequency', async () => {
+    const current = toResults(report(2026, 10, [{id: 'net-sales'}]));
+    await expect(loadHistory(await tempDir(), packId, '2026-Q3', current, 1)).rejects.toThrow(/invalid period: 2026-Q3/);
+  });
+});

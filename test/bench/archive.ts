@@ -1,0 +1,63 @@
+/**
+ * Archive-stage benchmark: write 12 monthly period folders of one pack (20 series × 120 months,
+ * 0.5 MB HTML, 0.3 MB PDF stand-in, a CSV export each), regenerate index.html over the 12 periods,
+ * and load the history (revisions + forecast tracking) of the 12th period from the 11 before it.
+ * Prints median and range of several repetitions. Run through `npm run bench` (not on import).
+ */
+import {mkdtemp, rm} from 'node:fs/promises';
+import {tmpdir} from 'node:os';
+import {join} from 'node:path';
+import {archive, loadHistory, writeIndex} from '../../src/archive/index.js';
+import {toResults} from '../../src/render/results.js';
+import {report} from '../archive/fixtures/report.js';
+
+const PERIODS = 12;
+const SERIES = 20;
+const LENGTH = 120;
+const REPEATS = 5;
+
+export async function run(): Promise<void> {
+  const specs = Array.from({length: SERIES}, (_, i) => ({id: `line-${i + 1}`, length: LENGTH}));
+  const html = `<!DOCTYPE html>${'<p>filler paragraph</p>'.repeat(25_000)}`;
+  const pdf = new Uint8Array(300_000).map((_, i) => i & 255);
+  const archiveMs: number[] = [];
+  const indexMs: number[] = [];
+  const historyMs: number[] = [];
+  for (let r = 0; r < REPEATS; r++) {
+    const out = await mkdtemp(join(tmpdir(), 'ebbflow-bench-archive-'));
+    try {
+      for (let p = 0; p < PERIODS; p++) {
+        const rep = report(2026 + Math.floor(p / 12), (p % 12) + 1, specs);
+        const t0 = performance.now();
+        await archive({
+          report: rep,
+          html,
+          pdf,
+          exports: [{name: 'series.csv', content: 'period,value\n'.repeat(2_000)}],
+          outDir: out,
+          force: false,
+          packYaml: JSON.stringify(rep.plan),
+          warnings: [],
+        });
+        archiveMs.push(performance.now() - t0);
+      }
+      const t1 = performance.now();
+      await writeIndex(out, 'harbourline-monthly');
+      indexMs.push(performance.now() - t1);
+      const current = toResults(report(2027, 1, specs));
+      const t2 = performance.now();
+      await loadHistory(out, 'harbourline-monthly', '2027-01', current, 1);
+      historyMs.push(performance.now() - t2);
+    } finally {
+      await rm(out, {recursive: true, force: true});
+    }
+  }
+  const line = (name: string, xs: number[]) => {
+    const s = [...xs].sort((a, b) => a - b);
+    const median = s[Math.floor(s.length / 2)];
+    return `archive: ${name.padEnd(44)} median ${median.toFixed(1)} ms  (min ${s[0].toFixed(1)}, max ${s[s.length - 1].toFixed(1)}, n=${s.length})`;
+  };
+  console.log(line(`one period folder (${SERIES} series × ${LENGTH}), incl. index`, archiveMs));
+  console.log(line(`index.html over ${PERIODS} periods`, indexMs));
+  console.log(line(`loadHistory over ${PERIODS} earlier periods`, historyMs));
+}

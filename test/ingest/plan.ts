@@ -1,0 +1,97 @@
+import {dirname, join} from 'node:path';
+import {fileURLToPath} from 'node:url';
+import type {AnalysisOptions, FromSourcePlan, Plan, SeriesPlan, SourcePlan} from '../../src/config/plan.js';
+import type {Frequency} from '../../src/time/period.js';
+
+export const FIXTURES = join(dirname(fileURLToPath(import.meta.url)), '..', 'fixtures', 'ingest');
+
+const analysis: AnalysisOptions = {
+  decomposition: {
+    method: 'stl',
+    model: 'auto',
+    seasonalWindow: 13,
+    trendWindow: null,
+    lowpassWindow: null,
+    robust: true,
+    seasonalDegree: null,
+    trendDegree: null,
+    lowpassDegree: null,
+    innerIterations: null,
+    outerIterations: null,
+  },
+  calendar: {workingDays: 'auto', easter: 'auto', holidays: []},
+  outliers: {enabled: true},
+  forecast: {method: 'auto', horizon: 12, levels: [80, 95], backtestOrigins: 6},
+  cycle: {method: 'hp', lambda: null},
+};
+
+/** A source plan for a fixture (or any absolute path), wide and comma-separated unless told otherwise. */
+export function source(id: string, file: string, more: Partial<SourcePlan> = {}): SourcePlan {
+  return {
+    id,
+    file: file.startsWith('/') ? file : join(FIXTURES, file),
+    layout: 'wide',
+    dateColumn: 'month',
+    keyColumn: null,
+    valueColumn: null,
+    delimiter: 'auto',
+    decimal: '.',
+    encoding: 'utf-8',
+    line: 1,
+    ...more,
+  };
+}
+
+export function series(id: string, sourceId: string, more: Partial<SeriesPlan> = {}): SeriesPlan {
+  return {
+    id,
+    label: id,
+    unit: null,
+    source: sourceId,
+    column: id,
+    kind: 'flow',
+    target: null,
+    hidden: false,
+    analysis,
+    line: 10,
+    ...more,
+  };
+}
+
+export function fromSource(sourceId: string, position: number): FromSourcePlan {
+  const {id: _id, label: _label, column: _column, ...template} = series('x', sourceId, {line: 20});
+  return {source: sourceId, template, position, line: 20};
+}
+
+export function plan(frequency: Frequency, sources: SourcePlan[], list: SeriesPlan[], more: Partial<Plan> = {}): Plan {
+  return {
+    packFile: join(FIXTURES, 'pack.yaml'),
+    id: 'test',
+    title: 'Test',
+    subtitle: null,
+    organisation: null,
+    preparedBy: null,
+    confidentiality: null,
+    frequency,
+    period: null,
+    formats: ['json'],
+    locale: 'en-GB',
+    fiscalYearStart: 1,
+    branding: {
+      logo: null,
+      accent: '#1d6f64',
+      font: 'Liberation Sans',
+      paper: 'A4',
+      orientation: 'portrait',
+      footer: null,
+      templates: null,
+    },
+    thresholds: {residualSigma: 3, revisionPct: 1},
+    outDir: '/tmp/out',
+    browser: null,
+    sources,
+    series: list,
+    groups: [],
+    ...more,
+  };
+}

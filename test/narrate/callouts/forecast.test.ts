@@ -1,0 +1,104 @@
+import {describe, expect, it} from 'vitest';
+import type {ForecastResult, Outturn} from '../../../src/analyse/types.js';
+import {forecastOutlookRule} from '../../../src/narrate/callouts/forecastOutlook.js';
+import {outturnRule} from '../../../src/narrate/callouts/outturn.js';
+import {forecastAccuracyRule} from '../../../src/narrate/callouts/forecastAccuracy.js';
+import {makeAnalysis, runRule} from '../fixtures.js';
+
+function forecast(over: Partial<ForecastResult> = {}): ForecastResult {
+  const h = 12;
+  const mean = Array.from({length: h}, (_, i) => 2100 + 20 * i);
+  return {
+    method: 'ETS(M,Ad,M)',
+    startOffset: 24,
+    mean,
+    levels: [80, 95],
+    lower: {'80': mean.map((m, i) => m - 100 - 15 * i), '95': mean.map((m) => m - 300)},
+    upper: {'80': mean.map((m, i) => m + 100 + 15 * i), '95': mean.map((m) => m + 300)},
+    backtest: null,
+    options: {},
+    notes: [],
+    ...over,
+  };
+}
+
+function outturn(over: Partial<Outturn> = {}): Outturn {
+  return {
+    fiscalYear: 'FY2026/27',
+    actualToDate: 14000,
+    periodsActual: 7,
+    forecastRemaining: 10100,
+    periodsRemaining: 5,
+    total: 24100,
+    level: 80,
+    lower: 23400,
+    upper: 24800,
+    target: 24670,
+    gapPct: (24100 / 24670 - 1) * 100,
+    ...over,
+  };
+}
+
+const history = new Array<number>(24).fill(2000);
+
+describe('forecast-outlook rule', () => {
+  it('gives the next period and the end of the horizon with the 80% range', () => {
+    const [d] = runRule(forecastOutlookRule, makeAnalysis(history, {forecast: forecast()}));
+    expect(d.text).toBe(
+      'The forecast for Net sales is 2,100 EUR k for November 2026 (80% range 2,000 to 2,200 EUR k) and 2,320 EUR k for October 2027, 12 months ahead (80% range 2,055 to 2,585 EUR k); model: ETS(M,Ad,M).',
+    );
+    expect(d.figures).toMatchObject({level: 80, next: 2100, horizon: 12, last: 2320});
+    expect(d.chart).toBe('chart-net-sales-forecast');
+  });
+
+  it('handles a one-period horizon and quotes the first level when 80% is absent', () => {
+    const f = forecast({mean: [2100], levels: [95], lower: {'95': [1800]}, upper: {'95': [2400]}});
+    const [d] = runRule(forecastOutlookRule, makeAnalysis(history, {forecast: f}));
+    expect(d.text).toBe(
+      'The forecast for Net sales is 2,100 EUR k for November 2026 (95% range 1,800 to 2,400 EUR k); model: ETS(M,Ad,M).',
+    );
+  });
+});
+
+describe('outturn rule', () => {
+  it('sets the fiscal-year outturn against the target', () => {
+    const [d] = runRule(outturnRule, makeAnalysis(history, {outturn: outturn()}));
+    expect(d.text).toBe(
+      'FY2026/27 is on course for 24,100 EUR k of Net sales (80% range 23,400 to 24,800 EUR k), from 7 months of actuals and 5 months of forecast: 2.3% below the target of 24,670 EUR k.',
+    );
+    expect(d.severity).toBe('watch'); // −2.31% ≤ −2%
+    expect(d.figures.gapPct).toBeCloseTo(-2.3105, 4);
+  });
+
+  it('grades the gap: alert from −5%, info above target, watch when the target is above the whole range', () => {
+    const sev = (o: Partial<Outturn>) => runRule(outturnRule, makeAnalysis(history, {outturn: outturn(o)}))[0].severity;
+    expect(sev({gapPct: -5.2})).toBe('alert');
+    expect(sev({gapPct: 3})).toBe('info');
+    expect(sev({gapPct: -1.5, target: 24900})).toBe('watch');
+  });
+
+  it('uses singular periods and says "in line with" for a gap under 0.5%', () => {
+    const [d] = runRule(outturnRule, makeAnalysis(history, {outturn: outturn({periodsActual: 11, periodsRemaining: 1, gapPct: 0.2})}));
+    expect(d.text).toBe(
+      'FY2026/27 is on course for 24,100 EUR k of Net sales (80% range 23,400 to 24,800 EUR k), from 11 months of actuals and 1 month of forecast: in line with the target of 24,670 EUR k.',
+    );
+  });
+});
+
+describe('forecast-accuracy rule', () => {
+  const backtest = (mase: number, origins = 6) => ({origins, horizon: 12, mase, smape: 9.1, benchmarks: [], points: []});
+  it('warns when the forecast lost to the seasonal naive benchmark (MASE > 1)', () => {
+    const [d] = runRule(forecastAccuracyRule, makeAnalysis(history, {forecast: forecast({backtest: backtest(1.24)})}));
+    expect(d.text).toBe(
+      'Treat the forecast for Net sales with care: in back-tests from 6 forecast origins it was less accurate than repeating the same period of the previous year (MASE 1.24; below 1 would beat that benchmark).',
+    );
+    expect(d.severity).toBe('watch');
+    const [one] = runRule(forecastAccuracyRule, makeAnalysis(history, {forecast: forecast({backtest: backtest(1.6, 1)})}));
+    expect(one.text).toContain('from 1 forecast origin it');
+    expect(one.severity).toBe('alert');
+  });
+
+  it('is silent when the forecast beat the benchmark', () => {
+    expect(runRule(forecastAccuracyRule, makeAnalysis(history, {forecast: forecast({backtest: backtest(0.8)})}))).toEqual([]);
+  });
+});

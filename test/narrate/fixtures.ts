@@ -1,0 +1,160 @@
+import type {AnalysisOptions, Plan, SeriesPlan} from '../../src/config/plan.js';
+import type {Adjustment, Changes, SeriesAnalysis} from '../../src/analyse/types.js';
+import {monthIndex} from '../../src/time/period.js';
+
+/** Hand-built inputs for the callout rules: a monthly series ending in October 2026 unless told otherwise. */
+export const OCT_2026 = monthIndex(2026, 10);
+
+export const options: AnalysisOptions = {
+  decomposition: {
+    method: 'stl',
+    model: 'multiplicative',
+    seasonalWindow: 13,
+    trendWindow: null,
+    lowpassWindow: null,
+    robust: true,
+    seasonalDegree: null,
+    trendDegree: null,
+    lowpassDegree: null,
+    innerIterations: null,
+    outerIterations: null,
+  },
+  calendar: {workingDays: 'auto', easter: 'auto', holidays: []},
+  outliers: {enabled: true},
+  forecast: {method: 'auto', horizon: 12, levels: [80, 95], backtestOrigins: 6},
+  cycle: {method: 'hp', lambda: null},
+};
+
+export function makePlan(over: Partial<Plan> = {}): Plan {
+  return {
+    packFile: '/packs/demo.yaml',
+    id: 'demo',
+    title: 'Demo',
+    subtitle: null,
+    organisation: null,
+    preparedBy: null,
+    confidentiality: null,
+    frequency: 'monthly',
+    period: OCT_2026,
+    formats: ['html'],
+    locale: 'en-GB',
+    fiscalYearStart: 4,
+    branding: {
+      logo: null,
+      accent: '#1d6f64',
+      font: 'Liberation Sans',
+      paper: 'A4',
+      orientation: 'portrait',
+      footer: null,
+      templates: null,
+    },
+    thresholds: {residualSigma: 3, revisionPct: 1},
+    outDir: '/out',
+    browser: null,
+    sources: [],
+    series: [],
+    groups: [],
+    ...over,
+  };
+}
+
+export function makeSeriesPlan(over: Partial<SeriesPlan> = {}): SeriesPlan {
+  return {
+    id: 'net-sales',
+    label: 'Net sales',
+    unit: 'EUR k',
+    source: 'trading',
+    column: 'net_sales',
+    kind: 'flow',
+    target: null,
+    hidden: false,
+    analysis: options,
+    line: 1,
+    ...over,
+  };
+}
+
+export function makeChanges(over: Partial<Changes> = {}): Changes {
+  return {
+    yearOnYear: NaN,
+    periodOnPeriodAdjusted: NaN,
+    periodOnPeriodAnnualised: NaN,
+    trend: NaN,
+    trendAnnualised: NaN,
+    yearToDate: NaN,
+    yearOnYearSeries: [],
+    trendDirection: 'flat',
+    ...over,
+  };
+}
+
+export function makeAdjustment(n: number, over: Partial<Adjustment> = {}): Adjustment {
+  return {
+    method: 'stl',
+    model: 'multiplicative',
+    modelReason: '',
+    trend: new Array<number>(n).fill(NaN),
+    seasonal: new Array<number>(n).fill(1),
+    irregular: new Array<number>(n).fill(1),
+    adjusted: new Array<number>(n).fill(NaN),
+    calendar: null,
+    outliers: [],
+    filled: new Array<boolean>(n).fill(false),
+    diagnostics: {
+      varianceShares: {trend: 0, seasonal: 0, irregular: 0},
+      residualSeasonality: {test: '', statistic: 0, pValue: 1, detected: false},
+      seasonalStability: 0,
+      revision: null,
+    },
+    options: {},
+    ...over,
+  };
+}
+
+/** An analysis of `original` ending at `end`; every part not given is absent. */
+export function makeAnalysis(original: number[], over: Partial<SeriesAnalysis> = {}, end = OCT_2026): SeriesAnalysis {
+  return {
+    id: 'net-sales',
+    frequency: 'monthly',
+    start: end - original.length + 1,
+    end,
+    original,
+    adjustment: null,
+    notAdjustedReason: null,
+    changes: makeChanges(),
+    cycle: null,
+    forecast: null,
+    outturn: null,
+    notes: [],
+    options,
+    ...over,
+  };
+}
+
+/** Repeat a short pattern to length n. */
+export function cycleOf(pattern: number[], n: number): number[] {
+  return Array.from({length: n}, (_, i) => pattern[i % pattern.length]);
+}
+
+import type {History} from '../../src/archive/types.js';
+import type {Draft, Rule} from '../../src/narrate/context.js';
+import {narrateFormat} from '../../src/narrate/format.js';
+
+/** Run one rule on one series with the en-GB (or given) locale. */
+export function runRule(
+  rule: Rule,
+  analysis: SeriesAnalysis,
+  args: {series?: Partial<SeriesPlan>; plan?: Partial<Plan>; history?: History | null} = {},
+): Draft[] {
+  const plan = makePlan(args.plan);
+  const series = makeSeriesPlan(args.series);
+  return rule.run({
+    plan,
+    period: analysis.end,
+    series,
+    analysis,
+    history: args.history ?? null,
+    fmt: narrateFormat(plan.locale),
+    isRate: series.unit === '%',
+  });
+}
