@@ -17,7 +17,7 @@
 //   One-off spikes: flash sale 2023-11 (net sales +14%, web orders +35%, web sessions +20%);
 //     stock-count correction 2024-03 (inventory +18% for that month only);
 //     faulty jacket batch 2022-01 (returns rate +3.5 percentage points);
-//     social-media mention 2025-06 (web sessions +40%).
+//     social-media mention 2025-06 (web sessions +40%, web orders only +8%).
 //   Working days: shop series scale with the month's trading-day weight (Mon–Fri 1.0, Sat 1.5, Sun 0.5;
 //     closed 25-26 Dec and 1 Jan); web series scale with the number of days in the month.
 //   Easter: the 10 days before Easter Sunday lift sales by 5% of a month's sales, split between March and April
@@ -209,6 +209,7 @@ for (let t = START; t <= BUDGET_END; t++) {
     Math.pow(season, 0.2) *
     easterLift *
     (t === mi(2023, 11) ? 1.35 / 1.2 : 1) *
+    (t === mi(2025, 6) ? 1.08 / 1.4 : 1) *
     noise(0.02);
 
   const gap = t === mi(2019, 8) || t === mi(2023, 2) || t === mi(2023, 3);
@@ -247,10 +248,12 @@ for (let q = 2016 * 4; q <= 2026 * 4 + 2; q++) {
   for (const [name, base, growth] of REGIONS) {
     const season = name === 'sales_online' ? [0.92, 1.0, 0.96, 1.12][quarter - 1] : Q_SEASON[quarter - 1];
     const opening = name === 'sales_lakes' && midMonth >= SHOP_OPENING ? 1.2 : 1;
-    row[name] = round(3 * base * Math.pow(1 + growth, years) * season * cycle * opening * (1 + 0.015 * normal(rng)), 1);
+    row[name] = round(3 * base * Math.pow(1 + growth, years) * season * cycle * opening * (1 + 0.02 * normal(rng)), 1);
   }
   row.gross_margin_pct = round(44.5 - 0.25 * (y - 2016) + [-1.2, 0.6, 0.9, -0.3][quarter - 1] + 0.4 * normal(rng), 2);
-  row.headcount = Math.round((118 + 2.1 * years) * (midMonth >= SHOP_OPENING ? 1.11 : 1) * Math.pow(cycle, 0.5));
+  row.headcount = Math.round(
+    (118 + 2.1 * years) * (midMonth >= SHOP_OPENING ? 1.11 : 1) * Math.pow(cycle, 0.5) * (1 + 0.015 * normal(rng)),
+  );
   quarterly.push(row);
 }
 

@@ -1,4 +1,4 @@
-import {mkdir, rename, rm, writeFile} from 'node:fs/promises';
+import {mkdir, rename, rm} from 'node:fs/promises';
 import {join} from 'node:path';
 import type {Report} from '../render/types.js';
 import {resultsJson} from '../render/results.js';
@@ -7,6 +7,7 @@ import {buildManifest} from './manifest.js';
 import {recoverPackDir} from './recover.js';
 import {writeIndex} from './writeIndex.js';
 import {exists} from './exists.js';
+import {syncFolder, writeFileDurable} from './durable.js';
 import {badExportName, folderExists} from './messages.js';
 
 export interface ArchiveArgs {
@@ -43,6 +44,8 @@ export interface ArchiveArgs {
  * run (see {@link recoverPackDir}). Without `force` an existing folder is a refusal ({@link InputError})
  * and nothing is written.
  *
+ * Files are flushed to the disk before the rename, so this holds after a power cut as well.
+ *
  * Determinism: no clock values are written anywhere; the same report gives the same bytes.
  * Returns the period folder and the absolute paths of the files written in it.
  */
@@ -78,7 +81,9 @@ export async function archive(args: ArchiveArgs): Promise<{folder: string; outpu
     await rm(tmp, {recursive: true, force: true});
     await mkdir(tmp);
     if (args.exports.length > 0) await mkdir(join(tmp, 'exports'));
-    for (const f of files) await writeFile(join(tmp, f.path), f.content);
+    for (const f of files) await writeFileDurable(join(tmp, f.path), f.content);
+    if (args.exports.length > 0) await syncFolder(join(tmp, 'exports'));
+    await syncFolder(tmp);
     await step('temp-written');
     if (await exists(folder)) {
       await rename(folder, old);
@@ -94,6 +99,7 @@ export async function archive(args: ArchiveArgs): Promise<{folder: string; outpu
     } else {
       await rename(tmp, folder);
     }
+    await syncFolder(packDir);
   } finally {
     await rm(tmp, {recursive: true, force: true});
   }

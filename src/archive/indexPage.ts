@@ -22,7 +22,8 @@ const LINKS: [file: string, text: string][] = [
   ['manifest.json', 'Manifest'],
 ];
 
-const STYLE = `body{font-family:"Liberation Sans",Arial,sans-serif;margin:2rem auto;max-width:60rem;padding:0 1rem;color:#1f2a2e}
+const STYLE = `body{font-family:"Liberation Sans",Arial,sans-serif;margin:2rem auto;max-width:60rem;padding:0 1rem}
+body{color:#1f2a2e}
 h1{font-size:1.6rem;margin-bottom:.2rem}h2{font-size:1.15rem;margin:1.6rem 0 .3rem;border-bottom:1px solid #c9d3d6}
 .muted{color:#5b6a70;font-weight:normal;font-size:.9rem}.links a{margin-right:1rem}
 table{border-collapse:collapse;width:100%;margin-top:.4rem}th,td{padding:.25rem .5rem;border-bottom:1px solid #e4eaec}
@@ -42,6 +43,7 @@ export function renderIndex(packId: string, entries: IndexEntry[]): string {
   const title = newest?.pack.title ?? packId;
   const lang = newest?.pack.locale ?? 'en';
   const sections = sorted.map((e) => section(e)).join('\n');
+  const count = `${sorted.length} period${sorted.length === 1 ? '' : 's'}`;
   return `<!DOCTYPE html>
 <html lang="${escapeHtml(lang)}">
 <head>
@@ -52,7 +54,7 @@ export function renderIndex(packId: string, entries: IndexEntry[]): string {
 </head>
 <body>
 <h1>${escapeHtml(title)}</h1>
-<p class="muted">Archived packs of <code>${escapeHtml(packId)}</code>, newest first: ${sorted.length} period${sorted.length === 1 ? '' : 's'}.</p>
+<p class="muted">Archived packs of <code>${escapeHtml(packId)}</code>, newest first: ${count}.</p>
 ${sections}
 </body>
 </html>
@@ -82,7 +84,9 @@ function table(r: ResultsV1): string {
     .map((s) => {
       const latest = s.original.length > 0 ? s.original[s.original.length - 1] : null;
       const unit = s.unit === null ? '' : ` ${s.unit}`;
-      return `<tr><th scope="row">${escapeHtml(s.label)}</th><td>${escapeHtml(value(latest, locale) + (latest === null ? '' : unit))}</td><td>${escapeHtml(percent(s.changes.yearOnYear, locale))}</td></tr>`;
+      const cells = [value(latest, locale) + (latest === null ? '' : unit), percent(s.changes.yearOnYear, locale)];
+      const tds = cells.map((c) => `<td>${escapeHtml(c)}</td>`).join('');
+      return `<tr><th scope="row">${escapeHtml(s.label)}</th>${tds}</tr>`;
     })
     .join('\n');
   return `<table>
@@ -101,8 +105,8 @@ function value(x: number | null, locale: string): string {
 
 function percent(x: number | null, locale: string): string {
   if (x === null) return '–';
-  const f = new Intl.NumberFormat(locale, {minimumFractionDigits: 1, maximumFractionDigits: 1, signDisplay: 'exceptZero'});
-  return `${f.format(x)}%`;
+  const options = {minimumFractionDigits: 1, maximumFractionDigits: 1, signDisplay: 'exceptZero'} as const;
+  return `${new Intl.NumberFormat(locale, options).format(x)}%`;
 }
 
 /** The pack's locale when Intl knows it, else `en-GB` (an archive written elsewhere may name any tag). */

@@ -64,7 +64,16 @@ function seriesRevisions(p: SeriesResults, s: SeriesResults, period: string, thr
   ];
   for (const [measure, was, now] of calls) {
     if (was !== undefined && now !== undefined && was !== now) {
-      rows.push({seriesId: s.id, period, kind: 'estimate', measure, previous: was, current: now, revisionPct: null, large: true});
+      rows.push({
+        seriesId: s.id,
+        period,
+        kind: 'estimate',
+        measure,
+        previous: was,
+        current: now,
+        revisionPct: null,
+        large: true,
+      });
     }
   }
   return rows;
@@ -79,7 +88,8 @@ function numericRow(
   current: number | null,
   thresholdPct: number,
 ): RevisionRow {
-  const pct = previous !== null && current !== null && previous !== 0 ? ((current - previous) / Math.abs(previous)) * 100 : null;
+  const pct =
+    previous !== null && current !== null && previous !== 0 ? ((current - previous) / Math.abs(previous)) * 100 : null;
   return {
     seriesId,
     period,

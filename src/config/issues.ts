@@ -56,16 +56,42 @@ function unwrap(schema: z.ZodType | undefined): z.ZodType | undefined {
   return s;
 }
 
-/** The sub-schema at a data path (objects by key, arrays by index), or undefined. */
-function schemaAt(schema: z.ZodType, path: readonly PropertyKey[]): z.ZodType | undefined {
-  let s: z.ZodType | undefined = schema;
+/** The schemas that may apply at a data path (objects by key, arrays by index, every option of a union). */
+function schemasAt(schema: z.ZodType, path: readonly PropertyKey[]): z.ZodType[] {
+  let current = [schema];
   for (const seg of path) {
-    s = unwrap(s);
-    if (s instanceof z.ZodObject && typeof seg === 'string') s = s.shape[seg] as z.ZodType | undefined;
-    else if (s instanceof z.ZodArray && typeof seg === 'number') s = s.element as z.ZodType;
-    else return undefined;
+    const next: z.ZodType[] = [];
+    for (const s of current.flatMap(options)) {
+      if (s instanceof z.ZodObject && typeof seg === 'string' && seg in s.shape) next.push(s.shape[seg] as z.ZodType);
+      else if (s instanceof z.ZodArray && typeof seg === 'number') next.push(s.element as z.ZodType);
+    }
+    current = next;
   }
-  return unwrap(s);
+  return current.flatMap(options);
+}
+
+/** A schema without optional/nullable wrappers, split into its options if it is a union. */
+function options(schema: z.ZodType): z.ZodType[] {
+  const s = unwrap(schema) as z.ZodType;
+  return s instanceof z.ZodUnion ? (s.options as z.ZodType[]).flatMap(options) : [s];
+}
+
+/**
+ * Keys allowed for a mapping at `path` that rejected the keys `unknown`: those of the object schema,
+ * among the ones lacking every rejected key, that shares most keys with the input.
+ */
+function allowedKeys(schema: z.ZodType, path: readonly PropertyKey[], input: unknown, unknown: string[]): string[] {
+  const given = isPlainObject(input) ? Object.keys(input) : [];
+  let best: string[] = [];
+  let bestShared = -1;
+  for (const s of schemasAt(schema, path)) {
+    if (!(s instanceof z.ZodObject)) continue;
+    const keys = Object.keys(s.shape);
+    if (unknown.some((k) => keys.includes(k))) continue;
+    const shared = given.filter((k) => keys.includes(k)).length;
+    if (shared > bestShared) [best, bestShared] = [keys, shared];
+  }
+  return best;
 }
 
 function isPlainObject(x: unknown): x is Record<string, unknown> {
@@ -77,7 +103,7 @@ function isPlainObject(x: unknown): x is Record<string, unknown> {
  *
  * - Unknown keys give one problem per key, addressed to the key itself, with a "did you mean" hint
  *   from the keys allowed at that level.
- * - A mapping that matches no branch of a union of mappings (a series entry is either a series or a
+ * - A mapping that matches no option of a union of mappings (a series entry is either a series or a
  *   `fromSource` entry) is explained by the branch it came closest to (fewest issues; the first on a tie).
  */
 export function schemaProblems(issues: readonly z.core.$ZodIssue[], schema: z.ZodType): PathProblem[] {
@@ -85,18 +111,16 @@ export function schemaProblems(issues: readonly z.core.$ZodIssue[], schema: z.Zo
   const expand = (issue: z.core.$ZodIssue, base: PropertyKey[], root: z.ZodType): void => {
     const path = [...base, ...issue.path];
     if (issue.code === 'invalid_union' && isPlainObject(issue.input) && issue.errors.length > 0) {
-      const union = schemaAt(root, issue.path);
       let pick = 0;
       issue.errors.forEach((e, i) => {
         if (e.length < issue.errors[pick].length) pick = i;
       });
-      const branch = union instanceof z.ZodUnion ? (union.options[pick] as z.ZodType) : root;
+      const branch = schemasAt(root, issue.path)[pick] ?? root;
       for (const e of issue.errors[pick]) expand(e, path, branch);
       return;
     }
     if (issue.code === 'unrecognized_keys') {
-      const at = schemaAt(root, issue.path);
-      const allowed = at instanceof z.ZodObject ? Object.keys(at.shape) : [];
+      const allowed = allowedKeys(root, issue.path, issue.input, issue.keys);
       for (const key of issue.keys) {
         const where = path.length === 0 ? 'the pack file' : formatPath(path);
         out.push({path: [...path, key], message: `${where} has an unknown key ${key}${hint(key, allowed)}`});

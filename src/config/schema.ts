@@ -16,6 +16,12 @@ const oddWindow = (min: number) =>
     .int()
     .min(min)
     .refine((v) => v % 2 === 1, {error: `must be an odd whole number ≥ ${min}`});
+const seasonalMessage = 'must be periodic or an odd whole number ≥ 7';
+const seasonalSpan = z
+  .number({error: seasonalMessage})
+  .int({error: seasonalMessage})
+  .min(7, {error: seasonalMessage})
+  .refine((v) => v % 2 === 1, {error: seasonalMessage});
 const degree = z.union([z.literal(0), z.literal(1)], {error: 'must be 0 or 1'});
 
 const isoDate = z.string().refine(
@@ -43,9 +49,7 @@ const locale = z.string().refine(
 export const decompositionSchema = z.strictObject({
   method: z.enum(['stl', 'classical']).nullish(),
   model: z.enum(['additive', 'multiplicative', 'auto']).nullish(),
-  seasonalWindow: z
-    .union([z.literal('periodic'), oddWindow(7)], {error: 'must be periodic or an odd whole number ≥ 7'})
-    .nullish(),
+  seasonalWindow: z.union([z.literal('periodic'), seasonalSpan], {error: seasonalMessage}).nullish(),
   trendWindow: oddWindow(3).nullish(),
   lowpassWindow: oddWindow(3).nullish(),
   robust: z.boolean().nullish(),

@@ -28,7 +28,9 @@ export class CellReader {
   /** 0-based index of a header name, or -1 with a problem suggesting the nearest name. */
   column(header: string[], line: number, what: string, name: string): number {
     const at = header.indexOf(name);
-    if (at < 0) this.problems.add(this.source.file, line, null, msg.missingColumn(what, name, didYouMean(name, header), header));
+    if (at < 0) {
+      this.problems.add(this.source.file, line, null, msg.missingColumn(what, name, didYouMean(name, header), header));
+    }
     return at;
   }
 
@@ -46,7 +48,9 @@ export class CellReader {
     const shown = text.trim();
     const found = labelFrequency(shown);
     if (found !== undefined && found !== this.frequency) {
-      if (!this.mixedReported) this.problems.add(file, line, column, msg.mixedFrequency(shown, name, found, this.frequency));
+      if (!this.mixedReported) {
+        this.problems.add(file, line, column, msg.mixedFrequency(shown, name, found, this.frequency));
+      }
       this.mixedReported = true;
     } else if (shown === '') this.problems.add(file, line, column, msg.blankDate(name));
     else this.problems.add(file, line, column, msg.badDate(shown, name, this.frequency));

@@ -11,7 +11,11 @@ import type {ProblemLog} from './problemLog.js';
  *
  * Complexity: O(series + keys).
  */
-export function expandSeries(plan: Plan, keysOf: (sourceId: string) => string[] | undefined, problems: ProblemLog): SeriesPlan[] {
+export function expandSeries(
+  plan: Plan,
+  keysOf: (sourceId: string) => string[] | undefined,
+  problems: ProblemLog,
+): SeriesPlan[] {
   const entries: readonly FromSourcePlan[] = plan.fromSource ?? [];
   const owner = new Map<string, string>(plan.series.map((s) => [s.id, `series ${s.id}`]));
   const expanded = entries.map((entry) => {

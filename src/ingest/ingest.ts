@@ -29,7 +29,11 @@ export async function ingest(plan: Plan): Promise<Dataset> {
   for (const source of plan.sources) {
     reads.set(source.id, await readSource(source, wantedFrom(plan, source.id), plan.frequency, problems));
   }
-  const plans = expandSeries(plan, (id) => (reads.get(id)?.input ? [...reads.get(id)!.stores.keys()] : undefined), problems);
+  const keysOf = (id: string): string[] | undefined => {
+    const data = reads.get(id);
+    return data?.input ? [...data.stores.keys()] : undefined;
+  };
+  const plans = expandSeries(plan, keysOf, problems);
   checkReferences(plan, plans, reads, problems);
 
   const found: {plan: SeriesPlan; data: SourceData; store: PeriodStore; range: {first: number; last: number}}[] = [];
@@ -42,8 +46,8 @@ export async function ingest(plan: Plan): Promise<Dataset> {
     const store = data.stores.get(s.column);
     if (data.input === undefined || store === undefined) continue;
     const range = store.dataRange();
-    // A column whose cells were all rejected, or a file without rows, already has its problems.
-    if (range === undefined && (data.input.rows === 0 || problems.countFor(data.input.file) > 0)) continue;
+    // A file without rows, or a column with unreadable cells, already has its problems.
+    if (range === undefined && (data.input.rows === 0 || store.rejected > 0)) continue;
     if (range === undefined) {
       const at = data.columnNumbers.get(s.column);
       const where = at !== undefined ? `column "${s.column}"` : `the rows for "${s.column}"`;
@@ -55,13 +59,15 @@ export async function ingest(plan: Plan): Promise<Dataset> {
 
   const notes = [...reads.values()].flatMap((d) => d.notes);
   const visible = found.filter((f) => !f.plan.hidden);
-  const last = Math.max(...(visible.length > 0 ? visible : found).map((f) => f.range.last));
+  const last = (visible.length > 0 ? visible : found).reduce((max, f) => Math.max(max, f.range.last), -Infinity);
   const period = plan.period ?? (Number.isFinite(last) ? last : undefined);
   if (period === undefined) {
     if (problems.size === 0) problems.add(plan.packFile, null, null, msg.noData());
     throw new InputError(problems.list());
   }
-  if (plan.period === null) notes.push({file: plan.packFile, line: null, message: msg.inferredPeriod(formatPeriod(plan.frequency, period))});
+  if (plan.period === null) {
+    notes.push({file: plan.packFile, line: null, message: msg.inferredPeriod(formatPeriod(plan.frequency, period))});
+  }
 
   const series: Series[] = [];
   for (const {plan: s, data, store, range} of found) {
@@ -72,7 +78,15 @@ export async function ingest(plan: Plan): Promise<Dataset> {
       continue;
     }
     const seriesNotes = placed.notes.map((message) => ({file, line: null, message: `${s.id}: ${message}`}));
-    series.push({id: s.id, frequency: plan.frequency, start: placed.start, values: placed.values, sourceId: s.source, file, notes: seriesNotes});
+    series.push({
+      id: s.id,
+      frequency: plan.frequency,
+      start: placed.start,
+      values: placed.values,
+      sourceId: s.source,
+      file,
+      notes: seriesNotes,
+    });
   }
   if (problems.size > 0) throw new InputError(problems.list());
   const inputs = plan.sources.flatMap((source) => reads.get(source.id)?.input ?? []);
@@ -94,7 +108,9 @@ function checkReferences(plan: Plan, plans: SeriesPlan[], reads: Map<string, Sou
   if (entries.length === 0 || entries.some((f) => reads.get(f.source)?.input === undefined)) return;
   const ids = new Set(plans.map((s) => s.id));
   for (const s of plans) {
-    if (s.target !== null && !ids.has(s.target)) problems.add(plan.packFile, s.line, null, msg.unknownTarget(s.id, s.target));
+    if (s.target !== null && !ids.has(s.target)) {
+      problems.add(plan.packFile, s.line, null, msg.unknownTarget(s.id, s.target));
+    }
   }
   for (const g of plan.groups) {
     for (const id of g.series) if (!ids.has(id)) problems.add(plan.packFile, null, null, msg.unknownMember(g.id, id));

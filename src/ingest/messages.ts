@@ -28,20 +28,26 @@ export const utf8BomInWindows1252 = (): string =>
 
 export const missingColumn = (what: string, name: string, suggestion: string | undefined, header: string[]): string =>
   `${what} "${name}" is not in the header` +
-  (suggestion !== undefined ? `; did you mean "${suggestion}"?` : `; the columns are: ${listed(header.map((h) => `"${h}"`))}`);
+  (suggestion !== undefined
+    ? `; did you mean "${suggestion}"?`
+    : `; the columns are: ${listed(header.map((h) => `"${h}"`))}`);
 export const duplicateColumn = (name: string, columns: number[]): string =>
   `column "${name}" appears ${columns.length} times in the header (columns ${columns.join(', ')}); rename all but one`;
 export const missingKey = (column: string, key: string, seriesId: string, suggestion: string | undefined): string =>
-  `no rows with ${column} = "${key}" (series ${seriesId})` + (suggestion !== undefined ? `; did you mean "${suggestion}"?` : '');
-export const noKeys = (sourceId: string): string => `source ${sourceId} has no rows, so \`fromSource: ${sourceId}\` gives no series`;
+  `no rows with ${column} = "${key}" (series ${seriesId})` +
+  (suggestion !== undefined ? `; did you mean "${suggestion}"?` : '');
+export const noKeys = (sourceId: string): string =>
+  `source ${sourceId} has no rows, so \`fromSource: ${sourceId}\` gives no series`;
 export const slugClash = (id: string, key: string, other: string): string =>
   `key "${key}" becomes series id "${id}", which ${other} already uses; rename one of them`;
 
 export const badDate = (text: string, column: string, frequency: Frequency): string =>
   `"${text}" in column "${column}" is not a date; write ${EXAMPLE[frequency]} or a full date such as 2026-10-31`;
+export const blankKey = (column: string): string => `the key in column "${column}" is blank`;
 export const blankDate = (column: string): string => `the date in column "${column}" is blank`;
 export const mixedFrequency = (text: string, column: string, found: Frequency, pack: Frequency): string =>
-  `column "${column}" holds ${found} periods ("${text}") but the pack is ${pack}; a pack has one frequency, so read this file from a ${found} pack, or give full dates or ${pack} periods such as ${EXAMPLE[pack]}`;
+  `column "${column}" holds ${found} periods ("${text}") but the pack is ${pack}; a pack has one frequency, ` +
+  `so read this file from a ${found} pack, or give full dates or ${pack} periods such as ${EXAMPLE[pack]}`;
 export const duplicateRow = (label: string, first: number, second: number): string =>
   `${label} appears twice, on lines ${first} and ${second}; keep one row per period`;
 export const duplicateKeyRow = (key: string, label: string, first: number, second: number): string =>
@@ -58,7 +64,8 @@ export const noData = (): string => 'the pack names no series with data, so ther
 export const unknownSource = (seriesId: string, sourceId: string): string =>
   `series ${seriesId} names source ${sourceId}, which the pack does not define`;
 
-export const outOfOrder = (line: number): string => `rows are not in date order (first at line ${line}); they were sorted`;
+export const outOfOrder = (line: number): string =>
+  `rows are not in date order (first at line ${line}); they were sorted`;
 export const gaps = (frequency: Frequency, labels: string[]): string =>
   `${count(frequency, labels.length).replace(/ /, ' missing ')}: ${listed(labels)}`;
 export const truncated = (frequency: Frequency, n: number, period: string, from: string, to: string): string =>
@@ -69,7 +76,8 @@ export const inferredPeriod = (period: string): string =>
   `review period ${period}: the pack sets none, so the last period with data is used`;
 
 function listed(items: string[]): string {
-  return items.length <= LISTED ? items.join(', ') : `${items.slice(0, LISTED).join(', ')} and ${items.length - LISTED} more`;
+  if (items.length <= LISTED) return items.join(', ');
+  return `${items.slice(0, LISTED).join(', ')} and ${items.length - LISTED} more`;
 }
 export const unknownTarget = (seriesId: string, target: string): string =>
   `series ${seriesId} has target ${target}, which is neither a series of the pack nor a key of a fromSource source`;

@@ -14,11 +14,6 @@ export class ProblemLog {
     if (n <= PROBLEMS_PER_FILE) this.kept.push({file, line, column, message});
   }
 
-  /** Problems found so far in one file. */
-  countFor(file: string): number {
-    return this.counts.get(file) ?? 0;
-  }
-
   get size(): number {
     return this.kept.length;
   }

@@ -24,7 +24,11 @@ export interface CsvVisitor {
  *
  * File, decoding and CSV-syntax failures go to `problems`; the result is then undefined.
  */
-export async function readCsv(source: SourcePlan, visitor: CsvVisitor, problems: ProblemLog): Promise<InputFile | undefined> {
+export async function readCsv(
+  source: SourcePlan,
+  visitor: CsvVisitor,
+  problems: ProblemLog,
+): Promise<InputFile | undefined> {
   const hash = createHash('sha256');
   const counter = {bytes: 0, lines: 1};
   const text = decodedText(source, hash, counter);
@@ -39,7 +43,14 @@ export async function readCsv(source: SourcePlan, visitor: CsvVisitor, problems:
     }
     const headerLine = head.replace(/^\ufeff/, '').split(/\r\n|\r|\n/, 1)[0];
     const delimiter = source.delimiter === 'auto' ? sniffDelimiter(headerLine) : source.delimiter;
-    const parser = parse({bom: true, info: true, delimiter, relax_column_count: true, relax_quotes: true, skip_empty_lines: true});
+    const parser = parse({
+      bom: true,
+      info: true,
+      delimiter,
+      relax_column_count: true,
+      relax_quotes: true,
+      skip_empty_lines: true,
+    });
     const input = Readable.from(prepend(head, text));
     let headerSeen = false;
     // Records are taken from 'data' events rather than async iteration: at a million rows the
@@ -139,5 +150,6 @@ function numberOr(x: unknown): number | null {
 }
 
 function isFileError(e: unknown): e is {code: string} {
-  return typeof e === 'object' && e !== null && typeof (e as {code?: unknown}).code === 'string' && /^E[A-Z]+$/.test((e as {code: string}).code);
+  const code = typeof e === 'object' && e !== null ? (e as {code?: unknown}).code : undefined;
+  return typeof code === 'string' && /^E[A-Z]+$/.test(code);
 }

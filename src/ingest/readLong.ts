@@ -30,14 +30,17 @@ export function longVisitor(cells: CellReader, wanted: Wanted, data: SourceData)
       return cells.dateColumn >= 0 && keyAt >= 0 && valueAt >= 0;
     },
     record(fields, line) {
-      if (fields.length < width) {
-        if (fields.every((f) => f.trim() === '')) return;
-        cells.problems.add(file, line, null, msg.shortRow(fields.length, width));
-      }
+      // Spreadsheets often end a file with rows of bare delimiters.
+      if (fields.every((f) => f.trim() === '')) return;
+      if (fields.length < width) cells.problems.add(file, line, null, msg.shortRow(fields.length, width));
       const key = (fields[keyAt] ?? '').trim();
       let store = data.stores.get(key);
       if (store === undefined) {
-        if (key === '' || (!wanted.all && !wanted.names.has(key))) {
+        if (key === '') {
+          cells.problems.add(file, line, keyAt + 1, msg.blankKey(keyLabel));
+          return;
+        }
+        if (!wanted.all && !wanted.names.has(key)) {
           skipped.add(key);
           return;
         }
@@ -47,7 +50,10 @@ export function longVisitor(cells: CellReader, wanted: Wanted, data: SourceData)
       const period = cells.period(fields[cells.dateColumn] ?? '', line);
       if (period === undefined) return;
       const value = cells.value(fields[valueAt] ?? '', line, valueAt, valueLabel);
-      if (value === undefined) return;
+      if (value === undefined) {
+        store.rejected++;
+        return;
+      }
       const before = store.set(period, value, line);
       if (before !== 0) {
         const label = formatPeriod(cells.frequency, period);

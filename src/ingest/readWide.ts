@@ -37,15 +37,15 @@ export function wideVisitor(cells: CellReader, wanted: Wanted, data: SourceData)
       return cells.dateColumn >= 0;
     },
     record(fields, line) {
-      if (fields.length < width) {
-        if (fields.every((f) => f.trim() === '')) return;
-        cells.problems.add(file, line, null, msg.shortRow(fields.length, width));
-      }
+      // Spreadsheets often end a file with rows of bare delimiters.
+      if (fields.every((f) => f.trim() === '')) return;
+      if (fields.length < width) cells.problems.add(file, line, null, msg.shortRow(fields.length, width));
       const period = cells.period(fields[cells.dateColumn] ?? '', line);
       if (period === undefined) return;
       const before = rowLines.get(period);
       if (before !== undefined) {
-        cells.problems.add(file, line, cells.dateColumn + 1, msg.duplicateRow(formatPeriod(cells.frequency, period), before, line));
+        const label = formatPeriod(cells.frequency, period);
+        cells.problems.add(file, line, cells.dateColumn + 1, msg.duplicateRow(label, before, line));
         return;
       }
       rowLines.set(period, line);
@@ -57,6 +57,7 @@ export function wideVisitor(cells: CellReader, wanted: Wanted, data: SourceData)
       for (const {at, name, store} of columns) {
         const value = cells.value(fields[at] ?? '', line, at, name);
         if (value !== undefined) store.set(period, value, line);
+        else store.rejected++;
       }
     },
   };

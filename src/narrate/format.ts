@@ -17,6 +17,8 @@ export interface NarrateFormat {
   number(value: number, digits?: number): string;
   /** Value with its unit: `2,025 EUR k`, `5.2%`, `69,782 visits`. */
   value(value: number, unit: string | null): string;
+  /** A range with one unit and the same decimals at both ends: `2,000 to 2,200 EUR k`, `4.8 to 5.8%`. */
+  range(low: number, high: number, unit: string | null): string;
   /** Signed value with its unit: `+340 EUR k`, `-12 visits` (percent units as points: `+0.4 pp`). */
   signed(value: number, unit: string | null): string;
   /** Signed percentage of a value already in percent: `+3.2%`, `−0.4%`. */
@@ -62,6 +64,13 @@ export function narrateFormat(tag: string): NarrateFormat {
         const text = f.number(value);
         return unit ? `${text} ${unit}` : text;
       }),
+    range(low, high, unit) {
+      if (!Number.isFinite(low) || !Number.isFinite(high)) return DASH;
+      if (unit === '%') return `${f.number(low, 1)} to ${f.value(high, unit)}`;
+      const top = Math.max(Math.abs(low), Math.abs(high));
+      const d = top >= 100 ? 0 : top >= 10 ? 1 : 2;
+      return `${f.number(low, d)} to ${f.number(high, d)}${unit ? ` ${unit}` : ''}`;
+    },
     signed: (value, unit) =>
       finite(value, () => {
         if (unit === '%') return f.points(value);

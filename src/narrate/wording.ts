@@ -31,9 +31,9 @@ export function list(items: string[], max = 4): string {
   return shown.length <= 1 ? (shown[0] ?? '') : `${shown.slice(0, -1).join(', ')} and ${shown[shown.length - 1]}`;
 }
 
-/** A signed change as percent, or percentage points for rates. */
+/** A signed change as percent, or percentage points for rates (2 decimals below 0.1 pp, so it never reads 0.0). */
 export function change(fmt: NarrateFormat, value: number, isRate: boolean): string {
-  return isRate ? fmt.points(value) : fmt.percent(value);
+  return isRate ? fmt.points(value, Math.abs(value) < 0.095 ? 2 : 1) : fmt.percent(value);
 }
 
 /** An unsigned change as percent, or percentage points for rates. */
@@ -145,50 +145,50 @@ export function workingDays(a: {label: string; period: string; up: boolean; size
   return `Calendar effects (trading days and holidays) ${a.up ? 'raised' : 'lowered'} ${a.label} in ${a.period} by about ${a.size} compared with an average period.`;
 }
 
-export function easterOne(a: {label: string; year: number; date: string; up: boolean; period: string; size: string}): string {
-  return `Easter ${a.year} fell on ${a.date}, which ${a.up ? 'raised' : 'lowered'} ${a.label} in ${a.period} by about ${a.size}.`;
-}
-
-export function easterSplit(a: {
+export function easter(a: {
   label: string;
   year: number;
   date: string;
+  earlier: boolean;
   first: {period: string; change: string};
   second: {period: string; change: string};
 }): string {
   return (
-    `Easter ${a.year} fell on ${a.date}, so its effect was split: about ${a.first.change} on ${a.label} in ` +
-    `${a.first.period} and ${a.second.change} in ${a.second.period}.`
+    `Easter ${a.year} fell on ${a.date}, ${a.earlier ? 'earlier' : 'later'} than on average: against an average year ` +
+    `that moved ${a.label} by about ${a.first.change} in ${a.first.period} and ${a.second.change} in ${a.second.period}.`
   );
 }
 
 export function forecastOutlook(a: {
   label: string;
   level: number;
-  next: {period: string; mean: string; low: string; high: string};
-  last: {period: string; mean: string; low: string; high: string; ahead: string} | null;
+  next: {period: string; mean: string; range: string};
+  last: {period: string; mean: string; range: string; ahead: string} | null;
   method: string;
 }): string {
   const n = a.next;
-  const head = `The forecast for ${a.label} is ${n.mean} for ${n.period} (${a.level}% range ${n.low} to ${n.high})`;
+  const head = `The forecast for ${a.label} is ${n.mean} for ${n.period} (${a.level}% range ${n.range})`;
   const tail = a.last
-    ? ` and ${a.last.mean} for ${a.last.period}, ${a.last.ahead} ahead (${a.level}% range ${a.last.low} to ${a.last.high})`
+    ? ` and ${a.last.mean} for ${a.last.period}, ${a.last.ahead} ahead (${a.level}% range ${a.last.range})`
     : '';
   return `${head}${tail}; model: ${a.method}.`;
 }
 
 export function outturn(a: {
   label: string;
+  stock: boolean;
   fiscalYear: string;
   total: string;
   level: number;
-  low: string;
-  high: string;
+  range: string;
   actual: string;
   forecast: string;
   target: {value: string; gap: number; gapText: string} | null;
 }): string {
-  const base = `${a.fiscalYear} is on course for ${a.total} of ${a.label} (${a.level}% range ${a.low} to ${a.high}), from ${a.actual} of actuals and ${a.forecast} of forecast`;
+  const range = `(${a.level}% range ${a.range})`;
+  const base = a.stock
+    ? `On current forecasts, ${a.label} will end ${a.fiscalYear} at ${a.total} ${range}`
+    : `On current forecasts, ${a.label} will total ${a.total} in ${a.fiscalYear} ${range}, from ${a.actual} of actuals and ${a.forecast} of forecast`;
   if (!a.target) return `${base}.`;
   const t = a.target;
   const where = Math.abs(t.gap) < 0.5 ? 'in line with' : `${t.gapText} ${t.gap > 0 ? 'above' : 'below'}`;

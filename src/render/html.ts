@@ -37,7 +37,9 @@ export async function renderHtml(report: Report): Promise<string> {
   const css = pageCss(report, theme) + files.css;
   const template = env.compile(files.report, {strict: true, knownHelpersOnly: true});
   // `</` cannot end the style element early: CSS never needs it, so it is neutralised.
-  return template({...view, css: new Handlebars.SafeString(css.replace(/<\//g, '<\\/'))});
+  // Sparklines are our own SVG, built from numbers only.
+  const summary = view.summary.map((row) => ({...row, spark: new Handlebars.SafeString(row.spark)}));
+  return template({...view, summary, css: new Handlebars.SafeString(css.replace(/<\//g, '<\\/'))});
 }
 
 interface TemplateFiles {

@@ -413,13 +413,12 @@ function seriesView(
       slot(
         'cycle',
         adj ? 'half' : 'full',
-        'Deviation from long-run trend (%)',
+        `Deviation from long-run trend (%): now ${cy.phaseLabel}`,
         cycleChart(
           {
             start: a.start,
             gap: cy.gap,
             turningPoints: cy.turningPoints,
-            phaseLabel: cy.phaseLabel,
             description: `Percent gap between ${name} and its long-run trend over time, with ${cy.turningPoints.length} turning points marked; currently ${cy.phaseLabel}.`,
           },
           ctx(adj ? 'half' : 'full'),

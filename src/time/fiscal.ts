@@ -22,7 +22,8 @@ export interface FiscalYear {
  *
  * Complexity: O(1).
  *
- * @example fiscalYearOf('monthly', monthIndex(2026, 5), 4) // => {label: 'FY2026/27', first: monthIndex(2026, 4), last: monthIndex(2027, 3)}
+ * @example fiscalYearOf('monthly', monthIndex(2026, 5), 4)
+ * // => {label: 'FY2026/27', first: monthIndex(2026, 4), last: monthIndex(2027, 3)}
  */
 export function fiscalYearOf(frequency: Frequency, index: number, fiscalYearStart: number): FiscalYear {
   const s = fiscalYearStart;

@@ -22,9 +22,8 @@ const child = join(here, 'fixtures', 'crash-child.ts');
 function runAndKill(outDir: string, force: boolean, kill: {step: string} | {delayMs: number}): Promise<string> {
   return new Promise((resolve, reject) => {
     const step = 'step' in kill ? kill.step : 'none';
-    const proc = spawn(process.execPath, ['--import', register, child, outDir, 'new', force ? 'force' : 'no-force', step], {
-      stdio: ['ignore', 'pipe', 'pipe'],
-    });
+    const argv = ['--import', register, child, outDir, 'new', force ? 'force' : 'no-force', step];
+    const proc = spawn(process.execPath, argv, {stdio: ['ignore', 'pipe', 'pipe']});
     let stdout = '';
     let stderr = '';
     proc.stderr.on('data', (d: Buffer) => (stderr += d.toString()));

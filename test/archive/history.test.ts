@@ -30,7 +30,7 @@ describe('loadHistory', () => {
     expect(await loadHistory(out, packId, '2026-11', toResults(report(2026, 11, [{id: 'net-sales'}])), 1)).toBeNull();
   });
 
-  it('compares with the latest earlier period and tracks the forecasts of every earlier one (hand-checked)', async () => {
+  it('compares with the latest earlier period, tracks forecasts of every earlier one (hand-checked)', async () => {
     const out = await tempDir();
     for (const month of [8, 9, 10, 11, 12]) await archiveMonth(out, month);
     await mkdir(join(out, packId, 'notes'));
@@ -54,7 +54,9 @@ describe('loadHistory', () => {
     [-1.5, -1.5, -1.5, -1, -1, -0.5].forEach((e, i) => expect(errors[i]).toBeCloseTo(e, 9));
     // Seasonal naive scale: y[t] − y[t−12] = 0.5·12 = 6 for every t (the sine repeats).
     // mean |error| = (3·1.5 + 2·1 + 0.5) / 6 = 7/6; MASE = (7/6) / 6 = 7/36. Bands ±5 and ±8: all inside.
-    expect(h.trackingSummary).toEqual([{seriesId: 'net-sales', count: 6, mase: expect.closeTo(7 / 36, 9), coverage: {'80': 1, '95': 1}}]);
+    expect(h.trackingSummary).toEqual([
+      {seriesId: 'net-sales', count: 6, mase: expect.closeTo(7 / 36, 9), coverage: {'80': 1, '95': 1}},
+    ]);
     // Each pack's t starts one month later, so every shared value is 0.5 lower: 12 data revisions.
     expect(h.revisions).toHaveLength(12);
     expect(new Set(h.revisions.map((r) => `${r.kind}/${r.measure}`))).toEqual(new Set(['data/original']));
@@ -70,11 +72,12 @@ describe('loadHistory', () => {
     const current = toResults(report(2026, 10, [{id: 'net-sales'}]));
     const error = await loadHistory(out, packId, '2026-10', current, 1).catch((e: unknown) => e);
     expect(error).toBeInstanceOf(InputError);
-    expect((error as Error).message).toMatch(new RegExp(`^${file.replace(/[.]/g, '\\.')}: unreadable results file: pack\\.id: `));
+    expect((error as Error).message.startsWith(`${file}: unreadable results file: pack.id: `)).toBe(true);
   });
 
   it('rejects a period label that does not match the pack frequency', async () => {
     const current = toResults(report(2026, 10, [{id: 'net-sales'}]));
-    await expect(loadHistory(await tempDir(), packId, '2026-Q3', current, 1)).rejects.toThrow(/invalid period: 2026-Q3/);
+    const out = await tempDir();
+    await expect(loadHistory(out, packId, '2026-Q3', current, 1)).rejects.toThrow(/invalid period: 2026-Q3/);
   });
 });

@@ -17,7 +17,8 @@ describe('index.html', () => {
       const rep = report(2026, month, [{id: 'net-sales', label: evil}, {id: 'budget', label: 'Budget', hidden: true}], {
         title: `Pack "${evil}" & co`,
       });
-      await archive({report: rep, html: '<p>r</p>', pdf: null, exports: [], outDir: out, force: false, packYaml: '{}', warnings: []});
+      const html = '<p>r</p>';
+      await archive({report: rep, html, pdf: null, exports: [], outDir: out, force: false, packYaml: '', warnings: []});
     }
     await mkdir(join(out, 'harbourline-monthly', '2026-08'));
     const html = await readFile(join(out, 'harbourline-monthly', 'index.html'), 'utf8');
@@ -33,16 +34,18 @@ describe('index.html', () => {
     expect(html).not.toContain('2026-11/report.pdf');
     // 2026-08 was created after the last archive call, so it appears only once the index is rebuilt.
     expect(html).not.toContain('2026-08');
+    await mkdir(join(out, 'harbourline-monthly', 'drafts'));
     await writeIndex(out, 'harbourline-monthly');
     const again = await readFile(join(out, 'harbourline-monthly', 'index.html'), 'utf8');
     expect(again).toContain('results.json missing or unreadable');
     expect(again.indexOf('Sep 2026')).toBeLessThan(again.indexOf('>2026-08<'));
+    expect(again).not.toContain('drafts');
   });
 
   it('shows the review-period value with its unit and the year-on-year change in the pack locale', () => {
     const r = toResults(report(2026, 10, [{id: 'net-sales', label: 'Net sales'}], {locale: 'de-DE'}));
-    // Latest value of the fixture: 100 + 0.5·47 + 10·sin(2π·(2026·12 + 9)/12) = 123.5 + 10·sin(1.5π) = 113.5 → "114" (whole
-    // numbers from 100 up); year-on-year 6.1 → "+6,1%" in German.
+    // Latest value of the fixture: 100 + 0.5·47 + 10·sin(2π·(2026·12 + 9)/12) = 123.5 + 10·sin(1.5π) = 113.5
+    // → "114" (whole numbers from 100 up); year-on-year 6.1 → "+6,1%" in German.
     const html = renderIndex('harbourline-monthly', [{folder: '2026-10', results: r, files: ['results.json']}]);
     expect(html).toContain('<tr><th scope="row">Net sales</th><td>114 EUR k</td><td>+6,1%</td></tr>');
     expect(html).toContain('<html lang="de-DE">');

@@ -9,7 +9,12 @@ export interface Hand {
   adjusted?: (number | null)[];
   trendDirection?: 'rising' | 'falling' | 'flat';
   phase?: NonNullable<SeriesResults['cycle']>['phase'];
-  forecast?: {periods: string[]; mean: (number | null)[]; lower: Record<string, number[]>; upper: Record<string, number[]>};
+  forecast?: {
+    periods: string[];
+    mean: (number | null)[];
+    lower: Record<string, number[]>;
+    upper: Record<string, number[]>;
+  };
 }
 
 export function hand(period: string, frequency: 12 | 4 | 52, series: Hand[]): ResultsLike {

@@ -9,15 +9,23 @@ const original = [10, 12, 14, 11, 12, 14, 16, 13, 15];
 const adjusted = [12, 12.5, 13, 13.2, 13.5, 14, 14.6, 15, 15.2];
 
 describe('revisions', () => {
-  it('finds a data revision when an old original changed, and an estimate revision when only the adjusted moved', () => {
-    const previous = hand('2026-Q1', 4, [{periods, original, adjusted, trendDirection: 'rising', phase: 'rising-above'}]);
+  it('finds a data revision when an old original changed, an estimate one when only the adjusted moved', () => {
+    const previous = hand('2026-Q1', 4, [
+      {periods, original, adjusted, trendDirection: 'rising', phase: 'rising-above'},
+    ]);
     const now = [...original];
     now[7] = 13.5; // 2025-Q4: 13 → 13.5 in the CSV
     const nowAdjusted = [...adjusted, 15.6];
     nowAdjusted[6] = 14.7; // 2025-Q3: same original 16, adjusted 14.6 → 14.7
     nowAdjusted[7] = 15.4;
     const current = hand('2026-Q2', 4, [
-      {periods: quarters(10), original: [...now, 17], adjusted: nowAdjusted, trendDirection: 'flat', phase: 'rising-above'},
+      {
+        periods: quarters(10),
+        original: [...now, 17],
+        adjusted: nowAdjusted,
+        trendDirection: 'flat',
+        phase: 'rising-above',
+      },
     ]);
     const rows = revisions(previous, current, 1);
     expect(rows).toHaveLength(3);
@@ -71,7 +79,8 @@ describe('revisions', () => {
     const s = cur.series[0];
     s.original[0] = 1; // 2022-10: outside the last 12 periods of the previous pack
     s.original[40] = 1; // 2026-02: inside
-    expect(revisions(prev, cur, 1).map((r) => [r.seriesId, r.period, r.kind])).toEqual([['net-sales', '2026-02', 'data']]);
+    const rows = revisions(prev, cur, 1);
+    expect(rows.map((r) => [r.seriesId, r.period, r.kind])).toEqual([['net-sales', '2026-02', 'data']]);
   });
 
   it('ignores floating-point noise in the adjusted figures and reports nothing for identical packs', () => {

@@ -32,6 +32,16 @@ const packB = hand('2026-Q1', 4, [
   },
 ]);
 
+const row = (
+  publishedIn: string,
+  period: string,
+  horizon: number,
+  forecast: number,
+  actual: number,
+  error: number,
+  inside: Record<string, boolean>,
+) => ({seriesId: 'orders', publishedIn, period, horizon, forecast, actual, error, inside});
+
 describe('forecast tracking (hand-checked)', () => {
   it('sets every published forecast whose actual is known against it', () => {
     // Actuals: 2026-Q1 = 15, 2026-Q2 = 17; 2026-Q3 not yet known, so skipped.
@@ -40,9 +50,9 @@ describe('forecast tracking (hand-checked)', () => {
     // B, 2026-Q2: h = 1, error = 17 − 19.5 = −2.5; 80%: 18.5 > 17 outside; 95%: 16.5 ≤ 17 ≤ 21.5 inside.
     const rows = trackForecasts([packB, packA], current);
     expect(rows).toEqual([
-      {seriesId: 'orders', publishedIn: '2025-Q4', period: '2026-Q1', horizon: 1, forecast: 14, actual: 15, error: 1, inside: {'80': true, '95': true}},
-      {seriesId: 'orders', publishedIn: '2025-Q4', period: '2026-Q2', horizon: 2, forecast: 18, actual: 17, error: -1, inside: {'80': true, '95': true}},
-      {seriesId: 'orders', publishedIn: '2026-Q1', period: '2026-Q2', horizon: 1, forecast: 19.5, actual: 17, error: -2.5, inside: {'80': false, '95': true}},
+      row('2025-Q4', '2026-Q1', 1, 14, 15, 1, {'80': true, '95': true}),
+      row('2025-Q4', '2026-Q2', 2, 18, 17, -1, {'80': true, '95': true}),
+      row('2026-Q1', '2026-Q2', 1, 19.5, 17, -2.5, {'80': false, '95': true}),
     ]);
   });
 
@@ -52,7 +62,9 @@ describe('forecast tracking (hand-checked)', () => {
     // mean |error| = (1 + 1 + 2.5) / 3 = 1.5; MASE = 1.5 / (7/3) = 9/14 = 0.642857…
     // coverage 80% = 2/3, 95% = 3/3.
     const summary = summariseTracking(trackForecasts([packA, packB], current), current);
-    expect(summary).toEqual([{seriesId: 'orders', count: 3, mase: expect.closeTo(9 / 14, 14), coverage: {'80': 2 / 3, '95': 1}}]);
+    expect(summary).toEqual([
+      {seriesId: 'orders', count: 3, mase: expect.closeTo(9 / 14, 14), coverage: {'80': 2 / 3, '95': 1}},
+    ]);
   });
 
   it('skips missing forecasts and actuals, other frequencies, and series with nothing to track', () => {

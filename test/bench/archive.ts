@@ -14,7 +14,7 @@ import {report} from '../archive/fixtures/report.js';
 const PERIODS = 12;
 const SERIES = 20;
 const LENGTH = 120;
-const REPEATS = 5;
+const REPEATS = 3;
 
 export async function run(): Promise<void> {
   const specs = Array.from({length: SERIES}, (_, i) => ({id: `line-${i + 1}`, length: LENGTH}));
@@ -55,7 +55,8 @@ export async function run(): Promise<void> {
   const line = (name: string, xs: number[]) => {
     const s = [...xs].sort((a, b) => a - b);
     const median = s[Math.floor(s.length / 2)];
-    return `archive: ${name.padEnd(44)} median ${median.toFixed(1)} ms  (min ${s[0].toFixed(1)}, max ${s[s.length - 1].toFixed(1)}, n=${s.length})`;
+    const range = `min ${s[0].toFixed(1)}, max ${s[s.length - 1].toFixed(1)}, n=${s.length}`;
+    return `archive: ${name.padEnd(44)} median ${median.toFixed(1)} ms  (${range})`;
   };
   console.log(line(`one period folder (${SERIES} series × ${LENGTH}), incl. index`, archiveMs));
   console.log(line(`index.html over ${PERIODS} periods`, indexMs));

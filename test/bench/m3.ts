@@ -117,7 +117,7 @@ function timeR(series: M3Series[]): number | null {
   }
   const dir = mkdtempSync(join(tmpdir(), 'm3-r-'));
   try {
-    const csv = series.map((s) => s.train.join(',')).join('\n');
+    const csv = series.map((s) => s.train.join(',') + '\n').join('');
     writeFileSync(join(dir, 'series.csv'), csv);
     const code = [
       'suppressPackageStartupMessages(library(forecast))',

@@ -13,13 +13,15 @@ const temp = mkdtempSync(join(tmpdir(), 'ebbflow-ingest-prop-'));
 
 /** Cells that look like data some of the time and like anything at other times. */
 const cell = fc.oneof(
-  fc.constantFrom('', 'NA', '-', '1,234.5', '1 234,5', '12', '-3.5', '€5', '5%', '"q,uoted"', '"', '2024-01', 'Q3 2024', '2024-W01'),
+  fc.constantFrom('', 'NA', '-', '1,234.5', '1 234,5', '12', '-3.5', '€5', '5%', '"q,uoted"', '"', '2024-01'),
   fc.double({noNaN: true}).map(String),
   fc.string({maxLength: 8}),
   fc.string({unit: 'binary', maxLength: 6}),
 );
 const date = fc.oneof(
-  fc.tuple(fc.integer({min: 1990, max: 2030}), fc.integer({min: 0, max: 13})).map(([y, m]) => `${y}-${String(m).padStart(2, '0')}`),
+  fc
+    .tuple(fc.integer({min: 1990, max: 2030}), fc.integer({min: 0, max: 13}))
+    .map(([y, m]) => `${y}-${String(m).padStart(2, '0')}`),
   fc.constantFrom('2024-Q1', '2024-W53', '2026-W53', 'Oct 2026', '10/2026', '2024-02-30', ''),
   fc.string({maxLength: 10}),
 );
@@ -38,11 +40,13 @@ describe('ingest on random wide CSV text', () => {
         fc.constantFrom<'utf-8' | 'windows-1252'>('utf-8', 'windows-1252'),
         fc.option(fc.integer({min: 1990 * 12, max: 2031 * 12}), {nil: null}),
         async (d, rows, frequency, decimal, encoding, period) => {
-          const text = [`month${d}a${d}b`, ...rows.map(([dt, cells]) => [dt, ...cells].join(d))].join(n % 2 ? '\r\n' : '\n');
+          const lines = [`month${d}a${d}b`, ...rows.map(([dt, cells]) => [dt, ...cells].join(d))];
+          const text = lines.join(n % 2 ? '\r\n' : '\n');
           const file = join(temp, `p${n++}.csv`);
           writeFileSync(file, text);
           const src = source('s', file, {decimal, encoding});
-          const p = plan(frequency, [src], [series('a', 's'), series('b', 's')], {period: frequency === 'monthly' ? period : null});
+          const list = [series('a', 's'), series('b', 's')];
+          const p = plan(frequency, [src], list, {period: frequency === 'monthly' ? period : null});
           const outcome: Dataset | Error = await ingest(p).catch((e: Error) => e);
           if (outcome instanceof Error) expect(outcome).toBeInstanceOf(InputError);
           else for (const s of outcome.series) expect(s.start + s.values.length - 1).toBe(outcome.period);

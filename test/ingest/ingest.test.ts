@@ -22,6 +22,8 @@ async function problemsOf(p: Plan): Promise<Problem[]> {
 const values = (d: Dataset, id: string): number[] => [...d.series.find((s) => s.id === id)!.values];
 const notes = (d: Dataset, id: string): string[] => d.series.find((s) => s.id === id)!.notes.map((n) => n.message);
 const temp = mkdtempSync(join(tmpdir(), 'ebbflow-ingest-'));
+/** `2000-01` for i = 0, one month per step. */
+const monthLabel = (i: number): string => `${2000 + Math.floor(i / 12)}-${String((i % 12) + 1).padStart(2, '0')}`;
 const write = (name: string, text: string | Buffer): string => {
   const file = join(temp, name);
   writeFileSync(file, text);
@@ -64,7 +66,8 @@ describe('wide layout', () => {
 
   it('semicolons and decimal commas, with space and point grouping', async () => {
     const src = source('de', 'semicolon-decimal-comma.csv', {dateColumn: 'Monat', decimal: ','});
-    const d = await ingest(plan('monthly', [src], [series('umsatz', 'de', {column: 'Umsatz'}), series('kosten', 'de', {column: 'Kosten'})]));
+    const list = [series('umsatz', 'de', {column: 'Umsatz'}), series('kosten', 'de', {column: 'Kosten'})];
+    const d = await ingest(plan('monthly', [src], list));
     expect(values(d, 'umsatz')).toEqual([1234.5, 1300.75, 1400]);
     expect(values(d, 'kosten')).toEqual([10.25, -3.5, 12]);
   });
@@ -81,11 +84,15 @@ describe('wide layout', () => {
   it('an explicit delimiter wins over sniffing', async () => {
     const src = source('w', 'tab.tsv', {dateColumn: 'week', delimiter: ','});
     const problems = await problemsOf(plan('weekly', [src], [series('visits', 'w')]));
-    expect(problems[0]).toMatchObject({line: 1, message: expect.stringMatching(/date column "week" is not in the header/)});
+    expect(problems[0]).toMatchObject({
+      line: 1,
+      message: expect.stringMatching(/date column "week" is not in the header/),
+    });
   });
 
   it('quarters in every label form and a date inside a quarter', async () => {
-    const d = await ingest(plan('quarterly', [source('q', 'quarterly.csv', {dateColumn: 'quarter'})], [series('sales', 'q')]));
+    const src = source('q', 'quarterly.csv', {dateColumn: 'quarter'});
+    const d = await ingest(plan('quarterly', [src], [series('sales', 'q')]));
     expect(d.series[0].start).toBe(quarterIndex(2024, 1));
     expect(values(d, 'sales')).toEqual([10, 11, 12, 13]);
   });
@@ -100,16 +107,19 @@ describe('wide layout', () => {
     const file = write('unsorted.csv', 'month,sales\n2024-03,3\n2024-01,1\n2024-02,2\n');
     const d = await ingest(plan('monthly', [source('s', file)], [series('sales', 's')]));
     expect(values(d, 'sales')).toEqual([1, 2, 3]);
-    expect(d.notes[0]).toEqual({file, line: 3, message: 'rows are not in date order (first at line 3); they were sorted'});
+    expect(d.notes[0]).toEqual({
+      file,
+      line: 3,
+      message: 'rows are not in date order (first at line 3); they were sorted',
+    });
   });
 });
 
 describe('encodings', () => {
   it('windows-1252 with € (byte 0x80) and é in the header', async () => {
     const src = source('fr', 'windows-1252.csv', {dateColumn: 'mois', decimal: ',', encoding: 'windows-1252'});
-    const d = await ingest(
-      plan('monthly', [src], [series('ca', 'fr', {column: "chiffre d'affaires (€)"}), series('act', 'fr', {column: 'activité'})]),
-    );
+    const list = [series('ca', 'fr', {column: "chiffre d'affaires (€)"}), series('act', 'fr', {column: 'activité'})];
+    const d = await ingest(plan('monthly', [src], list));
     expect(values(d, 'ca')).toEqual([1000.5, 2000.25]);
     expect(values(d, 'act')).toEqual([1, 2]);
   });
@@ -118,7 +128,12 @@ describe('encodings', () => {
     const src = source('fr', 'windows-1252.csv', {dateColumn: 'mois', decimal: ','});
     const problems = await problemsOf(plan('monthly', [src], [series('act', 'fr', {column: 'activité'})]));
     expect(problems).toEqual([
-      {file: join(FIXTURES, 'windows-1252.csv'), line: 1, column: null, message: expect.stringMatching(/not valid UTF-8.*encoding: windows-1252/)},
+      {
+        file: join(FIXTURES, 'windows-1252.csv'),
+        line: 1,
+        column: null,
+        message: expect.stringMatching(/not valid UTF-8.*encoding: windows-1252/),
+      },
     ]);
   });
 
@@ -129,9 +144,11 @@ describe('encodings', () => {
   });
 
   it('an invalid byte deep in the file is reported at its line', async () => {
-    const rows = Array.from({length: 5000}, (_, i) => `${2000 + Math.floor(i / 12)}-${String((i % 12) + 1).padStart(2, '0')},${i}`);
-    const bytes = Buffer.concat([Buffer.from(`month,sales\n${rows.slice(0, 4000).join('\n')}\n`), Buffer.from([0x39, 0xff, 0x0a])]);
-    const problems = await problemsOf(plan('monthly', [source('s', write('late-bad-byte.csv', bytes))], [series('sales', 's')]));
+    const rows = Array.from({length: 4000}, (_, i) => `${monthLabel(i)},${i}`);
+    // Line 1 is the header, lines 2–4001 the rows, so the bad byte 0xFF is on line 4002.
+    const bytes = Buffer.concat([Buffer.from(`month,sales\n${rows.join('\n')}\n`), Buffer.from([0x39, 0xff, 0x0a])]);
+    const src = source('s', write('late-bad-byte.csv', bytes));
+    const problems = await problemsOf(plan('monthly', [src], [series('sales', 's')]));
     expect(problems[0]).toMatchObject({line: 4002, message: expect.stringMatching(/not valid UTF-8/)});
   });
 });
@@ -151,7 +168,8 @@ describe('problems', () => {
 
   it('bad cells at file:line:column, every one of them', async () => {
     const file = join(FIXTURES, 'bad-cells.csv');
-    const problems = await problemsOf(plan('monthly', [source('s', 'bad-cells.csv')], [series('sales', 's'), series('costs', 's')]));
+    const list = [series('sales', 's'), series('costs', 's')];
+    const problems = await problemsOf(plan('monthly', [source('s', 'bad-cells.csv')], list));
     expect(problems.map((p) => [p.line, p.column])).toEqual([
       [3, 2],
       [4, 2],
@@ -161,16 +179,20 @@ describe('problems', () => {
     ]);
     expect(problems.every((p) => p.file === file)).toBe(true);
     expect(problems[0].message).toBe(
-      '"12x" in column "sales" is not a number: write a number such as 1234.5, or leave the cell blank or NA when the value is missing',
+      '"12x" in column "sales" is not a number: ' +
+        'write a number such as 1234.5, or leave the cell blank or NA when the value is missing',
     );
     expect(problems[1].message).toMatch(/"€12" in column "sales" is not a number: remove the currency symbol/);
-    expect(problems[2].message).toBe('"31/10/2024" in column "month" is not a date; write 2026-10 or a full date such as 2026-10-31');
+    expect(problems[2].message).toBe(
+      '"31/10/2024" in column "month" is not a date; write 2026-10 or a full date such as 2026-10-31',
+    );
     expect(problems[3].message).toMatch(/"5%" in column "costs" is not a number: write percentages as plain numbers/);
     expect(problems[4].message).toMatch(/"1,5" in column "sales" .*set `decimal: ","`/);
   });
 
   it('a missing column suggests the nearest header name', async () => {
-    const problems = await problemsOf(plan('monthly', [source('s', 'missing-column.csv')], [series('net-sales', 's', {column: 'net_sales'})]));
+    const list = [series('net-sales', 's', {column: 'net_sales'})];
+    const problems = await problemsOf(plan('monthly', [source('s', 'missing-column.csv')], list));
     expect(problems).toEqual([
       {
         file: join(FIXTURES, 'missing-column.csv'),
@@ -187,7 +209,8 @@ describe('problems', () => {
   });
 
   it('a series with no values at all', async () => {
-    const problems = await problemsOf(plan('monthly', [source('s', 'all-missing.csv')], [series('sales', 's'), series('returns', 's')]));
+    const list = [series('sales', 's'), series('returns', 's')];
+    const problems = await problemsOf(plan('monthly', [source('s', 'all-missing.csv')], list));
     expect(problems).toEqual([
       {
         file: join(FIXTURES, 'all-missing.csv'),
@@ -199,9 +222,12 @@ describe('problems', () => {
   });
 
   it('quarter labels in a monthly pack: one clear problem for the file', async () => {
-    const problems = await problemsOf(plan('monthly', [source('q', 'quarterly-labels.csv', {dateColumn: 'quarter'})], [series('sales', 'q')]));
+    const src = source('q', 'quarterly-labels.csv', {dateColumn: 'quarter'});
+    const problems = await problemsOf(plan('monthly', [src], [series('sales', 'q')]));
     expect(problems[0]).toMatchObject({line: 2, column: 1});
-    expect(problems[0].message).toMatch(/column "quarter" holds quarterly periods \("2024-Q1"\) but the pack is monthly; a pack has one frequency/);
+    expect(problems[0].message).toMatch(
+      /column "quarter" holds quarterly periods \("2024-Q1"\) but the pack is monthly; a pack has one frequency/,
+    );
     expect(problems.filter((p) => /frequency/.test(p.message))).toHaveLength(1);
   });
 
@@ -210,9 +236,8 @@ describe('problems', () => {
     const empty = source('b', write('empty.csv', ''));
     const headerOnly = source('c', write('header.csv', 'month,sales\n'));
     const quote = source('d', write('quote.csv', 'month,sales\n2024-01,"12\n'));
-    const problems = await problemsOf(
-      plan('monthly', [missing, empty, headerOnly, quote], ['a', 'b', 'c', 'd'].map((id) => series(id, id, {column: 'sales'}))),
-    );
+    const list = ['a', 'b', 'c', 'd'].map((id) => series(id, id, {column: 'sales'}));
+    const problems = await problemsOf(plan('monthly', [missing, empty, headerOnly, quote], list));
     expect(problems.map((p) => p.message)).toEqual([
       'cannot read the file (ENOENT)',
       'the file is empty: it needs a header line and data rows',
@@ -232,27 +257,40 @@ describe('problems', () => {
   });
 
   it('at most 50 problems per file, then a count', async () => {
-    const rows = Array.from({length: 80}, (_, i) => `${2000 + Math.floor(i / 12)}-${String((i % 12) + 1).padStart(2, '0')},x`);
-    const problems = await problemsOf(plan('monthly', [source('s', write('many.csv', `month,sales\n${rows.join('\n')}\n`))], [series('sales', 's')]));
+    const rows = Array.from({length: 80}, (_, i) => `${monthLabel(i)},x`);
+    const src = source('s', write('many.csv', `month,sales\n${rows.join('\n')}\n`));
+    const problems = await problemsOf(plan('monthly', [src], [series('sales', 's')]));
     expect(problems).toHaveLength(51);
     expect(problems[50].message).toBe('30 more problems not listed'); // 80 bad cells, 50 listed
   });
 
   it('short rows are reported', async () => {
-    const problems = await problemsOf(plan('monthly', [source('s', write('short.csv', 'month,a,b\n2024-01,1,2\n2024-02,3\n'))], [series('a', 's')]));
-    expect(problems).toEqual([expect.objectContaining({line: 3, message: 'the row has 2 fields but the header has 3; a delimiter or quote may be missing'})]);
+    const src = source('s', write('short.csv', 'month,a,b\n2024-01,1,2\n2024-02,3\n'));
+    const problems = await problemsOf(plan('monthly', [src], [series('a', 's')]));
+    expect(problems).toEqual([
+      expect.objectContaining({
+        line: 3,
+        message: 'the row has 2 fields but the header has 3; a delimiter or quote may be missing',
+      }),
+    ]);
   });
 });
 
 describe('review period', () => {
   const src = source('r', 'review.csv');
-  const list = () => [series('sales', 'r'), series('budget', 'r', {hidden: true}), series('stock', 'r', {kind: 'stock'})];
+  const list = () => [
+    series('sales', 'r'),
+    series('budget', 'r', {hidden: true}),
+    series('stock', 'r', {kind: 'stock'}),
+  ];
 
   it('defaults to the last period with data and pads series that end earlier', async () => {
     const d = await ingest(plan('monthly', [src], list()));
     expect(d.period).toBe(monthIndex(2024, 8));
     expect(values(d, 'budget')).toEqual([9, 10, 11, 12, 13, 14, NaN, NaN]);
-    expect(notes(d, 'budget')).toEqual(['budget: data end at 2024-06: the 2 months up to the review period 2024-08 are missing']);
+    expect(notes(d, 'budget')).toEqual([
+      'budget: data end at 2024-06: the 2 months up to the review period 2024-08 are missing',
+    ]);
     expect(d.series.find((s) => s.id === 'stock')!.start).toBe(monthIndex(2024, 5));
   });
 
@@ -260,7 +298,9 @@ describe('review period', () => {
     const d = await ingest(plan('monthly', [src], list(), {period: monthIndex(2024, 6)}));
     expect(d.period).toBe(monthIndex(2024, 6));
     expect(values(d, 'sales')).toEqual([10, 11, 12, 13, 14, 15]);
-    expect(notes(d, 'sales')).toEqual(['sales: 2 months of data after the review period 2024-06 ignored (2024-07 to 2024-08)']);
+    expect(notes(d, 'sales')).toEqual([
+      'sales: 2 months of data after the review period 2024-06 ignored (2024-07 to 2024-08)',
+    ]);
     expect(values(d, 'stock')).toEqual([1, 2]);
     expect(d.notes).toEqual([]);
   });
@@ -280,7 +320,8 @@ describe('review period', () => {
 });
 
 describe('long layout', () => {
-  const web = source('web', 'long.csv', {layout: 'long', dateColumn: 'date', keyColumn: 'series', valueColumn: 'value'});
+  const long = {layout: 'long', dateColumn: 'date', keyColumn: 'series', valueColumn: 'value'} as const;
+  const web = source('web', 'long.csv', long);
 
   it('expands fromSource keys into series in first-seen order, at the pack position', async () => {
     const sales = source('s', 'gaps.csv');
@@ -318,7 +359,7 @@ describe('long layout', () => {
   });
 
   it('duplicates within a key name both lines', async () => {
-    const src = source('l', 'long-duplicate.csv', {layout: 'long', dateColumn: 'date', keyColumn: 'series', valueColumn: 'value'});
+    const src = source('l', 'long-duplicate.csv', long);
     const problems = await problemsOf(plan('monthly', [src], [series('visits', 'l')]));
     expect(problems.map((p) => [p.line, p.message])).toEqual([
       [5, '"visits" has two rows for 2024-02, on lines 3 and 5; keep one row per period'],
@@ -326,7 +367,8 @@ describe('long layout', () => {
   });
 
   it('a key whose slug is already an id is a problem; targets and groups are checked after expanding', async () => {
-    const p = plan('monthly', [web], [series('sign-ups', 'web', {column: 'Web visits (DE)', target: 'web-visits-uk'})], {
+    const list = [series('sign-ups', 'web', {column: 'Web visits (DE)', target: 'web-visits-uk'})];
+    const p = plan('monthly', [web], list, {
       fromSource: [fromSource('web', 1)],
       groups: [{id: 'web', title: 'Web', series: ['web-visits-uk', 'web-visits-fr']}],
     });
@@ -334,6 +376,24 @@ describe('long layout', () => {
     expect(problems.map((x) => x.message)).toEqual([
       'key "Sign-ups" becomes series id "sign-ups", which series sign-ups already uses; rename one of them',
       'group web lists web-visits-fr, which is neither a series of the pack nor a key of a fromSource source',
+    ]);
+  });
+});
+
+describe('blank rows and keys', () => {
+  it('rows of bare delimiters are skipped; a blank key in a long file is a problem', async () => {
+    const wide = source('w', write('trailing.csv', 'month,sales\n2024-01,1\n2024-02,2\n,\n,\n'));
+    const d = await ingest(plan('monthly', [wide], [series('sales', 'w')]));
+    expect(values(d, 'sales')).toEqual([1, 2]);
+    const long = source('l', write('blank-key.csv', 'date,series,value\n2024-01,a,1\n2024-02, ,2\n'), {
+      layout: 'long',
+      dateColumn: 'date',
+      keyColumn: 'series',
+      valueColumn: 'value',
+    });
+    const problems = await problemsOf(plan('monthly', [long], [series('a', 'l')]));
+    expect(problems).toEqual([
+      expect.objectContaining({line: 3, column: 2, message: 'the key in column "series" is blank'}),
     ]);
   });
 });

@@ -23,13 +23,12 @@ describe('parseNumberCell with decimal point', () => {
     ['  42  ', 42],
   ])('%s → %d', (text, value) => expect(parseNumberCell(text, '.')).toBe(value));
 
-  it.each(['', '  ', 'NA', 'na', 'N/A', 'n/a', '#N/A', '-', '\u2013', 'null', 'NULL', 'NaN'])('%j is missing (NaN)', (text) =>
-    expect(parseNumberCell(text, '.')).toBeNaN(),
-  );
+  const missing = ['', '  ', 'NA', 'na', 'N/A', 'n/a', '#N/A', '-', '\u2013', 'null', 'NULL', 'NaN'];
+  it.each(missing)('%j is missing (NaN)', (text) => expect(parseNumberCell(text, '.')).toBeNaN());
 
-  it.each(['12x', '1,23', '1,2345', '1,234 567', '€12', '12 EUR', '$1,200', '5%', '1.2.3', '(-5)', '--5', 'abc', '1,234e3'])(
-    '%s is rejected',
-    (text) => expect(parseNumberCell(text, '.')).toBeUndefined(),
+  const rejected = ['12x', '1,23', '1,2345', '1,234 567', '€12', '12 EUR', '$1,200', '5%', '1.2.3', '(-5)', '--5'];
+  it.each([...rejected, 'abc', '1,234e3'])('%s is rejected', (text) =>
+    expect(parseNumberCell(text, '.')).toBeUndefined(),
   );
 });
 

@@ -27,6 +27,9 @@ describe('narrateFormat', () => {
     expect(en.size(-3.24)).toBe('3.2%');
     expect(en.signed(-340.2, 'EUR k')).toBe('-340 EUR k');
     expect(en.signed(0.35, '%')).toBe('+0.4 pp');
+    expect(en.range(4.81, 5.8, '%')).toBe('4.8 to 5.8%');
+    expect(en.range(47.6, 149.4, 'EUR')).toBe('48 to 149 EUR');
+    expect(en.range(4.81, 5.8, null)).toBe('4.81 to 5.80');
   });
 
   it('names periods in the locale', () => {

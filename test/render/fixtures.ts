@@ -69,7 +69,7 @@ export function seriesAnalysis(id: string, frequency: Frequency, end: number, le
   const original: number[] = [];
   for (let i = 0; i < length; i++) {
     const tr = level * (1 + 0.004 * i) + 40 * Math.sin((2 * Math.PI * i) / (p * 3.5));
-    const s = 1 + 0.12 * Math.sin((2 * Math.PI * (start + i)) / p) + 0.04 * Math.cos((4 * Math.PI * (start + i)) / p);
+    const s = 1 + (0.1 + 0.0006 * i) * Math.sin((2 * Math.PI * (start + i)) / p) + 0.04 * Math.cos((4 * Math.PI * (start + i)) / p);
     const e = 1 + (rand() - 0.5) * 0.04 + (i === Math.floor(length * 0.6) ? 0.11 : 0);
     trend.push(tr);
     seasonal.push(s);

@@ -3,7 +3,11 @@ import {parseResults, resultsJson, toResults, RESULTS_SCHEMA} from '../../src/re
 import {InputError} from '../../src/errors.js';
 import {report} from '../archive/fixtures/report.js';
 
-const sample = () => report(2026, 10, [{id: 'net-sales', label: 'Net sales', missing: [3]}, {id: 'budget', hidden: true}]);
+const sample = () =>
+  report(2026, 10, [
+    {id: 'net-sales', label: 'Net sales', missing: [3]},
+    {id: 'budget', hidden: true},
+  ]);
 
 describe('toResults', () => {
   it('uses the field names of the ebbflow/results/v1 contract (ARCHITECTURE.md)', () => {
@@ -17,11 +21,14 @@ describe('toResults', () => {
     expect(Object.keys(s)).toEqual(
       expect.arrayContaining(['id', 'label', 'unit', 'periods', 'original', 'decomposition', 'outliers', 'cycle']),
     );
-    expect(Object.keys(s)).toEqual(expect.arrayContaining(['changes', 'forecast', 'outturn', 'callouts', 'notes', 'options']));
+    expect(Object.keys(s)).toEqual(
+      expect.arrayContaining(['changes', 'forecast', 'outturn', 'callouts', 'notes', 'options']),
+    );
     expect(Object.keys(s.decomposition!)).toEqual(
-      expect.arrayContaining(['method', 'model', 'trend', 'seasonal', 'irregular', 'adjusted', 'calendar', 'diagnostics']),
+      expect.arrayContaining(['method', 'model', 'trend', 'seasonal', 'irregular', 'adjusted', 'calendar']),
     );
     expect(s.decomposition).toMatchObject({method: 'stl', model: 'additive'});
+    expect(s.decomposition!.diagnostics.varianceShares).toEqual({trend: 0.6, seasonal: 0.4, irregular: 0});
     expect(s.outliers).toEqual([{period: '2026-06', kind: 'additive', score: 4.25}]);
     expect(Object.keys(s.cycle!)).toEqual(expect.arrayContaining(['method', 'trend', 'gap', 'phase', 'turningPoints']));
     expect(s.cycle!.turningPoints).toEqual([{period: '2025-03', type: 'trough', provisional: false}]);
@@ -79,7 +86,57 @@ describe('toResults', () => {
     const text = resultsJson(sample());
     expect(text.startsWith(`{\n  "schema": "${RESULTS_SCHEMA}",\n  "pack": {\n    "id"`)).toBe(true);
     expect(text.endsWith('}\n')).toBe(true);
-    expect(toResults(sample()).notes).toEqual([{file: 'data/trading.csv', line: 7, message: 'blank cell read as missing'}]);
+    expect(toResults(sample()).notes).toEqual([
+      {file: 'data/trading.csv', line: 7, message: 'blank cell read as missing'},
+    ]);
+  });
+});
+
+describe('toResults history', () => {
+  it('writes the comparison with earlier packs in its declared key order', () => {
+    const rep = sample();
+    rep.history = {
+      previousPeriod: '2026-09',
+      revisions: [
+        {
+          seriesId: 'net-sales',
+          period: '2026-08',
+          kind: 'data',
+          measure: 'original',
+          previous: 10,
+          current: 11,
+          revisionPct: 10,
+          large: true,
+        },
+      ],
+      tracking: [
+        {
+          seriesId: 'net-sales',
+          publishedIn: '2026-09',
+          period: '2026-10',
+          horizon: 1,
+          forecast: 12,
+          actual: 11,
+          error: -1,
+          inside: {'95': true, '80': false},
+        },
+      ],
+      trackingSummary: [{seriesId: 'net-sales', count: 1, mase: NaN, coverage: {'80': 0, '95': 1}}],
+    };
+    const r = toResults(rep);
+    expect(Object.keys(r.history!.revisions[0])).toEqual([
+      'seriesId',
+      'period',
+      'kind',
+      'measure',
+      'previous',
+      'current',
+      'revisionPct',
+      'large',
+    ]);
+    expect(r.history!.trackingSummary[0].mase).toBeNull();
+    expect(Object.keys(r.history!.tracking[0].inside)).toEqual(['80', '95']);
+    expect(parseResults(resultsJson(rep)).history).toEqual(r.history);
   });
 });
 

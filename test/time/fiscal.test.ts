@@ -54,7 +54,9 @@ describe('fiscalYearOf, quarterly', () => {
     });
   });
   it('a start month inside a quarter is an error', () => {
-    expect(() => fiscalYearOf('quarterly', quarterIndex(2026, 1), 2)).toThrow(/fiscal year start month 2 is not a quarter start/);
+    expect(() => fiscalYearOf('quarterly', quarterIndex(2026, 1), 2)).toThrow(
+      /fiscal year start month 2 is not a quarter start/,
+    );
   });
   it('start month out of range', () => {
     expect(() => fiscalYearOf('monthly', 0, 13)).toThrow(/invalid fiscal year start month: 13/);

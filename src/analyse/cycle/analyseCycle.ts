@@ -6,7 +6,7 @@ import {amplitudeRatio} from './amplitude.js';
 import {christianoFitzgerald} from './christianoFitzgerald.js';
 import {gapPercent} from './gap.js';
 import {hodrickPrescott} from './hodrickPrescott.js';
-import {endPointCaution, filledNote, onTrendLabel, phaseLabels} from './labels.js';
+import {endPointCaution, filledNote, onTrendLabel, phaseLabels, untestedNote} from './labels.js';
 import {defaultHpLambda} from './lambda.js';
 import {oneSidedHodrickPrescott} from './oneSidedHodrickPrescott.js';
 import {gapPhase} from './phase.js';
@@ -31,7 +31,7 @@ const BAND_YEARS = {low: 1.5, high: 8};
  * 5. Stationarity of the filled series (null when too short), variance checked on `irregular` when given.
  * 6. For HP, the one-sided trend over the latest year (two for quarterly data) and an end-point caution.
  *
- * Complexity: O(n²) for the band-pass and the one-sided trend, O(n·maxLag³) for the tests; the rest O(n).
+ * Complexity: O(n²) for the band-pass and the one-sided trend, O(n·maxLag²) for the tests; the rest O(n).
  * NaN policy: NaN filled as above; an all-NaN or shorter-than-three series gives `{ok: false, reason}`.
  */
 export function analyseCycle(
@@ -55,14 +55,14 @@ export function analyseCycle(
     const cycle = christianoFitzgerald(x, band);
     trend = x.map((v, t) => v - cycle[t]);
   }
-  const {gap, scale} = gapPercent(x, trend);
+  const {gap, scale, meanAbsolute} = gapPercent(x, trend);
   const span = Math.max(1, Math.round(perYear / 4));
   const {direction, phase, moving} = gapPhase(gap, span);
   const {turns, rule} = turningPoints(gap, frequency);
   const last = turns[turns.length - 1];
   const tests = stationarity(x, irregular);
   const notes = filled.filled > 0 ? [filledNote(filled.filled)] : [];
-  if (!tests.ok) notes.push(`Stationarity not tested: ${tests.reason}.`);
+  if (!tests.ok) notes.push(untestedNote(tests.reason));
   const realTimeStart = n - Math.min(n, frequency === 'quarterly' ? 8 : perYear);
   let realTime: CycleResult['realTime'];
   if (options.method === 'hp') {
@@ -70,7 +70,10 @@ export function analyseCycle(
     realTime = {
       start: realTimeStart,
       trend: Array.from(oneSided),
-      gap: Array.from(gapPercent(x.subarray(realTimeStart), oneSided).gap),
+      gap: Array.from(oneSided, (tau, i) => {
+        const divisor = scale === 'trend' ? tau : meanAbsolute;
+        return (100 * (x[realTimeStart + i] - tau)) / divisor;
+      }),
     };
   }
   const missing = (t: number): boolean => Number.isNaN(values[t]);
@@ -97,7 +100,7 @@ export function analyseCycle(
       turningPointBasis: 'gap',
       gapScale: scale,
       realTime,
-      caution: endPointCaution(rule.provisionalSpan),
+      caution: endPointCaution(n - realTimeStart),
       notes,
     },
   };

@@ -29,7 +29,8 @@ export interface HardingPaganOptions {
  * neighbours (fill gaps first for a complete dating).
  *
  * @example
- * hardingPagan(Float64Array.of(1, 2, 3, 2, 1, 0, 1, 2, 3, 4)) // => [{index: 2, type: 'peak'}, {index: 5, type: 'trough'}]
+ * hardingPagan(Float64Array.of(1, 2, 3, 2, 1, 0, 1, 2, 3, 4))
+ * // => [{index: 2, type: 'peak'}, {index: 5, type: 'trough'}]
  */
 export function hardingPagan(
   values: Float64Array,

@@ -11,7 +11,7 @@ export interface KpssResult {
  *
  * Bandwidth L as statsmodels' `kpss(nlags='auto')` (Hobijn, Franses & Ooms 1998): with m = ⌊n^{2/9}⌋,
  * s₀ = γ₀ + 2Σ_{i≤m} γ_i, s₁ = 2Σ_{i≤m} i·γ_i (γ_i = Σ e_t e_{t−i}/n), L = ⌊1.1447·(s₁/s₀)^{2/3}·n^{1/3}⌋,
- * at most n − 1. The p-value is linear interpolation in the critical values 0.347, 0.463, 0.574, 0.739 for
+ * at most n − 1 (0 when s₀ = 0). The p-value is linear interpolation in the critical values 0.347, 0.463, 0.574, 0.739 for
  * 10, 5, 2.5 and 1 % (Kwiatkowski et al. 1992, Table 1).
  *
  * Reference: D. Kwiatkowski, P. C. B. Phillips, P. Schmidt and Y. Shin (1992), Testing the null hypothesis of
@@ -46,8 +46,10 @@ export function kpss(values: Float64Array): KpssResult {
     s0 += g;
     s1 += i * g;
   }
-  if (!(s0 > 0)) throw new RangeError('KPSS needs a varying series');
-  const lags = Math.min(Math.floor(1.1447 * Math.pow((s1 / s0) ** 2, 1 / 3) * Math.pow(n, 1 / 3)), n - 1);
+  // s₀ can be zero or negative for strongly oscillating series; statsmodels squares the ratio, and we take L = 0
+  // where the ratio does not exist.
+  const ratio = s0 === 0 ? 0 : s1 / s0;
+  const lags = Math.min(Math.floor(1.1447 * Math.pow(ratio * ratio, 1 / 3) * Math.pow(n, 1 / 3)), n - 1);
   let longRun = autocovariance(0);
   for (let i = 1; i <= lags; i++) longRun += 2 * autocovariance(i) * (1 - i / (lags + 1));
   longRun /= n;

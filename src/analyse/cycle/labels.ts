@@ -23,3 +23,16 @@ export function filledNote(count: number): string {
   const what = count === 1 ? 'value was' : 'values were';
   return `${count} missing ${what} filled by straight-line interpolation before filtering.`;
 }
+
+export function untestedNote(reason: string): string {
+  return `Stationarity not tested: ${reason}.`;
+}
+
+export function stationaritySummary(level: boolean, differences: boolean, constantVariance: boolean): string {
+  const mean = level
+    ? 'stationary in mean'
+    : differences
+      ? 'stationary in mean after differencing (it wanders, as a trending series does)'
+      : 'not stationary in mean even after differencing';
+  return `${mean}; ${constantVariance ? 'stationary in variance' : 'variance changes over time'}`;
+}

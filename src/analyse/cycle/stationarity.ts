@@ -1,3 +1,4 @@
+import {stationaritySummary} from './labels.js';
 import type {Stationarity} from './types.js';
 import {augmentedDickeyFuller} from './augmentedDickeyFuller.js';
 import {kpss} from './kpss.js';
@@ -15,8 +16,9 @@ import {varianceRatio} from './varianceRatio.js';
  *
  * Reference: see {@link augmentedDickeyFuller}, {@link kpss}, {@link varianceRatio}.
  *
- * Complexity: O(n·maxLag³). NaN policy: rejects NaN in `values` (fill first); skips NaN in `irregular`.
- * Returns null with a reason when a test cannot run (too short, constant).
+ * Complexity: O(n·maxLag²). NaN policy: rejects NaN in `values` (fill first); skips NaN in `irregular`.
+ * Returns `{ok: false, reason}` when ADF or the variance test cannot run (too short, constant); KPSS is left out
+ * when it alone cannot run.
  */
 export function stationarity(
   values: Float64Array,
@@ -26,8 +28,6 @@ export function stationarity(
   try {
     const level = augmentedDickeyFuller(values);
     const differences = augmentedDickeyFuller(diff);
-    const kpssLevel = kpss(values);
-    const kpssDifferences = kpss(diff);
     const ratio = varianceRatio(irregular ?? diff);
     const result: Stationarity = {
       test: 'augmented Dickey-Fuller, constant, lag by AIC',
@@ -44,29 +44,35 @@ export function stationarity(
         constant: ratio.pValue >= 0.05,
       },
       lags: {level: level.lags, differences: differences.lags},
-      kpss: {
-        level: {statistic: kpssLevel.statistic, pValue: kpssLevel.pValue, stationary: kpssLevel.statistic < 0.463},
-        differences: {
-          statistic: kpssDifferences.statistic,
-          pValue: kpssDifferences.pValue,
-          stationary: kpssDifferences.statistic < 0.463,
-        },
-      },
+      kpss: kpssBoth(values, diff),
       summary: '',
     };
-    result.summary = summarise(result);
+    result.summary = stationaritySummary(
+      result.level.stationary,
+      result.differences.stationary,
+      result.variance.constant,
+    );
     return {ok: true, result};
   } catch (error) {
-    return {ok: false, reason: error instanceof Error ? error.message : String(error)};
+    if (!(error instanceof RangeError)) throw error;
+    return {ok: false, reason: error.message};
   }
 }
 
-function summarise(s: Stationarity): string {
-  const mean = s.level.stationary
-    ? 'stationary in mean'
-    : s.differences.stationary
-      ? 'stationary in mean after differencing (it wanders, as a trending series does)'
-      : 'not stationary in mean even after differencing';
-  const variance = s.variance.constant ? 'stationary in variance' : 'variance changes over time';
-  return `${mean}; ${variance}`;
+/** KPSS on level and differences, left out when either cannot run (a constant series or differences). */
+function kpssBoth(values: Float64Array, diff: Float64Array): Stationarity['kpss'] {
+  try {
+    const [level, differences] = [kpss(values), kpss(diff)];
+    return {
+      level: {statistic: level.statistic, pValue: level.pValue, stationary: level.statistic < 0.463},
+      differences: {
+        statistic: differences.statistic,
+        pValue: differences.pValue,
+        stationary: differences.statistic < 0.463,
+      },
+    };
+  } catch (error) {
+    if (!(error instanceof RangeError)) throw error;
+    return undefined;
+  }
 }

@@ -116,8 +116,8 @@ export function resolveStlOptions(n: number, options: StlOptions): StlResolved {
  * Why: a robust, well-understood decomposition that handles any period and changing seasonal patterns.
  * Agrees with R's `stats::stl` to about 1e−12 relative (see test/reference/stl.R).
  *
- * Complexity: O((inner · (outer + 1)) · n · (ns/sJump + nt/tJump + nl/lJump)) time, O(n + period) memory,
- * allocated once per call.
+ * Complexity: O((inner · (outer + 1)) · n · (ns/sJump + nt/tJump + nl/lJump)) time, O(n + period) memory:
+ * the four result arrays, plus a work buffer reused across calls.
  *
  * NaN policy: rejects NaN and infinities (R's `na.fail`); fill gaps first.
  *
@@ -133,15 +133,7 @@ export function stl(values: Float64Array, options: StlOptions): StlResult {
   const ns = oddAtLeast3(o.seasonalWindow);
   const nt = oddAtLeast3(o.trendWindow);
   const nl = oddAtLeast3(o.lowpassWindow);
-  const m = n + 2 * np;
-  const w = {
-    detrended: new Float64Array(m),
-    cycle: new Float64Array(m),
-    lowpass: new Float64Array(m),
-    scratch: new Float64Array(m),
-    scratch2: new Float64Array(m),
-    subWeights: new Float64Array(m),
-  };
+  const w = workspace(n + 2 * np);
   const trend = new Float64Array(n);
   const seasonal = new Float64Array(n);
   const weights = new Float64Array(n).fill(1);
@@ -159,6 +151,22 @@ export function stl(values: Float64Array, options: StlOptions): StlResult {
   const remainder = new Float64Array(n);
   for (let i = 0; i < n; i++) remainder[i] = values[i] - seasonal[i] - trend[i];
   return {seasonal, trend, remainder, weights, options: o};
+}
+
+let cached: {m: number; work: Work} | null = null;
+
+/**
+ * Six work arrays of length m, kept between calls and rebuilt only when m changes: typed-array allocation,
+ * not arithmetic, dominated short series. Safe because `stl` never re-enters itself.
+ */
+function workspace(m: number): Work {
+  if (cached === null || cached.m !== m) {
+    const buffer = new Float64Array(6 * m);
+    const view = (k: number): Float64Array => buffer.subarray(k * m, (k + 1) * m);
+    const work = {detrended: view(0), cycle: view(1), lowpass: view(2), scratch: view(3), scratch2: view(4), subWeights: view(5)};
+    cached = {m, work};
+  }
+  return cached.work;
 }
 
 function oddAtLeast3(window: number): number {
@@ -194,10 +202,10 @@ function innerPass(
   movingAverageInto(w.cycle, n + 2 * np, np, w.lowpass);
   movingAverageInto(w.lowpass, n + np + 1, np, w.scratch);
   movingAverageInto(w.scratch, n + 2, 3, w.lowpass);
-  loessInto(w.lowpass, n, nl, o.lowpassDegree, o.lowpassJump, null, w.detrended, 0, w.scratch);
+  loessInto(w.lowpass, n, nl, o.lowpassDegree, o.lowpassJump, null, w.detrended, 0);
   for (let i = 0; i < n; i++) seasonal[i] = w.cycle[np + i] - w.detrended[i];
   for (let i = 0; i < n; i++) w.detrended[i] = y[i] - seasonal[i];
-  loessInto(w.detrended, n, nt, o.trendDegree, o.trendJump, robustness, trend, 0, w.scratch);
+  loessInto(w.detrended, n, nt, o.trendDegree, o.trendJump, robustness, trend, 0);
 }
 
 /** Smooth each cycle-subseries, extended by one point at both ends, into `w.cycle` (length n + 2·np). */
@@ -218,10 +226,10 @@ function cycleSubseriesInto(
     const k = Math.trunc((n - j - 1) / np) + 1;
     for (let i = 0; i < k; i++) sub[i] = x[i * np + j];
     if (subWeights !== null) for (let i = 0; i < k; i++) subWeights[i] = robustness![i * np + j];
-    loessInto(sub, k, ns, degree, jump, subWeights, fit, 1, w.scratch);
-    const first = loessAt(sub, k, ns, degree, 0, 1, Math.min(ns, k), subWeights, w.scratch);
+    loessInto(sub, k, ns, degree, jump, subWeights, fit, 1);
+    const first = loessAt(sub, k, ns, degree, 0, 1, Math.min(ns, k), subWeights);
     fit[0] = Number.isNaN(first) ? fit[1] : first;
-    const last = loessAt(sub, k, ns, degree, k + 1, Math.max(1, k - ns + 1), k, subWeights, w.scratch);
+    const last = loessAt(sub, k, ns, degree, k + 1, Math.max(1, k - ns + 1), k, subWeights);
     fit[k + 1] = Number.isNaN(last) ? fit[k] : last;
     for (let i = 0; i < k + 2; i++) w.cycle[i * np + j] = fit[i];
   }

@@ -13,6 +13,8 @@ import type {EtsParams, EtsSpec} from './etsModel.js';
  *
  * Complexity: O(m²). NaN policy: NaN parameters are not admissible.
  */
+let polyScratch = new Float64Array(0);
+
 export function etsAdmissible(spec: EtsSpec, params: EtsParams): boolean {
   const {alpha} = params;
   const phi = spec.trend !== 'N' && spec.damped ? params.phi : 1;
@@ -29,7 +31,7 @@ export function etsAdmissible(spec: EtsSpec, params: EtsParams): boolean {
   if (!(gamma >= Math.max(1 - 1 / phi - alpha, 0) && gamma <= 1 + 1 / phi - alpha)) return false;
   if (!(alpha >= 1 - 1 / phi - (gamma * (1 - m + phi + phi * m)) / (2 * phi * m))) return false;
   if (!(beta >= -(1 - phi) * (gamma / m + alpha))) return false;
-  const poly = new Float64Array(m + 2);
+  const poly = polyScratch.length === m + 2 ? polyScratch : (polyScratch = new Float64Array(m + 2));
   poly[0] = phi * (1 - alpha - gamma);
   poly[1] = alpha + beta - alpha * phi + gamma - 1;
   for (let k = 2; k < m; k++) poly[k] = alpha + beta - alpha * phi;

@@ -18,6 +18,11 @@ export interface LeastSquaresFit {
   residualSumOfSquares: number;
   /** Observations used. */
   n: number;
+  /**
+   * Qᵀy. Because Householder QR treats columns in order, the fit on the first j columns alone has residual sum of
+   * squares Σ_{i≥j} (Qᵀy)_i², so nested models (e.g. lag-length searches) need one factorisation, not one each.
+   */
+  rotatedResponse: Float64Array;
 }
 
 export function leastSquares(y: Float64Array, columns: Float64Array[]): LeastSquaresFit {
@@ -81,5 +86,5 @@ export function leastSquares(y: Float64Array, columns: Float64Array[]): LeastSqu
     for (let c = j; c < k; c++) s += rInv[j * k + c] * rInv[j * k + c];
     standardErrors[j] = Math.sqrt(sigma2 * s);
   }
-  return {coefficients, standardErrors, residualSumOfSquares, n};
+  return {coefficients, standardErrors, residualSumOfSquares, n, rotatedResponse: b};
 }

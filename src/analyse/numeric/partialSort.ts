@@ -11,19 +11,21 @@
  * Complexity: O(n) expected, O(n²) worst case. Works in place on `a`. NaN policy: rejects NaN by contract
  * (comparisons with NaN are false, so the result is unspecified).
  */
+/** Stacks of the partial sort: sixteen levels suffice for any array length (its documented bound). */
+const indl = new Int32Array(17);
+const indu = new Int32Array(17);
+const il = new Int32Array(17);
+const iu = new Int32Array(17);
+
 export function partialSortInPlace(a: Float64Array, ind: readonly number[]): void {
   const n = a.length;
   const ni = ind.length;
   if (n < 2 || ni === 0) return;
-  // 1-based views of the paper's variables; the label numbers are those of the published code.
-  const at = (p: number): number => a[p - 1];
-  const set = (p: number, v: number): void => {
-    a[p - 1] = v;
-  };
-  const indl = new Int32Array(17);
-  const indu = new Int32Array(17);
-  const il = new Int32Array(17);
-  const iu = new Int32Array(17);
+  // Positions are 1-based as in the paper (a[p − 1] holds its a(p)); labels are those of the published code.
+  indl.fill(0);
+  indu.fill(0);
+  il.fill(0);
+  iu.fill(0);
   let jl = 1;
   let ju = ni;
   indl[1] = 1;
@@ -55,21 +57,21 @@ export function partialSortInPlace(a: Float64Array, ind: readonly number[]): voi
       case 10: {
         k = i;
         const ij = (i + j) >> 1;
-        t = at(ij);
-        if (at(i) > t) {
-          set(ij, at(i));
-          set(i, t);
-          t = at(ij);
+        t = a[ij - 1];
+        if (a[i - 1] > t) {
+          a[ij - 1] = a[i - 1];
+          a[i - 1] = t;
+          t = a[ij - 1];
         }
         l = j;
-        if (at(j) < t) {
-          set(ij, at(j));
-          set(j, t);
-          t = at(ij);
-          if (at(i) > t) {
-            set(ij, at(i));
-            set(i, t);
-            t = at(ij);
+        if (a[j - 1] < t) {
+          a[ij - 1] = a[j - 1];
+          a[j - 1] = t;
+          t = a[ij - 1];
+          if (a[i - 1] > t) {
+            a[ij - 1] = a[i - 1];
+            a[i - 1] = t;
+            t = a[ij - 1];
           }
         }
         label = 181;
@@ -77,16 +79,16 @@ export function partialSortInPlace(a: Float64Array, ind: readonly number[]): voi
       }
       case 181:
         l -= 1;
-        if (at(l) <= t) {
-          const tt = at(l);
+        if (a[l - 1] <= t) {
+          const tt = a[l - 1];
           do k += 1;
-          while (!(at(k) >= t));
+          while (!(a[k - 1] >= t));
           if (k > l) {
             label = 183;
             break;
           }
-          set(l, at(k));
-          set(k, tt);
+          a[l - 1] = a[k - 1];
+          a[k - 1] = tt;
         }
         break;
       case 183: {
@@ -130,14 +132,14 @@ export function partialSortInPlace(a: Float64Array, ind: readonly number[]): voi
           for (;;) {
             i += 1;
             if (i === j) break;
-            t = at(i + 1);
-            if (at(i) > t) {
+            t = a[i + 1 - 1];
+            if (a[i - 1] > t) {
               k = i;
               do {
-                set(k + 1, at(k));
+                a[k + 1 - 1] = a[k - 1];
                 k -= 1;
-              } while (!(t >= at(k)));
-              set(k + 1, t);
+              } while (!(t >= a[k - 1]));
+              a[k + 1 - 1] = t;
             }
           }
           label = 166;

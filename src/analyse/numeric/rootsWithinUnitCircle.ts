@@ -10,13 +10,22 @@
  * (Hyndman, Akram & Archibald 2008); a root-free test is exact, cheap and has no convergence issues.
  * Reference: P. Henrici (1974), Applied and Computational Complex Analysis, vol. 1, §6.8 (Schur–Cohn algorithm).
  *
- * Complexity: O(n²) time, O(n) memory. NaN policy: NaN in → false.
+ * Complexity: O(n²) time, O(n) memory (scratch buffers shared between calls; the input is not changed). NaN policy: NaN in → false.
  * @example rootsWithinUnitCircle(Float64Array.of(-0.5, 1)) // => true (root 0.5)
  */
-export function rootsWithinUnitCircle(coefficients: Float64Array, slack = 1e-10): boolean {
+// Scratch buffers reused across calls (the routine is called thousands of times per model fit).
+let bufA = new Float64Array(32);
+let bufB = new Float64Array(32);
+
+export function rootsWithinUnitCircle(coefficients: ArrayLike<number>, slack = 1e-10): boolean {
   let n = coefficients.length - 1;
   while (n > 0 && coefficients[n] === 0) n--;
-  let a = new Float64Array(n + 1);
+  if (bufA.length < n + 1) {
+    bufA = new Float64Array(2 * (n + 1));
+    bufB = new Float64Array(2 * (n + 1));
+  }
+  let a = bufA;
+  let b = bufB;
   let scale = 1;
   for (let k = 0; k <= n; k++) {
     a[k] = coefficients[k] * scale;
@@ -26,15 +35,17 @@ export function rootsWithinUnitCircle(coefficients: Float64Array, slack = 1e-10)
     const lead = a[n];
     const tail = a[0];
     if (!(Math.abs(tail) < Math.abs(lead))) return false;
-    const b = new Float64Array(n);
     let max = 0;
     for (let j = 0; j < n; j++) {
-      b[j] = lead * a[j + 1] - tail * a[n - 1 - j];
-      max = Math.max(max, Math.abs(b[j]));
+      const v = lead * a[j + 1] - tail * a[n - 1 - j];
+      b[j] = v;
+      if (Math.abs(v) > max) max = Math.abs(v);
     }
     // Rescale so repeated products neither overflow nor underflow.
     if (max > 0) for (let j = 0; j < n; j++) b[j] /= max;
+    const t = a;
     a = b;
+    b = t;
   }
   return !Number.isNaN(a[0]);
 }

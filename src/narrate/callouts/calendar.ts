@@ -1,22 +1,18 @@
-import {daysFromCivil, civilFromDays} from '../../time/period.js';
+import {civilFromDays} from '../../time/period.js';
+import {easterRegressor} from '../../time/calendar.js';
+import {easterSunday} from '../../time/easter.js';
 import type {Adjustment} from '../../analyse/types.js';
 import {chartId, type Draft, type Rule, type RuleContext} from '../context.js';
-import {easterSunday} from '../easterSunday.js';
 import * as say from '../wording.js';
-
-/**
- * Length of the pre-Easter window whose trade the Easter regressor spreads over March and April: 8 days,
- * the usual default of Easter regressors in seasonal-adjustment practice (common practice).
- */
-export const EASTER_WINDOW_DAYS = 8;
 
 /**
  * Calendar effects that the adjustment found significant, one plain sentence each:
  *
  * - trading days / holidays: the combined calendar effect in the review period against an average period;
- * - Easter (monthly and quarterly only): in which period(s) the latest Easter fell and by about how much it
- *   moved the series there (March falls in Q1 and April in Q2 for quarterly series), as coefficient × share of the pre-Easter window in that period (multiplicative
- *   models read the coefficient on the log scale: exp(c·share) − 1).
+ * - Easter (monthly and quarterly only): the latest Easter, whether it fell earlier or later than on average,
+ *   and how much that moved March and April (Q1 and Q2) against an average year: coefficient × the engine's
+ *   Easter regressor (time/calendar.ts, 8-day window, centred on its long-run mean), on the log scale for
+ *   multiplicative models (e^(c·x) − 1).
  *
  * Effects smaller than 0.05% (or 0.05 units) are left unsaid. Always info.
  */
@@ -56,53 +52,33 @@ function easterEffect({analysis: a, series: s, fmt, isRate}: RuleContext, model:
   if (a.frequency === 'weekly') return [];
   const monthly = a.frequency === 'monthly';
   const marchOf = (y: number) => (monthly ? y * 12 + 2 : y * 4);
-  const aprilOf = (y: number) => (monthly ? y * 12 + 3 : y * 4 + 1);
   let year = monthly ? Math.floor((a.end - 2) / 12) : Math.floor(a.end / 4);
-  let share = marchShare(year);
-  if (share < 1 && aprilOf(year) > a.end) share = marchShare(--year);
+  if (marchOf(year) + 1 > a.end) year--;
   if (marchOf(year) < a.start) return [];
-  const lift = (x: number) => (model === 'multiplicative' ? (Math.exp(coefficient * x) - 1) * 100 : coefficient * x);
-  const say1 = (x: number) => (model === 'multiplicative' ? fmt.size(x) : fmt.value(Math.abs(x), isRate ? null : s.unit));
-  const signed = (x: number) => (model === 'multiplicative' ? fmt.percent(x) : fmt.signed(x, isRate ? '%' : s.unit));
-  const {month, day} = easterSunday(year);
-  const date = fmt.dayMonth(year, month, day);
-  const march = lift(share);
-  const april = lift(1 - share);
-  const periodsAgo = a.end - (share < 1 ? aprilOf(year) : marchOf(year));
-  const base = {key: 'easter', severity: 'info' as const, chart: chartId(s.id, 'seasonal'), magnitude: 0.5, periodsAgo};
-  if (share === 1 || share === 0) {
-    const size = share === 1 ? march : april;
-    if (Math.abs(size) < 0.05) return [];
-    const p = share === 1 ? marchOf(year) : aprilOf(year);
-    return [
-      {
-        ...base,
-        text: say.easterOne({label: s.label, year, date, up: size > 0, period: fmt.period(a.frequency, p), size: say1(size)}),
-        figures: {year, marchShare: share, effect: size},
-      },
-    ];
-  }
+  // The engine's regressor: share of the pre-Easter window in March (Q1) / April (Q2), minus its long-run mean.
+  const [xMarch, xApril] = easterRegressor(a.frequency, marchOf(year), 2);
+  const effect = (x: number) => (model === 'multiplicative' ? Math.expm1(coefficient * x) * 100 : coefficient * x);
+  const march = effect(xMarch);
+  const april = effect(xApril);
   if (Math.abs(march) < 0.05 && Math.abs(april) < 0.05) return [];
+  const signed = (x: number) => (model === 'multiplicative' ? fmt.percent(x) : fmt.signed(x, isRate ? '%' : s.unit));
+  const {month, day} = civilFromDays(easterSunday(year));
   return [
     {
-      ...base,
-      text: say.easterSplit({
+      key: 'easter',
+      severity: 'info',
+      text: say.easter({
         label: s.label,
         year,
-        date,
+        date: fmt.dayMonth(year, month, day),
+        earlier: xMarch > 0,
         first: {period: fmt.period(a.frequency, marchOf(year)), change: signed(march)},
-        second: {period: fmt.period(a.frequency, aprilOf(year)), change: signed(april)},
+        second: {period: fmt.period(a.frequency, marchOf(year) + 1), change: signed(april)},
       }),
-      figures: {year, marchShare: share, marchEffect: march, aprilEffect: april},
+      figures: {year, regressorMarch: xMarch, marchEffect: march, aprilEffect: april},
+      chart: chartId(s.id, 'seasonal'),
+      magnitude: 0.5,
+      periodsAgo: a.end - (marchOf(year) + 1),
     },
   ];
-}
-
-/** Share of the {@link EASTER_WINDOW_DAYS} days before Easter Sunday that fall in March. */
-function marchShare(year: number): number {
-  const {month, day} = easterSunday(year);
-  const sunday = daysFromCivil(year, month, day);
-  let march = 0;
-  for (let k = 1; k <= EASTER_WINDOW_DAYS; k++) if (civilFromDays(sunday - k).month === 3) march++;
-  return march / EASTER_WINDOW_DAYS;
 }

@@ -26,8 +26,7 @@ export const forecastOutlookRule: Rule = {
     const words = (p: ReturnType<typeof at>) => ({
       period: fmt.period(a.frequency, p.index),
       mean: fmt.value(p.mean, s.unit),
-      low: fmt.number(p.low),
-      high: fmt.value(p.high, s.unit),
+      range: fmt.range(p.low, p.high, s.unit),
     });
     const next = at(0);
     if (!Number.isFinite(next.mean)) return [];

@@ -30,11 +30,11 @@ export const outturnRule: Rule = {
         severity,
         text: say.outturn({
           label: s.label,
+          stock: s.kind === 'stock',
           fiscalYear: o.fiscalYear,
           total: fmt.value(o.total, s.unit),
           level: o.level,
-          low: fmt.number(o.lower),
-          high: fmt.value(o.upper, s.unit),
+          range: fmt.range(o.lower, o.upper, s.unit),
           actual: say.periods(a.frequency, o.periodsActual),
           forecast: say.periods(a.frequency, o.periodsRemaining),
           target: gap === null ? null : {value: fmt.value(o.target!, s.unit), gap, gapText: fmt.size(gap)},

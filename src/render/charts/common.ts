@@ -1,4 +1,7 @@
 import type {Config} from 'vega-lite/types_unstable/config.js';
+import type {LayerSpec} from 'vega-lite/types_unstable/spec/layer.js';
+import type {UnitSpec} from 'vega-lite/types_unstable/spec/unit.js';
+import type {Field} from 'vega-lite/types_unstable/channeldef.js';
 import type {Frequency} from '../../time/period.js';
 import {periodStartDay, periodsPerYear} from '../../time/period.js';
 import type {Theme} from '../theme.js';
@@ -87,3 +90,11 @@ export function unitTitle(unit: string | null, fallback: string | null = null): 
 }
 
 export const VALUE_FORMAT = ',~r';
+
+/** One layer of a layered chart. */
+export type Layer = LayerSpec<Field> | UnitSpec<Field>;
+
+/** `[layer]` when `condition` holds, else `[]`: layers without rows are left out, as vega warns on empty extents. */
+export function when(condition: boolean, layer: Layer): Layer[] {
+  return condition ? [layer] : [];
+}

@@ -1,23 +1,23 @@
 import type {TopLevelSpec} from 'vega-lite';
 import type {TurningPoint} from '../../analyse/cycle/types.js';
-import {SCHEMA, baseConfig, epoch, finite, round, timeX, type ChartContext} from './common.js';
+import {SCHEMA, when, baseConfig, epoch, finite, round, timeX, type ChartContext} from './common.js';
 
 /** Deviation from long-run trend (percent) with dated turning points and the current phase. */
 export interface CycleInput {
   start: number;
   gap: number[];
   turningPoints: TurningPoint[];
-  /** Plain-words label of the latest phase, e.g. `above trend, rising`. */
-  phaseLabel: string;
   description: string;
 }
 
-export const TURN_KEYS = ['Peak', 'Trough', 'Peak (provisional)', 'Trough (provisional)'] as const;
+export const TURN_KEYS = ['Peak', 'Trough', 'Provisional peak', 'Provisional trough'] as const;
+
+const TURN_SHAPES = ['triangle-down', 'triangle-up', 'triangle-down', 'triangle-up'];
 
 /**
  * Cycle chart: the gap to the long-run trend as a shaded area around zero with its outline, peaks as
  * downward triangles and troughs as upward triangles (hollow when provisional), and the latest point
- * labelled with the current phase. O(n).
+ * marked (the caption names the current phase). O(n).
  */
 export function cycleChart(input: CycleInput, ctx: ChartContext): TopLevelSpec {
   const {theme, frequency} = ctx;
@@ -31,7 +31,9 @@ export function cycleChart(input: CycleInput, ctx: ChartContext): TopLevelSpec {
       k: TURN_KEYS[(p.type === 'peak' ? 0 : 1) + (p.provisional ? 2 : 0)],
     }));
   const lastIndex = values.map((r) => r.v !== null).lastIndexOf(true);
-  const last = lastIndex >= 0 ? [{...values[lastIndex], label: `Now: ${input.phaseLabel}`}] : [];
+  const last = lastIndex >= 0 ? [values[lastIndex]] : [];
+  const present = TURN_KEYS.map((k, i) => [k, i] as const).filter(([k]) => turns.some((r) => r.k === k));
+  const turnLegend = {symbolStrokeColor: theme.contrast, symbolStrokeWidth: 1.3};
   return {
     $schema: SCHEMA,
     description: input.description,
@@ -51,8 +53,7 @@ export function cycleChart(input: CycleInput, ctx: ChartContext): TopLevelSpec {
       },
       {data: {values}, mark: {type: 'line', color: theme.deep, strokeWidth: 1.6}, encoding: {x: {field: 't', type: 'temporal'}, y: {field: 'v', type: 'quantitative'}}},
       {data: {values: [{}]}, mark: {type: 'rule', color: theme.ink, strokeWidth: 0.8}, encoding: {y: {datum: 0}}},
-      // Layers without rows are left out: vega warns about the empty extent otherwise.
-      ...(turns.length === 0 ? [] : [{
+      ...when(turns.length > 0, {
         data: {values: turns},
         mark: {type: 'point', size: 60, strokeWidth: 1.3, color: theme.contrast},
         encoding: {
@@ -61,27 +62,22 @@ export function cycleChart(input: CycleInput, ctx: ChartContext): TopLevelSpec {
           shape: {
             field: 'k',
             type: 'nominal',
-            scale: {domain: [...TURN_KEYS], range: ['triangle-down', 'triangle-up', 'triangle-down', 'triangle-up']},
-            legend: turns.length > 0 ? {symbolStrokeColor: theme.contrast} : null,
+            scale: {domain: present.map(([k]) => k), range: present.map(([, i]) => TURN_SHAPES[i])},
+            legend: turnLegend,
           },
           fill: {
             field: 'k',
             type: 'nominal',
-            scale: {domain: [...TURN_KEYS], range: [theme.contrast, theme.contrast, 'white', 'white']},
-            legend: null,
+            scale: {domain: present.map(([k]) => k), range: present.map(([, i]) => (i < 2 ? theme.contrast : 'white'))},
+            legend: turnLegend,
           },
         },
-      }]),
-      ...(last.length === 0 ? [] : [{
+      }),
+      ...when(last.length > 0, {
         data: {values: last},
-        layer: [
-          {mark: {type: 'point', filled: true, size: 40, color: theme.deep}, encoding: {x: {field: 't', type: 'temporal'}, y: {field: 'v', type: 'quantitative'}}},
-          {
-            mark: {type: 'text', align: 'right', dx: -6, dy: -10, fontSize: 10, fontWeight: 'bold', color: theme.deep},
-            encoding: {x: {field: 't', type: 'temporal'}, y: {field: 'v', type: 'quantitative'}, text: {field: 'label'}},
-          },
-        ],
-      }]),
+        mark: {type: 'point', filled: true, size: 45, color: theme.deep},
+        encoding: {x: {field: 't', type: 'temporal'}, y: {field: 'v', type: 'quantitative'}},
+      }),
     ],
   };
 }

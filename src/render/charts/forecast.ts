@@ -1,7 +1,7 @@
 import type {TopLevelSpec} from 'vega-lite';
 import type {ForecastResult} from '../../analyse/forecast/types.js';
 import {periodsPerYear} from '../../time/period.js';
-import {SCHEMA, VALUE_FORMAT, baseConfig, epoch, finite, round, timeX, unitTitle, type ChartContext} from './common.js';
+import {SCHEMA, when, VALUE_FORMAT, baseConfig, epoch, finite, round, timeX, unitTitle, type ChartContext} from './common.js';
 
 /** Recent actuals, the forecast with its bands, and the back-test's one-step-ahead forecasts. */
 export interface ForecastInput {
@@ -60,7 +60,7 @@ export function forecastChart(input: ForecastInput, ctx: ChartContext): TopLevel
     config: baseConfig(theme),
     layer: [
       // Outer band first so the inner band is drawn on top of it.
-      ...bandNames.map((name, k) => ({
+      ...bandNames.map((name) => ({
         data: {values: bands.filter((b) => b.b === name)},
         mark: {type: 'area' as const},
         encoding: {
@@ -70,28 +70,31 @@ export function forecastChart(input: ForecastInput, ctx: ChartContext): TopLevel
             type: 'quantitative' as const,
             scale: {zero: false},
             title: unitTitle(ctx.unit),
-            axis: k === 0 ? {format: VALUE_FORMAT} : null,
+            axis: {format: VALUE_FORMAT},
           },
           y2: {field: 'hi'},
           fill: {field: 'b', type: 'nominal' as const, scale: {domain: bandNames, range: bandColours}},
         },
       })),
       {
-        data: {values: [...actual, ...mean]},
-        mark: {type: 'line'},
+        data: {values: actual},
+        mark: {type: 'line', strokeWidth: 1.4},
         encoding: {
           x: {field: 't', type: 'temporal'},
           y: {field: 'v', type: 'quantitative'},
           color: {field: 's', type: 'nominal', scale: {domain: keys, range: [theme.ink, theme.accent, theme.contrast].slice(0, keys.length)}},
-          strokeDash: {field: 's', type: 'ordinal', sort: [...FORECAST_KEYS.slice(0, 2)], scale: {domain: FORECAST_KEYS.slice(0, 2), range: [[1, 0], [5, 3]]}, legend: null},
-          strokeWidth: {field: 's', type: 'ordinal', sort: [...FORECAST_KEYS.slice(0, 2)], scale: {domain: FORECAST_KEYS.slice(0, 2), range: [1.4, 2]}, legend: null},
         },
       },
-      ...(backtest.length === 0 ? [] : [{
+      {
+        data: {values: mean},
+        mark: {type: 'line', strokeWidth: 2, strokeDash: [5, 3]},
+        encoding: {x: {field: 't', type: 'temporal'}, y: {field: 'v', type: 'quantitative'}, color: {field: 's', type: 'nominal'}},
+      },
+      ...when(backtest.length > 0, {
         data: {values: backtest},
         mark: {type: 'point', shape: 'circle', filled: false, size: 26, strokeWidth: 1.2},
-        encoding: {x: {field: 't', type: 'temporal'}, y: {field: 'v', type: 'quantitative'}, color: {field: 's', type: 'nominal' as const}},
-      }]),
+        encoding: {x: {field: 't', type: 'temporal'}, y: {field: 'v', type: 'quantitative'}, color: {field: 's', type: 'nominal'}},
+      }),
     ],
   };
 }

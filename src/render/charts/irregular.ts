@@ -1,6 +1,6 @@
 import type {TopLevelSpec} from 'vega-lite';
 import type {Outlier} from '../../analyse/decompose/types.js';
-import {SCHEMA, baseConfig, epoch, finite, round, timeX, type ChartContext} from './common.js';
+import {SCHEMA, when, baseConfig, epoch, finite, round, timeX, type ChartContext} from './common.js';
 
 /** Irregular component with the flagged points. */
 export interface IrregularInput {
@@ -37,7 +37,8 @@ export function irregularChart(input: IrregularInput, ctx: ChartContext): TopLev
       label: input.labels[o.index] ?? '',
       above: (input.irregular[o.index] ?? 0) >= (input.model === 'multiplicative' ? 1 : 0),
     }));
-  const kinds = Object.values(OUTLIER_KINDS);
+  const shapes: Record<string, string> = {[OUTLIER_KINDS.additive]: 'circle', [OUTLIER_KINDS['level-shift']]: 'square', [OUTLIER_KINDS.temporary]: 'triangle-up'};
+  const kinds = Object.values(OUTLIER_KINDS).filter((k) => flagged.some((r) => r.k === k));
   return {
     $schema: SCHEMA,
     description: input.description,
@@ -56,11 +57,7 @@ export function irregularChart(input: IrregularInput, ctx: ChartContext): TopLev
         },
       },
       {data: {values: [{}]}, mark: {type: 'rule', color: theme.ink, strokeWidth: 0.8}, encoding: {y: {datum: 0}}},
-      // Layers without rows are left out: vega warns about the empty extent otherwise.
-      ...(flagged.length === 0
-        ? []
-        : [
-      {
+      ...when(flagged.length > 0, {
         data: {values: flagged},
         layer: [
           {
@@ -71,23 +68,20 @@ export function irregularChart(input: IrregularInput, ctx: ChartContext): TopLev
               shape: {
                 field: 'k',
                 type: 'nominal',
-                scale: {domain: kinds, range: ['circle', 'square', 'triangle-up']},
-                legend: flagged.length > 0 ? {symbolFillColor: theme.contrast, symbolStrokeColor: theme.contrast} : null,
+                scale: {domain: kinds, range: kinds.map((k) => shapes[k])},
+                legend: {symbolFillColor: theme.contrast, symbolStrokeColor: theme.contrast},
               },
             },
           },
-          ...[true, false].filter((above) => flagged.some((r) => r.above === above)).map((above) => ({
-            transform: [{filter: {field: 'above', equal: above}}],
-            mark: {type: 'text' as const, fontSize: 9, color: theme.ink, dy: above ? -10 : 12},
-            encoding: {
-              x: {field: 't', type: 'temporal' as const},
-              y: {field: 'v', type: 'quantitative' as const},
-              text: {field: 'label'},
-            },
-          })),
+          ...[true, false].flatMap((above) =>
+            when(flagged.some((r) => r.above === above), {
+              transform: [{filter: {field: 'above', equal: above}}],
+              mark: {type: 'text', fontSize: 9, color: theme.ink, dy: above ? -10 : 12},
+              encoding: {x: {field: 't', type: 'temporal'}, y: {field: 'v', type: 'quantitative'}, text: {field: 'label'}},
+            }),
+          ),
         ],
-      },
-          ]),
+      }),
     ],
   };
 }

@@ -42,12 +42,15 @@ export function overviewChart(input: OverviewInput, ctx: ChartContext): TopLevel
     autosize: {type: 'fit', contains: 'padding'},
     config: baseConfig(theme),
     data: {values},
-    mark: {type: 'line', interpolate: 'linear'},
+    // A one-entry ordinal width scale gives NaN widths, so a single line takes its width from the mark.
+    mark: {type: 'line', interpolate: 'linear', ...(domain.length === 1 ? {strokeWidth: styles[domain[0]][1]} : {})},
     encoding: {
       x: timeX(ctx.frequency, input.original.length),
       y: {field: 'v', type: 'quantitative', scale: {zero: false}, title: unitTitle(ctx.unit), axis: {format: VALUE_FORMAT}},
       color: {field: 's', type: 'nominal', scale: {domain, range: domain.map((s) => styles[s][0])}},
-      strokeWidth: {field: 's', type: 'ordinal', sort: domain, scale: {domain, range: domain.map((s) => styles[s][1])}, legend: null},
+      ...(domain.length > 1
+        ? {strokeWidth: {field: 's', type: 'ordinal', sort: domain, scale: {domain, range: domain.map((s) => styles[s][1])}, legend: null}}
+        : {}),
       order: {field: 's', sort: 'ascending'},
     },
   };

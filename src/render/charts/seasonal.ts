@@ -43,9 +43,14 @@ export function seasonalChart(input: SeasonalInput, ctx: ChartContext): TopLevel
     autosize: {type: 'fit', contains: 'padding'},
     config: {...baseConfig(ctx.theme), legend: {...baseConfig(ctx.theme).legend, ...legendRight(ctx.theme)}},
     data: {values},
-    mark: {type: 'line', point: periodsPerYear[frequency] <= 12 ? {size: 14, filled: true} : false},
+    mark: {
+      type: 'line',
+      point: periodsPerYear[frequency] <= 12 ? {size: 14, filled: true} : false,
+      // A one-entry ordinal width scale gives NaN widths, so a single year takes its width from the mark.
+      ...(years.length === 1 ? {strokeWidth: widths[0]} : {}),
+    },
     encoding: {
-      x: {field: 'season', type: 'ordinal', sort: ctx.seasonNames, title: null, axis: {labelAngle: 0, grid: false}},
+      x: {field: 'season', type: 'ordinal', sort: ctx.seasonNames, title: null, axis: {labelAngle: 0, labelFontSize: 8.5, grid: false}},
       y: {
         field: 'v',
         type: 'quantitative',
@@ -53,7 +58,7 @@ export function seasonalChart(input: SeasonalInput, ctx: ChartContext): TopLevel
         axis: {format: ',~r'},
       },
       color: {field: 'year', type: 'ordinal', scale: {domain: years, range: ramp(ctx.theme, years.length)}},
-      strokeWidth: {field: 'year', type: 'ordinal', scale: {domain: years, range: widths}, legend: null},
+      ...(years.length > 1 ? {strokeWidth: {field: 'year', type: 'ordinal', scale: {domain: years, range: widths}}} : {}),
     },
   };
 }

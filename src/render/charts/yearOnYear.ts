@@ -23,8 +23,8 @@ export function yearOnYearChart(input: YearOnYearInput, ctx: ChartContext): TopL
     const v = round(finite(value));
     return v === null ? [] : [{t: epoch(frequency, input.start + first + i), v, s: v < 0 ? 'Fall' : 'Rise'}];
   });
-  // Bars on a continuous UTC axis: width from the plot width (axis labels take ~50 px), at least 1 px.
-  const bar = round(Math.max(1, ((ctx.width - 50) / Math.max(1, values.length)) * 0.72))!;
+  // Bars on a continuous UTC axis: width from the plot width (axis labels take ~50 px), 1 to 16 px.
+  const bar = round(Math.min(16, Math.max(1, ((ctx.width - 50) / Math.max(1, values.length)) * 0.72)))!;
   const x = timeX(frequency, input.yearOnYear.length - first);
   return {
     $schema: SCHEMA,

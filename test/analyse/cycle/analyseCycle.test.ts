@@ -98,6 +98,20 @@ describe('analyseCycle', () => {
     );
   });
 
+  it('dates weekly growth cycles with the scaled rule and tests stationarity of a wave', () => {
+    // Invented series: a 120-week wave around a gentle rise, plus a fast wiggle.
+    const wave = Float64Array.from({length: 260}, (_, t) => 100 + 5 * Math.sin((2 * Math.PI * t) / 120) + 0.05 * t);
+    const x = wave.map((v, t) => v + Math.sin(t * 1.3));
+    const r = analyseCycle(x, {frequency: 'weekly', options: {method: 'hp', lambda: null}});
+    if (!r.ok) throw new Error(r.reason);
+    expect(r.cycle.options.lambda).toBe(1600 * 13 ** 4);
+    // Crests of the wave at weeks 30 and 150, troughs at 90 and 210; the HP gap moves them by a few weeks.
+    const dated = r.cycle.turningPoints.map((t) => t.index);
+    [30, 90, 150, 210].forEach((expected, i) => expect(Math.abs(dated[i] - expected)).toBeLessThanOrEqual(5));
+    expect(r.cycle.stationarity).not.toBeNull();
+    expect(r.cycle.realTime?.gap.length).toBe(52);
+  });
+
   it('honours an explicit λ', () => {
     const r = analyseCycle(gdp, {...quarterlyHp, options: {method: 'hp', lambda: 100}});
     if (!r.ok) throw new Error(r.reason);

@@ -15,6 +15,7 @@ describe('gapPercent', () => {
     const r = gapPercent(Float64Array.of(-2, 2, 6), Float64Array.of(0, 2, 4));
     expect(r.scale).toBe('mean-absolute');
     expect(Array.from(r.gap)).toEqual([-100 * (2 / (10 / 3)), 0, 100 * (2 / (10 / 3))]);
+    expect(r.meanAbsolute).toBeCloseTo(10 / 3, 14);
     expect(Array.from(gapPercent(new Float64Array(3), new Float64Array(3)).gap)).toEqual([0, 0, 0]);
   });
 });

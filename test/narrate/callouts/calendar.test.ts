@@ -16,7 +16,7 @@ function withCalendar(end: number, effectAtEnd: number, regressors: CalendarRegr
   return makeAnalysis(new Array<number>(n).fill(100), {adjustment, frequency}, end);
 }
 
-// Easter dates: 2024-03-31, 2025-04-20, 2026-04-05 (python-dateutil, see easterSunday.test.ts).
+// Easter dates 2024-03-31, 2025-04-20, 2026-04-05 agree with python-dateutil 2.9.0 `easter(year)`.
 describe('calendar rule', () => {
   it('states the working-day effect in the review period', () => {
     const drafts = runRule(calendarRule, withCalendar(monthIndex(2026, 10), 1.014, [regressor('working-days', 0.01)]));
@@ -25,31 +25,37 @@ describe('calendar rule', () => {
     ]);
   });
 
-  it('splits the Easter effect when the pre-Easter window straddles March and April (2026)', () => {
-    // Window 28 March – 4 April 2026: 4 of 8 days in March → exp(0.04 × 0.5) − 1 = 2.02% each.
+  // The engine's Easter regressor (time/calendar.ts): March share of the 8 days before Easter minus its
+  // 1800–2299 mean, 0.373 (computed by hand with the same computus). 2026: 4 of 8 days in March → x = +0.127.
+  it('states how an Easter earlier than average moved March and April (2026)', () => {
     const drafts = runRule(calendarRule, withCalendar(monthIndex(2026, 10), 1, [regressor('easter', 0.04)]));
     expect(drafts.map((d) => d.text)).toEqual([
-      'Easter 2026 fell on 5 April, so its effect was split: about +2.0% on Net sales in March 2026 and +2.0% in April 2026.',
+      'Easter 2026 fell on 5 April, earlier than on average: against an average year that moved Net sales by about +0.5% in March 2026 and -0.5% in April 2026.',
     ]);
-    expect(drafts[0].figures.marchShare).toBe(0.5);
+    expect(drafts[0].figures.marchEffect).toBeCloseTo(Math.expm1(0.04 * 0.127) * 100, 10);
   });
 
-  it('puts an early Easter in March (2024) and a late one in April (2025)', () => {
-    const march = runRule(calendarRule, withCalendar(monthIndex(2024, 10), 1, [regressor('easter', 0.04)]));
-    expect(march[0].text).toBe('Easter 2024 fell on 31 March, which raised Net sales in March 2024 by about 4.1%.');
-    const april = runRule(calendarRule, withCalendar(monthIndex(2025, 10), 1, [regressor('easter', 0.04)]));
-    expect(april[0].text).toBe('Easter 2025 fell on 20 April, which raised Net sales in April 2025 by about 4.1%.');
+  it('handles an early Easter (2024) and a late one (2025)', () => {
+    const early = runRule(calendarRule, withCalendar(monthIndex(2024, 10), 1, [regressor('easter', 0.04)]));
+    expect(early[0].text).toBe(
+      'Easter 2024 fell on 31 March, earlier than on average: against an average year that moved Net sales by about +2.5% in March 2024 and -2.5% in April 2024.',
+    );
+    const late = runRule(calendarRule, withCalendar(monthIndex(2025, 10), 1, [regressor('easter', 0.04)]));
+    expect(late[0].text).toBe(
+      'Easter 2025 fell on 20 April, later than on average: against an average year that moved Net sales by about -1.5% in March 2025 and +1.5% in April 2025.',
+    );
   });
 
   it('uses the previous Easter while this year’s April is still to come', () => {
-    // Review period March 2025: Easter 2025 (20 April) lies ahead, so Easter 2024 is described.
     const drafts = runRule(calendarRule, withCalendar(monthIndex(2025, 3), 1, [regressor('easter', 0.04)]));
-    expect(drafts[0].text).toBe('Easter 2024 fell on 31 March, which raised Net sales in March 2024 by about 4.1%.');
+    expect(drafts[0].text).toContain('Easter 2024 fell on 31 March');
   });
 
   it('reads March as Q1 and April as Q2 for quarterly series', () => {
     const drafts = runRule(calendarRule, withCalendar(quarterIndex(2025, 3), 1, [regressor('easter', -0.02)], 'quarterly'));
-    expect(drafts[0].text).toBe('Easter 2025 fell on 20 April, which lowered Net sales in Q2 2025 by about 2.0%.');
+    expect(drafts[0].text).toBe(
+      'Easter 2025 fell on 20 April, later than on average: against an average year that moved Net sales by about +0.7% in Q1 2025 and -0.7% in Q2 2025.',
+    );
   });
 
   it('says nothing about effects that are not significant', () => {

@@ -64,10 +64,17 @@ describe('outturn rule', () => {
   it('sets the fiscal-year outturn against the target', () => {
     const [d] = runRule(outturnRule, makeAnalysis(history, {outturn: outturn()}));
     expect(d.text).toBe(
-      'FY2026/27 is on course for 24,100 EUR k of Net sales (80% range 23,400 to 24,800 EUR k), from 7 months of actuals and 5 months of forecast: 2.3% below the target of 24,670 EUR k.',
+      'On current forecasts, Net sales will total 24,100 EUR k in FY2026/27 (80% range 23,400 to 24,800 EUR k), from 7 months of actuals and 5 months of forecast: 2.3% below the target of 24,670 EUR k.',
     );
     expect(d.severity).toBe('watch'); // −2.31% ≤ −2%
     expect(d.figures.gapPct).toBeCloseTo(-2.3105, 4);
+  });
+
+  it('gives a stock its year-end level', () => {
+    const [d] = runRule(outturnRule, makeAnalysis(history, {outturn: outturn({total: 3731.6, lower: 3600, upper: 3850, target: null, gapPct: null})}), {
+      series: {label: 'Inventory', kind: 'stock'},
+    });
+    expect(d.text).toBe('On current forecasts, Inventory will end FY2026/27 at 3,732 EUR k (80% range 3,600 to 3,850 EUR k).');
   });
 
   it('grades the gap: alert from −5%, info above target, watch when the target is above the whole range', () => {
@@ -80,7 +87,7 @@ describe('outturn rule', () => {
   it('uses singular periods and says "in line with" for a gap under 0.5%', () => {
     const [d] = runRule(outturnRule, makeAnalysis(history, {outturn: outturn({periodsActual: 11, periodsRemaining: 1, gapPct: 0.2})}));
     expect(d.text).toBe(
-      'FY2026/27 is on course for 24,100 EUR k of Net sales (80% range 23,400 to 24,800 EUR k), from 11 months of actuals and 1 month of forecast: in line with the target of 24,670 EUR k.',
+      'On current forecasts, Net sales will total 24,100 EUR k in FY2026/27 (80% range 23,400 to 24,800 EUR k), from 11 months of actuals and 1 month of forecast: in line with the target of 24,670 EUR k.',
     );
   });
 });

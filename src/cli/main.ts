@@ -1,0 +1,196 @@
+#!/usr/bin/env node
+import {realpathSync} from 'node:fs';
+import {availableParallelism} from 'node:os';
+import path from 'node:path';
+import {fileURLToPath} from 'node:url';
+import {Command, CommanderError} from 'commander';
+import {loadPlan} from '../config/index.js';
+import type {OutputFormat, Plan} from '../config/plan.js';
+import {formatProblem, InputError} from '../errors.js';
+import type {Logger} from '../log.js';
+import {openBrowser, type PdfBrowser} from '../render/index.js';
+import {build, check} from '../run.js';
+import {packageRoot, toolVersion} from '../version.js';
+import {initPack} from './init.js';
+import {parseFormats, parseJobs} from './options.js';
+import {expandPeriodRange, isPeriodRange} from './periods.js';
+
+/** Where the CLI writes: the process streams in the bin, string collectors in tests. */
+export interface Io {
+  stdout: {write(text: string): unknown};
+  stderr: {write(text: string): unknown};
+  /** Environment for EBBFLOW_DEBUG. Default: `process.env`. */
+  env?: NodeJS.ProcessEnv;
+}
+
+interface BuildOptions {
+  period?: string;
+  out?: string;
+  formats?: OutputFormat[];
+  force: boolean;
+  jobs: number;
+}
+
+/** Progress and warnings go to stderr so stdout carries only results (folders, next steps). */
+function streamLogger(io: Io): Logger {
+  return {
+    info: (message) => io.stderr.write(`${message}\n`),
+    warn: (message) => io.stderr.write(`warning: ${message}\n`),
+  };
+}
+
+/**
+ * Report a failure and give the exit code: 2 with every problem for bad input, 1 with one line for
+ * anything else (the stack only when EBBFLOW_DEBUG=1).
+ */
+function fail(error: unknown, io: Io, kept = 0): number {
+  if (error instanceof InputError) {
+    for (const p of error.problems) io.stderr.write(`${formatProblem(p)}\n`);
+    const n = error.problems.length;
+    const after = kept > 0 ? `the ${kept} period folder${kept === 1 ? '' : 's'} built before were kept` : 'nothing was written';
+    io.stderr.write(`${n} problem${n === 1 ? '' : 's'}; ${after}\n`);
+    return 2;
+  }
+  const message = error instanceof Error ? error.message : String(error);
+  io.stderr.write(`ebbflow: ${message.split('\n')[0]}\n`);
+  if ((io.env ?? process.env).EBBFLOW_DEBUG === '1' && error instanceof Error && error.stack) io.stderr.write(`${error.stack}\n`);
+  return 1;
+}
+
+/** Validate every pack first (so bad input stops the batch before anything is written), then build in order. */
+async function runBuild(packs: string[], opts: BuildOptions, io: Io): Promise<number> {
+  const log = streamLogger(io);
+  const jobs: {packFile: string; plan: Plan; period: string | undefined}[] = [];
+  const problems: InputError['problems'] = [];
+  for (const packFile of packs) {
+    try {
+      const range = opts.period !== undefined && isPeriodRange(opts.period);
+      const plan = await loadPlan(packFile, {period: range ? undefined : opts.period, outDir: opts.out, formats: opts.formats});
+      const periods = range ? expandPeriodRange(plan.frequency, opts.period ?? '') : [opts.period];
+      for (const period of periods) jobs.push({packFile, plan, period});
+    } catch (e) {
+      if (!(e instanceof InputError)) return fail(e, io);
+      problems.push(...e.problems);
+    }
+  }
+  if (problems.length > 0) return fail(new InputError(problems), io);
+
+  // One browser for the whole batch (per browser setting) instead of one launch per period.
+  const browsers = new Map<string | null, PdfBrowser | {missing: string}>();
+  const shareBrowser = jobs.length > 1;
+  let built = 0;
+  try {
+    for (const job of jobs) {
+      let browser: PdfBrowser | {missing: string} | undefined;
+      if (shareBrowser && job.plan.formats.includes('pdf')) {
+        browser = browsers.get(job.plan.browser) ?? (await openBrowser(job.plan.browser));
+        browsers.set(job.plan.browser, browser);
+      }
+      const summary = await build(
+        {packFile: job.packFile, period: job.period, outDir: opts.out, formats: opts.formats, force: opts.force, jobs: opts.jobs, browser},
+        log,
+      );
+      io.stdout.write(`${summary.folder}\n`);
+      built++;
+    }
+  } catch (e) {
+    return fail(e, io, built);
+  } finally {
+    for (const b of browsers.values()) if (!('missing' in b)) await b.close();
+  }
+  return 0;
+}
+
+/** Check every pack, collecting the problems of all of them. */
+async function runCheck(packs: string[], io: Io): Promise<number> {
+  const log = streamLogger(io);
+  const problems: InputError['problems'] = [];
+  for (const packFile of packs) {
+    try {
+      await check(packFile, log);
+    } catch (e) {
+      if (!(e instanceof InputError)) return fail(e, io);
+      problems.push(...e.problems);
+    }
+  }
+  return problems.length > 0 ? fail(new InputError(problems), io) : 0;
+}
+
+async function runInit(dir: string, io: Io): Promise<number> {
+  try {
+    const {packFile, files} = await initPack(dir, path.join(packageRoot(), 'sample-config'));
+    const shown = path.relative(process.cwd(), packFile) || packFile;
+    io.stdout.write(`Wrote a starter pack (${files.length} files) to ${path.dirname(shown)}\n`);
+    io.stdout.write(`Next: ebbflow build ${shown}\n`);
+    return 0;
+  } catch (e) {
+    return fail(e, io);
+  }
+}
+
+/**
+ * The command line: `ebbflow build|check|init`. Returns the exit code instead of exiting, so tests
+ * can run it in-process: 0 success, 1 the run failed while working, 2 bad input or usage.
+ */
+export async function main(argv: string[], io: Io): Promise<number> {
+  let code = 0;
+  const program = new Command('ebbflow')
+    .description('Trend review packs: seasonal adjustment, trend and cycle, forecasts, and a branded report from a YAML pack file.')
+    .version(toolVersion, '-V, --version', 'print the version')
+    .helpOption('-h, --help', 'show help')
+    .helpCommand('help [command]', 'show help for a command')
+    .exitOverride()
+    .configureOutput({writeOut: (s) => io.stdout.write(s), writeErr: (s) => io.stderr.write(s)})
+    .showHelpAfterError('(add --help for usage)');
+
+  program
+    .command('build')
+    .description('build the report for each pack file and write it under <out>/<pack id>/<period>/')
+    .argument('<pack...>', 'pack files (YAML)')
+    .option('-p, --period <period>', 'review period (2026-10, 2026-Q3, 2026-W41) or a range A..B built one by one; default: the pack\'s, else the last period with data')
+    .option('-o, --out <dir>', 'output folder; default: the pack\'s outDir, else ./out')
+    .option('-f, --formats <list>', 'comma-separated outputs from html, pdf, json, csv, xlsx; default: the pack\'s', parseFormats)
+    .option('--force', 'replace a period folder that already exists', false)
+    .option('-j, --jobs <n>', 'worker threads for the analysis', parseJobs, availableParallelism())
+    .addHelpText('after', '\nExamples:\n  ebbflow build pack.yaml\n  ebbflow build pack.yaml --period 2026-01..2026-10 --formats html,json --force\n')
+    .action(async (packs: string[], opts: BuildOptions) => {
+      code = await runBuild(packs, opts, io);
+    });
+
+  program
+    .command('check')
+    .description('validate pack files and their data, print every problem, write nothing')
+    .argument('<pack...>', 'pack files (YAML)')
+    .action(async (packs: string[]) => {
+      code = await runCheck(packs, io);
+    });
+
+  program
+    .command('init')
+    .description('write a starter pack with example data into a new folder')
+    .argument('[dir]', 'folder to create', './ebbflow-pack')
+    .action(async (dir: string) => {
+      code = await runInit(dir, io);
+    });
+
+  try {
+    await program.parseAsync(argv, {from: 'user'});
+  } catch (e) {
+    if (e instanceof CommanderError) return e.code === 'commander.helpDisplayed' || e.code === 'commander.version' ? 0 : 2;
+    return fail(e, io);
+  }
+  return code;
+}
+
+/** True when this file is the program being run (also through npm's bin symlink), not an import. */
+function isEntryPoint(): boolean {
+  const script = process.argv[1];
+  if (!script) return false;
+  try {
+    return realpathSync(script) === fileURLToPath(import.meta.url);
+  } catch {
+    return false;
+  }
+}
+
+if (isEntryPoint()) process.exitCode = await main(process.argv.slice(2), {stdout: process.stdout, stderr: process.stderr});

@@ -1,0 +1,37 @@
+import {readFileSync} from 'node:fs';
+import {describe, expect, it} from 'vitest';
+import {nelderMead} from '../../../src/analyse/numeric/nelderMead.js';
+
+// Fixture: test/reference/benchmarks.json from test/reference/benchmarks.R, R's optim(start, f, method = "Nelder-Mead")
+// with its defaults (reltol √ε, coefficients 1, 0.5, 2; maxit 500).
+const ref = JSON.parse(readFileSync(new URL('../../reference/benchmarks.json', import.meta.url), 'utf8'));
+const functions: Record<string, (x: Float64Array) => number> = {
+  Rosenbrock: (x) => 100 * (x[1] - x[0] * x[0]) ** 2 + (1 - x[0]) ** 2,
+  'weighted quadratic': (x) => (x[0] - 1) ** 2 + 10 * (x[1] + 2) ** 2 + 100 * (x[2] - 3) ** 2 + 0.5,
+};
+
+describe('nelderMead', () => {
+  for (const c of ref.optim) {
+    it(`${c.name}: same minimum, value and evaluation count as R's optim (Nelder-Mead)`, () => {
+      const r = nelderMead(functions[c.name], Float64Array.from(c.start));
+      r.x.forEach((v, i) => expect(v).toBeCloseTo(c.par[i], 10));
+      expect(r.value).toBeCloseTo(c.value, 14);
+      expect(r.evaluations).toBe(c.counts);
+      expect(r.converged).toBe(true);
+    });
+  }
+
+  it('treats an infinite objective as infeasible and stays inside the region', () => {
+    const r = nelderMead((x) => (x[0] < 0 || x[1] < 0 ? Infinity : (x[0] + 1) ** 2 + (x[1] - 2) ** 2), Float64Array.of(1, 1));
+    expect(r.x[0]).toBeGreaterThanOrEqual(0);
+    expect(r.x[0]).toBeLessThan(1e-3);
+    expect(r.x[1]).toBeCloseTo(2, 3);
+  });
+
+  it('does not change the start vector and rejects a non-finite start', () => {
+    const start = Float64Array.of(3, 4);
+    nelderMead((x) => x[0] ** 2 + x[1] ** 2, start);
+    expect([...start]).toEqual([3, 4]);
+    expect(() => nelderMead(() => NaN, start)).toThrow(/objective not finite/);
+  });
+});

@@ -1,0 +1,81 @@
+import {describe, expect, test} from 'vitest';
+import {specToSvg} from '../../src/render/svg.js';
+import {overviewChart} from '../../src/render/charts/overview.js';
+import {themeFor} from '../../src/render/theme.js';
+import {vegaLocale} from '../../src/render/locale.js';
+import {measureText} from '../../src/render/textMetrics.js';
+import {monthIndex} from '../../src/time/period.js';
+import type {ChartContext} from '../../src/render/charts/common.js';
+import type {TopLevelSpec} from 'vega-lite';
+
+const theme = themeFor('#1d6f64', 'Liberation Sans');
+const ctx: ChartContext = {frequency: 'monthly', theme, width: 320, height: 120, unit: null, seasonNames: []};
+// Three months starting January 2024, so the axis shows month names.
+const spec = overviewChart({start: monthIndex(2024, 1), original: [5, 7, 6], adjusted: null, trend: null, description: 'd'}, ctx);
+const options = {locale: 'en-GB', font: 'Liberation Sans', idPrefix: 'chart-x', title: 'Title <b>', description: 'Desc & more'};
+
+describe('specToSvg', () => {
+  test('same bytes twice', async () => {
+    const a = await specToSvg(spec, options);
+    const b = await specToSvg(spec, options);
+    expect(a).toBe(b);
+  });
+
+  test('January data is labelled Jan in any time zone', async () => {
+    const before = process.env.TZ;
+    const utc = await specToSvg(spec, options);
+    try {
+      // Node re-reads TZ when it changes; a zone west of UTC would turn local-time January 1st into December 31st.
+      process.env.TZ = 'America/New_York';
+      const west = await specToSvg(spec, options);
+      expect(new Date(Date.UTC(2024, 0, 1)).getDate()).toBe(31);
+      expect(west).toBe(utc);
+    } finally {
+      process.env.TZ = before;
+    }
+    expect(utc).toContain('>Jan 2024<');
+    expect(utc).not.toContain('Dec 2023');
+  });
+
+  test('locale changes month names and number marks (de-DE)', async () => {
+    const big = overviewChart({start: monthIndex(2024, 3), original: [15000, 16500, 17250], adjusted: null, trend: null, description: 'd'}, ctx);
+    const svg = await specToSvg(big, {...options, locale: 'de-DE'});
+    expect(svg).toContain('Mär 2024');
+    expect(svg).toContain('16.000');
+  });
+
+  test('title, description and ids are embedded and escaped', async () => {
+    const svg = await specToSvg(spec, options);
+    expect(svg).toMatch(/^<svg [^>]*role="img" aria-labelledby="chart-x-title chart-x-desc"/);
+    expect(svg).toContain('<title id="chart-x-title">Title &lt;b&gt;</title>');
+    expect(svg).toContain('<desc id="chart-x-desc">Desc &amp; more</desc>');
+  });
+
+  test('external data is refused', async () => {
+    const external = {...spec, data: {url: '/etc/hostname', format: {type: 'csv'}}} as TopLevelSpec;
+    await expect(specToSvg(external, options)).rejects.toThrow(/chart chart-x/);
+  });
+
+  test('vega-lite warnings fail the chart', async () => {
+    const bad = {...spec, encoding: {x: {field: 't', type: 'temporal', timeUnit: 'notAUnit'}}} as unknown as TopLevelSpec;
+    await expect(specToSvg(bad, options)).rejects.toThrow(/chart chart-x/);
+  });
+});
+
+describe('text metrics', () => {
+  test('Liberation Sans advance widths (11 px "Jan 2024" measured 45.3 px in Chromium, ECOSYSTEM.md §1)', () => {
+    expect(measureText('Liberation Sans', false, 11, 'Jan 2024')).toBeCloseTo(45.3, 1);
+    expect(measureText('Liberation Sans', true, 11, 'Jan 2024')).toBeGreaterThan(measureText('Liberation Sans', false, 11, 'Jan 2024'));
+  });
+});
+
+describe('vegaLocale', () => {
+  test('marks and month names from Intl', () => {
+    expect(vegaLocale('de-DE').number).toMatchObject({decimal: ',', thousands: '.'});
+    expect(vegaLocale('en-US').number).toMatchObject({decimal: '.', thousands: ','});
+    expect(vegaLocale('fr-FR').number.decimal).toBe(',');
+    expect(vegaLocale('fr-FR').time.months[0]).toBe('janvier');
+    expect(vegaLocale('en-GB').time.shortMonths[0]).toBe('Jan');
+    expect(vegaLocale('xx-invalid-@@').time.months[0]).toBe('January');
+  });
+});

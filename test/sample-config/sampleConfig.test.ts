@@ -1,0 +1,82 @@
+import {describe, expect, it} from 'vitest';
+import {execFileSync} from 'node:child_process';
+import {copyFileSync, mkdtempSync, readFileSync, rmSync} from 'node:fs';
+import {tmpdir} from 'node:os';
+import {join, resolve} from 'node:path';
+import {parse} from 'csv-parse/sync';
+import {loadPlan} from '../../src/config/index.js';
+
+const dir = resolve(import.meta.dirname, '../../sample-config');
+const read = (name: string) => readFileSync(join(dir, 'data', name), 'utf8');
+
+describe('sample-config generator', () => {
+  it('is deterministic and the committed CSVs are its output', () => {
+    const tmp = mkdtempSync(join(tmpdir(), 'ebbflow-sample-'));
+    try {
+      copyFileSync(join(dir, 'generate.mjs'), join(tmp, 'generate.mjs'));
+      execFileSync(process.execPath, [join(tmp, 'generate.mjs')]);
+      for (const name of ['trading.csv', 'web.csv', 'quarterly.csv']) {
+        expect(readFileSync(join(tmp, 'data', name), 'utf8'), name).toBe(read(name));
+      }
+    } finally {
+      rmSync(tmp, {recursive: true, force: true});
+    }
+  });
+
+  it('writes monthly trading data Jan 2018 – Oct 2026, the budget to Mar 2027, and the planted gaps', () => {
+    const rows = parse(read('trading.csv'), {columns: true}) as Record<string, string>[];
+    expect(rows[0].month).toBe('2018-01');
+    expect(rows.filter((r) => r.net_sales !== '').at(-1)!.month).toBe('2026-10');
+    expect(rows.at(-1)).toMatchObject({month: '2027-03', net_sales: ''});
+    expect(rows.filter((r) => r.net_sales !== '' && r.footfall === '').map((r) => r.month)).toEqual(['2019-08', '2023-02', '2023-03']);
+    expect(Object.keys(rows[0])).toEqual([
+      'month', 'net_sales', 'footfall', 'avg_basket', 'returns_rate', 'payroll', 'inventory', 'marketing', 'sales_budget',
+    ]);
+  });
+
+  it('writes the web file long, with dates like "Oct 2026"', () => {
+    const rows = parse(read('web.csv'), {columns: true}) as {date: string; series: string; value: string}[];
+    expect(rows).toHaveLength(2 * 106);
+    expect(rows.at(-1)).toMatchObject({date: 'Oct 2026', series: 'Web orders'});
+    expect([...new Set(rows.map((r) => r.series))]).toEqual(['Web sessions', 'Web orders']);
+  });
+
+  it('writes the quarterly file with ";" and decimal commas, 2016-Q1 to 2026-Q3', () => {
+    const rows = parse(read('quarterly.csv'), {columns: true, delimiter: ';'}) as Record<string, string>[];
+    expect(rows).toHaveLength(43);
+    expect([rows[0].quarter, rows.at(-1)!.quarter]).toEqual(['2016-Q1', '2026-Q3']);
+    expect(rows[0].sales_north).toMatch(/^\d+,\d$/);
+  });
+
+  it('plants the flash sale (2023-11) and the stock-count correction (2024-03) as one-off spikes', () => {
+    const rows = parse(read('trading.csv'), {columns: true}) as Record<string, string>[];
+    const at = (m: string, c: string) => Number(rows.find((r) => r.month === m)![c]);
+    // Against the average of the neighbours a year either side (same season): ≥ 8% above.
+    const spike = (m: string, c: string, before: string, after: string) => at(m, c) / ((at(before, c) + at(after, c)) / 2);
+    expect(spike('2023-11', 'net_sales', '2022-11', '2024-11')).toBeGreaterThan(1.08);
+    expect(spike('2024-03', 'inventory', '2023-03', '2025-03')).toBeGreaterThan(1.08);
+  });
+});
+
+describe('sample packs', () => {
+  it('monthly pack loads: every series resolved, budget hidden, web series taken from the long file', async () => {
+    const plan = await loadPlan(join(dir, 'monthly-pack.yaml'));
+    expect(plan.id).toBe('tarnwick-monthly');
+    expect(plan.fiscalYearStart).toBe(4);
+    expect(plan.series.map((s) => s.id)).toEqual([
+      'net-sales', 'footfall', 'avg-basket', 'returns-rate', 'payroll', 'inventory', 'marketing', 'sales-budget',
+    ]);
+    // The `fromSource: web` entry is expanded by ingest into web-sessions and web-orders.
+    expect((plan as unknown as {fromSource: {source: string}[]}).fromSource.map((f) => f.source)).toEqual(['web']);
+    expect(plan.series.find((s) => s.id === 'sales-budget')!.hidden).toBe(true);
+    expect(plan.series.find((s) => s.id === 'net-sales')!.target).toBe('sales-budget');
+    expect(plan.branding.logo).toBe(join(dir, 'logo.svg'));
+  });
+
+  it('quarterly pack loads', async () => {
+    const plan = await loadPlan(join(dir, 'quarterly-pack.yaml'));
+    expect(plan.frequency).toBe('quarterly');
+    expect(plan.series).toHaveLength(6);
+    expect(plan.sources[0]).toMatchObject({delimiter: ';', decimal: ','});
+  });
+});
