@@ -1,15 +1,26 @@
-import type {ResultsV1} from '../render/results.js';
 import {frequencyOf} from '../render/results.js';
 import {parsePeriod, periodLabel} from '../time/period.js';
 import {escapeHtml} from './escapeHtml.js';
 import {unreadableResults} from './messages.js';
+
+/** The parts of a results.json the index shows (a full `ResultsV1` fits). */
+export interface Headlines {
+  pack: {title: string; locale: string; frequency: 12 | 4 | 52};
+  series: {
+    label: string;
+    unit: string | null;
+    hidden: boolean;
+    original: (number | null)[];
+    changes: {yearOnYear: number | null};
+  }[];
+}
 
 /** One archived period as the index page shows it. */
 export interface IndexEntry {
   /** Folder name, the canonical period label (`2026-10`). */
   folder: string;
   /** Its results.json, or null when missing or unreadable. */
-  results: ResultsV1 | null;
+  results: Headlines | null;
   /** Files present in the folder (top level), to decide which links to show. */
   files: string[];
 }
@@ -77,7 +88,7 @@ ${body}
 </section>`;
 }
 
-function table(r: ResultsV1): string {
+function table(r: Headlines): string {
   const locale = safeLocale(r.pack.locale);
   const rows = r.series
     .filter((s) => !s.hidden)

@@ -1,10 +1,35 @@
 import {readdir, readFile, rename, rm, writeFile} from 'node:fs/promises';
 import {join} from 'node:path';
-import {parseResults, type ResultsV1} from '../render/results.js';
+import {z} from 'zod';
+import {RESULTS_SCHEMA} from '../render/results.js';
 import {periodFolders} from './periodFolders.js';
-import {renderIndex, type IndexEntry} from './indexPage.js';
+import {renderIndex, type Headlines, type IndexEntry} from './indexPage.js';
 
 let counter = 0;
+
+/**
+ * Just the fields the index shows. Checking only these (instead of the whole file with
+ * `parseResults`) keeps regenerating the index cheap when a back-fill rewrites it after every period.
+ */
+const headlines = z.object({
+  schema: z.literal(RESULTS_SCHEMA),
+  pack: z.object({
+    title: z.string(),
+    locale: z.string(),
+    frequency: z.union([z.literal(12), z.literal(4), z.literal(52)]),
+  }),
+  series: z.array(
+    z.object({
+      label: z.string(),
+      unit: z.string().nullable(),
+      hidden: z.boolean(),
+      original: z.custom<(number | null)[]>(
+        (v) => Array.isArray(v) && v.every((x) => x === null || typeof x === 'number'),
+      ),
+      changes: z.object({yearOnYear: z.number().nullable()}),
+    }),
+  ),
+});
 
 /**
  * Regenerate `<outDir>/<packId>/index.html` from the archived period folders. A period whose
@@ -30,9 +55,10 @@ export async function writeIndex(outDir: string, packId: string): Promise<string
   return target;
 }
 
-async function readResults(file: string): Promise<ResultsV1 | null> {
+async function readResults(file: string): Promise<Headlines | null> {
   try {
-    return parseResults(await readFile(file, 'utf8'), file);
+    const parsed = headlines.safeParse(JSON.parse(await readFile(file, 'utf8')));
+    return parsed.success ? parsed.data : null;
   } catch {
     return null;
   }

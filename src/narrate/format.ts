@@ -79,7 +79,9 @@ export function narrateFormat(tag: string): NarrateFormat {
         return unit ? `${text} ${unit}` : text;
       }),
     percent: (value, digits = 1) =>
-      finite(value, () => nf(`s${digits}`, {style: 'percent', signDisplay: 'exceptZero', ...fixed(digits)}).format(value / 100)),
+      finite(value, () =>
+        nf(`s${digits}`, {style: 'percent', signDisplay: 'exceptZero', ...fixed(digits)}).format(value / 100),
+      ),
     size: (value, digits = 1) =>
       finite(value, () => nf(`u${digits}`, {style: 'percent', ...fixed(digits)}).format(Math.abs(value) / 100)),
     points: (value, digits = 1) =>

@@ -41,7 +41,15 @@ function magnitude(fmt: NarrateFormat, value: number, isRate: boolean): string {
   return isRate ? fmt.points(Math.abs(value)).replace(/^\+/, '') : fmt.size(value);
 }
 
-const UNUSUAL = ' That is an unusually large move for this series.';
+/** The sentence added to a change that is unusually large for the series (watch or alert). */
+function unusual(flag: boolean): string {
+  return flag ? ' That is an unusually large move for this series.' : '';
+}
+
+/** ` (+15.4% annualised)`, or nothing when there is no annualised rate. */
+function annualised(fmt: NarrateFormat, value: number | null): string {
+  return value !== null && Number.isFinite(value) ? ` (${fmt.percent(value)} annualised)` : '';
+}
 
 export function yearOnYear(a: {
   label: string;
@@ -53,7 +61,7 @@ export function yearOnYear(a: {
   unusual: boolean;
 }): string {
   const verb = a.stock ? 'stood at' : 'came to';
-  return `${a.label} ${verb} ${a.value} in ${a.period}, ${a.change} on ${a.yearAgo}.${a.unusual ? UNUSUAL : ''}`;
+  return `${a.label} ${verb} ${a.value} in ${a.period}, ${a.change} on ${a.yearAgo}.${unusual(a.unusual)}`;
 }
 
 export function adjustedChange(a: {
@@ -71,8 +79,8 @@ export function adjustedChange(a: {
     Math.abs(a.change) < 0.05
       ? 'held steady'
       : `${a.change > 0 ? 'rose' : 'fell'} ${magnitude(fmt, a.change, a.isRate)}`;
-  const annual = a.annualised !== null && Number.isFinite(a.annualised) ? ` (${fmt.percent(a.annualised)} annualised)` : '';
-  return `Seasonally adjusted, ${a.label} ${move} in ${a.period} from ${a.previous}${annual}.${a.unusual ? UNUSUAL : ''}`;
+  const annual = annualised(fmt, a.annualised);
+  return `Seasonally adjusted, ${a.label} ${move} in ${a.period} from ${a.previous}${annual}.${unusual(a.unusual)}`;
 }
 
 export function trendSteady(a: {
@@ -85,12 +93,13 @@ export function trendSteady(a: {
   annualised: number | null;
 }): string {
   const rate = `${change(a.fmt, a.change, a.isRate)} a ${a.per}`;
-  const annual = a.annualised !== null && Number.isFinite(a.annualised) ? ` (${a.fmt.percent(a.annualised)} annualised)` : '';
+  const annual = annualised(a.fmt, a.annualised);
   return `The trend of ${a.label} is ${a.direction}, ${rate}${annual}.`;
 }
 
 export function trendTurn(a: {label: string; up: boolean; turnedIn: string; before: string}): string {
-  return `The trend of ${a.label} turned ${a.up ? 'up' : 'down'} in ${a.turnedIn} after ${a.up ? 'falling' : 'rising'} for ${a.before}.`;
+  const before = a.up ? 'falling' : 'rising';
+  return `The trend of ${a.label} turned ${a.up ? 'up' : 'down'} in ${a.turnedIn} after ${before} for ${a.before}.`;
 }
 
 export function trendBlip(a: {
@@ -118,7 +127,13 @@ export function cyclePhaseChange(a: {label: string; from: string; to: string; pe
   return `For ${a.label}, the cycle moved from ${a.from} to ${a.to} in ${a.period}; the gap to the long-run trend is ${a.gap}.`;
 }
 
-export function turningPoint(a: {label: string; type: 'peak' | 'trough'; period: string; ago: string; provisional: boolean}): string {
+export function turningPoint(a: {
+  label: string;
+  type: 'peak' | 'trough';
+  period: string;
+  ago: string;
+  provisional: boolean;
+}): string {
   return a.provisional
     ? `The cycle of ${a.label} may have passed a ${a.type} in ${a.period}, ${a.ago} ago (provisional: later data can still move or remove it).`
     : `The cycle of ${a.label} passed a ${a.type} in ${a.period}, ${a.ago} ago.`;
@@ -205,7 +220,8 @@ export function backtestWarning(a: {label: string; origins: string; mase: string
 export function gaps(a: {label: string; count: number; periods: string; filled: number}): string {
   const head = `${count(a.count, 'value')} of ${a.label} ${a.count === 1 ? 'is' : 'are'} missing (${a.periods})`;
   if (a.filled === 0) return `${head}.`;
-  return `${head}; the analysis filled ${a.filled === a.count ? (a.count === 1 ? 'it' : 'them') : count(a.filled, 'value')} in for estimation only.`;
+  const what = a.filled === a.count ? (a.count === 1 ? 'it' : 'them') : count(a.filled, 'value');
+  return `${head}; the analysis filled ${what} in for estimation only.`;
 }
 
 export function latestMissing(a: {label: string; period: string}): string {
@@ -234,17 +250,40 @@ export function revisionNumeric(a: {
   return `The ${what} of ${a.label} for ${a.period} was revised ${a.up ? 'up' : 'down'} by ${a.size} since the ${a.since} pack, from ${a.from} to ${a.to}.`;
 }
 
-export function revisionWords(a: {label: string; measure: 'trend-direction' | 'cycle-phase'; period: string; since: string; from: string; to: string}): string {
+export function revisionWords(a: {
+  label: string;
+  measure: 'trend-direction' | 'cycle-phase';
+  period: string;
+  since: string;
+  from: string;
+  to: string;
+}): string {
   const what = a.measure === 'trend-direction' ? 'trend direction' : 'cycle phase';
   return `Since the ${a.since} pack, the ${what} of ${a.label} for ${a.period} changed from ${a.from} to ${a.to}.`;
 }
 
-export function trackingRecord(a: {label: string; checked: string; inside: number; level: number; share: string; mase: string | null}): string {
+export function trackingRecord(a: {
+  label: string;
+  checked: string;
+  inside: number;
+  level: number;
+  share: string;
+  mase: string | null;
+}): string {
   const mase = a.mase ? `; running MASE ${a.mase}` : '';
   return `Forecasts of ${a.label} from earlier packs: ${a.checked} against actuals so far, ${a.inside} inside their ${a.level}% range (${a.share})${mase}.`;
 }
 
-export function forecastCheck(a: {label: string; period: string; publishedIn: string; forecast: string; actual: string; error: string; inside: boolean; level: number}): string {
+export function forecastCheck(a: {
+  label: string;
+  period: string;
+  publishedIn: string;
+  forecast: string;
+  actual: string;
+  error: string;
+  inside: boolean;
+  level: number;
+}): string {
   return (
     `The ${a.publishedIn} pack forecast ${a.forecast} of ${a.label} for ${a.period}; the actual came in at ${a.actual} ` +
     `(${a.error}), ${a.inside ? 'inside' : 'outside'} the ${a.level}% range.`

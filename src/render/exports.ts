@@ -40,7 +40,10 @@ export interface Table {
  * CSV: RFC 4180 quoting, CRLF line ends, UTF-8 with a byte-order mark (Excel needs it to read UTF-8).
  * XLSX: see {@link writeXlsx}; deterministic bytes for the same report.
  */
-export function exportTables(report: Report): {csv: {name: string; content: string}[]; xlsx: () => Promise<Uint8Array>} {
+export function exportTables(report: Report): {
+  csv: {name: string; content: string}[];
+  xlsx: () => Promise<Uint8Array>;
+} {
   const tables = buildTables(report);
   return {
     csv: tables.map((t) => ({name: `${t.name}.csv`, content: toCsv(t)})),
@@ -126,7 +129,8 @@ function forecastTable(report: Report): Table {
     if (s.plan.hidden || !f) continue;
     f.mean.forEach((mean, i) => {
       const bounds = levels.flatMap((l) => [cell(f.lower[String(l)]?.[i]), cell(f.upper[String(l)]?.[i])]);
-      rows.push([cell(s.plan.id), formatPeriod(s.analysis.frequency, s.analysis.start + f.startOffset + i), cell(i + 1), cell(mean), ...bounds]);
+      const period = formatPeriod(s.analysis.frequency, s.analysis.start + f.startOffset + i);
+      rows.push([cell(s.plan.id), period, cell(i + 1), cell(mean), ...bounds]);
     });
   }
   return {
@@ -216,10 +220,17 @@ function backtestTable(report: Report): Table {
     const f = s.analysis.forecast;
     const b = f?.backtest;
     if (s.plan.hidden || !f || !b) continue;
-    rows.push([cell(s.plan.id), cell(f.method), 'model', cell(b.mase), cell(b.smape), cell(b.origins), cell(b.horizon)]);
-    for (const m of b.benchmarks) {
-      rows.push([cell(s.plan.id), cell(m.method), 'benchmark', cell(m.mase), cell(m.smape), cell(b.origins), cell(b.horizon)]);
-    }
+    const row = (method: string, role: string, mase: number, smape: number): Cell[] => [
+      cell(s.plan.id),
+      cell(method),
+      role,
+      cell(mase),
+      cell(smape),
+      cell(b.origins),
+      cell(b.horizon),
+    ];
+    rows.push(row(f.method, 'model', b.mase, b.smape));
+    for (const m of b.benchmarks) rows.push(row(m.method, 'benchmark', m.mase, m.smape));
   }
   return {
     name: 'backtest',

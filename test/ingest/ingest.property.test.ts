@@ -1,8 +1,8 @@
-import {mkdtempSync, writeFileSync} from 'node:fs';
+import {mkdtempSync, rmSync, writeFileSync} from 'node:fs';
 import {tmpdir} from 'node:os';
 import {join} from 'node:path';
 import fc from 'fast-check';
-import {describe, expect, it} from 'vitest';
+import {afterAll, describe, expect, it} from 'vitest';
 import {InputError} from '../../src/errors.js';
 import {ingest} from '../../src/ingest/index.js';
 import type {Dataset} from '../../src/ingest/index.js';
@@ -10,6 +10,7 @@ import type {Frequency} from '../../src/time/period.js';
 import {plan, series, source} from './plan.js';
 
 const temp = mkdtempSync(join(tmpdir(), 'ebbflow-ingest-prop-'));
+afterAll(() => rmSync(temp, {recursive: true, force: true}));
 
 /** Cells that look like data some of the time and like anything at other times. */
 const cell = fc.oneof(

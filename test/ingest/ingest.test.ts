@@ -1,7 +1,7 @@
-import {mkdtempSync, writeFileSync} from 'node:fs';
+import {mkdtempSync, rmSync, writeFileSync} from 'node:fs';
 import {tmpdir} from 'node:os';
 import {join} from 'node:path';
-import {describe, expect, it} from 'vitest';
+import {afterAll, describe, expect, it} from 'vitest';
 import {InputError} from '../../src/errors.js';
 import type {Problem} from '../../src/errors.js';
 import {ingest} from '../../src/ingest/index.js';
@@ -22,6 +22,7 @@ async function problemsOf(p: Plan): Promise<Problem[]> {
 const values = (d: Dataset, id: string): number[] => [...d.series.find((s) => s.id === id)!.values];
 const notes = (d: Dataset, id: string): string[] => d.series.find((s) => s.id === id)!.notes.map((n) => n.message);
 const temp = mkdtempSync(join(tmpdir(), 'ebbflow-ingest-'));
+afterAll(() => rmSync(temp, {recursive: true, force: true}));
 /** `2000-01` for i = 0, one month per step. */
 const monthLabel = (i: number): string => `${2000 + Math.floor(i / 12)}-${String((i % 12) + 1).padStart(2, '0')}`;
 const write = (name: string, text: string | Buffer): string => {

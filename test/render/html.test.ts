@@ -149,3 +149,12 @@ describe('inlineLogo', () => {
     expect(() => inlineLogo(join(dir, 'fake.png'))).toThrow(/does not match/);
   });
 });
+
+describe('other frequencies', () => {
+  test.each(['quarterly', 'weekly'] as const)('%s report renders every chart without warnings', async (frequency) => {
+    const html = await renderHtml(makeReport({count: 1, frequency, history: true}));
+    expect(html).toContain('id="chart-series-1-seasonal"');
+    expect(html).toContain('id="chart-series-1-forecast"');
+    expect(html).not.toMatch(/NaN|undefined/);
+  });
+});

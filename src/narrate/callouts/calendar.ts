@@ -48,7 +48,11 @@ function workingDays({analysis: a, series: s, fmt, isRate}: RuleContext, adj: Ad
   ];
 }
 
-function easterEffect({analysis: a, series: s, fmt, isRate}: RuleContext, model: Adjustment['model'], coefficient: number): Draft[] {
+function easterEffect(
+  {analysis: a, series: s, fmt, isRate}: RuleContext,
+  model: Adjustment['model'],
+  coefficient: number,
+): Draft[] {
   if (a.frequency === 'weekly') return [];
   const monthly = a.frequency === 'monthly';
   const marchOf = (y: number) => (monthly ? y * 12 + 2 : y * 4);

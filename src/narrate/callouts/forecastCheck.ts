@@ -14,7 +14,7 @@ export const forecastCheckRule: Rule = {
     const label = formatPeriod(a.frequency, a.end);
     const rows = history.tracking
       .filter((r) => r.seriesId === s.id && r.period === label)
-      .sort((x, y) => x.horizon - y.horizon || (x.publishedIn < y.publishedIn ? 1 : x.publishedIn > y.publishedIn ? -1 : 0));
+      .sort((x, y) => x.horizon - y.horizon || later(x.publishedIn, y.publishedIn));
     const row = rows[0];
     if (!row) return [];
     const levels = Object.keys(row.inside)
@@ -39,7 +39,13 @@ export const forecastCheckRule: Rule = {
           inside,
           level,
         }),
-        figures: {forecast: row.forecast, actual: row.actual, error: row.error, errorChange: error, horizon: row.horizon},
+        figures: {
+          forecast: row.forecast,
+          actual: row.actual,
+          error: row.error,
+          errorChange: error,
+          horizon: row.horizon,
+        },
         chart: chartId(s.id, 'forecast'),
         magnitude: inside ? 0.5 : 2,
         periodsAgo: 0,
@@ -47,3 +53,8 @@ export const forecastCheckRule: Rule = {
     ];
   },
 };
+
+/** Latest publication first (canonical period labels sort as text within one frequency). */
+function later(a: string, b: string): number {
+  return a < b ? 1 : a > b ? -1 : 0;
+}

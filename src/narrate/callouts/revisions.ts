@@ -20,7 +20,8 @@ export const revisionsRule: Rule = {
       const period = index === undefined ? r.period : fmt.period(a.frequency, index);
       const periodsAgo = index === undefined ? 0 : Math.max(0, a.end - index);
       const base = {key: `${r.measure}-${r.period}`, chart: chartId(s.id, 'overview'), periodsAgo};
-      if ((r.measure === 'original' || r.measure === 'adjusted') && typeof r.previous === 'number' && typeof r.current === 'number') {
+      const numeric = typeof r.previous === 'number' && typeof r.current === 'number';
+      if ((r.measure === 'original' || r.measure === 'adjusted') && numeric) {
         const pct = r.revisionPct ?? ((r.current - r.previous) / Math.abs(r.previous)) * 100;
         out.push({
           ...base,

@@ -1,5 +1,5 @@
 import {describe, expect, it} from 'vitest';
-import type {CalendarRegressor} from '../../../src/analyse/types.js';
+import type {CalendarRegressor} from '../../../src/analyse/decompose/types.js';
 import {calendarRule} from '../../../src/narrate/callouts/calendar.js';
 import {monthIndex, quarterIndex} from '../../../src/time/period.js';
 import {makeAdjustment, makeAnalysis, runRule} from '../fixtures.js';

@@ -1,0 +1,118 @@
+import {readFileSync} from 'node:fs';
+import fc from 'fast-check';
+import {describe, expect, it} from 'vitest';
+import {forecastSeries} from '../../../src/analyse/forecast/index.js';
+import {prepareSeries} from '../../../src/analyse/forecast/prepareSeries.js';
+
+// Real data: R's AirPassengers and austres, taken from test/reference/ets.json (written by test/reference/ets.R).
+const ref = JSON.parse(readFileSync(new URL('../../reference/ets.json', import.meta.url), 'utf8'));
+const air = Float64Array.from(ref.auto.find((c: {name: string}) => c.name === 'AirPassengers').values);
+const austres = Float64Array.from(ref.auto.find((c: {name: string}) => c.name === 'austres').values);
+const opts = (over: Partial<{method: 'auto' | 'ets' | 'theta' | 'seasonal-naive' | 'combination'; horizon: number; levels: number[]; backtestOrigins: number}> = {}) => ({
+  method: 'auto' as const,
+  horizon: 12,
+  levels: [80, 95],
+  backtestOrigins: 0,
+  ...over,
+});
+
+function expectWellFormed(r: ReturnType<typeof forecastSeries>, h: number): void {
+  expect(r.mean).toHaveLength(h);
+  for (const v of r.mean) expect(Number.isFinite(v)).toBe(true);
+  for (let i = 0; i < h; i++) {
+    // Nested intervals: 95 contains 80 contains the mean.
+    expect(r.lower['95'][i]).toBeLessThanOrEqual(r.lower['80'][i] + 1e-9);
+    expect(r.lower['80'][i]).toBeLessThanOrEqual(r.mean[i] + 1e-9);
+    expect(r.upper['80'][i]).toBeGreaterThanOrEqual(r.mean[i] - 1e-9);
+    expect(r.upper['95'][i]).toBeGreaterThanOrEqual(r.upper['80'][i] - 1e-9);
+  }
+}
+
+describe('forecastSeries', () => {
+  it('forecasts AirPassengers with every method, finite and nested intervals', () => {
+    for (const method of ['auto', 'ets', 'theta', 'seasonal-naive', 'combination'] as const) {
+      const r = forecastSeries(air, {frequency: 'monthly', options: opts({method})});
+      expectWellFormed(r, 12);
+      expect(r.startOffset).toBe(air.length);
+    }
+    expect(forecastSeries(air, {frequency: 'monthly', options: opts({method: 'ets'})}).method).toBe('ETS(M,Ad,M)');
+  });
+
+  it('widens the ETS intervals with the horizon (non-seasonal series, austres ETS(M,Ad,A) aside: use Theta)', () => {
+    const r = forecastSeries(austres, {frequency: 'quarterly', options: opts({method: 'theta', horizon: 8})});
+    for (let i = 1; i < 8; i++) expect(r.upper['95'][i] - r.lower['95'][i]).toBeGreaterThan(r.upper['95'][i - 1] - r.lower['95'][i - 1]);
+  });
+
+  it('back-tests from rolling origins with benchmarks and one-step points', () => {
+    const r = forecastSeries(air, {frequency: 'monthly', options: opts({method: 'theta', backtestOrigins: 6})});
+    const b = r.backtest!;
+    expect(b.origins).toBe(6);
+    expect(b.horizon).toBe(6);
+    expect(b.points.map((p) => p.offset)).toEqual([138, 139, 140, 141, 142, 143]);
+    expect(b.mase).toBeGreaterThan(0);
+    expect(b.smape).toBeGreaterThan(0);
+    expect(b.benchmarks.map((x) => x.method)).toEqual(['Seasonal naive', 'Naive2']);
+  });
+
+  it('forecasts a constant series as the constant, without error', () => {
+    const r = forecastSeries(new Float64Array(40).fill(3.5), {frequency: 'monthly', options: opts({backtestOrigins: 6})});
+    expect(r.method).toBe('Constant');
+    expect(r.mean).toEqual(new Array(12).fill(3.5));
+    expect(r.upper['95']).toEqual(new Array(12).fill(3.5));
+    expect(r.backtest).toBeNull();
+  });
+
+  it('trims NaN at both ends, fills interior gaps with a note, and still starts after the array', () => {
+    const v = Float64Array.from([NaN, ...air.slice(0, 60), NaN, NaN]);
+    v[20] = NaN;
+    const r = forecastSeries(v, {frequency: 'monthly', options: opts({method: 'theta'})});
+    expect(r.startOffset).toBe(v.length);
+    expect(r.mean).toHaveLength(12);
+    expect(r.notes.some((n) => /Filled 1 missing/.test(n))).toBe(true);
+    expectWellFormed(r, 12);
+  });
+
+  it('falls back for short series: naive under four values, no seasonal models under two years', () => {
+    const tiny = forecastSeries(Float64Array.of(3, 4, 5), {frequency: 'monthly', options: opts()});
+    expect(tiny.method).toBe('Naive');
+    expect(tiny.notes.join(' ')).toMatch(/Fewer than four values/);
+    const short = forecastSeries(air.slice(0, 20), {frequency: 'monthly', options: opts({method: 'ets'})});
+    expect(short.method).toMatch(/^ETS\([AM],(N|A|Ad),N\)$/);
+    expect(short.notes.join(' ')).toMatch(/two full years/);
+  });
+
+  it('handles weekly data through seasonal adjustment and says so', () => {
+    const weeks = Float64Array.from({length: 160}, (_, t) => 100 + 0.1 * t + 10 * Math.sin((2 * Math.PI * t) / 52) + ((t * 7919) % 13) / 3);
+    const r = forecastSeries(weeks, {frequency: 'weekly', options: opts({method: 'auto', horizon: 13})});
+    expectWellFormed(r, 13);
+    expect(r.notes.join(' ')).toMatch(/Weekly data/);
+  });
+
+  it('property: any finite series gives finite, nested forecasts (no NaN out)', () => {
+    fc.assert(
+      fc.property(
+        fc.array(fc.double({min: -1e4, max: 1e4, noNaN: true}), {minLength: 1, maxLength: 40}),
+        fc.constantFrom('auto', 'ets', 'theta', 'seasonal-naive') as fc.Arbitrary<'auto' | 'ets' | 'theta' | 'seasonal-naive'>,
+        (values, method) => {
+          const r = forecastSeries(Float64Array.from(values), {frequency: 'quarterly', options: opts({method, horizon: 5})});
+          expectWellFormed(r, 5);
+        },
+      ),
+      {numRuns: 40},
+    );
+  });
+
+  it('rejects an all-NaN series', () => {
+    expect(() => forecastSeries(Float64Array.of(NaN, NaN), {frequency: 'monthly', options: opts()})).toThrow(/at least one value/);
+  });
+});
+
+describe('prepareSeries', () => {
+  it('trims leading and trailing NaN and fills interior gaps linearly', () => {
+    const r = prepareSeries(Float64Array.of(NaN, 1, NaN, 3, NaN));
+    expect([...r.values]).toEqual([1, 2, 3]);
+    expect(r.first).toBe(1);
+    expect(r.filled).toBe(1);
+    expect(prepareSeries(Float64Array.of(NaN)).values).toHaveLength(0);
+  });
+});

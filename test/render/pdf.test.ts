@@ -1,0 +1,103 @@
+import {afterAll, beforeAll, describe, expect, test} from 'vitest';
+import {execFileSync} from 'node:child_process';
+import {mkdtempSync, readFileSync, writeFileSync} from 'node:fs';
+import {tmpdir} from 'node:os';
+import {join} from 'node:path';
+import puppeteer, {type Browser} from 'puppeteer-core';
+import {renderHtml} from '../../src/render/index.js';
+import {LAUNCH_ARGS, findBrowser, fixDates, openBrowser, periodWords, printPdf, type PdfOptions, type PrintRecord} from '../../src/render/pdf.js';
+import {makeReport} from './fixtures.js';
+
+const chromium = findBrowser(null);
+const dir = mkdtempSync(join(tmpdir(), 'ebbflow-pdf-'));
+const opts: PdfOptions = {
+  title: 'Harbourline Trading monthly review',
+  periodLabel: '2026-10',
+  paper: 'A4',
+  orientation: 'portrait',
+  font: 'Liberation Sans',
+  footer: 'Harbourline Trading · internal',
+  date: '20261101',
+};
+const run = (cmd: string, args: string[]) => execFileSync(cmd, args, {encoding: 'utf8'});
+
+describe('findBrowser and openBrowser', () => {
+  test('environment variables come before the usual paths; a missing browser is one sentence', async () => {
+    expect(findBrowser(null, {EBBFLOW_CHROMIUM: '/nonexistent', CHROME_PATH: '/bin/sh'})).toBe('/bin/sh');
+    expect(findBrowser('/nonexistent/chrome')).toBeNull();
+    const missing = await openBrowser('/nonexistent/chrome');
+    expect(missing).toEqual({missing: expect.stringMatching(/^PDF skipped: .*apt-get install chromium.*EBBFLOW_CHROMIUM.*\.$/)});
+  });
+});
+
+describe('fixDates and periodWords', () => {
+  test('dates are replaced in place, keeping the length', () => {
+    const raw = new TextEncoder().encode("<< /CreationDate (D:20261202011500+00'00') /ModDate (D:20261202011500+00'00') >>");
+    const fixed = new TextDecoder().decode(fixDates(raw, '20261101'));
+    expect(fixed).toBe("<< /CreationDate (D:20261101000000+00'00') /ModDate (D:20261101000000+00'00') >>");
+    expect(() => fixDates(raw, '2026-11-01')).toThrow(/invalid pdf date/);
+  });
+
+  test('period labels in words', () => {
+    expect(periodWords('2026-10', 'en-GB')).toBe('October 2026');
+    expect(periodWords('2026-10', 'fr-FR')).toBe('octobre 2026');
+    expect(periodWords('2026-Q3', 'en-GB')).toBe('Q3 2026');
+  });
+});
+
+describe.skipIf(chromium === null)('PDF with Chromium', () => {
+  let browser: Browser;
+  let file = '';
+  let pdf: Uint8Array;
+  beforeAll(async () => {
+    browser = await puppeteer.launch({executablePath: chromium!, headless: true, args: LAUNCH_ARGS});
+    const html = await renderHtml(makeReport({count: 2}));
+    pdf = await printPdf(browser, html, opts);
+    file = join(dir, 'report.pdf');
+    writeFileSync(file, pdf);
+  });
+  afterAll(async () => {
+    await browser?.close();
+  });
+
+  test('title, callout, running header and page numbers are in the text', () => {
+    const text = run('pdftotext', ['-layout', file, '-']).replace(/\s+/g, ' ');
+    expect(text).toContain('Harbourline Trading monthly review');
+    expect(text).toContain('Net sales rose 4.2% on a year earlier, the fastest growth in two years.');
+    expect(text).toContain('October 2026');
+    expect(text).toMatch(/Page 2 of \d+/);
+  });
+
+  test('several A4 pages, fixed dates and embedded fonts', () => {
+    const info = run('pdfinfo', [file]);
+    expect(Number(info.match(/Pages:\s+(\d+)/)![1])).toBeGreaterThan(1);
+    expect(info).toMatch(/Page size:\s+594\.96 x 841\.92 pts \(A4\)/);
+    expect(info).toMatch(/CreationDate:\s+Sun Nov\s+1 00:00:00 2026/);
+    const fonts = run('pdffonts', [file]).split('\n').slice(2).filter(Boolean);
+    expect(fonts.length).toBeGreaterThan(0);
+    for (const line of fonts) expect(line).toMatch(/\syes\s+yes\s+yes\s/);
+    expect(fonts.join('\n')).toContain('LiberationSans');
+  });
+
+  test('a rebuild gives the same bytes', async () => {
+    const html = await renderHtml(makeReport({count: 2}));
+    const again = await printPdf(browser, html, opts);
+    expect(Buffer.from(again).equals(Buffer.from(pdf))).toBe(true);
+  });
+
+  test('network and file requests are blocked and listed', async () => {
+    const record: PrintRecord = {blocked: []};
+    const html =
+      '<!DOCTYPE html><html><body><p>probe</p><img src="http://127.0.0.1:9/x.png"><img src="file:///etc/hostname">' +
+      '<iframe src="file:///etc/hostname"></iframe><script>document.body.innerHTML = "script ran"</script></body></html>';
+    const bytes = await printPdf(browser, html, opts, record);
+    writeFileSync(join(dir, 'probe.pdf'), bytes);
+    expect(record.blocked).toContain('http://127.0.0.1:9/x.png');
+    // Chromium refuses file: URLs from an about:blank document before interception sees them; either way
+    // the file's content must not reach the PDF.
+    const text = run('pdftotext', [join(dir, 'probe.pdf'), '-']);
+    expect(text).toContain('probe');
+    expect(text).not.toContain('script ran');
+    expect(text).not.toContain(readFileSync('/etc/hostname', 'utf8').trim());
+  });
+});
