@@ -47,13 +47,15 @@ function fail(error: unknown, io: Io, kept = 0): number {
   if (error instanceof InputError) {
     for (const p of error.problems) io.stderr.write(`${formatProblem(p)}\n`);
     const n = error.problems.length;
-    const after = kept > 0 ? `the ${kept} period folder${kept === 1 ? '' : 's'} built before were kept` : 'nothing was written';
+    const after =
+      kept > 0 ? `the ${kept} period folder${kept === 1 ? '' : 's'} built before were kept` : 'nothing was written';
     io.stderr.write(`${n} problem${n === 1 ? '' : 's'}; ${after}\n`);
     return 2;
   }
   const message = error instanceof Error ? error.message : String(error);
   io.stderr.write(`ebbflow: ${message.split('\n')[0]}\n`);
-  if ((io.env ?? process.env).EBBFLOW_DEBUG === '1' && error instanceof Error && error.stack) io.stderr.write(`${error.stack}\n`);
+  const debug = (io.env ?? process.env).EBBFLOW_DEBUG === '1';
+  if (debug && error instanceof Error && error.stack) io.stderr.write(`${error.stack}\n`);
   return 1;
 }
 
@@ -65,7 +67,8 @@ async function runBuild(packs: string[], opts: BuildOptions, io: Io): Promise<nu
   for (const packFile of packs) {
     try {
       const range = opts.period !== undefined && isPeriodRange(opts.period);
-      const plan = await loadPlan(packFile, {period: range ? undefined : opts.period, outDir: opts.out, formats: opts.formats});
+      const single = range ? undefined : opts.period;
+      const plan = await loadPlan(packFile, {period: single, outDir: opts.out, formats: opts.formats});
       const periods = range ? expandPeriodRange(plan.frequency, opts.period ?? '') : [opts.period];
       for (const period of periods) jobs.push({packFile, plan, period});
     } catch (e) {
@@ -86,10 +89,9 @@ async function runBuild(packs: string[], opts: BuildOptions, io: Io): Promise<nu
         browser = browsers.get(job.plan.browser) ?? (await openBrowser(job.plan.browser));
         browsers.set(job.plan.browser, browser);
       }
-      const summary = await build(
-        {packFile: job.packFile, period: job.period, outDir: opts.out, formats: opts.formats, force: opts.force, jobs: opts.jobs, browser},
-        log,
-      );
+      const {packFile, period} = job;
+      const {out: outDir, formats, force, jobs: threads} = opts;
+      const summary = await build({packFile, period, outDir, formats, force, jobs: threads, browser}, log);
       io.stdout.write(`${summary.folder}\n`);
       built++;
     }
@@ -135,7 +137,9 @@ async function runInit(dir: string, io: Io): Promise<number> {
 export async function main(argv: string[], io: Io): Promise<number> {
   let code = 0;
   const program = new Command('ebbflow')
-    .description('Trend review packs: seasonal adjustment, trend and cycle, forecasts, and a branded report from a YAML pack file.')
+    .description(
+      'Trend review packs: seasonal adjustment, trend and cycle, forecasts, and a branded report from a YAML pack file.',
+    )
     .version(toolVersion, '-V, --version', 'print the version')
     .helpOption('-h, --help', 'show help')
     .helpCommand('help [command]', 'show help for a command')
@@ -147,12 +151,24 @@ export async function main(argv: string[], io: Io): Promise<number> {
     .command('build')
     .description('build the report for each pack file and write it under <out>/<pack id>/<period>/')
     .argument('<pack...>', 'pack files (YAML)')
-    .option('-p, --period <period>', 'review period (2026-10, 2026-Q3, 2026-W41) or a range A..B built one by one; default: the pack\'s, else the last period with data')
-    .option('-o, --out <dir>', 'output folder; default: the pack\'s outDir, else ./out')
-    .option('-f, --formats <list>', 'comma-separated outputs from html, pdf, json, csv, xlsx; default: the pack\'s', parseFormats)
+    .option(
+      '-p, --period <period>',
+      "review period (2026-10, 2026-Q3, 2026-W41) or a range A..B built one by one; default: the pack's, " +
+        'else the last period with data',
+    )
+    .option('-o, --out <dir>', "output folder; default: the pack's outDir, else ./out")
+    .option(
+      '-f, --formats <list>',
+      "comma-separated outputs from html, pdf, json, csv, xlsx; default: the pack's",
+      parseFormats,
+    )
     .option('--force', 'replace a period folder that already exists', false)
     .option('-j, --jobs <n>', 'worker threads for the analysis', parseJobs, availableParallelism())
-    .addHelpText('after', '\nExamples:\n  ebbflow build pack.yaml\n  ebbflow build pack.yaml --period 2026-01..2026-10 --formats html,json --force\n')
+    .addHelpText(
+      'after',
+      '\nExamples:\n  ebbflow build pack.yaml\n' +
+        '  ebbflow build pack.yaml --period 2026-01..2026-10 --formats html,json --force\n',
+    )
     .action(async (packs: string[], opts: BuildOptions) => {
       code = await runBuild(packs, opts, io);
     });
@@ -176,7 +192,9 @@ export async function main(argv: string[], io: Io): Promise<number> {
   try {
     await program.parseAsync(argv, {from: 'user'});
   } catch (e) {
-    if (e instanceof CommanderError) return e.code === 'commander.helpDisplayed' || e.code === 'commander.version' ? 0 : 2;
+    if (e instanceof CommanderError) {
+      return e.code === 'commander.helpDisplayed' || e.code === 'commander.version' ? 0 : 2;
+    }
     return fail(e, io);
   }
   return code;
@@ -193,4 +211,6 @@ function isEntryPoint(): boolean {
   }
 }
 
-if (isEntryPoint()) process.exitCode = await main(process.argv.slice(2), {stdout: process.stdout, stderr: process.stderr});
+if (isEntryPoint()) {
+  process.exitCode = await main(process.argv.slice(2), {stdout: process.stdout, stderr: process.stderr});
+}

@@ -39,6 +39,7 @@ async function kindOf(file: string): Promise<'file' | 'folder' | 'missing'> {
  */
 export async function crossCheck(raw: unknown, packDir: string): Promise<PathProblem[]> {
   const out: PathProblem[] = [];
+  const add = (at: PropertyKey[], message: string) => out.push({path: at, message});
   const root = record(raw);
 
   const sourceIndex = new Map<string, number>();
@@ -48,27 +49,27 @@ export async function crossCheck(raw: unknown, packDir: string): Promise<PathPro
     const id = text(s.id);
     if (id !== undefined) {
       const j = sourceIndex.get(id);
-      if (j !== undefined) out.push({path: ['sources', i, 'id'], message: `sources[${i}].id ${id} is already used by sources[${j}]`});
+      if (j !== undefined) add(['sources', i, 'id'], `sources[${i}].id ${id} is already used by sources[${j}]`);
       else sourceIndex.set(id, i);
       layouts.set(id, s.layout);
     }
     if (s.layout === 'long') {
       for (const key of ['keyColumn', 'valueColumn']) {
         if (s[key] === undefined || s[key] === null)
-          out.push({path: ['sources', i, 'layout'], message: `sources[${i}] has layout long, which needs ${key}`});
+          add(['sources', i, 'layout'], `sources[${i}] has layout long, which needs ${key}`);
       }
     } else {
       for (const key of ['keyColumn', 'valueColumn']) {
         if (s[key] !== undefined && s[key] !== null)
-          out.push({path: ['sources', i, key], message: `sources[${i}].${key} only applies to layout long`});
+          add(['sources', i, key], `sources[${i}].${key} only applies to layout long`);
       }
     }
     const file = text(s.file);
     if (file !== undefined) {
       const abs = path.resolve(packDir, file);
       const k = await kindOf(abs);
-      if (k === 'missing') out.push({path: ['sources', i, 'file'], message: `sources[${i}].file not found: ${file} (looked for ${abs})`});
-      if (k === 'folder') out.push({path: ['sources', i, 'file'], message: `sources[${i}].file is a folder, not a file: ${file}`});
+      if (k === 'missing') add(['sources', i, 'file'], `sources[${i}].file not found: ${file} (looked for ${abs})`);
+      if (k === 'folder') add(['sources', i, 'file'], `sources[${i}].file is a folder, not a file: ${file}`);
     }
   }
   const sourceIds = [...sourceIndex.keys()];
@@ -81,20 +82,20 @@ export async function crossCheck(raw: unknown, packDir: string): Promise<PathPro
       const src = text(s.fromSource);
       if (src === undefined) return;
       if (!sourceIndex.has(src))
-        out.push({path: ['series', i, 'fromSource'], message: `series[${i}].fromSource names no source: ${src}${hint(src, sourceIds)}`});
+        add(['series', i, 'fromSource'], `series[${i}].fromSource names no source: ${src}${hint(src, sourceIds)}`);
       else if (layouts.get(src) !== 'long')
-        out.push({path: ['series', i, 'fromSource'], message: `series[${i}].fromSource needs a source with layout long; ${src} is wide`});
+        add(['series', i, 'fromSource'], `series[${i}].fromSource needs a source with layout long; ${src} is wide`);
       return;
     }
     const id = text(s.id);
     if (id !== undefined) {
       const j = seriesIndex.get(id);
-      if (j !== undefined) out.push({path: ['series', i, 'id'], message: `series[${i}].id ${id} is already used by series[${j}]`});
+      if (j !== undefined) add(['series', i, 'id'], `series[${i}].id ${id} is already used by series[${j}]`);
       else seriesIndex.set(id, i);
     }
     const src = text(s.source);
     if (src !== undefined && !sourceIndex.has(src))
-      out.push({path: ['series', i, 'source'], message: `series[${i}].source names no source: ${src}${hint(src, sourceIds)}`});
+      add(['series', i, 'source'], `series[${i}].source names no source: ${src}${hint(src, sourceIds)}`);
   });
   const seriesIds = [...seriesIndex.keys()];
   const unknownSeries = (id: string) => !seriesIndex.has(id) && !hasFromSource;
@@ -102,9 +103,9 @@ export async function crossCheck(raw: unknown, packDir: string): Promise<PathPro
   series.forEach((s, i) => {
     const target = text(s.target);
     if (target === undefined) return;
-    if (target === s.id) out.push({path: ['series', i, 'target'], message: `series[${i}].target cannot be the series itself`});
+    if (target === s.id) add(['series', i, 'target'], `series[${i}].target cannot be the series itself`);
     else if (unknownSeries(target))
-      out.push({path: ['series', i, 'target'], message: `series[${i}].target names no series: ${target}${hint(target, seriesIds)}`});
+      add(['series', i, 'target'], `series[${i}].target names no series: ${target}${hint(target, seriesIds)}`);
   });
 
   const groupIndex = new Map<string, number>();
@@ -114,16 +115,16 @@ export async function crossCheck(raw: unknown, packDir: string): Promise<PathPro
       const id = text(g.id);
       if (id !== undefined) {
         const j = groupIndex.get(id);
-        if (j !== undefined) out.push({path: ['groups', i, 'id'], message: `groups[${i}].id ${id} is already used by groups[${j}]`});
+        if (j !== undefined) add(['groups', i, 'id'], `groups[${i}].id ${id} is already used by groups[${j}]`);
         else groupIndex.set(id, i);
       }
       list(g.series).forEach((m, k) => {
         const member = text(m);
         if (member !== undefined && unknownSeries(member))
-          out.push({
-            path: ['groups', i, 'series', k],
-            message: `groups[${i}].series[${k}] names no series: ${member}${hint(member, seriesIds)}`,
-          });
+          add(
+            ['groups', i, 'series', k],
+            `groups[${i}].series[${k}] names no series: ${member}${hint(member, seriesIds)}`,
+          );
       });
     });
 
@@ -132,10 +133,10 @@ export async function crossCheck(raw: unknown, packDir: string): Promise<PathPro
   const period = text(pack.period);
   if (period !== undefined && (frequency === 'monthly' || frequency === 'quarterly' || frequency === 'weekly')) {
     if (parsePeriod(frequency, period) === undefined)
-      out.push({
-        path: ['pack', 'period'],
-        message: `pack.period ${period} is not a ${frequency} period; write it like ${periodExample[frequency]}`,
-      });
+      add(
+        ['pack', 'period'],
+        `pack.period ${period} is not a ${frequency} period; write it like ${periodExample[frequency]}`,
+      );
   }
 
   const branding = record(root.branding);
@@ -143,15 +144,15 @@ export async function crossCheck(raw: unknown, packDir: string): Promise<PathPro
   if (logo !== undefined) {
     const abs = path.resolve(packDir, logo);
     if ((await kindOf(abs)) !== 'file')
-      out.push({path: ['branding', 'logo'], message: `branding.logo not found: ${logo} (looked for ${abs})`});
+      add(['branding', 'logo'], `branding.logo not found: ${logo} (looked for ${abs})`);
     else if (!/\.(png|jpe?g|svg)$/i.test(logo))
-      out.push({path: ['branding', 'logo'], message: 'branding.logo must be a .png, .jpg or .svg file'});
+      add(['branding', 'logo'], 'branding.logo must be a .png, .jpg or .svg file');
   }
   const templates = text(branding.templates);
   if (templates !== undefined) {
     const abs = path.resolve(packDir, templates);
     if ((await kindOf(abs)) !== 'folder')
-      out.push({path: ['branding', 'templates'], message: `branding.templates folder not found: ${templates} (looked for ${abs})`});
+      add(['branding', 'templates'], `branding.templates folder not found: ${templates} (looked for ${abs})`);
   }
   return out;
 }

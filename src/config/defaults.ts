@@ -3,7 +3,9 @@ import type {Frequency} from '../time/period.js';
 
 /** Analysis options as written in `defaults:` before the values that depend on the data are resolved. */
 export interface AnalysisDefaults {
-  decomposition: Omit<AnalysisOptions['decomposition'], 'seasonalWindow'> & {seasonalWindow: 'periodic' | number | null};
+  decomposition: Omit<AnalysisOptions['decomposition'], 'seasonalWindow'> & {
+    seasonalWindow: 'periodic' | number | null;
+  };
   calendar: AnalysisOptions['calendar'];
   outliers: AnalysisOptions['outliers'];
   forecast: Omit<AnalysisOptions['forecast'], 'horizon'> & {horizon: number | null};

@@ -6,7 +6,9 @@
  * @example mergeDefined({a: 1, b: {c: 2, d: 3}}, {b: {c: 5, d: null}}) // => {a: 1, b: {c: 5, d: 3}}
  */
 export function mergeDefined<T>(base: T, override: unknown): T {
-  if (!isPlainObject(base) || !isPlainObject(override)) return override === undefined || override === null ? base : (override as T);
+  if (!isPlainObject(base) || !isPlainObject(override)) {
+    return override === undefined || override === null ? base : (override as T);
+  }
   const out: Record<string, unknown> = {...base};
   for (const [key, value] of Object.entries(override)) out[key] = mergeDefined(out[key], value);
   return out as T;

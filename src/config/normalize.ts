@@ -34,7 +34,11 @@ export function resolveAnalysis(merged: AnalysisDefaults, frequency: Frequency):
     decomposition: {...d, seasonalWindow},
     calendar: {...merged.calendar, holidays: [...merged.calendar.holidays]},
     outliers: {...merged.outliers},
-    forecast: {...merged.forecast, horizon: merged.forecast.horizon ?? defaultHorizon[frequency], levels: [...merged.forecast.levels]},
+    forecast: {
+      ...merged.forecast,
+      horizon: merged.forecast.horizon ?? defaultHorizon[frequency],
+      levels: [...merged.forecast.levels],
+    },
     cycle: {...merged.cycle},
   };
 }

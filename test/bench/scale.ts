@@ -51,7 +51,7 @@ async function writeData(dir: string): Promise<void> {
       const v = level * (1 + growth) ** t * (1 + amp * Math.sin((2 * Math.PI * month) / 12)) * (1 + 0.03 * (rng() - 0.5));
       chunk += `${2016 + Math.floor(t / 12)}-${String(month + 1).padStart(2, '0')},s${s},${v.toFixed(2)}\n`;
     }
-    if (!file.write(chunk)) await new Promise((r) => file.once('drain', r));
+    if (!file.write(chunk)) await new Promise<void>((r) => file.once('drain', () => r()));
   }
   await new Promise<void>((resolve) => file.end(resolve));
   writeFileSync(

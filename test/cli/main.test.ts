@@ -80,7 +80,9 @@ describe('help and version', () => {
     expect(option.stderr).toMatch(/unknown option '--colour'/);
     const formats = await run(['build', validPack, '--formats', 'html,pfd']);
     expect(formats.code).toBe(2);
-    expect(formats.stderr).toContain('unknown format "pfd"; did you mean pdf? (choose from html, pdf, json, csv, xlsx)');
+    expect(formats.stderr).toContain(
+      'unknown format "pfd"; did you mean pdf? (choose from html, pdf, json, csv, xlsx)',
+    );
     expect((await run(['build', validPack, '--jobs', '0'])).code).toBe(2);
     expect(pipeline.build).not.toHaveBeenCalled();
   });
@@ -88,7 +90,8 @@ describe('help and version', () => {
 
 describe('build', () => {
   test('passes the options to the pipeline and prints the folder', async () => {
-    const {code, stdout} = await run(['build', validPack, '--period', '2025-03', '--out', 'o', '--formats', 'html,json', '--force', '--jobs', '3']);
+    const argv = ['build', validPack, '--period', '2025-03', '--out', 'o', '--formats', 'html,json', '--force', '-j', '3'];
+    const {code, stdout} = await run(argv);
     expect(code).toBe(0);
     expect(stdout).toBe('/out/p/2025-03\n');
     expect(pipeline.build).toHaveBeenCalledTimes(1);
@@ -126,10 +129,14 @@ describe('build', () => {
     expect(reversed).toEqual({
       code: 2,
       stdout: '',
-      stderr: 'command line: --period 2026-Q1..2025-Q3 runs backwards; put the earlier period first\n1 problem; nothing was written\n',
+      stderr:
+        'command line: --period 2026-Q1..2025-Q3 runs backwards; put the earlier period first\n' +
+        '1 problem; nothing was written\n',
     });
     const label = await run(['build', minimalPack, '--period', '2025-03..2025-06']);
-    expect(label.stderr).toContain('command line: --period 2025-03..2025-06: 2025-03 is not a quarterly period; write it like 2026-Q3');
+    expect(label.stderr).toContain(
+      'command line: --period 2025-03..2025-06: 2025-03 is not a quarterly period; write it like 2026-Q3',
+    );
   });
 
   test('bad packs are all reported before anything is built', async () => {
@@ -151,7 +158,8 @@ describe('build', () => {
   });
 
   test('data problems found while building exit with 2 and say what was kept', async () => {
-    pipeline.build.mockResolvedValueOnce({packId: 'p', period: '2025-Q3', folder: '/out/p/2025-Q3', outputs: [], pdfSkipped: null});
+    const first = {packId: 'p', period: '2025-Q3', folder: '/out/p/2025-Q3', outputs: [], pdfSkipped: null};
+    pipeline.build.mockResolvedValueOnce(first);
     pipeline.build.mockRejectedValueOnce(badInput);
     const {code, stderr} = await run(['build', minimalPack, '--period', '2025-Q3..2025-Q4', '--formats', 'html']);
     expect(code).toBe(2);
@@ -202,7 +210,8 @@ describe('init', () => {
     const dir = path.join(await mkdtemp(path.join(tmpdir(), 'ebbflow-init-')), 'starter');
     const {code, stdout} = await run(['init', dir]);
     expect(code).toBe(0);
-    expect(stdout).toMatch(/^Wrote a starter pack \(\d+ files\) to .*starter\nNext: ebbflow build .*starter\/monthly-pack\.yaml\n$/);
+    expect(stdout).toMatch(/^Wrote a starter pack \(\d+ files\) to .*starter\n/);
+    expect(stdout).toMatch(/\nNext: ebbflow build .*starter\/monthly-pack\.yaml\n$/);
     const files = (await readdir(dir, {recursive: true})).sort();
     expect(files).toContain('monthly-pack.yaml');
     expect(files).toContain(path.join('data', 'trading.csv'));

@@ -29,10 +29,18 @@ describe('expandPeriodRange', () => {
       }
       return [];
     };
-    expect(message('2026-03..2026-01')).toEqual(['command line: --period 2026-03..2026-01 runs backwards; put the earlier period first']);
-    expect(message('2026-01..2026-13')).toEqual(['command line: --period 2026-01..2026-13: 2026-13 is not a monthly period; write it like 2026-10']);
-    expect(message('2026-01..2026-02..2026-03')).toEqual(['command line: --period 2026-01..2026-02..2026-03 is not a range; write it like 2026-01..2026-10']);
-    expect(message('1900-01..2026-01')).toEqual(['command line: --period 1900-01..2026-01 spans more than 530 periods']);
+    expect(message('2026-03..2026-01')).toEqual([
+      'command line: --period 2026-03..2026-01 runs backwards; put the earlier period first',
+    ]);
+    expect(message('2026-01..2026-13')).toEqual([
+      'command line: --period 2026-01..2026-13: 2026-13 is not a monthly period; write it like 2026-10',
+    ]);
+    expect(message('2026-01..2026-02..2026-03')).toEqual([
+      'command line: --period 2026-01..2026-02..2026-03 is not a range; write it like 2026-01..2026-10',
+    ]);
+    expect(message('1900-01..2026-01')).toEqual([
+      'command line: --period 1900-01..2026-01 spans more than 530 periods',
+    ]);
   });
 
   test('isPeriodRange', () => {
@@ -50,6 +58,8 @@ describe('option parsers', () => {
 
   test('--jobs', () => {
     expect(parseJobs('4')).toBe(4);
-    for (const bad of ['0', '-1', '2.5', 'many', '1000']) expect(() => parseJobs(bad)).toThrow(/whole number from 1 to 256/);
+    for (const bad of ['0', '-1', '2.5', 'many', '1000']) {
+      expect(() => parseJobs(bad)).toThrow(/whole number from 1 to 256/);
+    }
   });
 });

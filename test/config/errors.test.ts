@@ -32,7 +32,9 @@ async function problems(yaml: string, overrides?: PlanOverrides, files = ['data/
     expect(e).toBeInstanceOf(InputError);
     const err = e as InputError;
     for (const p of err.problems) expect(p.file === packFile || p.file === 'command line').toBe(true);
-    return err.problems.map((p) => (p.line === null ? `${p.file}: ${p.message}` : `${p.line}:${p.column}: ${p.message}`));
+    return err.problems.map((p) =>
+      p.line === null ? `${p.file}: ${p.message}` : `${p.line}:${p.column}: ${p.message}`,
+    );
   }
   throw new Error('loadPlan accepted the pack');
 }
@@ -52,7 +54,9 @@ describe('schema problems point at the key', () => {
 
   test('unknown keys at the top level and inside nested blocks', async () => {
     expect(
-      await problems(`${head}${longKeys}${okSeries}\n    decomposition: {method: stl, seasonalWindo: 7}\nsorces: []\ncolour: red`),
+      await problems(
+        `${head}${longKeys}${okSeries}\n    decomposition: {method: stl, seasonalWindo: 7}\nsorces: []\ncolour: red`,
+      ),
     ).toEqual([
       '15:34: series[0].decomposition has an unknown key seasonalWindo; did you mean seasonalWindow?',
       '16:1: the pack file has an unknown key sorces; did you mean sources?',
@@ -61,7 +65,8 @@ describe('schema problems point at the key', () => {
   });
 
   test('a value outside an enum', async () => {
-    expect(await problems(`${head}${longKeys}${okSeries}\n  - id: orders\n    source: trading\n    kind: stok`)).toEqual([
+    const yaml = `${head}${longKeys}${okSeries}\n  - id: orders\n    source: trading\n    kind: stok`;
+    expect(await problems(yaml)).toEqual([
       '17:5: series[1].kind must be one of flow, stock',
     ]);
   });
@@ -149,7 +154,9 @@ describe('cross-checks', () => {
     const yaml = `${head}${longKeys}${okSeries}`.replace('frequency: monthly', 'frequency: monthly\n  period: 2026-Q3');
     expect(await problems(yaml)).toEqual(['4:3: pack.period 2026-Q3 is not a monthly period; write it like 2026-10']);
     const quarterly = yaml.replace('monthly', 'quarterly').replace('2026-Q3', '2026-13');
-    expect(await problems(quarterly)).toEqual(['4:3: pack.period 2026-13 is not a quarterly period; write it like 2026-Q3']);
+    expect(await problems(quarterly)).toEqual([
+      '4:3: pack.period 2026-13 is not a quarterly period; write it like 2026-Q3',
+    ]);
   });
 
   test('a bad --period is reported against the command line', async () => {
@@ -166,7 +173,8 @@ describe('cross-checks', () => {
   });
 
   test('key and value columns on a wide source', async () => {
-    expect(await problems(`${head}${longKeys}${okSeries}`.replace('data/trading.csv', 'data/trading.csv\n    keyColumn: k'))).toEqual([
+    const yaml = `${head}${longKeys}${okSeries}`.replace('data/trading.csv', 'data/trading.csv\n    keyColumn: k');
+    expect(await problems(yaml)).toEqual([
       '7:5: sources[0].keyColumn only applies to layout long',
     ]);
   });

@@ -53,7 +53,10 @@ describe('a valid pack', async () => {
   test('resolves paths against the pack file', () => {
     expect(plan.outDir).toBe(path.join(dir, 'reports'));
     expect(plan.branding.logo).toBe(path.join(dir, 'brand', 'logo.svg'));
-    expect(plan.sources.map((s) => s.file)).toEqual([path.join(dir, 'data/till.csv'), path.join(dir, 'data/visits.csv')]);
+    expect(plan.sources.map((s) => s.file)).toEqual([
+      path.join(dir, 'data/till.csv'),
+      path.join(dir, 'data/visits.csv'),
+    ]);
   });
 
   test('fills source and series defaults, with the line of each entry', () => {
@@ -69,7 +72,13 @@ describe('a valid pack', async () => {
       encoding: 'utf-8',
       line: 16,
     });
-    expect(plan.sources[1]).toMatchObject({layout: 'long', dateColumn: 'date', keyColumn: 'series', valueColumn: 'value', line: 21});
+    expect(plan.sources[1]).toMatchObject({
+      layout: 'long',
+      dateColumn: 'date',
+      keyColumn: 'series',
+      valueColumn: 'value',
+      line: 21,
+    });
     expect(plan.series.map((s) => [s.id, s.label, s.column, s.kind, s.target, s.hidden, s.line])).toEqual([
       ['takings', 'Takings', 'takings', 'flow', 'takings-plan', false, 27],
       ['takings-plan', 'takings-plan', 'plan', 'flow', null, true, 34],
@@ -106,7 +115,12 @@ describe('a valid pack', async () => {
     const [entry] = plan.fromSource ?? [];
     expect(entry).toMatchObject({source: 'visits', position: 3, line: 42});
     expect(entry.template).toMatchObject({source: 'visits', unit: 'visits', kind: 'flow', hidden: false, target: null});
-    expect(entry.template.analysis.forecast).toEqual({method: 'auto', horizon: 6, levels: [80, 95, 99], backtestOrigins: 6});
+    expect(entry.template.analysis.forecast).toEqual({
+      method: 'auto',
+      horizon: 6,
+      levels: [80, 95, 99],
+      backtestOrigins: 6,
+    });
   });
 
   test('series analysis objects are independent copies', () => {

@@ -42,13 +42,18 @@ describe('editDistance', () => {
 
   test('one edit away is distance one', () => {
     fc.assert(
-      fc.property(fc.string({minLength: 1, maxLength: 12}), fc.nat(), fc.string({minLength: 1, maxLength: 1}), (s, at, c) => {
-        const i = at % s.length;
-        const deleted = s.slice(0, i) + s.slice(i + 1);
-        const inserted = s.slice(0, i) + c + s.slice(i);
-        expect(editDistance(s, deleted)).toBe(1);
-        expect(editDistance(s, inserted)).toBe(1);
-      }),
+      fc.property(
+        fc.string({minLength: 1, maxLength: 12}),
+        fc.nat(),
+        fc.string({minLength: 1, maxLength: 1}),
+        (s, at, c) => {
+          const i = at % s.length;
+          const deleted = s.slice(0, i) + s.slice(i + 1);
+          const inserted = s.slice(0, i) + c + s.slice(i);
+          expect(editDistance(s, deleted)).toBe(1);
+          expect(editDistance(s, inserted)).toBe(1);
+        },
+      ),
     );
   });
 });

@@ -41,6 +41,20 @@ export function loessAt(
   let h = Math.max(x - left, right - x);
   if (span > n) h += Math.trunc((span - n) / 2);
   const kernel = tricubeTable(h);
+  // A local line through a symmetric window with symmetric weights passes through the weighted mean at its
+  // centre, so the slope terms are skipped there (and for local constants); the result differs only by rounding.
+  if (degree === 0 || h === 0 || (robustness === null && x - left === right - x)) {
+    let sw = 0;
+    let swy = 0;
+    for (let j = left; j <= right; j++) {
+      const u = j - x;
+      let w = kernel[u < 0 ? -u : u];
+      if (robustness !== null) w *= robustness[j - 1];
+      sw += w;
+      swy += w * y[j - 1];
+    }
+    return sw > 0 ? swy / sw : NaN;
+  }
   let sw = 0;
   let swu = 0;
   let swuu = 0;
@@ -59,7 +73,6 @@ export function loessAt(
   }
   if (sw <= 0) return NaN;
   const level = swy / sw;
-  if (!(h > 0 && degree > 0)) return level;
   const meanU = swu / sw;
   const c = swuu / sw - meanU * meanU;
   if (!(Math.sqrt(c) > 0.001 * (n - 1))) return level;

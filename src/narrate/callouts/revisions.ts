@@ -20,9 +20,10 @@ export const revisionsRule: Rule = {
       const period = index === undefined ? r.period : fmt.period(a.frequency, index);
       const periodsAgo = index === undefined ? 0 : Math.max(0, a.end - index);
       const base = {key: `${r.measure}-${r.period}`, chart: chartId(s.id, 'overview'), periodsAgo};
-      const numeric = typeof r.previous === 'number' && typeof r.current === 'number';
-      if ((r.measure === 'original' || r.measure === 'adjusted') && numeric) {
-        const pct = r.revisionPct ?? ((r.current - r.previous) / Math.abs(r.previous)) * 100;
+      const {previous: from, current: to} = r;
+      const numericMeasure = r.measure === 'original' || r.measure === 'adjusted';
+      if (numericMeasure && typeof from === 'number' && typeof to === 'number') {
+        const pct = r.revisionPct ?? ((to - from) / Math.abs(from)) * 100;
         out.push({
           ...base,
           severity: Math.abs(pct) >= 3 * plan.thresholds.revisionPct ? 'alert' : 'watch',
@@ -31,12 +32,12 @@ export const revisionsRule: Rule = {
             measure: r.measure,
             period,
             since,
-            up: r.current > r.previous,
+            up: to > from,
             size: fmt.size(pct),
-            from: fmt.number(r.previous),
-            to: fmt.value(r.current, s.unit),
+            from: fmt.number(from),
+            to: fmt.value(to, s.unit),
           }),
-          figures: {previous: r.previous, current: r.current, revisionPct: pct},
+          figures: {previous: from, current: to, revisionPct: pct},
           magnitude: Math.abs(pct) / plan.thresholds.revisionPct,
         });
       } else if (r.measure === 'trend-direction' || r.measure === 'cycle-phase') {

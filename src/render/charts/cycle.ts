@@ -33,7 +33,10 @@ export function cycleChart(input: CycleInput, ctx: ChartContext): TopLevelSpec {
   const lastIndex = values.map((r) => r.v !== null).lastIndexOf(true);
   const last = lastIndex >= 0 ? [values[lastIndex]] : [];
   const present = TURN_KEYS.map((k, i) => [k, i] as const).filter(([k]) => turns.some((r) => r.k === k));
-  const turnLegend = {symbolStrokeColor: theme.contrast, symbolStrokeWidth: 1.3};
+  const turnLegend = {
+    symbolOpacity: 1,
+    encode: {symbols: {update: {stroke: {value: theme.contrast}, strokeWidth: {value: 1.3}}}},
+  };
   return {
     $schema: SCHEMA,
     description: input.description,
@@ -55,7 +58,7 @@ export function cycleChart(input: CycleInput, ctx: ChartContext): TopLevelSpec {
       {data: {values: [{}]}, mark: {type: 'rule', color: theme.ink, strokeWidth: 0.8}, encoding: {y: {datum: 0}}},
       ...when(turns.length > 0, {
         data: {values: turns},
-        mark: {type: 'point', size: 60, strokeWidth: 1.3, color: theme.contrast},
+        mark: {type: 'point', size: 60, strokeWidth: 1.3, opacity: 1, color: theme.contrast},
         encoding: {
           x: {field: 't', type: 'temporal'},
           y: {field: 'v', type: 'quantitative'},

@@ -92,7 +92,7 @@ export function forecastChart(input: ForecastInput, ctx: ChartContext): TopLevel
       },
       ...when(backtest.length > 0, {
         data: {values: backtest},
-        mark: {type: 'point', shape: 'circle', filled: false, size: 26, strokeWidth: 1.2},
+        mark: {type: 'point', shape: 'circle', filled: false, size: 26, strokeWidth: 1.2, opacity: 1},
         encoding: {x: {field: 't', type: 'temporal'}, y: {field: 'v', type: 'quantitative'}, color: {field: 's', type: 'nominal'}},
       }),
     ],

@@ -61,7 +61,7 @@ export function irregularChart(input: IrregularInput, ctx: ChartContext): TopLev
         data: {values: flagged},
         layer: [
           {
-            mark: {type: 'point', filled: true, size: 70, color: theme.contrast, stroke: 'white', strokeWidth: 0.8},
+            mark: {type: 'point', filled: true, size: 70, opacity: 1, color: theme.contrast, stroke: 'white', strokeWidth: 0.8},
             encoding: {
               x: {field: 't', type: 'temporal'},
               y: {field: 'v', type: 'quantitative'},
@@ -69,7 +69,7 @@ export function irregularChart(input: IrregularInput, ctx: ChartContext): TopLev
                 field: 'k',
                 type: 'nominal',
                 scale: {domain: kinds, range: kinds.map((k) => shapes[k])},
-                legend: {symbolFillColor: theme.contrast, symbolStrokeColor: theme.contrast},
+                legend: {symbolFillColor: theme.contrast, symbolStrokeColor: theme.contrast, symbolOpacity: 1},
               },
             },
           },
