@@ -38,7 +38,7 @@ body{color:#1f2a2e}
 h1{font-size:1.6rem;margin-bottom:.2rem}h2{font-size:1.15rem;margin:1.6rem 0 .3rem;border-bottom:1px solid #c9d3d6}
 .muted{color:#5b6a70;font-weight:normal;font-size:.9rem}.links a{margin-right:1rem}
 table{border-collapse:collapse;width:100%;margin-top:.4rem}th,td{padding:.25rem .5rem;border-bottom:1px solid #e4eaec}
-th{text-align:left;font-weight:600}td{text-align:right;font-variant-numeric:tabular-nums}`;
+th{text-align:left;font-weight:600}td,th.num{text-align:right}td{font-variant-numeric:tabular-nums}`;
 
 /**
  * The archive's index.html: every archived period of one pack, newest first, with links to its files
@@ -101,7 +101,7 @@ function table(r: Headlines): string {
     })
     .join('\n');
   return `<table>
-<thead><tr><th>Series</th><th>Latest</th><th>Year on year</th></tr></thead>
+<thead><tr><th>Series</th><th class="num">Latest</th><th class="num">Year on year</th></tr></thead>
 <tbody>
 ${rows}
 </tbody>

@@ -5,6 +5,7 @@ import {labelFrequency, parseDateCell} from '../time/parseDate.js';
 import * as msg from './messages.js';
 import {numberAdvice, parseNumberCell} from './parseNumber.js';
 import type {ProblemLog} from './problemLog.js';
+import {sniffDelimiter} from './sniffDelimiter.js';
 
 /** Most distinct date texts remembered per file: long files repeat each date once per key. */
 const DATE_CACHE = 4096;
@@ -25,12 +26,18 @@ export class CellReader {
     readonly problems: ProblemLog,
   ) {}
 
-  /** 0-based index of a header name, or -1 with a problem suggesting the nearest name. */
+  /** 0-based index of a header name, or -1 with a problem suggesting the nearest name or the right delimiter. */
   column(header: string[], line: number, what: string, name: string): number {
     const at = header.indexOf(name);
-    if (at < 0) {
-      this.problems.add(this.source.file, line, null, msg.missingColumn(what, name, didYouMean(name, header), header));
-    }
+    if (at >= 0) return at;
+    // A one-column header that another delimiter splits: the source declares the wrong delimiter.
+    const declared = this.source.delimiter;
+    const found = header.length === 1 && declared !== 'auto' ? sniffDelimiter(header[0]) : declared;
+    const message =
+      found !== declared && header[0].includes(found)
+        ? msg.missingColumnDelimiter(what, name, declared, found)
+        : msg.missingColumn(what, name, didYouMean(name, header), header);
+    this.problems.add(this.source.file, line, null, message);
     return at;
   }
 

@@ -74,7 +74,7 @@ export async function ingest(plan: Plan): Promise<Dataset> {
     const placed = placeSeries(s.id, store, range, period, plan.frequency);
     const file = data.input!.file;
     if (!placed.ok) {
-      problems.add(plan.packFile, null, null, placed.problem);
+      problems.add(plan.packFile, s.line, null, placed.problem);
       continue;
     }
     const seriesNotes = placed.notes.map((message) => ({file, line: null, message: `${s.id}: ${message}`}));

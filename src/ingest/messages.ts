@@ -52,6 +52,9 @@ export const duplicateRow = (label: string, first: number, second: number): stri
   `${label} appears twice, on lines ${first} and ${second}; keep one row per period`;
 export const duplicateKeyRow = (key: string, label: string, first: number, second: number): string =>
   `"${key}" has two rows for ${label}, on lines ${first} and ${second}; keep one row per period`;
+export const missingColumnDelimiter = (what: string, name: string, declared: string, found: string): string =>
+  `${what} "${name}" is not in the header: split at ${shown(declared)} the header is one column, but it splits at ` +
+  `${shown(found)}; set \`delimiter: "${found === '\t' ? '\\t' : found}"\` (or \`auto\`) on the source`;
 export const shortRow = (fields: number, header: number): string =>
   `the row has ${fields} fields but the header has ${header}; a delimiter or quote may be missing`;
 export const notANumber = (text: string, column: string, advice: string): string =>
@@ -74,6 +77,10 @@ export const padded = (frequency: Frequency, last: string, n: number, period: st
   `data end at ${last}: the ${count(frequency, n)} up to the review period ${period} are missing`;
 export const inferredPeriod = (period: string): string =>
   `review period ${period}: the pack sets none, so the last period with data is used`;
+
+function shown(delimiter: string): string {
+  return delimiter === '\t' ? 'tabs' : `"${delimiter}"`;
+}
 
 function listed(items: string[]): string {
   if (items.length <= LISTED) return items.join(', ');

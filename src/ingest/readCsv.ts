@@ -76,7 +76,7 @@ export async function readCsv(
     });
     if (stopped) return undefined;
     if (!headerSeen) {
-      problems.add(source.file, null, null, msg.emptyFile());
+      problems.add(source.file, 1, null, msg.emptyFile());
       return undefined;
     }
   } catch (e) {

@@ -28,6 +28,6 @@ export async function readSource(
     data.input = await readCsv(source, visitor, problems);
     if (data.input !== undefined && data.input.rows > 0) visitor.finish();
   }
-  if (data.input !== undefined && data.input.rows === 0) problems.add(source.file, null, null, msg.noRows());
+  if (data.input !== undefined && data.input.rows === 0) problems.add(source.file, data.headerLine, null, msg.noRows());
   return data;
 }

@@ -14,8 +14,3 @@ export function severityFromZ(z: number): Callout['severity'] {
   return a >= ALERT_SIGMA ? 'alert' : a >= WATCH_SIGMA ? 'watch' : 'info';
 }
 
-/** The more serious of two severities. */
-export function worse(a: Callout['severity'], b: Callout['severity']): Callout['severity'] {
-  const order = {info: 0, watch: 1, alert: 2};
-  return order[a] >= order[b] ? a : b;
-}

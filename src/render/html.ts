@@ -69,8 +69,12 @@ export function templateFiles(overrideDir: string | null): TemplateFiles {
 function pageCss(report: Report, theme: Theme): string {
   const {paper, orientation} = report.plan.branding;
   const family = theme.font.replace(/[^A-Za-z0-9 _-]/g, '');
+  const [w, h] = paper === 'A4' ? [210, 297] : [215.9, 279.4];
+  // Page height less the 18 + 16 mm print margins and a little slack, so the cover never spills over.
+  const coverMm = Math.floor((orientation === 'portrait' ? h : w) - 34 - 5);
   return (
     `@page { size: ${paper} ${orientation}; }\n` +
+    `.cover { height: ${coverMm}mm; }\n` +
     `:root { --accent: ${theme.accent}; --deep: ${theme.deep}; --tint: ${theme.tint}; --wash: ${theme.wash}; ` +
     `--contrast: ${theme.contrast}; --contrast-tint: ${theme.contrastTint}; --ink: ${theme.ink}; --muted: ${theme.muted}; ` +
     `--rule: ${theme.rule}; --font: '${family}'; --content-width: ${pageGeometry(paper, orientation).width}px; }\n`

@@ -4,7 +4,7 @@
  * Every role differs from its neighbours in lightness, stroke width or dash as well as hue, so the charts
  * still read when printed in greyscale. The scheme is ours: a deep shade of the accent for the trend-cycle,
  * the accent itself for seasonally adjusted figures, a neutral grey for original data, tints of the accent
- * for interval bands, and a complementary hue for flagged points and falls.
+ * for interval bands, and a warning hue (brick red, or deep blue beside a red accent) for flagged points and falls.
  *
  * Pure; O(1).
  */
@@ -17,7 +17,7 @@ export interface Theme {
   tint: string;
   /** Accent mixed 90% toward white: outer (95%) bands, panels. */
   wash: string;
-  /** Hue opposite the accent at a readable lightness: outliers, falls, alerts. */
+  /** Brick red (deep blue when the accent is red or orange) at a readable lightness: outliers, falls, alerts. */
   contrast: string;
   /** Contrast mixed 70% toward white. */
   contrastTint: string;
@@ -35,7 +35,9 @@ export function themeFor(accent: string, font: string): Theme {
   const base = HEX.test(accent) ? accent.toLowerCase() : '#2f5d8a';
   const rgb = toRgb(base);
   const [h, s] = toHsl(rgb);
-  const contrast = fromHsl((h + 180) % 360, Math.min(0.75, Math.max(0.45, s)), 0.42);
+  // A brick red for flags and falls; a deep blue instead when the accent is itself red or orange.
+  const reddish = s > 0.25 && (h < 40 || h > 330);
+  const contrast = fromHsl(reddish ? 215 : 5, Math.min(0.75, Math.max(0.5, s)), 0.42);
   return {
     font,
     accent: base,

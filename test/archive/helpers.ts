@@ -1,12 +1,16 @@
 /** File-system helpers shared by the archive tests. */
 import {createHash} from 'node:crypto';
-import {mkdtemp, readdir, readFile, stat} from 'node:fs/promises';
+import {mkdtemp, readdir, readFile, rm, stat} from 'node:fs/promises';
 import {tmpdir} from 'node:os';
 import {join} from 'node:path';
 import {spawnSync} from 'node:child_process';
+import {onTestFinished} from 'vitest';
 
+/** A fresh temporary folder, deleted when the current test finishes. */
 export async function tempDir(): Promise<string> {
-  return mkdtemp(join(tmpdir(), 'ebbflow-archive-'));
+  const dir = await mkdtemp(join(tmpdir(), 'ebbflow-archive-'));
+  onTestFinished(() => rm(dir, {recursive: true, force: true}));
+  return dir;
 }
 
 /** Every file under `dir`, as `/`-separated relative paths, sorted. */

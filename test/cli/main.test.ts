@@ -90,7 +90,7 @@ describe('help and version', () => {
 
 describe('build', () => {
   test('passes the options to the pipeline and prints the folder', async () => {
-    const argv = ['build', validPack, '--period', '2025-03', '--out', 'o', '--formats', 'html,json', '--force', '-j', '3'];
+    const argv = ['build', validPack, '-p', '2025-03', '--out', 'o', '--formats', 'html,json', '--force', '-j', '3'];
     const {code, stdout} = await run(argv);
     expect(code).toBe(0);
     expect(stdout).toBe('/out/p/2025-03\n');

@@ -1,12 +1,16 @@
 import {test} from 'vitest';
-import {specToSvg} from '../../src/render/svg.js';
-import {seasonalChart} from '../../src/render/charts/seasonal.js';
-import {themeFor} from '../../src/render/theme.js';
+import {writeFileSync} from 'node:fs';
+import {renderHtml, openBrowser} from '../../src/render/index.js';
 import {makeReport} from './fixtures.js';
 test('scratch2', async () => {
-  const r = makeReport();
-  const a = r.series[0].analysis;
-  const spec = seasonalChart({start: a.start, seasonal: a.adjustment!.seasonal, model: 'multiplicative', description: 'x'}, {frequency: 'monthly', theme: themeFor('#1d6f64', 'Liberation Sans'), width: 327, height: 180, unit: null, seasonNames: ['Jan','Feb','Mar','Apr','May','Jun','Jul','Aug','Sep','Oct','Nov','Dec']});
-  const svg = await specToSvg(spec, {locale: 'en-GB', font: 'Liberation Sans', idPrefix: 'x', title: 't', description: 'd'});
-  console.log(svg.includes('role-legend'), JSON.stringify(spec.config?.legend));
+  const report = makeReport({count: 2, locale: 'de-DE', frequency: 'quarterly'});
+  report.plan.branding.orientation = 'landscape';
+  report.plan.branding.logo = '/tmp/logo.svg';
+  report.plan.branding.accent = '#7a3b8f';
+  const html = await renderHtml(report);
+  const b = await openBrowser(null);
+  if ('missing' in b) throw new Error(b.missing);
+  const pdf = await b.pdf(html, {title: report.plan.title, periodLabel: '2026-Q3', paper: 'A4', orientation: 'landscape', font: 'Liberation Sans', footer: 'x', date: '20261001', locale: 'de-DE'});
+  writeFileSync('/tmp/r2.pdf', pdf);
+  await b.close();
 });

@@ -22,7 +22,14 @@ function report(history: History | null = null): Report {
       levels: [80, 95],
       lower: {'80': [10, 10.5], '95': [9, 9.5]},
       upper: {'80': [12, 13.5], '95': [13, 14.5]},
-      backtest: {origins: 6, horizon: 2, mase: 1.2, smape: 8.5, benchmarks: [{method: 'Naive', mase: 1.4, smape: 9}], points: []},
+      backtest: {
+        origins: 6,
+        horizon: 2,
+        mase: 1.2,
+        smape: 8.5,
+        benchmarks: [{method: 'Naive', mase: 1.4, smape: 9}],
+        points: [],
+      },
       options: {},
       notes: [],
     },
@@ -38,7 +45,16 @@ function report(history: History | null = null): Report {
         plan,
         analysis,
         callouts: [
-          {id: 'net-sales/year-on-year', seriesId: 'net-sales', rule: 'year-on-year', severity: 'info', rank: 120, text: `${EVIL} came to 11`, figures: {value: 11, change: NaN}, chart: 'chart-net-sales-yoy'},
+          {
+            id: 'net-sales/year-on-year',
+            seriesId: 'net-sales',
+            rule: 'year-on-year',
+            severity: 'info',
+            rank: 120,
+            text: `${EVIL} came to 11`,
+            figures: {value: 11, change: NaN},
+            chart: 'chart-net-sales-yoy',
+          },
         ],
       },
       {plan: makeSeriesPlan({id: 'budget', hidden: true}), analysis: makeAnalysis([1, 2, 3]), callouts: []},
@@ -52,8 +68,30 @@ function report(history: History | null = null): Report {
 
 const history: History = {
   previousPeriod: '2026-09',
-  revisions: [{seriesId: 'net-sales', period: '2026-09', kind: 'data', measure: 'original', previous: 10, current: 10.5, revisionPct: 5, large: true}],
-  tracking: [{seriesId: 'net-sales', publishedIn: '2026-09', period: '2026-10', horizon: 1, forecast: 10.5, actual: 11, error: 0.5, inside: {'80': true, '95': true}}],
+  revisions: [
+    {
+      seriesId: 'net-sales',
+      period: '2026-09',
+      kind: 'data',
+      measure: 'original',
+      previous: 10,
+      current: 10.5,
+      revisionPct: 5,
+      large: true,
+    },
+  ],
+  tracking: [
+    {
+      seriesId: 'net-sales',
+      publishedIn: '2026-09',
+      period: '2026-10',
+      horizon: 1,
+      forecast: 10.5,
+      actual: 11,
+      error: 0.5,
+      inside: {'80': true, '95': true},
+    },
+  ],
   trackingSummary: [],
 };
 

@@ -60,10 +60,21 @@ export function loessAt(
   let swuu = 0;
   let swy = 0;
   let swuy = 0;
-  for (let j = left; j <= right; j++) {
+  // Two loops (left of x, then from x) so the distance |j − x| needs no branch.
+  const split = Math.min(Math.max(x, left), right + 1);
+  for (let j = left; j < split; j++) {
     const u = j - x;
-    let w = kernel[u < 0 ? -u : u];
-    if (robustness !== null) w *= robustness[j - 1];
+    const w = robustness === null ? kernel[-u] : kernel[-u] * robustness[j - 1];
+    const wy = w * y[j - 1];
+    sw += w;
+    swu += w * u;
+    swuu += w * u * u;
+    swy += wy;
+    swuy += wy * u;
+  }
+  for (let j = split; j <= right; j++) {
+    const u = j - x;
+    const w = robustness === null ? kernel[u] : kernel[u] * robustness[j - 1];
     const wy = w * y[j - 1];
     sw += w;
     swu += w * u;

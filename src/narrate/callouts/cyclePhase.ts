@@ -9,8 +9,8 @@ type Phase = CycleResult['phase'];
  * Where the series stands in its cycle (gap to the long-run trend, sign and direction), and whether that
  * phase changed in the review period. A change is found by reading the previous period's phase from the gap
  * with the same rule (above/below trend by the gap's sign, rising/falling by its last change) and is only
- * reported when that rule agrees with the engine's current phase. Moving into a falling phase is watch,
- * anything else info.
+ * reported when that rule agrees with the engine's current phase. A change that crosses the long-run trend
+ * (above ↔ below) is watch; a change of direction only is info, since the gap's direction flips often.
  */
 export const cyclePhaseRule: Rule = {
   name: 'cycle-phase',
@@ -29,7 +29,7 @@ export const cyclePhaseRule: Rule = {
       return [
         {
           key: null,
-          severity: current.startsWith('falling') ? 'watch' : 'info',
+          severity: crossed(previous, current) ? 'watch' : 'info',
           text: say.cyclePhaseChange({
             label: s.label,
             from: say.phaseWords(previous),
@@ -62,4 +62,8 @@ function phaseAt(gap: number[], i: number): Phase | null {
   if (i < 1 || !Number.isFinite(gap[i]) || !Number.isFinite(gap[i - 1])) return null;
   const rising = gap[i] >= gap[i - 1];
   return gap[i] >= 0 ? (rising ? 'rising-above' : 'falling-above') : rising ? 'rising-below' : 'falling-below';
+}
+
+function crossed(from: Phase, to: Phase): boolean {
+  return from.endsWith('above') !== to.endsWith('above');
 }

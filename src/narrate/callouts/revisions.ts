@@ -20,16 +20,15 @@ export const revisionsRule: Rule = {
       const period = index === undefined ? r.period : fmt.period(a.frequency, index);
       const periodsAgo = index === undefined ? 0 : Math.max(0, a.end - index);
       const base = {key: `${r.measure}-${r.period}`, chart: chartId(s.id, 'overview'), periodsAgo};
-      const {previous: from, current: to} = r;
-      const numericMeasure = r.measure === 'original' || r.measure === 'adjusted';
-      if (numericMeasure && typeof from === 'number' && typeof to === 'number') {
+      const {measure, previous: from, current: to} = r;
+      if ((measure === 'original' || measure === 'adjusted') && typeof from === 'number' && typeof to === 'number') {
         const pct = r.revisionPct ?? ((to - from) / Math.abs(from)) * 100;
         out.push({
           ...base,
           severity: Math.abs(pct) >= 3 * plan.thresholds.revisionPct ? 'alert' : 'watch',
           text: say.revisionNumeric({
             label: s.label,
-            measure: r.measure,
+            measure,
             period,
             since,
             up: to > from,

@@ -1,23 +1,44 @@
 import {describe, expect, it} from 'vitest';
-import type {History} from '../../../src/archive/types.js';
+import type {History, RevisionRow, TrackingRow} from '../../../src/archive/types.js';
 import {revisionsRule} from '../../../src/narrate/callouts/revisions.js';
 import {forecastTrackingRule} from '../../../src/narrate/callouts/forecastTracking.js';
 import {forecastCheckRule} from '../../../src/narrate/callouts/forecastCheck.js';
 import {makeAnalysis, runRule} from '../fixtures.js';
 
+const revision = (over: Partial<RevisionRow>): RevisionRow => ({
+  seriesId: 'net-sales',
+  period: '2026-09',
+  kind: 'estimate',
+  measure: 'adjusted',
+  previous: 1950,
+  current: 1950,
+  revisionPct: 0,
+  large: true,
+  ...over,
+});
+
+const tracked = (over: Partial<TrackingRow>): TrackingRow => ({
+  seriesId: 'net-sales',
+  publishedIn: '2026-09',
+  period: '2026-10',
+  horizon: 1,
+  forecast: 2010,
+  actual: 2025,
+  error: 15,
+  inside: {'80': true, '95': true},
+  ...over,
+});
+
 const history: History = {
   previousPeriod: '2026-09',
   revisions: [
-    {seriesId: 'net-sales', period: '2026-09', kind: 'estimate', measure: 'adjusted', previous: 1950, current: 1985.1, revisionPct: 1.8, large: true},
-    {seriesId: 'net-sales', period: '2026-08', kind: 'data', measure: 'original', previous: 2000, current: 1930, revisionPct: -3.5, large: true},
-    {seriesId: 'net-sales', period: '2026-07', kind: 'estimate', measure: 'adjusted', previous: 1950, current: 1951, revisionPct: 0.05, large: false},
-    {seriesId: 'net-sales', period: '2026-09', kind: 'estimate', measure: 'cycle-phase', previous: 'rising-above', current: 'falling-above', revisionPct: null, large: true},
-    {seriesId: 'footfall', period: '2026-09', kind: 'data', measure: 'original', previous: 1, current: 2, revisionPct: 100, large: true},
+    revision({current: 1985.1, revisionPct: 1.8}),
+    revision({period: '2026-08', kind: 'data', measure: 'original', previous: 2000, current: 1930, revisionPct: -3.5}),
+    revision({period: '2026-07', current: 1951, revisionPct: 0.05, large: false}),
+    revision({measure: 'cycle-phase', previous: 'rising-above', current: 'falling-above', revisionPct: null}),
+    revision({seriesId: 'footfall', kind: 'data', measure: 'original', previous: 1, current: 2, revisionPct: 100}),
   ],
-  tracking: [
-    {seriesId: 'net-sales', publishedIn: '2026-08', period: '2026-10', horizon: 2, forecast: 1990, actual: 2025, error: 35, inside: {'80': true, '95': true}},
-    {seriesId: 'net-sales', publishedIn: '2026-09', period: '2026-10', horizon: 1, forecast: 2010, actual: 2025, error: 15, inside: {'80': true, '95': true}},
-  ],
+  tracking: [tracked({publishedIn: '2026-08', horizon: 2, forecast: 1990, error: 35}), tracked({})],
   trackingSummary: [{seriesId: 'net-sales', count: 8, mase: 0.84, coverage: {'80': 0.75, '95': 1}}],
 };
 

@@ -1,0 +1,96 @@
+import {mkdtemp, readdir, readFile, rm} from 'node:fs/promises';
+import {tmpdir} from 'node:os';
+import path from 'node:path';
+import {fileURLToPath} from 'node:url';
+import {afterEach, beforeEach, describe, expect, test} from 'vitest';
+import {CRASH_TEXT, runCli} from './run.js';
+
+/**
+ * Broken packs and CSV files (test/fixtures/bad/, described in cases.json): each must give exit code 2, the
+ * expected `file:line: message` on stderr, no stack trace, and write nothing — neither into --out nor next to
+ * the pack.
+ */
+
+interface BadCase {
+  name: string;
+  pack: string;
+  /** Regular expressions, each matched against one stderr line. */
+  expect: string[];
+  why: string;
+}
+
+const fixtures = fileURLToPath(new URL('../fixtures/bad/', import.meta.url));
+const cases: BadCase[] = JSON.parse(await readFile(path.join(fixtures, 'cases.json'), 'utf8'));
+
+let out = '';
+beforeEach(async () => {
+  out = await mkdtemp(path.join(tmpdir(), 'ebbflow-bad-'));
+});
+afterEach(async () => {
+  await rm(out, {recursive: true, force: true});
+});
+
+/** Every expected pattern matches some stderr line; stderr ends with the "nothing was written" summary. */
+function expectProblems(stderr: string, expected: string[]): void {
+  const lines = stderr.split('\n');
+  for (const e of expected) {
+    const re = new RegExp(e);
+    expect(
+      lines.some((l) => re.test(l)),
+      `no stderr line matches /${e}/ in:\n${stderr}`,
+    ).toBe(true);
+  }
+  expect(stderr).toMatch(/\d+ problems?; nothing was written\n$/);
+  expect(stderr).not.toMatch(CRASH_TEXT);
+}
+
+test('the manifest lists at least 30 cases, each with a folder and an expectation', async () => {
+  expect(cases.length).toBeGreaterThanOrEqual(30);
+  expect(new Set(cases.map((c) => c.name)).size).toBe(cases.length);
+  for (const c of cases) {
+    expect(c.expect.length, c.name).toBeGreaterThan(0);
+    expect(c.why, c.name).not.toBe('');
+    await readFile(path.join(fixtures, c.pack));
+  }
+});
+
+test('the control pack the cases derive from is valid', async () => {
+  const run = await runCli(['check', path.join(fixtures, 'control', 'pack.yaml')]);
+  expect(run.stderr).toContain('no problems');
+  expect(run.code).toBe(0);
+});
+
+describe.each(cases)('$name', ({pack, expect: expected}) => {
+  const packFile = path.join(fixtures, pack);
+
+  test('check: exit 2 with file:line problems', async () => {
+    const before = await readdir(path.dirname(packFile));
+    const run = await runCli(['check', packFile]);
+    expectProblems(run.stderr, expected);
+    expect(run.stdout).toBe('');
+    expect(run.code).toBe(2);
+    expect(await readdir(path.dirname(packFile))).toEqual(before);
+  });
+
+  test('build: exit 2, same problems, nothing written', async () => {
+    const before = await readdir(path.dirname(packFile));
+    const run = await runCli(['build', packFile, '--out', out, '--jobs', '1']);
+    expectProblems(run.stderr, expected);
+    expect(run.stdout).toBe('');
+    expect(run.code).toBe(2);
+    expect(await readdir(out)).toEqual([]);
+    expect(await readdir(path.dirname(packFile))).toEqual(before);
+  });
+});
+
+test('check lists every problem of a pack at once: config keys, missing files and CSV cells', async () => {
+  const packFile = path.join(fixtures, 'several-problems', 'pack.yaml');
+  const run = await runCli(['check', packFile]);
+  expect(run.code).toBe(2);
+  expectProblems(run.stderr, [
+    String.raw`pack\.yaml:\d+:\d+: series\[0\] has an unknown key lable; did you mean label\?`,
+    String.raw`pack\.yaml:\d+:5: sources\[2\]\.file not found: gone\.csv`,
+    String.raw`data\.csv:12:1: 2023-05 appears twice, on lines 6 and 12`,
+    String.raw`other\.csv:8:2: "n/k" in column "orders" is not a number`,
+  ]);
+});
