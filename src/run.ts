@@ -1,4 +1,4 @@
-import {loadPlan} from './config/index.js';
+import {loadPlan, salvagePlan} from './config/index.js';
 import type {OutputFormat, Plan} from './config/plan.js';
 import {ingest} from './ingest/index.js';
 import type {Dataset} from './ingest/types.js';
@@ -13,7 +13,7 @@ import type {SeriesAnalysis} from './analyse/types.js';
 import type {History} from './archive/types.js';
 import {formatPeriod, periodStartDay, civilFromDays} from './time/period.js';
 import {toolVersion} from './version.js';
-import {InputError} from './errors.js';
+import {InputError, formatProblem, type Problem} from './errors.js';
 import type {Logger} from './log.js';
 
 export interface BuildRequest {
@@ -44,8 +44,10 @@ export interface BuildSummary {
  *   pack.yaml ─► loadPlan ─► ingest ─► analyse ─► narrate ─► render ─► archive ─► out/<pack>/<period>/
  */
 export async function build(request: BuildRequest, log: Logger): Promise<BuildSummary> {
-  const plan = await loadPlan(request.packFile, {period: request.period, outDir: request.outDir, formats: request.formats});
-  const data = await ingest(plan);
+  const loaded = await loadPlan(request.packFile, {period: request.period, outDir: request.outDir, formats: request.formats});
+  const data = await ingest(loaded);
+  // The plan as used: `fromSource` entries expanded into the series ingest found.
+  const plan: Plan = {...loaded, series: data.plans};
   const periodLabel = formatPeriod(plan.frequency, data.period);
   log.info(`${plan.id} ${periodLabel}: ${data.series.length} series read`);
   const analyses = await analyseAll(plan, data, {jobs: request.jobs, log});
@@ -86,11 +88,34 @@ export async function build(request: BuildRequest, log: Logger): Promise<BuildSu
   return {packId: plan.id, period: periodLabel, folder: written.folder, outputs: written.outputs, pdfSkipped};
 }
 
-/** Validate config and data, build nothing. Throws InputError listing every problem. */
+/**
+ * Validate config and data, build nothing. Throws one InputError listing every problem: when the pack itself has
+ * problems, the data is still read through a salvaged plan (see `salvagePlan`) so CSV problems show in the same run.
+ */
 export async function check(packFile: string, log: Logger): Promise<void> {
-  const plan = await loadPlan(packFile);
-  const data = await ingest(plan);
-  log.info(`${packFile}: ${data.series.length} series, review period ${formatPeriod(plan.frequency, data.period)}, no problems`);
+  let plan: Plan | null;
+  const problems: Problem[] = [];
+  try {
+    plan = await loadPlan(packFile);
+  } catch (e) {
+    if (!(e instanceof InputError)) throw e;
+    problems.push(...e.problems);
+    plan = await salvagePlan(packFile);
+  }
+  let data: Dataset | null = null;
+  if (plan) {
+    try {
+      data = await ingest(plan);
+    } catch (e) {
+      if (!(e instanceof InputError)) throw e;
+      const seen = new Set(problems.map(formatProblem));
+      problems.push(...e.problems.filter((p) => !seen.has(formatProblem(p))));
+    }
+  }
+  if (problems.length > 0) throw new InputError(problems);
+  if (plan && data) {
+    log.info(`${packFile}: ${data.series.length} series, review period ${formatPeriod(plan.frequency, data.period)}, no problems`);
+  }
 }
 
 function assemble(plan: Plan, data: Dataset, analyses: SeriesAnalysis[], history: History | null): Report {

@@ -2,3 +2,4 @@ export {loadPlan, type PlanOverrides} from './load.js';
 export {defaultConfig} from './defaults.js';
 export {slugify} from './slug.js';
 export type * from './plan.js';
+export {salvagePlan} from './salvage.js';

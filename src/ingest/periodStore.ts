@@ -11,7 +11,7 @@ export class PeriodStore {
   private base = 0;
   private values = new Float64Array(0);
   private lines = new Uint32Array(0);
-  /** Cells of this column or key that could not be read (each reported as a problem). */
+  /** Cells of this column or key that could not be read, or whose row has an unreadable date (each reported). */
   rejected = 0;
   /** Set when a row arrived for an earlier period than the row before it. */
   outOfOrderLine = 0;

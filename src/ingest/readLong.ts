@@ -48,7 +48,10 @@ export function longVisitor(cells: CellReader, wanted: Wanted, data: SourceData)
         data.stores.set(key, store);
       }
       const period = cells.period(fields[cells.dateColumn] ?? '', line);
-      if (period === undefined) return;
+      if (period === undefined) {
+        store.rejected++;
+        return;
+      }
       const value = cells.value(fields[valueAt] ?? '', line, valueAt, valueLabel);
       if (value === undefined) {
         store.rejected++;

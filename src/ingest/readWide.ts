@@ -41,7 +41,11 @@ export function wideVisitor(cells: CellReader, wanted: Wanted, data: SourceData)
       if (fields.every((f) => f.trim() === '')) return;
       if (fields.length < width) cells.problems.add(file, line, null, msg.shortRow(fields.length, width));
       const period = cells.period(fields[cells.dateColumn] ?? '', line);
-      if (period === undefined) return;
+      if (period === undefined) {
+        // The row's values are unusable, not missing: a column is not then reported as all blank.
+        for (const {store} of columns) store.rejected++;
+        return;
+      }
       const before = rowLines.get(period);
       if (before !== undefined) {
         const label = formatPeriod(cells.frequency, period);

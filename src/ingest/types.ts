@@ -44,5 +44,5 @@ export interface Dataset {
    * The plan of each series, index-aligned with `series`: the pack's own series and those expanded from
    * `fromSource` entries (id = slug of the key, label = column = key), in pack order. Always set by `ingest`.
    */
-  plans?: SeriesPlan[];
+  plans: SeriesPlan[];
 }

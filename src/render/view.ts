@@ -370,7 +370,7 @@ function seriesView(
     middle.push(
       slot(
         'yoy',
-        'half',
+        adj ? 'half' : 'full',
         'Change on a year earlier (%)',
         yearOnYearChart(
           {

@@ -3,14 +3,13 @@ import {writeFileSync} from 'node:fs';
 import {renderHtml, openBrowser} from '../../src/render/index.js';
 import {makeReport} from './fixtures.js';
 test('scratch2', async () => {
-  const report = makeReport({count: 2, locale: 'de-DE', frequency: 'quarterly'});
-  report.plan.branding.orientation = 'landscape';
+  const report = makeReport({count: 3, history: true, shortSecond: true});
   report.plan.branding.logo = '/tmp/logo.svg';
-  report.plan.branding.accent = '#7a3b8f';
   const html = await renderHtml(report);
+  writeFileSync('/tmp/r3.html', html);
   const b = await openBrowser(null);
   if ('missing' in b) throw new Error(b.missing);
-  const pdf = await b.pdf(html, {title: report.plan.title, periodLabel: '2026-Q3', paper: 'A4', orientation: 'landscape', font: 'Liberation Sans', footer: 'x', date: '20261001', locale: 'de-DE'});
-  writeFileSync('/tmp/r2.pdf', pdf);
+  const pdf = await b.pdf(html, {title: report.plan.title, periodLabel: '2026-10', paper: 'A4', orientation: 'portrait', font: 'Liberation Sans', footer: 'Harbourline Trading · internal', date: '20261101'});
+  writeFileSync('/tmp/r3.pdf', pdf);
   await b.close();
 });

@@ -84,6 +84,16 @@ describe('buildView', () => {
     expect(view.summary.map((r) => r.label)).toEqual(['Net sales', 'Headcount', 'Web visits']);
   });
 
+  test('each chart is drawn at the width of its slot', () => {
+    for (const report of [makeReport({count: 2, shortSecond: true}), makeReport({count: 1, frequency: 'quarterly'})]) {
+      const slots = buildView(report, null).series.flatMap((s) => s.rows.flat());
+      for (const slot of slots) {
+        const width = (slot.chart.spec as {width: number}).width;
+        expect([slot.chart.id, width]).toEqual([slot.chart.id, slot.chart.size === 'full' ? 672 : 327]);
+      }
+    }
+  });
+
   test('numbers and periods follow the locale', () => {
     const view = buildView(makeReport({count: 1, locale: 'de-DE'}), null);
     expect(view.cover.period).toBe('Oktober 2026');

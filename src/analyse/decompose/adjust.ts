@@ -81,12 +81,11 @@ export function adjust(values: Float64Array, ctx: AdjustContext): AdjustOutcome 
   const remove = (a: number, b: number): number => (mult ? a / b : a - b);
   const start = ctx.start + first;
 
-  let min = Infinity;
-  let max = -Infinity;
-  for (const v of span) if (!Number.isNaN(v)) (min = Math.min(min, v)), (max = Math.max(max, v));
-  if (min === max) return {ok: true, adjustment: constantAdjustment(values, first, last, ctx, model, period)};
+  const observedValues = span.filter((v) => !Number.isNaN(v));
+  if (Math.min(...observedValues) === Math.max(...observedValues)) return {ok: true, adjustment: constantAdjustment(values, first, last, ctx, model, period)};
 
-  const decompose = (x: Float64Array): Parts => decomposeOnce(x, {frequency, start, model, options: ctx.options, period});
+  const decompose = (x: Float64Array): Parts =>
+    decomposeOnce(x, {frequency, start, model, options: ctx.options, period});
 
   // Gaps: straight lines first, then (FILL_ROUNDS times) the fitted trend and seasonal at the missing points.
   const x = fillGaps(span).values;
@@ -130,26 +129,30 @@ export function adjust(values: Float64Array, ctx: AdjustContext): AdjustOutcome 
     for (let i = 0; i < m; i++) out[first + i] = part[i];
     return out;
   };
+  const calendarAt = (i: number): number => (anyCalendar ? calendarFactor[i] : fromModel(0));
   const irregular = span.map((v, i) =>
-    missing[i] ? NaN : remove(remove(remove(v, fit.trend[i]), fit.seasonal[i]), anyCalendar ? calendarFactor[i] : fromModel(0)),
+    missing[i] ? NaN : remove(remove(remove(v, fit.trend[i]), fit.seasonal[i]), calendarAt(i)),
   );
-  const adjusted = span.map((v, i) => remove(remove(v, fit.seasonal[i]), anyCalendar ? calendarFactor[i] : fromModel(0)));
+  const adjusted = span.map((v, i) => remove(remove(v, fit.seasonal[i]), calendarAt(i)));
   const irregularModel = irregular.map(toModel);
   const adjustedModel = adjusted.map(toModel);
   const outliers = ctx.outliers
     ? detectOutliers(irregularModel, adjustedModel, ctx.residualSigma).map((o) => ({...o, index: o.index + first}))
     : [];
   const seasonGroup = Int32Array.from({length: m}, (_, i) =>
-    frequency === 'weekly' ? civilFromDays(periodStartDay('weekly', start + i) + 3).month - 1 : seasonOf(frequency, start + i),
+    frequency === 'weekly'
+      ? civilFromDays(periodStartDay('weekly', start + i) + 3).month - 1
+      : seasonOf(frequency, start + i),
   );
   const revision = revisionDiagnostic(x, span, adjusted, (sub) => {
     const cal = calendarModel.subarray(0, sub.length);
     const f = decompose(sub.map((v, i) => fromModel(toModel(v) - (anyCalendar ? cal[i] : 0))));
-    return sub.map((v, i) => remove(remove(v, f.seasonal[i]), anyCalendar ? calendarFactor[i] : fromModel(0)));
+    return sub.map((v, i) => remove(remove(v, f.seasonal[i]), calendarAt(i)));
   }, REVISION_ENDS[frequency], minimum, mult);
 
   const adjustment: Adjustment = {
     method: method === 'classical' ? 'classical' : 'stl',
+    methodLabel: METHOD_LABEL[method],
     model,
     modelReason: frequency === 'weekly' ? `${chosen.reason} ${WEEKLY_NOTE}` : chosen.reason,
     trend: full(fit.trend, NaN),
@@ -188,6 +191,12 @@ export function adjust(values: Float64Array, ctx: AdjustContext): AdjustOutcome 
   if (!anyCalendar && estimates !== null) adjustment.options.calendarNote = 'no calendar effect was significant at 5%';
   return {ok: true, adjustment};
 }
+
+const METHOD_LABEL = {
+  stl: 'STL (seasonal-trend decomposition by LOESS)',
+  classical: 'classical decomposition by moving averages',
+  fourier: 'yearly Fourier seasonal with a LOESS trend (weekly)',
+};
 
 const WEEKLY_NOTE =
   'Weekly series: the seasonal is a yearly Fourier pattern in the date (year = 365.2425 days), so 53-week years need no special handling; the trend is a LOESS.';
@@ -232,7 +241,9 @@ function decomposeOnce(
 function calendarRegressors(ctx: AdjustContext, start: number, m: number): RegressorColumn[] {
   if (ctx.frequency === 'weekly' || ctx.kind !== 'flow') return [];
   const out: RegressorColumn[] = [];
-  if (ctx.calendar.workingDays === 'auto') out.push({name: 'working-days', values: workingDayRegressor(ctx.frequency, start, m)});
+  if (ctx.calendar.workingDays === 'auto') {
+    out.push({name: 'working-days', values: workingDayRegressor(ctx.frequency, start, m)});
+  }
   if (ctx.calendar.easter === 'auto') out.push({name: 'easter', values: easterRegressor(ctx.frequency, start, m)});
   const holidays = ctx.calendar.holidays
     .map((h) => /^(\d{4})-(\d{2})-(\d{2})$/.exec(h))
@@ -244,7 +255,12 @@ function calendarRegressors(ctx: AdjustContext, start: number, m: number): Regre
 }
 
 /** Σ coefficient × regressor (model scale), over all regressors or only the significant ones. */
-function effectOf(regressors: RegressorColumn[], estimates: CalendarRegressor[], m: number, onlySignificant: boolean): Float64Array {
+function effectOf(
+  regressors: RegressorColumn[],
+  estimates: CalendarRegressor[],
+  m: number,
+  onlySignificant: boolean,
+): Float64Array {
   const out = new Float64Array(m);
   estimates.forEach((e, j) => {
     if (onlySignificant && !e.significant) return;
@@ -292,7 +308,14 @@ function revisionDiagnostic(
   return count > 0 ? {meanAbsPp: sum / count, periodsTested: count} : null;
 }
 
-function constantAdjustment(values: Float64Array, first: number, last: number, ctx: AdjustContext, model: Model, period: number): Adjustment {
+function constantAdjustment(
+  values: Float64Array,
+  first: number,
+  last: number,
+  ctx: AdjustContext,
+  model: Model,
+  period: number,
+): Adjustment {
   const n = values.length;
   const inSpan = (i: number): boolean => i >= first && i <= last;
   const level = values[first];

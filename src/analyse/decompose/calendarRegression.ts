@@ -29,7 +29,10 @@ export function regressCalendar(
   const k = regressors.length + 1;
   if (rows.length < k + 5) return null;
   const y = Float64Array.from(rows, (i) => irregular[i]);
-  const columns = [new Float64Array(rows.length).fill(1), ...regressors.map((r) => Float64Array.from(rows, (i) => r.values[i]))];
+  const columns = [
+    new Float64Array(rows.length).fill(1),
+    ...regressors.map((r) => Float64Array.from(rows, (i) => r.values[i])),
+  ];
   let fit;
   try {
     fit = leastSquares(y, columns);

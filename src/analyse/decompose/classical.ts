@@ -29,11 +29,16 @@ export interface ClassicalResult {
  *
  * Complexity: O(n · period). NaN policy: rejects NaN (fill gaps first).
  */
-export function classicalDecomposition(values: Float64Array, {period, model = 'additive'}: ClassicalOptions): ClassicalResult {
+export function classicalDecomposition(
+  values: Float64Array,
+  {period, model = 'additive'}: ClassicalOptions,
+): ClassicalResult {
   const n = values.length;
   if (!Number.isInteger(period) || period < 2) throw new RangeError(`invalid period: ${period}`);
   if (n < 2 * period) throw new RangeError('classical decomposition requires two full periods');
-  for (let i = 0; i < n; i++) if (!Number.isFinite(values[i])) throw new RangeError('classical decomposition requires finite values');
+  for (let i = 0; i < n; i++) {
+    if (!Number.isFinite(values[i])) throw new RangeError('classical decomposition requires finite values');
+  }
   const multiplicative = model === 'multiplicative';
   const trend = centredMovingAverage(values, period);
   const figure = new Float64Array(period);

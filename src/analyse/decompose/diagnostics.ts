@@ -12,14 +12,19 @@ export const RESIDUAL_SEASONALITY_TEST = 'seasonal-dummy F-test on period-on-per
  * the sum of the three so they add to 1. Rows with a NaN in any component are skipped. All values are first
  * divided by a power of two near the largest magnitude (an exact operation) so huge series do not overflow.
  */
-export function varianceShares(trend: Float64Array, seasonal: Float64Array, irregular: Float64Array): AdjustmentDiagnostics['varianceShares'] {
+export function varianceShares(
+  trend: Float64Array,
+  seasonal: Float64Array,
+  irregular: Float64Array,
+): AdjustmentDiagnostics['varianceShares'] {
+  const parts = [trend, seasonal, irregular];
   let scale = 0;
-  for (const a of [trend, seasonal, irregular]) for (const v of a) if (Number.isFinite(v)) scale = Math.max(scale, Math.abs(v));
+  for (const a of parts) for (const v of a) if (Number.isFinite(v)) scale = Math.max(scale, Math.abs(v));
   const s = scale > 0 ? 2 ** -Math.floor(Math.log2(scale)) : 1;
-  const vars = [trend, seasonal, irregular].map((a) => {
+  const vars = parts.map((a) => {
     const d: number[] = [];
     for (let i = 1; i < a.length; i++) {
-      if ([trend, seasonal, irregular].every((c) => Number.isFinite(c[i]) && Number.isFinite(c[i - 1]))) d.push((a[i] - a[i - 1]) * s);
+      if (parts.every((c) => Number.isFinite(c[i]) && Number.isFinite(c[i - 1]))) d.push((a[i] - a[i - 1]) * s);
     }
     const mean = d.reduce((x, y) => x + y, 0) / d.length;
     return d.reduce((x, y) => x + (y - mean) ** 2, 0) / d.length;
@@ -36,7 +41,11 @@ export function varianceShares(trend: Float64Array, seasonal: Float64Array, irre
  * F = ((RSS₀ − RSS₁)/(m − 1)) / (RSS₁/(N − m)), p from the F(m − 1, N − m) distribution; detected when p < 1%.
  * Reference: the standard linear-model F-test (e.g. Greene, Econometric Analysis, §5.3). NaN policy: skips NaN.
  */
-export function residualSeasonality(adjusted: Float64Array, season: Int32Array, groups: number): AdjustmentDiagnostics['residualSeasonality'] {
+export function residualSeasonality(
+  adjusted: Float64Array,
+  season: Int32Array,
+  groups: number,
+): AdjustmentDiagnostics['residualSeasonality'] {
   const d: number[] = [];
   const g: number[] = [];
   for (let i = 1; i < adjusted.length; i++) {
@@ -54,7 +63,8 @@ export function residualSeasonality(adjusted: Float64Array, season: Int32Array, 
   const y = Float64Array.from(d);
   const mean = d.reduce((a, b) => a + b, 0) / N;
   const rss0 = d.reduce((a, b) => a + (b - mean) ** 2, 0);
-  const columns = [new Float64Array(N).fill(1), ...present.slice(1).map((s) => Float64Array.from(g, (x) => (x === s ? 1 : 0)))];
+  const dummies = present.slice(1).map((s) => Float64Array.from(g, (x) => (x === s ? 1 : 0)));
+  const columns = [new Float64Array(N).fill(1), ...dummies];
   let rss1: number;
   try {
     rss1 = leastSquares(y, columns).residualSumOfSquares;

@@ -163,7 +163,14 @@ function workspace(m: number): Work {
   if (cached === null || cached.m !== m) {
     const buffer = new Float64Array(6 * m);
     const view = (k: number): Float64Array => buffer.subarray(k * m, (k + 1) * m);
-    const work = {detrended: view(0), cycle: view(1), lowpass: view(2), scratch: view(3), scratch2: view(4), subWeights: view(5)};
+    const work = {
+      detrended: view(0),
+      cycle: view(1),
+      lowpass: view(2),
+      scratch: view(3),
+      scratch2: view(4),
+      subWeights: view(5),
+    };
     cached = {m, work};
   }
   return cached.work;
@@ -240,7 +247,13 @@ function cycleSubseriesInto(
  * (1 − (r/h)²)², 1 below 0.001·h and 0 above 0.999·h. The median is the paper's: mean of the values its
  * partial sort leaves at ranks ⌊n/2⌋+1 and n − ⌊n/2⌋ (see {@link partialSortInPlace} for why not a true median).
  */
-function robustnessWeightsInto(y: Float64Array, fit: Float64Array, n: number, out: Float64Array, scratch: Float64Array): void {
+function robustnessWeightsInto(
+  y: Float64Array,
+  fit: Float64Array,
+  n: number,
+  out: Float64Array,
+  scratch: Float64Array,
+): void {
   const abs = scratch.subarray(0, n);
   for (let i = 0; i < n; i++) abs[i] = Math.abs(y[i] - fit[i]);
   const mid1 = (n >> 1) + 1;

@@ -45,8 +45,9 @@ export function trackingChart(input: TrackingInput, ctx: ChartContext): TopLevel
         data: {values},
         mark: {type: 'point', size: 50, strokeWidth: 1.4, color: theme.accent},
         encoding: {
-          x: timeX(frequency, Math.max(span, 3)),
-          y: {field: 'v', type: 'quantitative', title: '% actual above forecast', axis: {format: ',~r'}},
+          // Padding keeps points at the first and last period from being cut by the plot edge.
+          x: {...timeX(frequency, Math.max(span, 3)), scale: {type: 'utc', padding: 12}},
+          y: {field: 'v', type: 'quantitative', title: 'Actual vs forecast, %', axis: {format: ',~r'}},
           fill: {field: 'k', type: 'nominal', scale: {domain: [inside, outside], range: [theme.accent, 'white']}},
           shape: {field: 'k', type: 'nominal', scale: {domain: [inside, outside], range: ['circle', 'diamond']}},
         },
