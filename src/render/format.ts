@@ -15,8 +15,6 @@ export interface Formatter {
   percent(value: number | null | undefined, digits?: number): string;
   /** Unsigned percentage of a value already in percent, e.g. `91%`. */
   share(value: number | null | undefined, digits?: number): string;
-  /** Signed change in percentage points, e.g. `+0.4 pp`. */
-  points(value: number | null | undefined, digits?: number): string;
   /** Short period label: `Oct 2026`, `Q3 2026`, `W41 2026`. */
   period(frequency: Frequency, index: number): string;
   /** Long period label: `October 2026`, `Q3 2026`, `week 41, 2026`. */
@@ -57,10 +55,6 @@ export function formatter(tag: string): Formatter {
     share(value, digits = 0) {
       if (value == null || !Number.isFinite(value)) return DASH;
       return nf(`s${digits}`, {style: 'percent', ...fixed(digits)}).format(value / 100);
-    },
-    points(value, digits = 1) {
-      if (value == null || !Number.isFinite(value)) return DASH;
-      return `${nf(`pp${digits}`, {signDisplay: 'exceptZero', ...fixed(digits)}).format(value)} pp`;
     },
     period(frequency, index) {
       if (frequency === 'monthly') return monthShort.format(ms(frequency, index));

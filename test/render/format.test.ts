@@ -15,7 +15,6 @@ describe('formatter', () => {
     expect(f.percent(0)).toBe('0.0%');
     expect(f.number(NaN)).toBe('–');
     expect(f.percent(null)).toBe('–');
-    expect(f.points(0.42)).toBe('+0.4 pp');
   });
 
   test('de-DE and fr-FR marks and month names', () => {

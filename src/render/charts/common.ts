@@ -84,11 +84,6 @@ export function timeX(frequency: Frequency, periods: number, title: string | nul
   return {field: 't', type: 'temporal' as const, scale: {type: 'utc' as const}, title, axis: {...axis, grid: false}};
 }
 
-/** Value-axis title with the unit, e.g. `EUR k`. */
-export function unitTitle(unit: string | null, fallback: string | null = null): string | null {
-  return unit ?? fallback;
-}
-
 export const VALUE_FORMAT = ',~r';
 
 /** One layer of a layered chart. */

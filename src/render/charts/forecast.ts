@@ -1,7 +1,7 @@
 import type {TopLevelSpec} from 'vega-lite';
 import type {ForecastResult} from '../../analyse/forecast/types.js';
 import {periodsPerYear} from '../../time/period.js';
-import {SCHEMA, when, VALUE_FORMAT, baseConfig, epoch, finite, round, timeX, unitTitle, type ChartContext} from './common.js';
+import {SCHEMA, when, VALUE_FORMAT, baseConfig, epoch, finite, round, timeX, type ChartContext} from './common.js';
 
 /** Recent actuals, the forecast with its bands, and the back-test's one-step-ahead forecasts. */
 export interface ForecastInput {
@@ -69,7 +69,7 @@ export function forecastChart(input: ForecastInput, ctx: ChartContext): TopLevel
             field: 'lo',
             type: 'quantitative' as const,
             scale: {zero: false},
-            title: unitTitle(ctx.unit),
+            title: ctx.unit,
             axis: {format: VALUE_FORMAT},
           },
           y2: {field: 'hi'},

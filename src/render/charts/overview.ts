@@ -1,5 +1,5 @@
 import type {TopLevelSpec} from 'vega-lite';
-import {SCHEMA, VALUE_FORMAT, baseConfig, epoch, finite, round, timeX, unitTitle, type ChartContext} from './common.js';
+import {SCHEMA, VALUE_FORMAT, baseConfig, epoch, finite, round, timeX, type ChartContext} from './common.js';
 
 /** Original values with, when available, the seasonally adjusted series and the trend-cycle. */
 export interface OverviewInput {
@@ -46,7 +46,7 @@ export function overviewChart(input: OverviewInput, ctx: ChartContext): TopLevel
     mark: {type: 'line', interpolate: 'linear', ...(domain.length === 1 ? {strokeWidth: styles[domain[0]][1]} : {})},
     encoding: {
       x: timeX(ctx.frequency, input.original.length),
-      y: {field: 'v', type: 'quantitative', scale: {zero: false}, title: unitTitle(ctx.unit), axis: {format: VALUE_FORMAT}},
+      y: {field: 'v', type: 'quantitative', scale: {zero: false}, title: ctx.unit, axis: {format: VALUE_FORMAT}},
       color: {field: 's', type: 'nominal', scale: {domain, range: domain.map((s) => styles[s][0])}},
       ...(domain.length > 1
         ? {strokeWidth: {field: 's', type: 'ordinal', sort: domain, scale: {domain, range: domain.map((s) => styles[s][1])}, legend: null}}
