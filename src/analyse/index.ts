@@ -29,10 +29,17 @@ export async function analyseAll(
       values: series.values,
       kind: sp.kind,
       fiscalYearStart: plan.fiscalYearStart,
-      target: target ? {start: target.start, values: target.values} : null,
+      target: target ? {start: target.start, values: concat(target.values, target.ahead)} : null,
       options: sp.analysis,
       residualSigma: plan.thresholds.residualSigma,
     };
   });
   return runPool(inputs, {jobs, log});
+}
+
+function concat(a: Float64Array, b: Float64Array): Float64Array {
+  const out = new Float64Array(a.length + b.length);
+  out.set(a);
+  out.set(b, a.length);
+  return out;
 }

@@ -1,7 +1,8 @@
-import {mkdir, rename, rm} from 'node:fs/promises';
+import {createHash} from 'node:crypto';
+import {mkdir, open, rename, rm} from 'node:fs/promises';
 import {join} from 'node:path';
 import type {Report} from '../render/types.js';
-import {resultsJson} from '../render/results.js';
+import {resultsJsonChunks} from '../render/results.js';
 import {InputError} from '../errors.js';
 import {buildManifest} from './manifest.js';
 import {recoverPackDir} from './recover.js';
@@ -68,12 +69,10 @@ export async function archive(args: ArchiveArgs): Promise<{folder: string; outpu
   const files: {path: string; content: string | Uint8Array}[] = [];
   if (args.html !== null) files.push({path: 'report.html', content: args.html});
   if (args.pdf !== null) files.push({path: 'report.pdf', content: args.pdf});
-  files.push({path: 'results.json', content: resultsJson(report)});
+  const reportFiles = files.length;
   for (const e of [...args.exports].sort((a, b) => (a.name < b.name ? -1 : a.name > b.name ? 1 : 0))) {
     files.push({path: `exports/${e.name}`, content: e.content});
   }
-  const manifest = buildManifest({report, packYaml: args.packYaml, outputs: files, warnings: args.warnings});
-  files.push({path: 'manifest.json', content: `${JSON.stringify(manifest, null, 2)}\n`});
 
   const tmp = join(packDir, `.${label}.tmp-${process.pid}`);
   const old = join(packDir, `.${label}.old-${process.pid}`);
@@ -81,6 +80,13 @@ export async function archive(args: ArchiveArgs): Promise<{folder: string; outpu
     await rm(tmp, {recursive: true, force: true});
     await mkdir(tmp);
     if (args.exports.length > 0) await mkdir(join(tmp, 'exports'));
+    // results.json is streamed series by series (it can exceed the longest string V8 holds); its size and hash
+    // are taken while writing and placed among the manifest's outputs in the same path order.
+    const results = await writeChunksDurable(join(tmp, 'results.json'), resultsJsonChunks(report));
+    const manifest = buildManifest({report, packYaml: args.packYaml, outputs: files, warnings: args.warnings});
+    manifest.outputs.push({path: 'results.json', ...results});
+    manifest.outputs.sort((a, b) => (a.path < b.path ? -1 : a.path > b.path ? 1 : 0));
+    files.push({path: 'manifest.json', content: `${JSON.stringify(manifest, null, 2)}\n`});
     for (const f of files) await writeFileDurable(join(tmp, f.path), f.content);
     if (args.exports.length > 0) await syncFolder(join(tmp, 'exports'));
     await syncFolder(tmp);
@@ -105,5 +111,43 @@ export async function archive(args: ArchiveArgs): Promise<{folder: string; outpu
   }
   await writeIndex(args.outDir, report.plan.id);
   await step('done');
-  return {folder, outputs: files.map((f) => join(folder, f.path))};
+  // Listed in the order report files, results.json, exports, manifest.
+  const paths = files.map((f) => f.path);
+  paths.splice(reportFiles, 0, 'results.json');
+  return {folder, outputs: paths.map((p) => join(folder, p))};
+}
+
+/** Buffered pieces of text per write: few system calls without holding the whole file. */
+const WRITE_BLOCK = 1 << 20;
+
+/**
+ * Write a file from text pieces (UTF-8) and flush it to the disk, as `writeFileDurable` does for one string,
+ * returning its size in bytes and SHA-256 (hex) for the manifest. Memory: one block plus one piece.
+ */
+async function writeChunksDurable(path: string, chunks: Iterable<string>): Promise<{bytes: number; sha256: string}> {
+  const hash = createHash('sha256');
+  let bytes = 0;
+  const handle = await open(path, 'w');
+  try {
+    let pending: string[] = [];
+    let pendingLength = 0;
+    const flush = async () => {
+      const block = Buffer.from(pending.join(''), 'utf8');
+      pending = [];
+      pendingLength = 0;
+      hash.update(block);
+      bytes += block.byteLength;
+      await handle.write(block);
+    };
+    for (const chunk of chunks) {
+      pending.push(chunk);
+      pendingLength += chunk.length;
+      if (pendingLength >= WRITE_BLOCK) await flush();
+    }
+    await flush();
+    await handle.sync();
+  } finally {
+    await handle.close();
+  }
+  return {bytes, sha256: hash.digest('hex')};
 }

@@ -71,7 +71,9 @@ export async function ingest(plan: Plan): Promise<Dataset> {
 
   const series: Series[] = [];
   for (const {plan: s, data, store, range} of found) {
-    const placed = placeSeries(s.id, store, range, period, plan.frequency);
+    // A target (budget) keeps its values past the review period: the fiscal-year outturn compares against them.
+    const isTarget = plans.some((other) => other.target === s.id);
+    const placed = placeSeries(s.id, store, range, period, plan.frequency, isTarget);
     const file = data.input!.file;
     if (!placed.ok) {
       problems.add(plan.packFile, s.line, null, placed.problem);
@@ -83,6 +85,7 @@ export async function ingest(plan: Plan): Promise<Dataset> {
       frequency: plan.frequency,
       start: placed.start,
       values: placed.values,
+      ahead: placed.ahead,
       sourceId: s.source,
       file,
       notes: seriesNotes,

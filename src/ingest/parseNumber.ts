@@ -8,13 +8,21 @@
  *
  * Missing (NaN, never 0): blank, `NA`, `N/A`, `#N/A`, `-`, `–`, `—`, `null`, `NaN` (any case).
  *
- * Rejected (undefined; {@link numberAdvice} says why): currency symbols and codes and a trailing `%`.
+ * Rejected (undefined; {@link numberAdvice} says why): currency symbols and codes, a trailing `%`, and numbers
+ * beyond the double range (`1e400`), which would otherwise enter the analysis as Infinity.
  * They are not stripped because dropping them silently would change meaning: `12%` could be 12 or 0.12,
  * and a symbol on some cells suggests a column that mixes currencies. Units belong in the series `unit`.
  *
  * Complexity: O(length of text).
  */
 export function parseNumberCell(text: string, decimal: '.' | ','): number | undefined {
+  const value = readNumber(text, decimal);
+  // 1e400 reads as Infinity: rejected, since no later stage can compute with it.
+  return value === Infinity || value === -Infinity ? undefined : value;
+}
+
+/** {@link parseNumberCell} before the overflow check. */
+function readNumber(text: string, decimal: '.' | ','): number | undefined {
   if (decimal === '.' && PLAIN.test(text)) return Number(text);
   let s = text.trim();
   if (MISSING.has(s.toLowerCase())) return NaN;
@@ -46,6 +54,9 @@ export function numberAdvice(text: string, decimal: '.' | ','): string {
     return 'remove the currency symbol or code and put the unit in the series `unit`';
   }
   if (/%$/.test(s)) return 'write percentages as plain numbers (12.5, not 12.5%) and put % in the series `unit`';
+  if (Math.abs(readNumber(s, decimal) ?? 0) === Infinity) {
+    return 'it is too large to compute with (the limit is about 1.8e308); check the exponent';
+  }
   const other = decimal === '.' ? ',' : '.';
   if (parseNumberCell(s, other as '.' | ',') !== undefined) {
     return `it reads as a number with decimal mark "${other}": set \`decimal: "${other}"\` on the source`;

@@ -5,7 +5,7 @@ import type {PeriodStore} from './periodStore.js';
 
 /** A series placed on the calendar, or why it could not be. */
 export type Placement =
-  | {ok: true; start: number; values: Float64Array; notes: string[]}
+  | {ok: true; start: number; values: Float64Array; ahead: Float64Array; notes: string[]}
   | {ok: false; problem: string};
 
 /**
@@ -26,6 +26,7 @@ export function placeSeries(
   range: {first: number; last: number},
   period: number,
   frequency: Frequency,
+  keepAhead = false,
 ): Placement {
   const label = (p: number): string => formatPeriod(frequency, p);
   if (period < range.first) return {ok: false, problem: msg.periodBeforeData(id, label(period), label(range.first))};
@@ -39,12 +40,14 @@ export function placeSeries(
   }
   const notes: string[] = [];
   if (missing.length > 0) notes.push(msg.gaps(frequency, missing));
-  if (range.last > period) {
+  const ahead = new Float64Array(keepAhead ? Math.max(0, range.last - period) : 0);
+  for (let k = 0; k < ahead.length; k++) ahead[k] = store.get(period + 1 + k);
+  if (range.last > period && !keepAhead) {
     let after = 0;
     for (let p = period + 1; p <= range.last; p++) if (!Number.isNaN(store.get(p))) after++;
     notes.push(msg.truncated(frequency, after, label(period), label(period + 1), label(range.last)));
   } else if (range.last < period) {
     notes.push(msg.padded(frequency, label(range.last), period - range.last, label(period)));
   }
-  return {ok: true, start: range.first, values, notes};
+  return {ok: true, start: range.first, values, ahead, notes};
 }

@@ -9,6 +9,11 @@ export interface Series {
   start: number;
   /** One value per period up to and including the review period; NaN where missing (gaps are kept, never dropped). */
   values: Float64Array;
+  /**
+   * Values after the review period, kept only for series another series names as its `target` (a budget runs to
+   * the end of the fiscal year); empty otherwise. Never analysed as data.
+   */
+  ahead: Float64Array;
   sourceId: string;
   /** Absolute path of the CSV it came from. */
   file: string;

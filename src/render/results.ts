@@ -265,7 +265,36 @@ export function toResults(report: Report): ResultsV1 {
 
 /** results.json text: 2-space indent, full precision, trailing newline. */
 export function resultsJson(report: Report): string {
-  return `${JSON.stringify(toResults(report), null, 2)}\n`;
+  return [...resultsJsonChunks(report)].join('');
+}
+
+/**
+ * results.json as a sequence of text pieces whose concatenation is exactly {@link resultsJson}: the pack header,
+ * then one piece per series, then the pack callouts, notes and history.
+ *
+ * Why: a pack of 10,000 series gives a results.json of several hundred MB, above V8's longest string, and building
+ * the whole object first holds every series twice. Here only one series' results object and text exist at a time.
+ * Each piece is `JSON.stringify(…, null, 2)` of one part, re-indented to its depth; JSON.stringify escapes line
+ * breaks inside strings, so indenting after every line break gives the same bytes as stringifying the whole.
+ *
+ * Complexity: O(total array length); memory O(largest series).
+ */
+export function* resultsJsonChunks(report: Report): Generator<string> {
+  // Everything but the series, in toResults' key order: schema and pack before them, the rest after.
+  const {schema, pack, series: none, ...tail} = toResults({...report, series: []});
+  const head = JSON.stringify({schema, pack}, null, 2);
+  const after = JSON.stringify(tail, null, 2);
+  const f = report.plan.frequency;
+  if (report.series.length === 0) {
+    yield `${head.slice(0, -2)},\n  "series": ${JSON.stringify(none)},\n${after.slice(2)}\n`;
+    return;
+  }
+  yield `${head.slice(0, -2)},\n  "series": [\n`;
+  for (let i = 0; i < report.series.length; i++) {
+    const text = JSON.stringify(seriesResults(report.series[i], f), null, 2).replace(/\n/g, '\n    ');
+    yield `    ${text}${i < report.series.length - 1 ? ',' : ''}\n`;
+  }
+  yield `  ],\n${after.slice(2)}\n`;
 }
 
 /**

@@ -81,8 +81,7 @@ export function adjust(values: Float64Array, ctx: AdjustContext): AdjustOutcome 
   const remove = (a: number, b: number): number => (mult ? a / b : a - b);
   const start = ctx.start + first;
 
-  const observedValues = span.filter((v) => !Number.isNaN(v));
-  if (Math.min(...observedValues) === Math.max(...observedValues)) return {ok: true, adjustment: constantAdjustment(values, first, last, ctx, model, period)};
+  if (isConstant(span)) return {ok: true, adjustment: constantAdjustment(values, first, last, ctx, model, period)};
 
   const decompose = (x: Float64Array): Parts =>
     decomposeOnce(x, {frequency, start, model, options: ctx.options, period});
@@ -306,6 +305,17 @@ function revisionDiagnostic(
     }
   }
   return count > 0 ? {meanAbsPp: sum / count, periodsTested: count} : null;
+}
+
+/** True when every non-NaN value is the same. */
+function isConstant(values: Float64Array): boolean {
+  let seen = NaN;
+  for (const v of values) {
+    if (Number.isNaN(v)) continue;
+    if (Number.isNaN(seen)) seen = v;
+    else if (v !== seen) return false;
+  }
+  return true;
 }
 
 function constantAdjustment(

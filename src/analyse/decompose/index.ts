@@ -15,8 +15,17 @@ export type {Adjustment, AdjustmentDiagnostics, CalendarEffect, CalendarRegresso
 export type {AdjustContext, AdjustOutcome};
 
 /**
- * Seasonally adjust one series (values aligned with periods `ctx.start`, `ctx.start + 1`, …; NaN = missing).
- * Returns `{ok: false, reason}` with a plain sentence when the data cannot be adjusted; never throws for data.
+ * Seasonally adjust one series (values aligned with periods `ctx.start`, `ctx.start + 1`, …; NaN and infinities
+ * are treated as missing). Returns `{ok: false, reason}` with a plain sentence when the data cannot be adjusted
+ * (fewer than two full years observed, or no values); never throws.
+ *
+ * Components: additive original = trend + seasonal + irregular (+ calendar effect when `calendar` is non-null);
+ * multiplicative (STL on logs, back-transformed with exp) original = trend × seasonal × irregular (× calendar),
+ * exact up to rounding. Classical decomposition leaves trend and irregular NaN for ⌊period/2⌋ points at each end,
+ * as R does; `adjusted` is defined there all the same (original − seasonal, or ÷). Missing periods are filled
+ * for estimation and flagged in `filled`; their `adjusted` and `irregular` stay NaN. A constant series is
+ * returned with a neutral seasonal (0 or 1) and adjusted = original. Turning off the automatic parts (fixed
+ * model, calendar `off`, outliers off) gives exactly R's `stats::stl` / `stats::decompose` numbers.
  */
 export function adjustSeries(values: Float64Array, ctx: AdjustContext): AdjustOutcome {
   try {

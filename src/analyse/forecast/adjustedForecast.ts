@@ -17,5 +17,6 @@ export function reseasonalise<F extends Forecast>(forecast: F, adjustment: Seaso
     lower.set(level, adjustment.restore(forecast.lower.get(level)!));
     upper.set(level, adjustment.restore(forecast.upper.get(level)!));
   }
-  return {...forecast, method, mean: adjustment.restore(forecast.mean), lower, upper};
+  // Running totals of the adjusted series do not carry over to the original scale; the caller recomputes them.
+  return {...forecast, method, mean: adjustment.restore(forecast.mean), lower, upper, runningTotals: undefined};
 }

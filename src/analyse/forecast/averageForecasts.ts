@@ -2,7 +2,8 @@ import type {Forecast} from './model.js';
 
 /**
  * Equal-weight combination of forecasts: the mean of the point forecasts and, for each level, the mean of the
- * lower and of the upper bounds (quantile averaging), optionally widened about the mean by `scale`.
+ * lower and of the upper bounds (quantile averaging), optionally widened about the mean by `scale`; running-total
+ * bounds are combined the same way when every member has them.
  *
  * Why: combinations of a few good methods are more accurate than the methods alone (Makridakis & Hibon
  * 2000; Petropoulos & Svetunkov 2020); averaging quantiles rather than probabilities keeps the intervals from
@@ -38,5 +39,31 @@ export function averageForecasts(forecasts: Forecast[], method: string, scale: R
     lower.set(level, lo);
     upper.set(level, hi);
   }
-  return {method, mean, levels, lower, upper};
+  const out: Forecast = {method, mean, levels, lower, upper};
+  if (forecasts.every((f) => f.runningTotals)) {
+    const totalMean = new Float64Array(h);
+    let running = 0;
+    for (let i = 0; i < h; i++) totalMean[i] = running += mean[i];
+    const tl = new Map<number, Float64Array>();
+    const tu = new Map<number, Float64Array>();
+    for (const level of levels) {
+      const s = scale[level] ?? 1;
+      const lo = new Float64Array(h);
+      const hi = new Float64Array(h);
+      for (let i = 0; i < h; i++) {
+        let a = 0;
+        let b = 0;
+        for (const f of forecasts) {
+          a += f.runningTotals!.lower.get(level)![i] / k;
+          b += f.runningTotals!.upper.get(level)![i] / k;
+        }
+        lo[i] = totalMean[i] - s * (totalMean[i] - a);
+        hi[i] = totalMean[i] + s * (b - totalMean[i]);
+      }
+      tl.set(level, lo);
+      tu.set(level, hi);
+    }
+    out.runningTotals = {lower: tl, upper: tu};
+  }
+  return out;
 }

@@ -9,6 +9,14 @@ export interface Forecast {
   levels: number[];
   lower: Map<number, Float64Array>;
   upper: Map<number, Float64Array>;
+  /** Intervals for running totals of the forecasts (steps 1 … k), when the model can give them. */
+  runningTotals?: RunningTotals;
+}
+
+/** Lower and upper bounds, by level, of T_k = y_{n+1} + … + y_{n+k} for k = 1 … h. */
+export interface RunningTotals {
+  lower: Map<number, Float64Array>;
+  upper: Map<number, Float64Array>;
 }
 
 /** Options every `forecast…` function takes. */

@@ -7,7 +7,8 @@ import {seasonalAdjustment, type SeasonalAdjustment} from './seasonalAdjustment.
  * The Theta method as simple exponential smoothing with drift: on the (classically, multiplicatively)
  * seasonally adjusted series x, fit SES by least squares (α and initial level), add half the slope b of a
  * least-squares line through x: ŷ_{n+h} = ℓ_n + (b/2)·(h − 1 + (1 − (1 − α)ⁿ)/α), then reseasonalise.
- * Intervals: σ·√(1 + (h − 1)α²) around the forecast, σ² the SES residual variance on the adjusted scale.
+ * Intervals: σ·√(1 + (h − 1)α²) around the forecast, σ² the SES residual variance on the adjusted scale; running
+ * totals of the forecasts get σ²·Σ_{i≤k}(1 + α(k − i))² from the same error model.
  *
  * Reference: V. Assimakopoulos and K. Nikolopoulos (2000), The theta model: a decomposition approach to
  * forecasting, IJF 16, 521–530; R. J. Hyndman and B. Billah (2003), Unmasking the Theta method, IJF 19,
@@ -75,5 +76,18 @@ export function forecastTheta(fit: ThetaFit, options: ForecastOptions): Forecast
     variance[i] = fit.sigma2 * (i * alpha * alpha + 1);
   }
   const mean = fit.adjustment.restore(adjusted);
-  return {method: 'Theta', mean, variance, levels, ...normalIntervals(mean, variance, levels)};
+  // Running totals: with forecast errors e_j = ε_j + α·Σ_{i<j} ε_i, Var(e_1 + … + e_k) = σ²·Σ_{i≤k} (1 + α(k − i))²
+  // (on the adjusted scale, like the per-period intervals above).
+  const totalMean = new Float64Array(h);
+  const totalVariance = new Float64Array(h);
+  let running = 0;
+  for (let k = 0; k < h; k++) {
+    running += mean[k];
+    totalMean[k] = running;
+    let v = 0;
+    for (let i = 0; i <= k; i++) v += (1 + alpha * (k - i)) ** 2;
+    totalVariance[k] = fit.sigma2 * v;
+  }
+  const runningTotals = normalIntervals(totalMean, totalVariance, levels);
+  return {method: 'Theta', mean, variance, levels, ...normalIntervals(mean, variance, levels), runningTotals};
 }

@@ -48,7 +48,7 @@ export function loessAt(
     let swy = 0;
     for (let j = left; j <= right; j++) {
       const u = j - x;
-      let w = kernel[u < 0 ? -u : u];
+      let w = kernel !== null ? kernel[u < 0 ? -u : u] : tricube(u < 0 ? -u : u, h);
       if (robustness !== null) w *= robustness[j - 1];
       sw += w;
       swy += w * y[j - 1];
@@ -64,7 +64,8 @@ export function loessAt(
   const split = Math.min(Math.max(x, left), right + 1);
   for (let j = left; j < split; j++) {
     const u = j - x;
-    const w = robustness === null ? kernel[-u] : kernel[-u] * robustness[j - 1];
+    const k = kernel !== null ? kernel[-u] : tricube(-u, h);
+    const w = robustness === null ? k : k * robustness[j - 1];
     const wy = w * y[j - 1];
     sw += w;
     swu += w * u;
@@ -74,7 +75,8 @@ export function loessAt(
   }
   for (let j = split; j <= right; j++) {
     const u = j - x;
-    const w = robustness === null ? kernel[u] : kernel[u] * robustness[j - 1];
+    const k = kernel !== null ? kernel[u] : tricube(u, h);
+    const w = robustness === null ? k : k * robustness[j - 1];
     const wy = w * y[j - 1];
     sw += w;
     swu += w * u;
@@ -91,24 +93,28 @@ export function loessAt(
 }
 
 const tables: Float64Array[] = [];
+/** Bandwidths up to this are tabulated and cached; wider ones (STL's periodic windows) are computed per point. */
+const MAX_TABLE = 512;
+
+/** Tricube weight (1 − (r/h)³)³ with the paper's cut-offs: 1 for r ≤ 0.001·h and 0 for r > 0.999·h. */
+function tricube(r: number, h: number): number {
+  if (r > 0.999 * h) return 0;
+  if (r <= 0.001 * h) return 1;
+  const q = r / h;
+  const c = 1 - q * q * q;
+  return c * c * c;
+}
 
 /**
- * Tricube weights (1 − (r/h)³)³ for the integer distances r = 0…h, with the paper's cut-offs: 1 for
- * r ≤ 0.001·h and 0 for r > 0.999·h. Positions and bandwidths are whole numbers in STL, so each table is built
- * once per bandwidth and kept.
+ * Tricube weights for the integer distances r = 0…h, or null when h is wider than {@link MAX_TABLE}. Positions
+ * and bandwidths are whole numbers in STL, so each table is built once per bandwidth and kept.
  */
-function tricubeTable(h: number): Float64Array {
+function tricubeTable(h: number): Float64Array | null {
+  if (h > MAX_TABLE) return null;
   let table = tables[h];
   if (table === undefined) {
-    table = new Float64Array(h + 1);
-    const h9 = 0.999 * h;
-    const h1 = 0.001 * h;
-    for (let r = 0; r <= h; r++) {
-      const q = r / h;
-      const c = 1 - q * q * q;
-      table[r] = r > h9 ? 0 : r <= h1 ? 1 : c * c * c;
-    }
-    tables[h] = table;
+    table = tables[h] = new Float64Array(h + 1);
+    for (let r = 0; r <= h; r++) table[r] = tricube(r, h);
   }
   return table;
 }

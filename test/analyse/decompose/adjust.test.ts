@@ -149,10 +149,28 @@ describe('calendar effects', () => {
     a.adjusted.forEach((v, i) => expect(Math.abs(v - (1000 + 0.5 * i))).toBeLessThan(8));
   });
   it('reports but does not remove an effect that is not significant', () => {
-    const values = Array.from({length: 120}, (_, i) => 500 + [3, -1, 4, 1, -5, 9, -2, 6, -5, 3, -5, -8][i % 12] + 3 * Math.sin(i * 1.3));
+    // No working-day effect in the data: the estimate is reported, and removed only if (by chance) significant.
+    const pattern = [3, -1, 4, 1, -5, 9, -2, 6, -5, 3, -5, -8];
+    const values = Array.from({length: 120}, (_, i) => 500 + pattern[i % 12] + 3 * Math.sin(i * 1.3));
     const a = ok(run(values, {seasonalWindow: 'periodic'}, {calendar: {workingDays: 'auto', easter: 'off', holidays: []}}));
-    const est = a.options.calendar as {estimated: {significant: boolean; description: string}[]};
-    if (a.calendar === null) expect(est.estimated[0].description).toMatch(/not significant/);
+    const est = (a.options.calendar as {estimated: {significant: boolean; description: string; pValue: number}[]}).estimated;
+    expect(est).toHaveLength(1);
+    expect(a.calendar === null).toBe(!est[0].significant);
+    if (!est[0].significant) expect(est[0].description).toMatch(/not significant at the 5% level/);
+    expect(est[0].pValue).toBeGreaterThanOrEqual(0);
+  });
+  it('describes a multiplicative working-day effect in percent', () => {
+    const start = monthIndex(2008, 1);
+    const wd = workingDayRegressor('monthly', start, 144);
+    const values = Array.from({length: 144}, (_, i) =>
+      Math.exp(Math.log(2000) + 0.004 * i + 0.1 * Math.sin((Math.PI * i) / 6) + 0.013 * wd[i] + 0.004 * Math.sin(i * 2.3)),
+    );
+    const a = ok(run(values, {model: 'multiplicative', seasonalWindow: 'periodic'}, {start, calendar: calendarOn}));
+    const working = a.calendar!.regressors.find((r) => r.name === 'working-days')!;
+    expect(working.coefficient).toBeCloseTo(0.013, 2);
+    expect(working.description).toMatch(/Each extra working day raises the series by about 1\.[2-4]%/);
+    // original = trend × seasonal × irregular × calendar factor
+    values.forEach((v, i) => expect(a.trend[i] * a.seasonal[i] * a.irregular[i] * a.calendar!.effect[i]).toBeCloseTo(v, 6));
   });
   it('skips working days for stock series', () => {
     const values = decCase('USAccDeaths').data;

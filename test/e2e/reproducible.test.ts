@@ -1,0 +1,160 @@
+/**
+ * Same inputs, same bytes (ARCHITECTURE.md, "Principles"): the demo pack built twice gives identical
+ * period folders, file by file, and the PDF's dates come from the review period, not from the clock.
+ *
+ * Both builds write to the same out path (the first result is moved aside before the second build), because
+ * the manifest records the fully-defaulted plan, which holds the absolute `outDir`. A third build runs in a
+ * child process with another time zone and must give the same results.json bytes.
+ */
+import {execFileSync, spawn} from 'node:child_process';
+import {mkdtempSync, readFileSync, readdirSync, renameSync, rmSync, statSync} from 'node:fs';
+import {tmpdir} from 'node:os';
+import {join, relative, resolve} from 'node:path';
+import {afterAll, beforeAll, describe, expect, it} from 'vitest';
+import {build} from '../../src/run.js';
+import {collectingLogger} from '../../src/log.js';
+
+const PACK = resolve('sample-config/monthly-pack.yaml');
+const PACK_ID = 'tarnwick-monthly';
+const PERIOD = '2026-10';
+const REGISTER = resolve('test/archive/fixtures/ts-register.mjs');
+const CLI = resolve('src/cli/main.ts');
+
+const root = mkdtempSync(join(tmpdir(), 'ebbflow-repro-'));
+const out = join(root, 'out');
+const first = join(root, 'first');
+const zoned = join(root, 'zoned');
+let pdfSkipped: string | null = null;
+
+/** Every file under `dir`, as paths relative to it, sorted. */
+function listFiles(dir: string): string[] {
+  const files: string[] = [];
+  const walk = (d: string) => {
+    for (const e of readdirSync(d, {withFileTypes: true})) {
+      const p = join(d, e.name);
+      if (e.isDirectory()) walk(p);
+      else files.push(relative(dir, p));
+    }
+  };
+  walk(dir);
+  return files.sort();
+}
+
+/** Build the demo pack in-process into `out` (one analysis thread). */
+async function buildDemo(): Promise<void> {
+  const summary = await build({packFile: PACK, outDir: out, force: false, jobs: 1}, collectingLogger());
+  pdfSkipped = summary.pdfSkipped;
+}
+
+/** The CLI in a child process with its own TZ; resolves with the exit code and stderr. */
+function cliChild(args: string[], tz: string): Promise<{code: number | null; stderr: string}> {
+  return new Promise((done, fail) => {
+    const proc = spawn(process.execPath, ['--import', REGISTER, CLI, ...args], {
+      env: {...process.env, TZ: tz},
+      stdio: ['ignore', 'ignore', 'pipe'],
+    });
+    let stderr = '';
+    proc.stderr.on('data', (d: Buffer) => (stderr += d.toString()));
+    proc.on('error', fail);
+    proc.on('exit', (code) => done({code, stderr}));
+  });
+}
+
+/** Entry name → content of an XLSX (a zip), read with Info-ZIP's `unzip -p`. */
+function unzipped(file: string): Map<string, Buffer> {
+  const names = execFileSync('unzip', ['-Z1', file], {encoding: 'utf8'}).split('\n').filter(Boolean).sort();
+  return new Map(names.map((n) => [n, execFileSync('unzip', ['-p', file, n], {maxBuffer: 1 << 28})]));
+}
+
+beforeAll(async () => {
+  await buildDemo();
+  renameSync(join(out, PACK_ID), first);
+  await buildDemo();
+  // The time-zone build goes to the same out path again, after the second build is moved aside.
+  renameSync(join(out, PACK_ID), zoned);
+  const child = await cliChild(['build', PACK, '--out', out, '--formats', 'json,html', '--jobs', '1'], 'America/New_York');
+  if (child.code !== 0) throw new Error(`TZ=America/New_York build failed (${child.code}): ${child.stderr}`);
+  // Put the builds where the tests read them: `first` and `second`, and the zoned one.
+  renameSync(join(out, PACK_ID), join(root, 'ny'));
+  renameSync(zoned, join(root, 'second'));
+}, 1_200_000);
+
+afterAll(() => rmSync(root, {recursive: true, force: true}));
+
+const second = join(root, 'second');
+const ny = join(root, 'ny');
+
+describe('the demo pack built twice', () => {
+  it('writes the same set of files', () => {
+    expect(pdfSkipped).toBeNull();
+    const a = listFiles(first);
+    expect(a).toEqual(listFiles(second));
+    for (const f of ['index.html', `${PERIOD}/report.html`, `${PERIOD}/report.pdf`, `${PERIOD}/results.json`])
+      expect(a).toContain(f);
+    expect(a).toContain(`${PERIOD}/manifest.json`);
+    expect(a).toContain(`${PERIOD}/exports/tables.xlsx`);
+    expect(a.filter((f) => f.endsWith('.csv')).length).toBeGreaterThanOrEqual(5);
+  });
+
+  it('report.html, results.json, manifest.json, index.html and every CSV are byte-identical', () => {
+    const files = listFiles(first).filter((f) => /\.(html|json|csv)$/.test(f));
+    for (const f of files) {
+      const a = readFileSync(join(first, f));
+      const b = readFileSync(join(second, f));
+      expect(a.equals(b), f).toBe(true);
+    }
+  });
+
+  it('the XLSX is byte-identical (exceljs writes no clock values into the zip or the workbook properties)', () => {
+    const f = `${PERIOD}/exports/tables.xlsx`;
+    const a = readFileSync(join(first, f));
+    const b = readFileSync(join(second, f));
+    // Were the bytes to differ, the entries are still compared one by one, so a failure says which part moved.
+    if (!a.equals(b)) {
+      const ua = unzipped(join(first, f));
+      const ub = unzipped(join(second, f));
+      expect([...ua.keys()]).toEqual([...ub.keys()]);
+      for (const [name, content] of ua) expect(content.equals(ub.get(name)!), name).toBe(true);
+    }
+    expect(a.equals(b)).toBe(true);
+    // The workbook properties carry no date of the run (exceljs would otherwise write "now").
+    const core = unzipped(join(first, f)).get('docProps/core.xml')?.toString('utf8') ?? '';
+    const today = new Date().toISOString().slice(0, 10);
+    expect(core).not.toContain(today);
+  });
+
+  it('the PDF is byte-identical', () => {
+    const a = readFileSync(join(first, PERIOD, 'report.pdf'));
+    const b = readFileSync(join(second, PERIOD, 'report.pdf'));
+    expect(a.length).toBe(b.length);
+    expect(a.equals(b)).toBe(true);
+  });
+
+  it("the PDF's creation and modification dates are the day after the review period, read back by pdfinfo", () => {
+    // The review period is October 2026, so the date is 2026-11-01; never the build day.
+    const info = execFileSync('pdfinfo', ['-isodates', join(first, PERIOD, 'report.pdf')], {
+      encoding: 'utf8',
+      env: {...process.env, TZ: 'UTC'},
+    });
+    expect(info).toMatch(/^CreationDate:\s+2026-11-01T00:00:00(Z|\+00)/m);
+    expect(info).toMatch(/^ModDate:\s+2026-11-01T00:00:00(Z|\+00)/m);
+  });
+
+  it('the manifest hashes match the files written', () => {
+    const manifest = JSON.parse(readFileSync(join(first, PERIOD, 'manifest.json'), 'utf8'));
+    expect(manifest.pack).toMatchObject({id: PACK_ID, period: PERIOD});
+    for (const o of manifest.outputs as {path: string; bytes: number}[]) {
+      expect(statSync(join(first, PERIOD, o.path)).size, o.path).toBe(o.bytes);
+    }
+  });
+});
+
+describe('the demo pack built under TZ=America/New_York', () => {
+  it('gives the same results.json and report.html bytes as the TZ=UTC builds', () => {
+    for (const f of ['results.json', 'report.html']) {
+      const a = readFileSync(join(first, PERIOD, f));
+      const b = readFileSync(join(ny, PERIOD, f));
+      expect(b.equals(a), f).toBe(true);
+    }
+  });
+});
