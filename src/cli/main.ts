@@ -14,11 +14,14 @@ import {packageRoot, toolVersion} from '../version.js';
 import {initPack} from './init.js';
 import {parseFormats, parseJobs} from './options.js';
 import {expandPeriodRange, isPeriodRange} from './periods.js';
+import {cliLogger, type TextStream} from './progress.js';
+import {parseShard, selectShard, type Shard} from './shard.js';
 
 /** Where the CLI writes: the process streams in the bin, string collectors in tests. */
 export interface Io {
   stdout: {write(text: string): unknown};
-  stderr: {write(text: string): unknown};
+  /** Messages and progress; a progress bar is drawn when `isTTY` is true. */
+  stderr: TextStream;
   /** Environment for EBBFLOW_DEBUG. Default: `process.env`. */
   env?: NodeJS.ProcessEnv;
 }
@@ -29,14 +32,20 @@ interface BuildOptions {
   formats?: OutputFormat[];
   force: boolean;
   jobs: number;
+  shard?: Shard;
 }
 
-/** Progress and warnings go to stderr so stdout carries only results (folders, next steps). */
-function streamLogger(io: Io): Logger {
-  return {
-    info: (message) => io.stderr.write(`${message}\n`),
-    warn: (message) => io.stderr.write(`warning: ${message}\n`),
-  };
+/**
+ * Build a batch. Progress and warnings go to stderr so stdout carries only results (folders, next steps); a
+ * progress bar left by a failure is removed before the error is printed.
+ */
+async function runBuild(given: string[], opts: BuildOptions, io: Io): Promise<number> {
+  const log = cliLogger(io.stderr);
+  try {
+    return await buildBatch(given, opts, io, log);
+  } finally {
+    log.close();
+  }
 }
 
 /**
@@ -59,9 +68,19 @@ function fail(error: unknown, io: Io, kept = 0): number {
   return 1;
 }
 
-/** Validate every pack first (so bad input stops the batch before anything is written), then build in order. */
-async function runBuild(packs: string[], opts: BuildOptions, io: Io): Promise<number> {
-  const log = streamLogger(io);
+/**
+ * Validate every pack first (so bad input stops the batch before anything is written), then build in order. With
+ * `--shard i/n` only the packs of part i are validated and built (see `selectShard`).
+ */
+async function buildBatch(given: string[], opts: BuildOptions, io: Io, log: Logger): Promise<number> {
+  let packs = given;
+  if (opts.shard) {
+    const {index, count} = opts.shard;
+    packs = selectShard(given, opts.shard);
+    const total = new Set(given.map((p) => path.resolve(p))).size;
+    log.info(`shard ${index}/${count}: ${packs.length} of ${total} pack${total === 1 ? '' : 's'}`);
+    if (packs.length === 0) return 0;
+  }
   const jobs: {packFile: string; plan: Plan; period: string | undefined}[] = [];
   const problems: InputError['problems'] = [];
   for (const packFile of packs) {
@@ -105,7 +124,7 @@ async function runBuild(packs: string[], opts: BuildOptions, io: Io): Promise<nu
 
 /** Check every pack, collecting the problems of all of them. */
 async function runCheck(packs: string[], io: Io): Promise<number> {
-  const log = streamLogger(io);
+  const log = cliLogger(io.stderr);
   const problems: InputError['problems'] = [];
   for (const packFile of packs) {
     try {
@@ -164,10 +183,16 @@ export async function main(argv: string[], io: Io): Promise<number> {
     )
     .option('--force', 'replace a period folder that already exists', false)
     .option('-j, --jobs <n>', 'worker threads for the analysis', parseJobs, availableParallelism())
+    .option(
+      '--shard <i/n>',
+      'build only part i of n of the packs (sorted by full path, every n-th from the i-th), for batch schedulers',
+      parseShard,
+    )
     .addHelpText(
       'after',
       '\nExamples:\n  ebbflow build pack.yaml\n' +
-        '  ebbflow build pack.yaml --period 2026-01..2026-10 --formats html,json --force\n',
+        '  ebbflow build pack.yaml --period 2026-01..2026-10 --formats html,json --force\n' +
+        '  ebbflow build packs/*.yaml --shard 3/8    # the third of eight parts of a batch\n',
     )
     .action(async (packs: string[], opts: BuildOptions) => {
       code = await runBuild(packs, opts, io);

@@ -43,6 +43,8 @@ export interface ChartJob {
   title: string;
   spec: TopLevelSpec;
   size: 'full' | 'half';
+  /** A short reading note printed under the chart, or null. */
+  note: string | null;
 }
 
 export interface CalloutView {
@@ -242,6 +244,10 @@ function calloutView(c: Callout, labels: Map<string, string>, link: (c: Callout)
   };
 }
 
+function hasFinite(values: number[]): boolean {
+  return values.some(Number.isFinite);
+}
+
 function last<T>(values: T[]): T | undefined {
   return values[values.length - 1];
 }
@@ -261,7 +267,7 @@ function summaryRow(s: ReportSeries, f: Formatter, theme: Theme): SummaryRow {
   if (a.original.length < 3 * periodsPerYear[a.frequency]) flags.push('short series');
   const filled = a.adjustment?.filled.filter(Boolean).length ?? 0;
   if (filled > 0) flags.push(plural(filled, 'gap filled', 'gaps filled'));
-  if (a.notes.length > 0 && flags.length === 0) flags.push(plural(a.notes.length, 'data note', 'data notes'));
+  if (a.notes.length > 0) flags.push(plural(a.notes.length, 'data note', 'data notes'));
   const recent = a.original.slice(-3 * periodsPerYear[a.frequency]);
   return {
     anchor: `#series-${s.plan.id}`,
@@ -318,8 +324,8 @@ function seriesView(
     seasonNames,
   });
   const span = `${f.period(frequency, a.start)} to ${f.period(frequency, a.end)}`;
-  const slot = (part: ChartPart, size: 'full' | 'half', caption: string, spec: TopLevelSpec): FigureSlot => ({
-    chart: {id: chartAnchor(id, part), caption, title: `${name}: ${caption}`, spec, size},
+  const slot = (part: ChartPart, size: 'full' | 'half', caption: string, spec: TopLevelSpec, note: string | null = null): FigureSlot => ({
+    chart: {id: chartAnchor(id, part), caption, title: `${name}: ${caption}`, spec, size, note},
     svg: null,
   });
   const notes: string[] = [];
@@ -345,9 +351,12 @@ function seriesView(
       ctx('full'),
     ),
   );
-  const rows: FigureSlot[][] = [[overview]];
+  // A chart needs at least one finite value; vega would otherwise warn about an empty extent.
+  if (!hasFinite(a.original)) notes.push('The series has no values to chart.');
+  const rows: FigureSlot[][] = hasFinite(a.original) ? [[overview]] : [];
   const middle: FigureSlot[] = [];
-  if (adj) {
+  const seasonalShown = adj !== null && hasFinite(adj.seasonal);
+  if (adj && seasonalShown) {
     middle.push(
       slot(
         'seasonal',
@@ -370,7 +379,7 @@ function seriesView(
     middle.push(
       slot(
         'yoy',
-        adj ? 'half' : 'full',
+        seasonalShown ? 'half' : 'full',
         'Change on a year earlier (%)',
         yearOnYearChart(
           {
@@ -378,20 +387,22 @@ function seriesView(
             yearOnYear: a.changes.yearOnYearSeries,
             description: `Bar chart of the percent change of ${name} on the same period a year earlier; latest ${f.percent(a.changes.yearOnYear)}.`,
           },
-          ctx(adj ? 'half' : 'full'),
+          ctx(seasonalShown ? 'half' : 'full'),
         ),
       ),
     );
   }
   if (middle.length > 0) rows.push(middle);
   const lower: FigureSlot[] = [];
-  if (adj) {
+  const irregularShown = adj !== null && hasFinite(adj.irregular);
+  const cycleShown = a.cycle !== null && hasFinite(a.cycle.gap);
+  if (adj && irregularShown) {
     const labels: Record<number, string> = {};
     for (const o of adj.outliers) labels[o.index] = f.period(frequency, a.start + o.index);
     lower.push(
       slot(
         'irregular',
-        a.cycle ? 'half' : 'full',
+        cycleShown ? 'half' : 'full',
         adj.outliers.length > 0 ? 'Irregular, with flagged values' : 'Irregular',
         irregularChart(
           {
@@ -402,18 +413,18 @@ function seriesView(
             labels,
             description: `Irregular component of ${name}; ${adj.outliers.length === 0 ? 'no values flagged' : `flagged: ${adj.outliers.map((o) => `${labels[o.index]} (${OUTLIER_WORD[o.kind]})`).join(', ')}`}.`,
           },
-          ctx(a.cycle ? 'half' : 'full'),
+          ctx(cycleShown ? 'half' : 'full'),
         ),
       ),
     );
   }
-  if (a.cycle) {
+  if (a.cycle && cycleShown) {
     const cy = a.cycle;
     lower.push(
       slot(
         'cycle',
-        adj ? 'half' : 'full',
-        `Deviation from long-run trend (%): now ${cy.phaseLabel}`,
+        irregularShown ? 'half' : 'full',
+        'Deviation from long-run trend (%)',
         cycleChart(
           {
             start: a.start,
@@ -421,14 +432,15 @@ function seriesView(
             turningPoints: cy.turningPoints,
             description: `Percent gap between ${name} and its long-run trend over time, with ${cy.turningPoints.length} turning points marked; currently ${cy.phaseLabel}.`,
           },
-          ctx(adj ? 'half' : 'full'),
+          ctx(irregularShown ? 'half' : 'full'),
         ),
+        `Now ${cy.phaseLabel}.${cy.turningPoints.some((p) => p.provisional) ? ' Hollow markers are provisional turning points.' : ''}`,
       ),
     );
   }
   if (lower.length > 0) rows.push(lower);
   let forecast: SeriesView['forecast'] = null;
-  if (a.forecast && a.forecast.mean.length > 0) {
+  if (a.forecast && hasFinite(a.forecast.mean)) {
     const fc = a.forecast;
     const levels = [...fc.levels].sort((x, y) => x - y);
     const inner = String(levels[0]);
@@ -539,6 +551,7 @@ function historyView(
             caption: 'Error of earlier forecasts (% of the actual)',
             title: 'Forecast tracking',
             size: 'full',
+            note: null,
             spec: trackingChart(
               {
                 points,
@@ -628,6 +641,13 @@ function methodsView(s: ReportSeries, f: Formatter): MethodsView {
         value: adj.outliers
           .map((o) => `${f.period(a.frequency, a.start + o.index)} (${OUTLIER_WORD[o.kind] ?? o.kind}, ${f.number(o.score, 1)} robust sd)`)
           .join('; '),
+      });
+    }
+    const filled = adj.filled.flatMap((f, i) => (f ? [i] : []));
+    if (filled.length > 0) {
+      items.push({
+        label: 'Filled values',
+        value: `${filled.map((i) => f.period(a.frequency, a.start + i)).join(', ')}: missing, estimated for the decomposition only`,
       });
     }
   } else {

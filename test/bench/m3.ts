@@ -173,8 +173,8 @@ async function main(): Promise<void> {
       const avg = (k: keyof Score) => sub.reduce((a, r) => a + r.scores[m.label][k], 0) / sub.length;
       const pub = PUBLISHED[m.label][name];
       console.log(
-        `| ${m.label} | ${avg('smape').toFixed(2)} | ${avg('mase').toFixed(3)} | ${(100 * avg('cover80')).toFixed(1)} | ` +
-          `${(100 * avg('cover95')).toFixed(1)} | ${avg('ms').toFixed(1)} | ${pub} |`,
+        `| ${m.label} | ${avg('smape').toFixed(2)} | ${avg('mase').toFixed(3)} | ` +
+          `${(100 * avg('cover80')).toFixed(1)} | ${(100 * avg('cover95')).toFixed(1)} | ${avg('ms').toFixed(1)} | ${pub} |`,
       );
     }
     console.log('');

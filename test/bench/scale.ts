@@ -1,5 +1,6 @@
 import {execFileSync} from 'node:child_process';
-import {mkdtempSync, rmSync, writeFileSync, createWriteStream} from 'node:fs';
+import {createHash} from 'node:crypto';
+import {createReadStream, createWriteStream, mkdtempSync, rmSync, statSync, writeFileSync} from 'node:fs';
 import {tmpdir} from 'node:os';
 import {join} from 'node:path';
 import {fileURLToPath} from 'node:url';
@@ -7,10 +8,16 @@ import {mulberry32} from '../../src/analyse/numeric/mulberry32.js';
 
 const SERIES = Number(process.env.EBBFLOW_BENCH_SERIES ?? 10_000);
 const POINTS = 120;
+/** Forecast method for every series (`auto` by default); `seasonal-naive` measures the pipeline without ETS. */
+const FORECAST = process.env.EBBFLOW_BENCH_FORECAST ?? 'auto';
+/** The --jobs values to run, e.g. `EBBFLOW_BENCH_JOBS=2`. */
+const JOBS = (process.env.EBBFLOW_BENCH_JOBS ?? '1,2').split(',').map(Number);
 
 /**
  * Scale: 10,000 monthly series of 120 points (long-layout CSV) through decomposition, cycle and forecast with JSON
- * output, at --jobs 1 and --jobs 2. Each build runs in a child process so its peak memory (maxRSS) is its own.
+ * output, at --jobs 1 and --jobs 2. Each build runs in a child process so its peak memory (maxRSS, worker threads
+ * included) and CPU time are its own; CPU time is printed beside wall time because a loaded machine stretches the
+ * latter. The results.json files of the runs are compared byte for byte (the pool must not change results).
  * Goal (issue): under 60 s and under 1 GiB at --jobs 2 on a 2-core machine.
  */
 export async function run(): Promise<void> {
@@ -18,7 +25,8 @@ export async function run(): Promise<void> {
   try {
     await writeData(dir);
     const cli = fileURLToPath(new URL('../../src/cli/main.js', import.meta.url));
-    for (const jobs of [1, 2]) {
+    const digests: string[] = [];
+    for (const jobs of JOBS) {
       const t0 = performance.now();
       const out = execFileSync(
         process.execPath,
@@ -26,11 +34,19 @@ export async function run(): Promise<void> {
         {encoding: 'utf8', env: {...process.env, TZ: 'UTC'}, stdio: ['ignore', 'pipe', 'inherit'], maxBuffer: 1 << 26},
       );
       const seconds = (performance.now() - t0) / 1000;
-      const {maxRssMiB} = JSON.parse(out.trim().split('\n').pop()!);
+      const {maxRssMiB, cpuSeconds, folder} = JSON.parse(out.trim().split('\n').pop()!);
+      const results = join(folder, 'results.json');
+      digests.push(await sha256File(results));
       console.log(
-        `--jobs ${jobs}: ${SERIES} series × ${POINTS} months in ${seconds.toFixed(1)} s, ` +
-          `${(SERIES / seconds).toFixed(0)} series/s, peak RSS ${maxRssMiB.toFixed(0)} MiB`,
+        `--jobs ${jobs}: ${SERIES} series × ${POINTS} months (forecast ${FORECAST}) in ${seconds.toFixed(1)} s ` +
+          `(CPU ${cpuSeconds.toFixed(1)} s), ${(SERIES / seconds).toFixed(0)} series/s, ` +
+          `peak RSS ${maxRssMiB.toFixed(0)} MiB, results.json ${(statSync(results).size / 2 ** 20).toFixed(0)} MiB`,
       );
+    }
+    if (digests.length > 1) {
+      const same = digests.every((d) => d === digests[0]);
+      console.log(`results.json identical across --jobs ${JOBS.join(', ')}: ${same ? 'yes' : 'NO'}`);
+      if (!same) process.exitCode = 1;
     }
   } finally {
     rmSync(dir, {recursive: true, force: true});
@@ -70,17 +86,28 @@ async function writeData(dir: string): Promise<void> {
       '    valueColumn: value',
       'series:',
       '  - fromSource: data',
+      'defaults:',
+      `  forecast: {method: ${FORECAST}}`,
       '',
     ].join('\n'),
   );
 }
 
+async function sha256File(file: string): Promise<string> {
+  const hash = createHash('sha256');
+  for await (const chunk of createReadStream(file)) hash.update(chunk as Buffer);
+  return hash.digest('hex');
+}
+
 async function child(cli: string, pack: string, out: string, jobs: string): Promise<void> {
   const {main} = (await import(cli)) as {main: (argv: string[], io: unknown) => Promise<number>};
-  const sink = {write: () => true};
+  let folder = '';
+  const sink = {write: (text: string) => (folder += text)};
   const code = await main(['build', pack, '--out', out, '--jobs', jobs], {stdout: sink, stderr: process.stderr});
   if (code !== 0) process.exit(code);
-  console.log(JSON.stringify({maxRssMiB: process.resourceUsage().maxRSS / 1024}));
+  const usage = process.resourceUsage();
+  const cpuSeconds = (usage.userCPUTime + usage.systemCPUTime) / 1e6;
+  console.log(JSON.stringify({maxRssMiB: usage.maxRSS / 1024, cpuSeconds, folder: folder.trim()}));
 }
 
 if (process.argv[2] === '--child') await child(process.argv[3], process.argv[4], process.argv[5], process.argv[6]);

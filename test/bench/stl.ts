@@ -60,9 +60,9 @@ function rMicrosPerCall(dir: string, x: Float64Array, call: string): number | nu
     `x <- ts(scan('${file}', quiet = TRUE), frequency = 12)`,
     `cpu <- function() { t <- proc.time(); t[['user.self']] + t[['sys.self']] }`,
     `for (i in 1:50) ${call}`,
-    `calls <- max(5, round(20000 / length(x) / ${call.includes('robust') ? 8 : 1}))`,
+    `calls <- max(20, round(100000 / length(x) / ${call.includes('robust') ? 8 : 1}))`,
     `best <- Inf`,
-    `for (b in 1:10) { t0 <- cpu(); for (i in 1:calls) ${call}; best <- min(best, (cpu() - t0) * 1e6 / calls) }`,
+    `for (b in 1:5) { t0 <- cpu(); for (i in 1:calls) ${call}; best <- min(best, (cpu() - t0) * 1e6 / calls) }`,
     `cat(best)`,
   ].join('\n');
   const r = spawnSync('Rscript', ['-e', script], {encoding: 'utf8'});
@@ -91,7 +91,7 @@ export async function run(): Promise<void> {
   try {
     for (const setting of SETTINGS) {
       console.log(`\nSTL ${setting.label}, monthly`);
-      console.log('length  ours µs/call  R µs/call  ours/R   (CPU time, best of 10 blocks)');
+      console.log('length  ours µs/call  R µs/call  ours/R   (CPU time, best of several blocks)');
       for (const n of LENGTHS) {
         const x = series(n, n);
         const ours = microsPerCall(x, setting.robust);

@@ -60,10 +60,14 @@ function cliChild(args: string[], tz: string): Promise<{code: number | null; std
   });
 }
 
-/** Entry name → content of an XLSX (a zip), read with Info-ZIP's `unzip -p`. */
+/**
+ * Entry name → content of an XLSX (a zip), read with Info-ZIP's `unzip -p`. Its member names are wildcard
+ * patterns, so `[`, `*` and `?` (as in `[Content_Types].xml`) are put in brackets to match literally.
+ */
 function unzipped(file: string): Map<string, Buffer> {
   const names = execFileSync('unzip', ['-Z1', file], {encoding: 'utf8'}).split('\n').filter(Boolean).sort();
-  return new Map(names.map((n) => [n, execFileSync('unzip', ['-p', file, n], {maxBuffer: 1 << 28})]));
+  const literal = (name: string) => name.replace(/[[*?]/g, '[$&]');
+  return new Map(names.map((n) => [n, execFileSync('unzip', ['-p', file, literal(n)], {maxBuffer: 1 << 28})]));
 }
 
 beforeAll(async () => {
@@ -98,11 +102,9 @@ describe('the demo pack built twice', () => {
 
   it('report.html, results.json, manifest.json, index.html and every CSV are byte-identical', () => {
     const files = listFiles(first).filter((f) => /\.(html|json|csv)$/.test(f));
-    for (const f of files) {
-      const a = readFileSync(join(first, f));
-      const b = readFileSync(join(second, f));
-      expect(a.equals(b), f).toBe(true);
-    }
+    expect(files.length).toBeGreaterThanOrEqual(9);
+    const differ = files.filter((f) => !readFileSync(join(first, f)).equals(readFileSync(join(second, f))));
+    expect(differ).toEqual([]);
   });
 
   it('the XLSX is byte-identical (exceljs writes no clock values into the zip or the workbook properties)', () => {

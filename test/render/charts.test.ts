@@ -72,7 +72,6 @@ describe('overviewChart', () => {
           type: 'ordinal',
           sort: ['Original', 'Seasonally adjusted', 'Trend-cycle'],
           scale: {domain: ['Original', 'Seasonally adjusted', 'Trend-cycle'], range: [1.1, 1.6, 2.6]},
-          legend: null,
         },
         order: {field: 's', sort: 'ascending'},
       },

@@ -160,6 +160,22 @@ describe('inlineLogo', () => {
   });
 });
 
+describe('poor data', () => {
+  test('a series with no values gets a note and no charts; the report still renders', async () => {
+    const report = makeReport({count: 2});
+    const a = report.series[1].analysis;
+    a.original = a.original.map(() => NaN);
+    a.changes = {...a.changes, yearOnYear: NaN, yearOnYearSeries: a.original.map(() => NaN)};
+    a.adjustment = null;
+    a.cycle = {...a.cycle!, gap: a.original.map(() => NaN)};
+    a.forecast = {...a.forecast!, mean: a.forecast!.mean.map(() => NaN)};
+    const html = await renderHtml(report);
+    const section = html.slice(html.indexOf('id="series-series-2"'), html.indexOf('id="methods"'));
+    expect(section).toContain('The series has no values to chart.');
+    expect(section).not.toContain('<figure');
+  });
+});
+
 describe('other frequencies', () => {
   test.each(['quarterly', 'weekly'] as const)('%s report renders every chart without warnings', async (frequency) => {
     const html = await renderHtml(makeReport({count: 1, frequency, history: true}));

@@ -44,6 +44,13 @@ describe('specToSvg', () => {
     expect(svg).toContain('16.000');
   });
 
+  test('the overview legend names all three lines', async () => {
+    const three = overviewChart({start: monthIndex(2024, 1), original: [5, 7], adjusted: [6, 6], trend: [6, 6.1], description: 'd'}, ctx);
+    const svg = await specToSvg(three, options);
+    expect(svg).toContain('role-legend');
+    for (const name of ['Original', 'Seasonally adjusted', 'Trend-cycle']) expect(svg).toContain(`>${name}<`);
+  });
+
   test('title, description and ids are embedded and escaped', async () => {
     const svg = await specToSvg(spec, options);
     expect(svg).toMatch(/^<svg [^>]*role="img" aria-labelledby="chart-x-title chart-x-desc"/);

@@ -9,7 +9,11 @@ import type {SeasonalAdjustment} from './seasonalAdjustment.js';
  * forecast the adjusted series; the report needs the original scale.
  * Complexity: O(h·levels). NaN policy: NaN in → NaN out.
  */
-export function reseasonalise<F extends Forecast>(forecast: F, adjustment: SeasonalAdjustment, method = forecast.method): F {
+export function reseasonalise<F extends Forecast>(
+  forecast: F,
+  adjustment: SeasonalAdjustment,
+  method = forecast.method,
+): F {
   if (!adjustment.seasonal) return {...forecast, method};
   const lower = new Map<number, Float64Array>();
   const upper = new Map<number, Float64Array>();

@@ -46,7 +46,8 @@ export function forecastBenchmarks(
   }
   for (const name of ['SES', 'Holt', 'Damped'] as const) if (which.includes(name)) out.set(name, smooth.get(name)!);
   if (which.includes('Comb S-H-D')) {
-    out.set('Comb S-H-D', averageForecasts([smooth.get('SES')!, smooth.get('Holt')!, smooth.get('Damped')!], 'Comb S-H-D'));
+    const members = [smooth.get('SES')!, smooth.get('Holt')!, smooth.get('Damped')!];
+    out.set('Comb S-H-D', averageForecasts(members, 'Comb S-H-D'));
   }
   return out;
 }

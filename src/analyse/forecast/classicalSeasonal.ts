@@ -14,7 +14,11 @@ import {centredMovingAverage} from '../numeric/centredMovingAverage.js';
  *
  * Complexity: O(n·m). NaN policy: rejects NaN (the caller fills gaps first). Needs n ≥ 2m.
  */
-export function classicalSeasonal(values: Float64Array, period: number, kind: 'additive' | 'multiplicative'): Float64Array {
+export function classicalSeasonal(
+  values: Float64Array,
+  period: number,
+  kind: 'additive' | 'multiplicative',
+): Float64Array {
   const n = values.length;
   if (n < 2 * period) throw new RangeError('classical decomposition requires at least two full periods');
   const trend = centredMovingAverage(values, period);

@@ -50,7 +50,11 @@ export interface EtsFitOptions {
 const LOWER = [1e-4, 1e-4, 1e-4, 0.8];
 const UPPER = [0.9999, 0.9999, 0.9999, 0.98];
 
-export function fitEts(y: Float64Array, spec: EtsSpec, {fixed = {}, optCrit = 'lik', maxEvaluations = 2000}: EtsFitOptions = {}): EtsFit | null {
+export function fitEts(
+  y: Float64Array,
+  spec: EtsSpec,
+  {fixed = {}, optCrit = 'lik', maxEvaluations = 2000}: EtsFitOptions = {},
+): EtsFit | null {
   const n = y.length;
   const seasonal = spec.season !== 'N';
   const hasTrend = spec.trend !== 'N';
@@ -100,7 +104,12 @@ export function fitEts(y: Float64Array, spec: EtsSpec, {fixed = {}, optCrit = 'l
   const np = start.length;
   if (np >= n - 1) return null;
 
-  const params: EtsParams = {alpha: fixed.alpha ?? NaN, beta: fixed.beta ?? 0, gamma: fixed.gamma ?? 0, phi: fixed.phi ?? 1};
+  const params: EtsParams = {
+    alpha: fixed.alpha ?? NaN,
+    beta: fixed.beta ?? 0,
+    gamma: fixed.gamma ?? 0,
+    phi: fixed.phi ?? 1,
+  };
   const unpack = (par: Float64Array, into: EtsParams): void => {
     let k = 0;
     if (free.alpha) into.alpha = par[k++];
@@ -114,7 +123,9 @@ export function fitEts(y: Float64Array, spec: EtsSpec, {fixed = {}, optCrit = 'l
   const objective = (par: Float64Array): number => {
     unpack(par, params);
     if (free.alpha && !(params.alpha >= lower[0] && params.alpha <= upper[0])) return Infinity;
-    if (free.beta && !(params.beta >= lower[1] && params.beta <= params.alpha && params.beta <= upper[1])) return Infinity;
+    if (free.beta && !(params.beta >= lower[1] && params.beta <= params.alpha && params.beta <= upper[1])) {
+      return Infinity;
+    }
     if (free.phi && !(params.phi >= lower[3] && params.phi <= upper[3])) return Infinity;
     if (free.gamma && !(params.gamma >= lower[2] && params.gamma <= 1 - params.alpha && params.gamma <= upper[2])) {
       return Infinity;
@@ -149,7 +160,13 @@ export function fitEts(y: Float64Array, spec: EtsSpec, {fixed = {}, optCrit = 'l
   const aic = run.lik + 2 * k;
   let sse = 0;
   for (const e of run.residuals) sse += e * e;
-  const nFixed = [fixed.alpha, hasTrend ? fixed.beta : undefined, seasonal ? fixed.gamma : undefined, hasTrend && spec.damped ? fixed.phi : undefined].filter((v) => v !== undefined).length;
+  // Fixed smoothing parameters count in σ²'s degrees of freedom (as in the reference) but not in the criteria.
+  const nFixed = [
+    fixed.alpha,
+    hasTrend ? fixed.beta : undefined,
+    seasonal ? fixed.gamma : undefined,
+    hasTrend && spec.damped ? fixed.phi : undefined,
+  ].filter((v) => v !== undefined).length;
   return {
     method: etsName(spec),
     spec,

@@ -43,7 +43,8 @@ function etsLinearMoments(fit: EtsFit, h: number): {mean: Float64Array; variance
     const trendPart = hasTrend ? phiSum * x[1] : 0;
     const s = spec.season === 'N' ? 0 : x[first + ((((m - 1 - i) % m) + m) % m)];
     mean[i] = spec.season === 'M' ? (x[0] + trendPart) * s : x[0] + trendPart + s;
-    c[i] = params.alpha + (hasTrend ? params.beta * phiSum : 0) + (spec.season !== 'N' && (i + 1) % m === 0 ? params.gamma : 0);
+    const seasonTerm = spec.season !== 'N' && (i + 1) % m === 0 ? params.gamma : 0;
+    c[i] = params.alpha + (hasTrend ? params.beta * phiSum : 0) + seasonTerm;
   }
   const variance = new Float64Array(h);
   if (spec.error === 'A') {
@@ -93,9 +94,13 @@ function mulT(a: Float64Array, b: Float64Array, d: number): Float64Array {
 function kron(a: Float64Array, ra: number, b: Float64Array, rb: number): Float64Array {
   const d = ra * rb;
   const out = new Float64Array(d * d);
-  for (let i = 0; i < ra; i++)
-    for (let j = 0; j < ra; j++)
-      for (let k = 0; k < rb; k++) for (let l = 0; l < rb; l++) out[(i * rb + k) * d + j * rb + l] = a[i * ra + j] * b[k * rb + l];
+  for (let i = 0; i < ra; i++) {
+    for (let j = 0; j < ra; j++) {
+      for (let k = 0; k < rb; k++) {
+        for (let l = 0; l < rb; l++) out[(i * rb + k) * d + j * rb + l] = a[i * ra + j] * b[k * rb + l];
+      }
+    }
+  }
   return out;
 }
 
@@ -109,7 +114,8 @@ function etsClass3Moments(fit: EtsFit, h: number): {mean: Float64Array; variance
   const m = spec.period;
   const phi = spec.damped ? params.phi : 1;
   const f1 = k === 1 ? Float64Array.of(1) : Float64Array.of(1, 1, 0, phi);
-  const g1 = k === 1 ? Float64Array.of(params.alpha) : Float64Array.of(params.alpha, params.alpha, params.beta, params.beta);
+  const {alpha, beta} = params;
+  const g1 = k === 1 ? Float64Array.of(alpha) : Float64Array.of(alpha, alpha, beta, beta);
   const f2 = new Float64Array(m * m);
   f2[m - 1] = 1;
   for (let i = 1; i < m; i++) f2[i * m + i - 1] = 1;

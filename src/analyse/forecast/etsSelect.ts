@@ -19,7 +19,10 @@ export interface EtsSelection {
   candidates: {method: string; aicc: number}[];
 }
 
-export function selectEts(y: Float64Array, {period, seasonal = true}: {period: number; seasonal?: boolean}): EtsSelection | null {
+export function selectEts(
+  y: Float64Array,
+  {period, seasonal = true}: {period: number; seasonal?: boolean},
+): EtsSelection | null {
   const n = y.length;
   let positive = true;
   for (const v of y) if (!(v > 0)) positive = false;

@@ -14,7 +14,10 @@ import type {EtsFit} from './etsFit.js';
  *
  * Complexity: O(paths·h). NaN policy: NaN in the fit → NaN paths. Returns paths × h values, row-major.
  */
-export function simulateEts(fit: EtsFit, {h, paths = 2000, seed = 20260101}: {h: number; paths?: number; seed?: number}): Float64Array {
+export function simulateEts(
+  fit: EtsFit,
+  {h, paths = 2000, seed = 20260101}: {h: number; paths?: number; seed?: number},
+): Float64Array {
   const {spec, params, finalStates: x} = fit;
   const sigma = Math.sqrt(Math.max(fit.sigma2, 0));
   const normal = standardNormalSampler(mulberry32(seed));

@@ -8,11 +8,11 @@ import type {ForecastResult, Outturn} from './types.js';
  * the forecast for the remaining periods. Flows add up (actual sum + forecast sum); stocks take the value at the
  * year-end period (the last actual when the year is complete, else the forecast for the year-end period).
  *
- * Interval (flows): the sum of the lower and of the upper forecast bounds over the remaining periods. This
- * treats the forecast errors of the remaining periods as perfectly correlated, which bounds the interval of the
- * sum from above; errors of exponential-smoothing forecasts are strongly positively correlated across
- * horizons (they share the level error), so the bound is close and never too narrow. Stocks use the interval of
- * the year-end forecast. The level is 80 when requested, else the lowest requested level.
+ * Interval (flows): the forecast's running-total interval for the remaining periods when it has one (ETS sample
+ * paths, Theta's closed form, their combinations), which accounts for how the errors of the remaining periods
+ * move together. Otherwise the sum of the lower and of the upper per-period bounds: this treats the errors as
+ * perfectly correlated, an upper bound on the width (never too narrow). Stocks use the interval of the year-end
+ * forecast. The level is 80 when requested, else the lowest requested level.
  *
  * The target total uses the target series over the same fiscal-year periods (sum for flows, year-end value for
  * stocks); gapPct = (total − target)/target × 100.
@@ -69,6 +69,11 @@ export function fiscalOutturn({
       lower += lo[j];
       upper += hi[j];
     }
+    const totals = forecast.runningTotals;
+    if (totals && periodsRemaining > 0 && firstForecast === lastIndex + 1) {
+      lower = actualToDate + totals.lower[String(level)][periodsRemaining - 1];
+      upper = actualToDate + totals.upper[String(level)][periodsRemaining - 1];
+    }
   } else {
     actualToDate = actual[actual.length - 1];
     const j = fy.last - firstForecast;
@@ -76,7 +81,8 @@ export function fiscalOutturn({
     lower = periodsRemaining > 0 ? lo[j] : actualToDate;
     upper = periodsRemaining > 0 ? hi[j] : actualToDate;
   }
-  const total = kind === 'flow' ? actualToDate + forecastRemaining : periodsRemaining > 0 ? forecastRemaining : actualToDate;
+  let total = actualToDate + forecastRemaining;
+  if (kind === 'stock') total = periodsRemaining > 0 ? forecastRemaining : actualToDate;
   const targetTotal = targetOver(target, fy.first, fy.last, kind);
   return {
     fiscalYear: fy.label,
@@ -100,7 +106,8 @@ function targetOver(
   kind: 'flow' | 'stock',
 ): number | null {
   if (!target) return null;
-  const at = (p: number): number => (p >= target.start && p < target.start + target.values.length ? target.values[p - target.start] : NaN);
+  const end = target.start + target.values.length;
+  const at = (p: number): number => (p >= target.start && p < end ? target.values[p - target.start] : NaN);
   if (kind === 'stock') {
     const v = at(last);
     return Number.isNaN(v) ? null : v;

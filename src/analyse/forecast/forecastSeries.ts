@@ -12,7 +12,8 @@ import type {ForecastResult} from './types.js';
  * requested levels, and back-test the same method from rolling origins.
  *
  * Methods: `auto` (the method that measured best on the M3 data: the mean of automatic ETS and Theta, see
- * {@link AUTO_METHOD} and methods.ts), `ets`, `theta`, `combination` (ETS, Theta, damped), `seasonal-naive`. Fallbacks, each with a note: a constant series forecasts the constant;
+ * {@link AUTO_METHOD} and methods.ts), `ets`, `theta`, `combination` (ETS, Theta, damped), `seasonal-naive`.
+ * Fallbacks, each with a note: a constant series forecasts the constant;
  * fewer than 4 values use the naive method; fewer than two full years exclude seasonal models; weekly data
  * (m = 52) are seasonally adjusted before non-seasonal models.
  *
@@ -33,8 +34,12 @@ export function forecastSeries(
   const y = prepared.values;
   const n = y.length;
   if (n === 0) throw new RangeError('forecast needs at least one value');
-  if (prepared.filled > 0) notes.push(`Filled ${prepared.filled} missing value(s) by linear interpolation before forecasting.`);
-  if (prepared.first + n < values.length) notes.push('Forecast starts after the last period, beyond the last observed value.');
+  if (prepared.filled > 0) {
+    notes.push(`Filled ${prepared.filled} missing value(s) by linear interpolation before forecasting.`);
+  }
+  if (prepared.first + n < values.length) {
+    notes.push('Forecast starts after the last period, beyond the last observed value.');
+  }
   const period = periodsPerYear[frequency];
   let method: MethodName = options.method === 'auto' ? AUTO_METHOD : options.method;
   const constant = y.every((v) => v === y[0]);
@@ -58,7 +63,10 @@ export function forecastSeries(
       notes.push('Fewer than two full years of data: seasonal models are not used.');
     }
     if (frequency === 'weekly' && (method === 'ets' || method === 'combination' || method === 'ets-theta')) {
-      notes.push('Weekly data: ETS forecasts the seasonally adjusted series (classical decomposition over 52 weeks) and the seasonal pattern is added back.');
+      notes.push(
+        'Weekly data: ETS forecasts the seasonally adjusted series (classical decomposition over 52 weeks) ' +
+          'and the seasonal pattern is added back.',
+      );
     }
     run = runMethod(method, y, {period, h, levels});
     if (!isFinitePath(run.forecast)) {
@@ -75,6 +83,13 @@ export function forecastSeries(
     lower[String(level)] = cut(forecast.lower.get(level)!);
     upper[String(level)] = cut(forecast.upper.get(level)!);
   }
+  const runningTotals = forecast.runningTotals && gap === 0 ? forecast.runningTotals : undefined;
+  const totals = runningTotals
+    ? {
+        lower: Object.fromEntries(levels.map((l) => [String(l), Array.from(runningTotals.lower.get(l)!)])),
+        upper: Object.fromEntries(levels.map((l) => [String(l), Array.from(runningTotals.upper.get(l)!)])),
+      }
+    : undefined;
   const backtest =
     constant || backtestOrigins < 1 || n < 5
       ? null
@@ -98,6 +113,7 @@ export function forecastSeries(
       ...run.details,
     },
     notes,
+    ...(totals ? {runningTotals: totals} : {}),
   };
 }
 

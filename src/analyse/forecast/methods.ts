@@ -76,7 +76,8 @@ export function runMethod(
     case 'holt':
     case 'damped':
     case 'comb-shd': {
-      const label = ({naive2: 'Naive2', ses: 'SES', holt: 'Holt', damped: 'Damped', 'comb-shd': 'Comb S-H-D'} as const)[name];
+      const labels = {naive2: 'Naive2', ses: 'SES', holt: 'Holt', damped: 'Damped', 'comb-shd': 'Comb S-H-D'} as const;
+      const label = labels[name];
       return {forecast: forecastBenchmarks(values, period, options, [label]).get(label)!, details: {}};
     }
     case 'theta': {
@@ -122,7 +123,8 @@ function runEts(values: Float64Array, period: number, options: {h: number; level
   const factors = sa.ahead(options.h);
   for (let i = 0; i < paths.length; i++) {
     const t = i % options.h;
-    paths[i] = sa.kind === 'multiplicative' ? paths[i] * factors[t] : sa.kind === 'additive' ? paths[i] + factors[t] : paths[i];
+    if (sa.kind === 'multiplicative') paths[i] *= factors[t];
+    else if (sa.kind === 'additive') paths[i] += factors[t];
   }
   forecast.runningTotals = runningTotalIntervals(paths, options.h, forecast.levels);
   return {

@@ -14,6 +14,12 @@ export interface ForecastResult {
   options: Record<string, unknown>;
   /** Warnings such as fallbacks for short series. */
   notes: string[];
+  /**
+   * Optional: intervals for running totals of the forecasts, `lower["80"][k]` bounding mean[0] + … + mean[k]
+   * (ETS: simulated sample paths; Theta: closed form; combinations: members' bounds averaged). Used by the
+   * fiscal-year outturn of flows; absent for methods without a joint error model.
+   */
+  runningTotals?: {lower: Record<string, number[]>; upper: Record<string, number[]>};
 }
 
 export interface Backtest {

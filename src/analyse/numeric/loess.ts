@@ -48,7 +48,7 @@ export function loessAt(
     let swy = 0;
     for (let j = left; j <= right; j++) {
       const u = j - x;
-      let w = kernel !== null ? kernel[u < 0 ? -u : u] : tricube(u < 0 ? -u : u, h);
+      let w = kernel[u < 0 ? -u : u];
       if (robustness !== null) w *= robustness[j - 1];
       sw += w;
       swy += w * y[j - 1];
@@ -64,8 +64,7 @@ export function loessAt(
   const split = Math.min(Math.max(x, left), right + 1);
   for (let j = left; j < split; j++) {
     const u = j - x;
-    const k = kernel !== null ? kernel[-u] : tricube(-u, h);
-    const w = robustness === null ? k : k * robustness[j - 1];
+    const w = robustness === null ? kernel[-u] : kernel[-u] * robustness[j - 1];
     const wy = w * y[j - 1];
     sw += w;
     swu += w * u;
@@ -75,8 +74,7 @@ export function loessAt(
   }
   for (let j = split; j <= right; j++) {
     const u = j - x;
-    const k = kernel !== null ? kernel[u] : tricube(u, h);
-    const w = robustness === null ? k : k * robustness[j - 1];
+    const w = robustness === null ? kernel[u] : kernel[u] * robustness[j - 1];
     const wy = w * y[j - 1];
     sw += w;
     swu += w * u;
@@ -93,8 +91,10 @@ export function loessAt(
 }
 
 const tables: Float64Array[] = [];
-/** Bandwidths up to this are tabulated and cached; wider ones (STL's periodic windows) are computed per point. */
-const MAX_TABLE = 512;
+/** Bandwidths up to this are kept for good; wider ones (STL's periodic windows) in a small set, cleared when full. */
+const MAX_KEPT = 512;
+const wide = new Map<number, Float64Array>();
+const MAX_WIDE = 32;
 
 /** Tricube weight (1 − (r/h)³)³ with the paper's cut-offs: 1 for r ≤ 0.001·h and 0 for r > 0.999·h. */
 function tricube(r: number, h: number): number {
@@ -106,15 +106,19 @@ function tricube(r: number, h: number): number {
 }
 
 /**
- * Tricube weights for the integer distances r = 0…h, or null when h is wider than {@link MAX_TABLE}. Positions
- * and bandwidths are whole numbers in STL, so each table is built once per bandwidth and kept.
+ * Tricube weights for the integer distances r = 0…h. Positions and bandwidths are whole numbers in STL, so each
+ * table is built once per bandwidth and reused.
  */
-function tricubeTable(h: number): Float64Array | null {
-  if (h > MAX_TABLE) return null;
-  let table = tables[h];
+function tricubeTable(h: number): Float64Array {
+  let table = h <= MAX_KEPT ? tables[h] : wide.get(h);
   if (table === undefined) {
-    table = tables[h] = new Float64Array(h + 1);
+    table = new Float64Array(h + 1);
     for (let r = 0; r <= h; r++) table[r] = tricube(r, h);
+    if (h <= MAX_KEPT) tables[h] = table;
+    else {
+      if (wide.size >= MAX_WIDE) wide.clear();
+      wide.set(h, table);
+    }
   }
   return table;
 }

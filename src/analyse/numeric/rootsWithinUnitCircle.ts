@@ -10,7 +10,8 @@
  * (Hyndman, Akram & Archibald 2008); a root-free test is exact, cheap and has no convergence issues.
  * Reference: P. Henrici (1974), Applied and Computational Complex Analysis, vol. 1, §6.8 (Schur–Cohn algorithm).
  *
- * Complexity: O(n²) time, O(n) memory (scratch buffers shared between calls; the input is not changed). NaN policy: NaN in → false.
+ * Complexity: O(n²) time, O(n) memory (scratch buffers shared between calls; the input is not changed).
+ * NaN policy: NaN in → false.
  * @example rootsWithinUnitCircle(Float64Array.of(-0.5, 1)) // => true (root 0.5)
  */
 // Scratch buffers reused across calls (the routine is called thousands of times per model fit).

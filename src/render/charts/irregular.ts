@@ -52,7 +52,13 @@ export function irregularChart(input: IrregularInput, ctx: ChartContext): TopLev
         mark: {type: 'rule', color: theme.neutral, strokeWidth: 1},
         encoding: {
           x: timeX(frequency, input.irregular.length),
-          y: {field: 'v', type: 'quantitative', title: input.model === 'multiplicative' ? '% irregular' : ctx.unit},
+          // Padding leaves room for the period labels of flagged points at the top and bottom.
+          y: {
+            field: 'v',
+            type: 'quantitative',
+            scale: {padding: 14},
+            title: input.model === 'multiplicative' ? '% irregular' : ctx.unit,
+          },
           y2: {datum: 0},
         },
       },

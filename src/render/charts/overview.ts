@@ -49,7 +49,8 @@ export function overviewChart(input: OverviewInput, ctx: ChartContext): TopLevel
       y: {field: 'v', type: 'quantitative', scale: {zero: false}, title: ctx.unit, axis: {format: VALUE_FORMAT}},
       color: {field: 's', type: 'nominal', scale: {domain, range: domain.map((s) => styles[s][0])}},
       ...(domain.length > 1
-        ? {strokeWidth: {field: 's', type: 'ordinal', sort: domain, scale: {domain, range: domain.map((s) => styles[s][1])}, legend: null}}
+        ? // Same field and no legend override: vega-lite merges it into the colour legend (a null legend hides both).
+          {strokeWidth: {field: 's', type: 'ordinal', sort: domain, scale: {domain, range: domain.map((s) => styles[s][1])}}}
         : {}),
       order: {field: 's', sort: 'ascending'},
     },

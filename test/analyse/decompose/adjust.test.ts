@@ -4,8 +4,8 @@ import fc from 'fast-check';
 import type {AnalysisOptions} from '../../../src/config/plan.js';
 import {adjustSeries} from '../../../src/analyse/decompose/index.js';
 import type {Adjustment} from '../../../src/analyse/decompose/types.js';
-import {workingDayRegressor, easterRegressor} from '../../../src/time/calendar.js';
-import {isoWeekIndex, monthIndex, quarterIndex, type Frequency} from '../../../src/time/period.js';
+import {workingDayRegressor, easterRegressor, holidayRegressor} from '../../../src/time/calendar.js';
+import {daysFromCivil, isoWeekIndex, monthIndex, quarterIndex, type Frequency} from '../../../src/time/period.js';
 
 // Sources: R's stats::stl and stats::decompose on R datasets (test/reference/stl.R → stl.json, decompose.json).
 const stlRef = JSON.parse(readFileSync(new URL('../../reference/stl.json', import.meta.url), 'utf8')) as {
@@ -171,6 +171,20 @@ describe('calendar effects', () => {
     expect(working.description).toMatch(/Each extra working day raises the series by about 1\.[2-4]%/);
     // original = trend × seasonal × irregular × calendar factor
     values.forEach((v, i) => expect(a.trend[i] * a.seasonal[i] * a.irregular[i] * a.calendar!.effect[i]).toBeCloseTo(v, 6));
+  });
+  it('recovers a holiday effect (weekday holidays on fixed dates)', () => {
+    const start = monthIndex(2010, 1);
+    const years = Array.from({length: 12}, (_, k) => 2010 + k);
+    const dates = years.flatMap((y) => [`${y}-12-25`, `${y}-12-26`, `${y}-01-01`, `${y}-05-01`]);
+    const days = dates.map((d) => daysFromCivil(Number(d.slice(0, 4)), Number(d.slice(5, 7)), Number(d.slice(8))));
+    const h = holidayRegressor('monthly', start, 144, days);
+    const pattern = [5, -3, 8, 2, -6, 4, -1, 7, -4, 3, -9, -6];
+    const values = Array.from({length: 144}, (_, i) => 800 + i + 10 * pattern[i % 12] - 30 * h[i] + 2 * Math.sin(i * 2.1));
+    const a = ok(run(values, {seasonalWindow: 'periodic'}, {start, calendar: {workingDays: 'off', easter: 'off', holidays: dates}}));
+    const holiday = a.calendar!.regressors.find((r) => r.name === 'holidays')!;
+    expect(holiday.coefficient).toBeCloseTo(-30, 0);
+    expect(holiday.significant).toBe(true);
+    expect(holiday.description).toMatch(/^Each holiday on a weekday lowers the series by about (29|30)\.\d\.$/);
   });
   it('skips working days for stock series', () => {
     const values = decCase('USAccDeaths').data;

@@ -40,7 +40,8 @@ describe('etsFilter against forecast::ets with the fitted parameters and initial
       const spec = specOf(c);
       const params = {alpha: c.par.alpha, beta: c.par.beta ?? 0, gamma: c.par.gamma ?? 0, phi: c.par.phi ?? 1};
       // initstate holds l, b?, s1 … sm (R's full state vector at time 0; a bare number when it is only l).
-      const run = etsFilter(Float64Array.from(c.values), spec, params, Float64Array.from(([] as number[]).concat(c.initstate)));
+      const states = Float64Array.from(([] as number[]).concat(c.initstate));
+      const run = etsFilter(Float64Array.from(c.values), spec, params, states);
       expect(relErr(run.lik, c.lik)).toBeLessThan(1e-6);
       let worst = 0;
       c.fitted.forEach((f, i) => (worst = Math.max(worst, relErr(run.fitted[i], f))));
@@ -67,7 +68,9 @@ describe('ETS(A,A,A) recursions equal stats::HoltWinters for given smoothing par
       // coefficients: a, b, s1 … sm where s1 is the seasonal state for the next period (oldest in ETS order).
       expect(relErr(run.finalStates[0], c.coefficients[0])).toBeLessThan(1e-9);
       expect(relErr(run.finalStates[1], c.coefficients[1])).toBeLessThan(1e-9);
-      for (let j = 0; j < m; j++) expect(relErr(run.finalStates[2 + j], c.coefficients[2 + m - 1 - j])).toBeLessThan(1e-9);
+      for (let j = 0; j < m; j++) {
+        expect(relErr(run.finalStates[2 + j], c.coefficients[2 + m - 1 - j])).toBeLessThan(1e-9);
+      }
     });
   }
 });

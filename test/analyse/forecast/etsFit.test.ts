@@ -89,19 +89,21 @@ describe('automatic selection against forecast::ets(y)', () => {
   });
 });
 
+const SES: EtsSpec = {error: 'A', trend: 'N', damped: false, season: 'N', period: 1};
+
 describe('fitEts edge cases', () => {
   it('returns null when the model has more parameters than the data can support', () => {
     const y = Float64Array.from({length: 14}, (_, i) => 10 + (i % 12));
     expect(fitEts(y, {error: 'A', trend: 'A', damped: true, season: 'A', period: 12})).toBeNull();
   });
   it('fits a perfectly constant series without error (ETS(A,N,N), zero variance)', () => {
-    const fit = fitEts(new Float64Array(20).fill(5), {error: 'A', trend: 'N', damped: false, season: 'N', period: 1}, {optCrit: 'mse'})!;
+    const fit = fitEts(new Float64Array(20).fill(5), SES, {optCrit: 'mse'})!;
     const fc = forecastEts(fit, {h: 3});
     for (const v of fc.mean) expect(v).toBeCloseTo(5, 10);
     expect(fit.sigma2).toBe(0);
   });
   it('rejects bad horizons and levels', () => {
-    const fit = fitEts(Float64Array.from(ref.fixed[7].values), {error: 'A', trend: 'N', damped: false, season: 'N', period: 1})!;
+    const fit = fitEts(Float64Array.from(ref.fixed[7].values), SES)!;
     expect(() => forecastEts(fit, {h: 0})).toThrow(/invalid horizon/);
     expect(() => forecastEts(fit, {h: 2, levels: [100]})).toThrow(/invalid level/);
   });

@@ -8,7 +8,8 @@ import {prepareSeries} from '../../../src/analyse/forecast/prepareSeries.js';
 const ref = JSON.parse(readFileSync(new URL('../../reference/ets.json', import.meta.url), 'utf8'));
 const air = Float64Array.from(ref.auto.find((c: {name: string}) => c.name === 'AirPassengers').values);
 const austres = Float64Array.from(ref.auto.find((c: {name: string}) => c.name === 'austres').values);
-const opts = (over: Partial<{method: 'auto' | 'ets' | 'theta' | 'seasonal-naive' | 'combination'; horizon: number; levels: number[]; backtestOrigins: number}> = {}) => ({
+type Method = 'auto' | 'ets' | 'theta' | 'seasonal-naive' | 'combination';
+const opts = (over: Partial<{method: Method; horizon: number; levels: number[]; backtestOrigins: number}> = {}) => ({
   method: 'auto' as const,
   horizon: 12,
   levels: [80, 95],
@@ -40,7 +41,8 @@ describe('forecastSeries', () => {
 
   it('widens the ETS intervals with the horizon (non-seasonal series, austres ETS(M,Ad,A) aside: use Theta)', () => {
     const r = forecastSeries(austres, {frequency: 'quarterly', options: opts({method: 'theta', horizon: 8})});
-    for (let i = 1; i < 8; i++) expect(r.upper['95'][i] - r.lower['95'][i]).toBeGreaterThan(r.upper['95'][i - 1] - r.lower['95'][i - 1]);
+    const width = (i: number) => r.upper['95'][i] - r.lower['95'][i];
+    for (let i = 1; i < 8; i++) expect(width(i)).toBeGreaterThan(width(i - 1));
   });
 
   it('back-tests from rolling origins with benchmarks and one-step points', () => {
@@ -55,7 +57,8 @@ describe('forecastSeries', () => {
   });
 
   it('forecasts a constant series as the constant, without error', () => {
-    const r = forecastSeries(new Float64Array(40).fill(3.5), {frequency: 'monthly', options: opts({backtestOrigins: 6})});
+    const flat = new Float64Array(40).fill(3.5);
+    const r = forecastSeries(flat, {frequency: 'monthly', options: opts({backtestOrigins: 6})});
     expect(r.method).toBe('Constant');
     expect(r.mean).toEqual(new Array(12).fill(3.5));
     expect(r.upper['95']).toEqual(new Array(12).fill(3.5));
@@ -82,7 +85,11 @@ describe('forecastSeries', () => {
   });
 
   it('handles weekly data through seasonal adjustment and says so', () => {
-    const weeks = Float64Array.from({length: 160}, (_, t) => 100 + 0.1 * t + 10 * Math.sin((2 * Math.PI * t) / 52) + ((t * 7919) % 13) / 3);
+    // Invented weekly series: trend, a yearly wave and a deterministic wobble.
+    const weeks = Float64Array.from(
+      {length: 160},
+      (_, t) => 100 + 0.1 * t + 10 * Math.sin((2 * Math.PI * t) / 52) + ((t * 7919) % 13) / 3,
+    );
     const r = forecastSeries(weeks, {frequency: 'weekly', options: opts({method: 'auto', horizon: 13})});
     expectWellFormed(r, 13);
     expect(r.notes.join(' ')).toMatch(/Weekly data/);
@@ -92,9 +99,10 @@ describe('forecastSeries', () => {
     fc.assert(
       fc.property(
         fc.array(fc.double({min: -1e4, max: 1e4, noNaN: true}), {minLength: 1, maxLength: 40}),
-        fc.constantFrom('auto', 'ets', 'theta', 'seasonal-naive') as fc.Arbitrary<'auto' | 'ets' | 'theta' | 'seasonal-naive'>,
+        fc.constantFrom<Method>('auto', 'ets', 'theta', 'seasonal-naive'),
         (values, method) => {
-          const r = forecastSeries(Float64Array.from(values), {frequency: 'quarterly', options: opts({method, horizon: 5})});
+          const options = opts({method, horizon: 5});
+          const r = forecastSeries(Float64Array.from(values), {frequency: 'quarterly', options});
           expectWellFormed(r, 5);
         },
       ),
@@ -103,7 +111,8 @@ describe('forecastSeries', () => {
   });
 
   it('rejects an all-NaN series', () => {
-    expect(() => forecastSeries(Float64Array.of(NaN, NaN), {frequency: 'monthly', options: opts()})).toThrow(/at least one value/);
+    const empty = Float64Array.of(NaN, NaN);
+    expect(() => forecastSeries(empty, {frequency: 'monthly', options: opts()})).toThrow(/at least one value/);
   });
 });
 
@@ -114,5 +123,24 @@ describe('prepareSeries', () => {
     expect(r.first).toBe(1);
     expect(r.filled).toBe(1);
     expect(prepareSeries(Float64Array.of(NaN)).values).toHaveLength(0);
+  });
+});
+
+describe('forecastSeries running totals', () => {
+  it('gives running-total intervals for auto, ETS and Theta, nested around the cumulative mean', () => {
+    for (const method of ['auto', 'ets', 'theta'] as const) {
+      const r = forecastSeries(air, {frequency: 'monthly', options: opts({method})});
+      const t = r.runningTotals!;
+      let cum = 0;
+      r.mean.forEach((m, k) => {
+        cum += m;
+        expect(t.lower['95'][k]).toBeLessThan(t.lower['80'][k]);
+        expect(t.lower['80'][k]).toBeLessThan(cum);
+        expect(t.upper['80'][k]).toBeGreaterThan(cum);
+        expect(t.upper['95'][k]).toBeGreaterThan(t.upper['80'][k]);
+      });
+    }
+    const naive = forecastSeries(air, {frequency: 'monthly', options: opts({method: 'seasonal-naive'})});
+    expect(naive.runningTotals).toBeUndefined();
   });
 });

@@ -22,7 +22,8 @@ describe('nelderMead', () => {
   }
 
   it('treats an infinite objective as infeasible and stays inside the region', () => {
-    const r = nelderMead((x) => (x[0] < 0 || x[1] < 0 ? Infinity : (x[0] + 1) ** 2 + (x[1] - 2) ** 2), Float64Array.of(1, 1));
+    const f = (x: Float64Array) => (x[0] < 0 || x[1] < 0 ? Infinity : (x[0] + 1) ** 2 + (x[1] - 2) ** 2);
+    const r = nelderMead(f, Float64Array.of(1, 1));
     expect(r.x[0]).toBeGreaterThanOrEqual(0);
     expect(r.x[0]).toBeLessThan(1e-3);
     expect(r.x[1]).toBeCloseTo(2, 3);
