@@ -148,6 +148,7 @@ function pdfOptions(plan: Plan, period: number, periodLabel: string) {
     orientation: plan.branding.orientation,
     font: plan.branding.font,
     footer: plan.branding.footer,
+    locale: plan.locale,
     date: `${year}${String(month).padStart(2, '0')}${String(day).padStart(2, '0')}`,
   };
 }

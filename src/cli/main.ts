@@ -7,7 +7,6 @@ import {Command, CommanderError} from 'commander';
 import {loadPlan} from '../config/index.js';
 import type {OutputFormat, Plan} from '../config/plan.js';
 import {formatProblem, InputError} from '../errors.js';
-import type {Logger} from '../log.js';
 import {openBrowser, type PdfBrowser} from '../render/index.js';
 import {build, check} from '../run.js';
 import {packageRoot, toolVersion} from '../version.js';
@@ -36,19 +35,6 @@ interface BuildOptions {
 }
 
 /**
- * Build a batch. Progress and warnings go to stderr so stdout carries only results (folders, next steps); a
- * progress bar left by a failure is removed before the error is printed.
- */
-async function runBuild(given: string[], opts: BuildOptions, io: Io): Promise<number> {
-  const log = cliLogger(io.stderr);
-  try {
-    return await buildBatch(given, opts, io, log);
-  } finally {
-    log.close();
-  }
-}
-
-/**
  * Report a failure and give the exit code: 2 with every problem for bad input, 1 with one line for
  * anything else (the stack only when EBBFLOW_DEBUG=1).
  */
@@ -72,7 +58,9 @@ function fail(error: unknown, io: Io, kept = 0): number {
  * Validate every pack first (so bad input stops the batch before anything is written), then build in order. With
  * `--shard i/n` only the packs of part i are validated and built (see `selectShard`).
  */
-async function buildBatch(given: string[], opts: BuildOptions, io: Io, log: Logger): Promise<number> {
+async function runBuild(given: string[], opts: BuildOptions, io: Io): Promise<number> {
+  // Progress and warnings go to stderr so stdout carries only results (folders, next steps).
+  const log = cliLogger(io.stderr);
   let packs = given;
   if (opts.shard) {
     const {index, count} = opts.shard;
@@ -115,6 +103,7 @@ async function buildBatch(given: string[], opts: BuildOptions, io: Io, log: Logg
       built++;
     }
   } catch (e) {
+    log.close(); // a progress bar left by the failure goes before the message
     return fail(e, io, built);
   } finally {
     for (const b of browsers.values()) if (!('missing' in b)) await b.close();

@@ -49,9 +49,10 @@ export async function run(): Promise<void> {
       previous = f.at;
     }
     const cpuSeconds = (used.user + used.system) / 1e6;
+    const perPeriod = (total / finished.length).toFixed(1);
     console.log(
-      `backfill: ${finished.length} periods in ${total.toFixed(1)} s wall, ${(total / finished.length).toFixed(1)} s per ` +
-        `period (${jobs} analysis threads; main-thread CPU ${cpuSeconds.toFixed(1)} s, browser not included)`,
+      `backfill: ${finished.length} periods in ${total.toFixed(1)} s wall, ${perPeriod} s per period ` +
+        `(${jobs} analysis threads; main-thread CPU ${cpuSeconds.toFixed(1)} s, browser not included)`,
     );
   } finally {
     await rm(out, {recursive: true, force: true});

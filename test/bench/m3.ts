@@ -174,7 +174,8 @@ async function main(): Promise<void> {
       const pub = PUBLISHED[m.label][name];
       console.log(
         `| ${m.label} | ${avg('smape').toFixed(2)} | ${avg('mase').toFixed(3)} | ` +
-          `${(100 * avg('cover80')).toFixed(1)} | ${(100 * avg('cover95')).toFixed(1)} | ${avg('ms').toFixed(1)} | ${pub} |`,
+          `${(100 * avg('cover80')).toFixed(1)} | ${(100 * avg('cover95')).toFixed(1)} | ` +
+          `${avg('ms').toFixed(1)} | ${pub} |`,
       );
     }
     console.log('');

@@ -12,6 +12,7 @@ import type {EtsFit} from './etsFit.js';
  * Reference: Hyndman et al. (2008), Forecasting with Exponential Smoothing, §6.1 (simulated prediction
  * distributions).
  *
+ * Options: `h` periods; `paths` (Default: 2000); `seed` of the mulberry32 generator (Default: 20260101).
  * Complexity: O(paths·h). NaN policy: NaN in the fit → NaN paths. Returns paths × h values, row-major.
  */
 export function simulateEts(

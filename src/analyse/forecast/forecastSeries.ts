@@ -93,7 +93,15 @@ export function forecastSeries(
   const backtest =
     constant || backtestOrigins < 1 || n < 5
       ? null
-      : rollingBacktest(y, {method, period, horizon, origins: backtestOrigins, minTrain: 4, offset: prepared.first});
+      : rollingBacktest(y, {
+          method,
+          period,
+          horizon,
+          origins: backtestOrigins,
+          minTrain: 4,
+          offset: prepared.first,
+          etsSpec: run.etsSpec,
+        });
   return {
     method: forecast.method,
     startOffset: values.length,

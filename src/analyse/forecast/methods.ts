@@ -4,6 +4,8 @@ import {forecastBenchmarks} from './benchmarks.js';
 import {forecastEts} from './etsForecast.js';
 import {simulateEts} from './etsSimulate.js';
 import {runningTotalIntervals} from './runningTotalIntervals.js';
+import {fitEts} from './etsFit.js';
+import type {EtsSpec} from './etsModel.js';
 import {selectEts} from './etsSelect.js';
 import type {Forecast} from './model.js';
 import {forecastNaive, forecastSeasonalNaive} from './naive.js';
@@ -48,6 +50,8 @@ export interface MethodRun {
   forecast: Forecast;
   /** Chosen model and parameters, for the result's options. */
   details: Record<string, unknown>;
+  /** The ETS model used (by `ets` and the combinations), so a back-test can refit the same model class. */
+  etsSpec?: EtsSpec;
 }
 
 /**
@@ -63,7 +67,7 @@ export function combinationIntervalScale(level: number): number {
 export function runMethod(
   name: MethodName,
   values: Float64Array,
-  {period, h, levels}: {period: number; h: number; levels: number[]},
+  {period, h, levels, etsSpec}: {period: number; h: number; levels: number[]; etsSpec?: EtsSpec},
 ): MethodRun {
   const options = {h, levels};
   switch (name) {
@@ -88,35 +92,46 @@ export function runMethod(
       };
     }
     case 'ets':
-      return runEts(values, period, options);
+      return runEts(values, period, options, etsSpec);
     case 'ets-theta':
     case 'combination': {
-      const ets = runEts(values, period, options);
+      const ets = runEts(values, period, options, etsSpec);
       const theta = runMethod('theta', values, {period, h, levels});
       const members = [ets.forecast, theta.forecast];
       if (name === 'combination') members.push(forecastBenchmarks(values, period, options, ['Damped']).get('Damped')!);
       const labels = members.map((m) => m.method);
       const scale = Object.fromEntries(levels.map((l) => [l, combinationIntervalScale(l)]));
       const forecast = averageForecasts(members, `Combination (${labels.join(', ')})`, scale);
-      return {forecast, details: {members: labels, intervalScale: scale, ets: ets.details, theta: theta.details}};
+      const details = {members: labels, intervalScale: scale, ets: ets.details, theta: theta.details};
+      return {forecast, details, etsSpec: ets.etsSpec};
     }
   }
 }
 
-function runEts(values: Float64Array, period: number, options: {h: number; levels: number[]}): MethodRun {
+/**
+ * Automatic ETS, or a refit of the given model class (`spec`: smoothing parameters and states re-estimated, no
+ * selection), as back-tests do to keep their cost at one fit per origin.
+ */
+function runEts(
+  values: Float64Array,
+  period: number,
+  options: {h: number; levels: number[]},
+  spec?: EtsSpec,
+): MethodRun {
   const n = values.length;
-  if (period <= 24) {
-    const selection = selectEts(values, {period, seasonal: n >= 2 * period});
-    if (!selection) return {forecast: forecastNaive(values, options), details: {fallback: 'naive'}};
-    const fit = selection.best;
+  const seasonalOk = period <= 24 && n >= 2 * period;
+  const sa = period <= 24 ? null : seasonalAdjustment(values, period);
+  const y = sa ? sa.adjusted : values;
+  const usable = spec && (spec.season === 'N' || seasonalOk) && !(spec.error === 'M' && y.some((v) => !(v > 0)));
+  const fit =
+    (usable ? fitEts(y, spec) : null) ?? selectEts(y, {period: sa ? 1 : period, seasonal: !sa && seasonalOk})?.best;
+  if (!fit) return {forecast: forecastNaive(values, options), details: {fallback: 'naive'}};
+  const details = {model: fit.method, params: fit.params, aicc: fit.aicc, ...(sa ? {seasonalAdjustment: sa.kind} : {})};
+  if (!sa) {
     const forecast = forecastEts(fit, options);
     forecast.runningTotals = runningTotalIntervals(simulateEts(fit, {h: options.h}), options.h, forecast.levels);
-    return {forecast, details: {model: fit.method, params: fit.params, aicc: fit.aicc}};
+    return {forecast, details, etsSpec: fit.spec};
   }
-  const sa = seasonalAdjustment(values, period);
-  const selection = selectEts(sa.adjusted, {period: 1, seasonal: false});
-  if (!selection) return {forecast: forecastNaive(values, options), details: {fallback: 'naive'}};
-  const fit = selection.best;
   const method = sa.seasonal ? `${fit.method} on seasonally adjusted data` : fit.method;
   const forecast = reseasonalise(forecastEts(fit, options), sa, method);
   const paths = simulateEts(fit, {h: options.h});
@@ -127,8 +142,5 @@ function runEts(values: Float64Array, period: number, options: {h: number; level
     else if (sa.kind === 'additive') paths[i] += factors[t];
   }
   forecast.runningTotals = runningTotalIntervals(paths, options.h, forecast.levels);
-  return {
-    forecast,
-    details: {model: fit.method, params: fit.params, aicc: fit.aicc, seasonalAdjustment: sa.kind},
-  };
+  return {forecast, details, etsSpec: fit.spec};
 }

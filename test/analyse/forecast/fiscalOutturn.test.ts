@@ -55,7 +55,8 @@ describe('fiscalOutturn', () => {
   it('labels calendar fiscal years FY2026 and handles a complete year', () => {
     const dec = new Float64Array(24).fill(2); // Jan 2025 … Dec 2026
     const forecast = flatForecast(24, 12, 10, 1);
-    const o = fiscalOutturn({values: dec, start, frequency: 'monthly', fiscalYearStart: 1, kind: 'flow', forecast, target: null})!;
+    const calendar = {values: dec, start, frequency: 'monthly' as const, fiscalYearStart: 1};
+    const o = fiscalOutturn({...calendar, kind: 'flow', forecast, target: null})!;
     expect(o.fiscalYear).toBe('FY2026');
     expect(o).toMatchObject({actualToDate: 24, periodsRemaining: 0, total: 24, lower: 24, upper: 24});
   });

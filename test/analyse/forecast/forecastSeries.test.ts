@@ -56,6 +56,13 @@ describe('forecastSeries', () => {
     expect(b.benchmarks.map((x) => x.method)).toEqual(['Seasonal naive', 'Naive2']);
   });
 
+  it('back-tests auto (ETS + Theta) by refitting the chosen ETS class at each origin', () => {
+    const r = forecastSeries(air, {frequency: 'monthly', options: opts({backtestOrigins: 6})});
+    expect(r.method).toBe('Combination (ETS(M,Ad,M), Theta)');
+    expect(r.backtest!.points).toHaveLength(6);
+    expect(Number.isFinite(r.backtest!.mase)).toBe(true);
+  });
+
   it('forecasts a constant series as the constant, without error', () => {
     const flat = new Float64Array(40).fill(3.5);
     const r = forecastSeries(flat, {frequency: 'monthly', options: opts({backtestOrigins: 6})});
