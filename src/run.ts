@@ -82,7 +82,9 @@ export async function build(request: BuildRequest, log: Logger): Promise<BuildSu
     outDir: plan.outDir,
     force: request.force,
     packYaml: JSON.stringify(plan, null, 2),
-    warnings: analyses.flatMap((a) => a.notes.map((note) => `${a.id}: ${note}`)),
+    warnings: analyses.flatMap((a) =>
+      [a.notAdjustedReason ?? [], a.notes, a.forecast?.notes ?? []].flat().map((note) => `${a.id}: ${note}`),
+    ),
   });
   log.info(`${plan.id} ${periodLabel}: written to ${written.folder}`);
   return {packId: plan.id, period: periodLabel, folder: written.folder, outputs: written.outputs, pdfSkipped};

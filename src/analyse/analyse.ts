@@ -27,7 +27,6 @@ export function analyseSeries(input: SeriesInput): SeriesAnalysis {
     residualSigma: input.residualSigma,
   });
   const adjustment = adjusted.ok ? adjusted.adjustment : null;
-  if (!adjusted.ok) notes.push(adjusted.reason);
   const sa = adjustment ? Float64Array.from(adjustment.adjusted) : Float64Array.from(values);
   const irregular = adjustment ? Float64Array.from(adjustment.irregular) : undefined;
 
@@ -50,7 +49,6 @@ export function analyseSeries(input: SeriesInput): SeriesAnalysis {
     ? forecastSeries(values, {frequency, options: options.forecast})
     : null;
   if (!forecast) notes.push('Too few values to forecast.');
-  else notes.push(...forecast.notes);
   const outturn = forecast
     ? fiscalOutturn({values, start, frequency, fiscalYearStart: input.fiscalYearStart, kind, forecast, target: input.target})
     : null;

@@ -59,7 +59,7 @@ export interface SeriesAnalysis {
   cycle: CycleResult | null;
   forecast: ForecastResult | null;
   outturn: Outturn | null;
-  /** Warnings about this series (data and method), plain sentences. */
+  /** Warnings about this series not held elsewhere (`notAdjustedReason` and `forecast.notes` hold their own). */
   notes: string[];
   options: AnalysisOptions;
 }

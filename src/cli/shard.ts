@@ -10,7 +10,7 @@ export interface Shard {
 /** Most shards accepted; more is surely a typo. */
 const MAX_SHARDS = 10_000;
 
-/** `--shard 3/8` → `{index: 3, count: 8}`; anything but whole numbers with 1 ≤ i ≤ n is a usage error (exit 2). */
+/** `--shard 3/8` → `{index: 3, count: 8}`; a usage error (exit 2) unless i and n are whole numbers, 1 ≤ i ≤ n. */
 export function parseShard(value: string): Shard {
   const match = /^\s*(\d+)\s*\/\s*(\d+)\s*$/.exec(value);
   if (!match) throw new InvalidArgumentError('write it as i/n, e.g. 3/8 for the third of eight parts');

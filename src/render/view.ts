@@ -624,7 +624,7 @@ function methodsView(s: ReportSeries, f: Formatter): MethodsView {
         value: `trend-cycle ${f.share(d.varianceShares.trend * 100)}, seasonal ${f.share(d.varianceShares.seasonal * 100)}, irregular ${f.share(d.varianceShares.irregular * 100)}`,
       },
       {
-        label: 'Seasonality left after adjustment',
+        label: 'Seasonality left over',
         value: `${d.residualSeasonality.test} test ${f.number(d.residualSeasonality.statistic, 2)}, ${pValue(f, d.residualSeasonality.pValue)}: ${d.residualSeasonality.detected ? 'some seasonality remains; read adjusted changes with care' : 'none detected'}`,
       },
       {label: 'Seasonal stability', value: `mean year-to-year change of the seasonal effect ${f.number(d.seasonalStability, 4)} (model scale)`},

@@ -52,7 +52,7 @@ export async function run(): Promise<void> {
     const perPeriod = (total / finished.length).toFixed(1);
     console.log(
       `backfill: ${finished.length} periods in ${total.toFixed(1)} s wall, ${perPeriod} s per period ` +
-        `(${jobs} analysis threads; main-thread CPU ${cpuSeconds.toFixed(1)} s, browser not included)`,
+        `(${jobs} analysis threads; process CPU incl. worker threads ${cpuSeconds.toFixed(1)} s, browser not included)`,
     );
   } finally {
     await rm(out, {recursive: true, force: true});

@@ -42,7 +42,11 @@ describe('runPool in-process (jobs 1, or TypeScript sources)', () => {
 
   test('a logger that draws progress itself gets every step instead of lines', async () => {
     const steps: string[] = [];
-    const log = {info: (m: string) => steps.push(m), warn: () => undefined, progress: (d: number, t: number) => steps.push(`${d}/${t}`)};
+    const log = {
+      info: (m: string) => steps.push(m),
+      warn: () => undefined,
+      progress: (d: number, t: number) => steps.push(`${d}/${t}`),
+    };
     await runPool(Array.from({length: 100}, (_, i) => shortInput(`s${i}`)), {jobs: 2, log});
     expect(steps).toEqual(Array.from({length: 100}, (_, i) => `${i + 1}/100`));
   });
@@ -68,7 +72,9 @@ describe('runPool in-process (jobs 1, or TypeScript sources)', () => {
  */
 function distIsFresh(): boolean {
   const src = path.join(root, 'src');
-  const files = readdirSync(src, {recursive: true, encoding: 'utf8'}).filter((f) => f.endsWith('.ts') && !f.endsWith('.d.ts'));
+  const files = readdirSync(src, {recursive: true, encoding: 'utf8'}).filter(
+    (f) => f.endsWith('.ts') && !f.endsWith('.d.ts'),
+  );
   return files.every((f) => {
     const built = path.join(root, 'dist/src', f.replace(/\.ts$/, '.js'));
     return existsSync(built) && statSync(built).mtimeMs >= statSync(path.join(src, f)).mtimeMs;
@@ -87,12 +93,11 @@ describe('worker-thread pool from the compiled code', () => {
       await symlink(path.join(root, name), path.join(compiled, name));
     }
     const tsc = path.join(root, 'node_modules/typescript/bin/tsc');
-    await run(process.execPath, [tsc, '-p', path.join(root, 'tsconfig.json'), '--outDir', path.join(compiled, 'dist')]).catch(
-      (e: {stdout?: string}) => {
-        // Type errors elsewhere still emit JavaScript; only a missing output is fatal.
-        if (!existsSync(path.join(compiled, 'dist/src/cli/main.js'))) throw e;
-      },
-    );
+    const args = [tsc, '-p', path.join(root, 'tsconfig.json'), '--outDir', path.join(compiled, 'dist')];
+    await run(process.execPath, args).catch((e: unknown) => {
+      // Type errors elsewhere still emit JavaScript; only a missing output is fatal.
+      if (!existsSync(path.join(compiled, 'dist/src/cli/main.js'))) throw e;
+    });
   }, 600_000);
 
   test('results.json is the same bytes with --jobs 1 and --jobs 2', {timeout: 300_000}, async () => {
@@ -117,9 +122,8 @@ describe('worker-thread pool from the compiled code', () => {
     for (const jobs of ['1', '2']) {
       const out = path.join(dir, `out-${jobs}`);
       const cli = path.join(compiled, 'dist/src/cli/main.js');
-      const {stdout} = await run(process.execPath, [cli, 'build', path.join(dir, 'pack.yaml'), '--out', out, '-j', jobs], {
-        env: {...process.env, TZ: 'UTC'},
-      });
+      const argv = [cli, 'build', path.join(dir, 'pack.yaml'), '--out', out, '-j', jobs];
+      const {stdout} = await run(process.execPath, argv, {env: {...process.env, TZ: 'UTC'}});
       texts.push(await readFile(path.join(stdout.trim(), 'results.json'), 'utf8'));
     }
     expect(JSON.parse(texts[0]).series).toHaveLength(10);
@@ -130,7 +134,8 @@ describe('worker-thread pool from the compiled code', () => {
     const script = `
       import {runPool} from ${JSON.stringify(path.join(compiled, 'dist/src/analyse/pool.js'))};
       const good = ${JSON.stringify(shortInput('x'))};
-      const inputs = Array.from({length: 12}, (_, i) => ({...good, id: 'k' + i, values: Float64Array.from([5, NaN, NaN])}));
+      const values = () => Float64Array.from([5, NaN, NaN]);
+      const inputs = Array.from({length: 12}, (_, i) => ({...good, id: 'k' + i, values: values()}));
       inputs[7] = {...inputs[7], values: null};
       try { await runPool(inputs, {jobs: 2, log: {info() {}, warn() {}}}); console.log('no error'); }
       catch (e) { console.log(e.message.split('\\n')[0]); }`;

@@ -21,10 +21,16 @@ try {
     options,
     residualSigma: plan.thresholds.residualSigma,
   });
-  const told = narrate({plan: {...plan, series: [series]}, period: end, series: [{plan: series, analysis}], history: null});
+  const told = narrate({
+    plan: {...plan, series: [series]},
+    period: end,
+    series: [{plan: series, analysis}],
+    history: null,
+  });
   const texts = [...told.pack, ...(told.bySeries.get(series.id) ?? [])].map((c) => c.text);
-  const result = {length: analysis.original.length, notes: analysis.notes, notAdjustedReason: analysis.notAdjustedReason, texts};
-  process.stdout.write(JSON.stringify(result));
+  const {original, notes, notAdjustedReason} = analysis;
+  process.stdout.write(JSON.stringify({length: original.length, notes, notAdjustedReason, texts}));
 } catch (e) {
-  process.stdout.write(JSON.stringify({error: `${e?.constructor?.name}: ${e?.message}`, at: String(e?.stack).split('\n')[1]?.trim()}));
+  const at = String(e?.stack).split('\n')[1]?.trim();
+  process.stdout.write(JSON.stringify({error: `${e?.constructor?.name}: ${e?.message}`, at}));
 }

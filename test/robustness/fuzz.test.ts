@@ -5,7 +5,7 @@ import {fileURLToPath} from 'node:url';
 import fc from 'fast-check';
 import {afterAll, beforeAll, describe, expect, test} from 'vitest';
 import {isMap, isSeq, parseDocument, type Document} from 'yaml';
-import {CRASH_TEXT, runCli, type CliRun} from './run.js';
+import {CRASH_TEXT, runCli, runCliInChild, type CliRun} from './run.js';
 
 /**
  * Random packs and random CSV bytes through the command line: whatever the input, `check` and `build` answer
@@ -183,7 +183,8 @@ const textEdit = fc.record({
     fc.string({maxLength: 6}),
     fc.string({unit: 'binary', maxLength: 4}),
     // Anchors and aliases have their own cases in test/fixtures/bad (yaml-unknown-alias, yaml-alias-bomb).
-    fc.constantFrom('\t', ':', ': ', '- ', '"', "'", '[', '{', '!!binary', '!!js/function', '\n  ', '#', '\u0000', '\ufeff'),
+    fc.constantFrom('\t', ':', ': ', '- ', '"', "'", '[', '{', '!!binary', '!!js/function', '\n  ', '#'),
+    fc.constantFrom('\u0000', '\ufeff'),
   ),
   overwrite: fc.boolean(),
 });
@@ -288,7 +289,10 @@ const csvText = fc
     delimiter: fc.constantFrom(',', ';', '\t', '|'),
     header: fc.oneof(
       {weight: 4, arbitrary: fc.constant(['date', 'sales', 'budget'])},
-      {weight: 1, arbitrary: fc.array(fc.constantFrom('date', 'sales', 'budget', 'Sales', '', '"date"'), {maxLength: 4})},
+      {
+        weight: 1,
+        arbitrary: fc.array(fc.constantFrom('date', 'sales', 'budget', 'Sales', '', '"date"'), {maxLength: 4}),
+      },
     ),
     rows: fc.array(fc.tuple(dateCell, valueCell, valueCell), {maxLength: 40}),
     quoteAll: fc.boolean(),
@@ -296,7 +300,8 @@ const csvText = fc
   })
   .map(({delimiter, header, rows, quoteAll, newline}) => {
     const q = (s: string) => (quoteAll ? `"${s.replace(/"/g, '""')}"` : s);
-    return [header.map(q).join(delimiter), ...rows.map((r) => r.map(q).join(delimiter))].join(newline) + newline;
+    const columns: readonly string[] = header;
+    return [columns.map(q).join(delimiter), ...rows.map((r) => r.map(q).join(delimiter))].join(newline) + newline;
   });
 
 /** CSV bytes: generated text, optionally behind a BOM, with raw bytes spliced in (invalid UTF-8, NUL, 0x80–0x9F). */
@@ -336,18 +341,27 @@ describe('CSV files', () => {
 
   // Every fifth month of the sales column set to one extreme value (1e400 overflows to Infinity when read), under
   // the fast methods of the fuzz pack and under the control pack's automatic ones (STL, ETS/Theta selection).
+  // These builds run the CLI in a child process with a time limit: an analysis that never returns (seen with
+  // STL on values near 1e307) would otherwise stall this file, since vitest cannot interrupt synchronous code.
   const extremes = ['1e300', '-1e300', '1e308', '1e-300', '5e-324', '1e400'];
   const packs = {fast: BASE_PACK, automatic: ''};
   beforeAll(async () => {
     packs.automatic = await readFile(path.join(control, 'pack.yaml'), 'utf8');
   });
   test.each(extremes.flatMap((x) => [['fast', x] as const, ['automatic', x] as const]))(
-    '%s methods, sales cells of %s: builds or is rejected, never crashes',
+    '%s methods, sales cells of %s: builds or is rejected, never crashes or hangs',
     async (methods, extreme) => {
+      const caseDir = await mkdtemp(path.join(dir, 'extreme-'));
       const months = controlCsv.toString().trim().split('\n').slice(1);
       const rows = months.map((r, i) => (i % 5 === 0 ? r.replace(/,[^,]*,/, `,${extreme},`) : r));
-      await writeFile(path.join(dir, 'data.csv'), ['date,sales,budget', ...rows].join('\n') + '\n');
-      await checkAndBuild(packs[methods], true);
+      await writeFile(path.join(caseDir, 'data.csv'), ['date,sales,budget', ...rows].join('\n') + '\n');
+      const packFile = path.join(caseDir, 'pack.yaml');
+      await writeFile(packFile, packs[methods]);
+      const args = ['build', packFile, '--out', path.join(caseDir, 'out'), '--formats', 'json', '--jobs', '1'];
+      const run = await runCliInChild(args, 45_000);
+      expect(run.hung, `build did not finish within 45 s`).toBe(false);
+      expectNoCrash(run, `${methods} pack, sales = ${extreme} every fifth month`);
     },
+    90_000,
   );
 });

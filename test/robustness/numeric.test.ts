@@ -30,7 +30,12 @@ const optionSets: Record<string, AnalysisOptions> = {
   automatic,
   'classical-theta': {
     ...automatic,
-    decomposition: {...automatic.decomposition, method: 'classical', model: 'multiplicative', seasonalWindow: 'periodic'},
+    decomposition: {
+      ...automatic.decomposition,
+      method: 'classical',
+      model: 'multiplicative',
+      seasonalWindow: 'periodic',
+    },
     forecast: {...automatic.forecast, method: 'theta'},
     cycle: {method: 'bandpass', lambda: null},
   },

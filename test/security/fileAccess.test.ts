@@ -21,7 +21,8 @@ let packDir = '';
 let outside = '';
 
 async function writePack(extra: string, file = 'data.csv'): Promise<string> {
-  const text = (await readFile(path.join(control, 'pack.yaml'), 'utf8')).replace('file: data.csv', `file: ${JSON.stringify(file)}`);
+  const base = await readFile(path.join(control, 'pack.yaml'), 'utf8');
+  const text = base.replace('file: data.csv', `file: ${JSON.stringify(file)}`);
   const packFile = path.join(packDir, 'pack.yaml');
   await writeFile(packFile, text.replace('sources:', `${extra}sources:`));
   return packFile;
@@ -55,7 +56,8 @@ describe('paths outside the pack folder are accepted (no containment rule)', () 
   });
 
   test('branding.logo and branding.templates outside the pack folder', async () => {
-    const packFile = await writePack(`branding:\n  logo: ../../elsewhere/logo.svg\n  templates: ${JSON.stringify(path.join(outside, 'templates'))}\n`);
+    const templates = JSON.stringify(path.join(outside, 'templates'));
+    const packFile = await writePack(`branding:\n  logo: ../../elsewhere/logo.svg\n  templates: ${templates}\n`);
     expect((await runCli(['check', packFile])).code).toBe(0);
     const plan = await loadPlan(packFile);
     expect(plan.branding.logo).toBe(path.join(outside, 'logo.svg'));

@@ -62,7 +62,10 @@ defaults:
   forecast: {method: seasonal-naive, horizon: 6, backtestOrigins: 2}
 `;
 
-const months = Array.from({length: 36}, (_, i) => `${2023 + Math.floor(i / 12)}-${String((i % 12) + 1).padStart(2, '0')}`);
+const months = Array.from(
+  {length: 36},
+  (_, i) => `${2023 + Math.floor(i / 12)}-${String((i % 12) + 1).padStart(2, '0')}`,
+);
 const level = (i: number, base: number) => (base * (1 + 0.15 * Math.sin((2 * Math.PI * i) / 12)) + i).toFixed(1);
 const csvField = (s: string) => `"${s.replace(/"/g, '""')}"`;
 const LONG_KEYS = [FORMULA, IMG, `${MUSTACHE}${SCRIPT}`];
@@ -143,13 +146,10 @@ describe('spreadsheet exports', () => {
       const fields = [...text.matchAll(/"((?:[^"]|"")*)"|([^,\r\n]+)/g)].map((m) => (m[1] ?? m[2]).replace(/""/g, '"'));
       for (const f of fields) {
         expect(formulaLike(f), `${path.basename(file)}: ${f}`).toBe(false);
-        if (f.includes('HYPERLINK')) {
-          seen++;
-          if (f.startsWith('=') || f.startsWith("'=")) expect(f.startsWith("'="), `${path.basename(file)}: ${f}`).toBe(true);
-        }
+        if (f.startsWith("'=HYPERLINK")) seen++;
       }
     }
-    expect(seen, 'the formula text appears somewhere in the CSV exports').toBeGreaterThan(0);
+    expect(seen, 'a cell holding the formula text, neutralised with a leading quote mark').toBeGreaterThan(0);
   });
 
   test('XLSX: no formula cells, and hostile text cells start with a quote mark', async () => {
@@ -163,14 +163,11 @@ describe('spreadsheet exports', () => {
           expect(cell.formula, `${sheet.name}!${cell.address}`).toBeFalsy();
           if (typeof cell.value === 'string') {
             expect(formulaLike(cell.value), `${sheet.name}!${cell.address}: ${cell.value}`).toBe(false);
-            if (cell.value.includes('HYPERLINK')) {
-              seen++;
-              if (cell.value.startsWith("'") || cell.value.startsWith('=')) expect(cell.value.startsWith("'=")).toBe(true);
-            }
+            if (cell.value.startsWith("'=HYPERLINK")) seen++;
           }
         });
       });
     });
-    expect(seen, 'the formula text appears somewhere in the workbook').toBeGreaterThan(0);
+    expect(seen, 'a cell holding the formula text, neutralised with a leading quote mark').toBeGreaterThan(0);
   });
 });

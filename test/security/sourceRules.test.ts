@@ -61,7 +61,8 @@ describe('templates/', () => {
   });
 
   test('the allow-listed fields are the ones printed where raw markup is expected', async () => {
-    const text = (await Promise.all((await filesUnder('templates', /\.hbs$/)).map((f) => readFile(f, 'utf8')))).join('\n');
+    const files = await filesUnder('templates', /\.hbs$/);
+    const text = (await Promise.all(files.map((f) => readFile(f, 'utf8')))).join('\n');
     for (const field of SAFE_STRING_ALLOW_LIST.keys()) expect(text).toMatch(new RegExp(`\\{\\{[^}]*\\b${field}\\b`));
   });
 

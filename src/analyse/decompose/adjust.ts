@@ -7,6 +7,7 @@ import {chooseModel} from './chooseModel.js';
 import {classicalDecomposition} from './classical.js';
 import {residualSeasonality, seasonalStability, varianceShares} from './diagnostics.js';
 import {detectOutliers} from './outliers.js';
+import {median} from '../numeric/median.js';
 import {stl} from './stl.js';
 import type {Adjustment, CalendarRegressor} from './types.js';
 import {weeklyFourier} from './weeklyFourier.js';
@@ -136,7 +137,10 @@ export function adjust(values: Float64Array, ctx: AdjustContext): AdjustOutcome 
   const irregularModel = irregular.map(toModel);
   const adjustedModel = adjusted.map(toModel);
   const outliers = ctx.outliers
-    ? detectOutliers(irregularModel, adjustedModel, ctx.residualSigma).map((o) => ({...o, index: o.index + first}))
+    ? detectOutliers(irregularModel, adjustedModel, ctx.residualSigma, outlierFloor(adjustedModel, mult)).map((o) => ({
+        ...o,
+        index: o.index + first,
+      }))
     : [];
   const seasonGroup = Int32Array.from({length: m}, (_, i) =>
     frequency === 'weekly'
@@ -349,4 +353,9 @@ function constantAdjustment(
     },
     options: {method: 'none', reason: 'constant series', period, model},
   };
+}
+
+/** Smallest sigma for outlier scores: 0.1% of the level (0.001 in logs for multiplicative models; common practice). */
+function outlierFloor(adjustedModel: Float64Array, mult: boolean): number {
+  return mult ? 1e-3 : 1e-3 * median(adjustedModel.map(Math.abs));
 }

@@ -35,7 +35,11 @@ export function forecastSeries(
   const n = y.length;
   if (n === 0) throw new RangeError('forecast needs at least one value');
   if (prepared.filled > 0) {
-    notes.push(`Filled ${prepared.filled} missing value(s) by linear interpolation before forecasting.`);
+    notes.push(
+      prepared.filled === 1
+        ? 'Filled 1 missing value by linear interpolation before forecasting.'
+        : `Filled ${prepared.filled} missing values by linear interpolation before forecasting.`,
+    );
   }
   if (prepared.first + n < values.length) {
     notes.push('Forecast starts after the last period, beyond the last observed value.');
