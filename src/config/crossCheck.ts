@@ -1,6 +1,14 @@
 import {stat} from 'node:fs/promises';
 import path from 'node:path';
 import {parsePeriod, type Frequency} from '../time/period.js';
+import {
+  allowedRoots,
+  browserProblem,
+  logoContentProblem,
+  outsideMessage,
+  resolveInside,
+  templateProblems,
+} from './fileAccess.js';
 import type {PathProblem} from './issues.js';
 import {hint} from './suggest.js';
 
@@ -36,11 +44,24 @@ async function kindOf(file: string): Promise<'file' | 'folder' | 'missing'> {
  *
  * Targets and group members that name no series are not reported when the pack has `fromSource`
  * entries: those ids are known only once ingest has read the source's keys.
+ *
+ * Files the pack names follow the file-access rule of ./fileAccess.ts: `sources[].file`, `branding.logo` and
+ * `branding.templates` (and every file in it) must, with symbolic links resolved, lie inside the pack file's
+ * folder or one of `allowDirs` (absolute folders the operator allows, `--allow-dir`); a path outside is a
+ * problem at the key's line and is never opened. `pack.browser` must name an executable Chromium-family
+ * browser. The logo's first bytes must match its extension, and template files must parse and print escaped.
  */
-export async function crossCheck(raw: unknown, packDir: string): Promise<PathProblem[]> {
+export async function crossCheck(raw: unknown, packDir: string, allowDirs: readonly string[] = []): Promise<PathProblem[]> {
   const out: PathProblem[] = [];
   const add = (at: PropertyKey[], message: string) => out.push({path: at, message});
   const root = record(raw);
+  const roots = await allowedRoots(packDir, allowDirs);
+  /** Whether a pack path lies inside the allowed folders (symlinks resolved); reports it when not. */
+  const contained = async (at: PropertyKey[], key: string, written: string): Promise<boolean> => {
+    const r = await resolveInside(path.resolve(packDir, written), roots);
+    if (!r.inside) add(at, outsideMessage(key, r.real));
+    return r.inside;
+  };
 
   const sourceIndex = new Map<string, number>();
   const layouts = new Map<string, unknown>();
@@ -65,7 +86,7 @@ export async function crossCheck(raw: unknown, packDir: string): Promise<PathPro
       }
     }
     const file = text(s.file);
-    if (file !== undefined) {
+    if (file !== undefined && (await contained(['sources', i, 'file'], `sources[${i}].file`, file))) {
       const abs = path.resolve(packDir, file);
       const k = await kindOf(abs);
       if (k === 'missing') add(['sources', i, 'file'], `sources[${i}].file not found: ${file} (looked for ${abs})`);
@@ -139,20 +160,31 @@ export async function crossCheck(raw: unknown, packDir: string): Promise<PathPro
       );
   }
 
+  const browser = text(pack.browser);
+  if (browser !== undefined) {
+    const problem = await browserProblem(browser, packDir);
+    if (problem !== null) add(['pack', 'browser'], problem);
+  }
+
   const branding = record(root.branding);
   const logo = text(branding.logo);
-  if (logo !== undefined) {
+  if (logo !== undefined && (await contained(['branding', 'logo'], 'branding.logo', logo))) {
     const abs = path.resolve(packDir, logo);
     if ((await kindOf(abs)) !== 'file')
       add(['branding', 'logo'], `branding.logo not found: ${logo} (looked for ${abs})`);
-    else if (!/\.(png|jpe?g|svg)$/i.test(logo))
-      add(['branding', 'logo'], 'branding.logo must be a .png, .jpg or .svg file');
+    else {
+      const problem = await logoContentProblem(abs, logo);
+      if (problem !== null) add(['branding', 'logo'], problem);
+    }
   }
   const templates = text(branding.templates);
-  if (templates !== undefined) {
+  if (templates !== undefined && (await contained(['branding', 'templates'], 'branding.templates', templates))) {
     const abs = path.resolve(packDir, templates);
     if ((await kindOf(abs)) !== 'folder')
       add(['branding', 'templates'], `branding.templates folder not found: ${templates} (looked for ${abs})`);
+    else
+      for (const t of await templateProblems(abs, roots))
+        out.push({path: ['branding', 'templates'], message: t.message, at: {file: t.file, line: t.line}});
   }
   return out;
 }

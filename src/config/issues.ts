@@ -5,6 +5,8 @@ import {hint} from './suggest.js';
 export interface PathProblem {
   path: PropertyKey[];
   message: string;
+  /** Set when the problem is in another file than the pack (e.g. a template); `path` then says what named it. */
+  at?: {file: string; line: number | null};
 }
 
 /** `series[1].kind` for `['series', 1, 'kind']`. */

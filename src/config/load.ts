@@ -9,6 +9,7 @@ import {schemaProblems} from './issues.js';
 import {issueMessage} from './issues.js';
 import {locate} from './locate.js';
 import {normalize} from './normalize.js';
+import {yamlValue} from './yamlValue.js';
 import type {OutputFormat, Plan} from './plan.js';
 import {packSchema} from './schema.js';
 
@@ -19,6 +20,11 @@ export interface PlanOverrides {
   /** Output folder, relative to the current directory. */
   outDir?: string;
   formats?: OutputFormat[];
+  /**
+   * Absolute folders, besides the pack file's own, from which the pack may name files (`--allow-dir DIR`,
+   * repeatable). See the file-access rule in ./fileAccess.ts.
+   */
+  allowDirs?: string[];
 }
 
 /** Where command-line problems are reported, in place of a file name. */
@@ -27,8 +33,8 @@ const COMMAND_LINE = 'command line';
 /**
  * Read, validate and normalise a pack file into a fully-defaulted `Plan`.
  *
- * Pipeline: YAML (with positions) → schema (zod) → cross-checks (references, files) → defaults and
- * paths. Every problem found is collected and thrown together as one `InputError`, each with the
+ * Pipeline: YAML (with positions) → schema (zod) → cross-checks (references, files under the file-access
+ * rule of ./fileAccess.ts, widened only by `overrides.allowDirs`) → defaults and paths. Every problem found is collected and thrown together as one `InputError`, each with the
  * pack file, line and column; nothing is returned unless the pack is entirely valid.
  *
  * @throws InputError for a missing or unreadable pack file, YAML syntax, schema or reference problems.
@@ -53,7 +59,12 @@ export async function loadPlan(packFile: string, overrides: PlanOverrides = {}):
       }),
     );
   }
-  const raw: unknown = doc.toJS();
+  const converted = yamlValue(doc, lineCounter);
+  if (!converted.ok) {
+    const {line, column, message} = converted;
+    throw new InputError([{file: packFile, line, column, message}]);
+  }
+  const raw = converted.value;
   if (raw === null || raw === undefined) {
     throw new InputError([{file: packFile, line: 1, column: 1, message: 'the pack file is empty'}]);
   }
@@ -65,9 +76,11 @@ export async function loadPlan(packFile: string, overrides: PlanOverrides = {}):
   const parsed = packSchema.safeParse(raw, {reportInput: true, error: issueMessage});
   const pathProblems = [
     ...(parsed.success ? [] : schemaProblems(parsed.error.issues, packSchema)),
-    ...(await crossCheck(raw, path.dirname(absFile))),
+    ...(await crossCheck(raw, path.dirname(absFile), overrides.allowDirs)),
   ];
-  const problems = pathProblems.map((p) => at(p.path, p.message));
+  const problems = pathProblems.map((p) =>
+    p.at === undefined ? at(p.path, p.message) : {file: p.at.file, line: p.at.line, column: null, message: p.message},
+  );
 
   let period: number | null = null;
   const label = overrides.period;

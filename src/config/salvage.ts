@@ -5,9 +5,11 @@ import {crossCheck} from './crossCheck.js';
 import {defaultConfig} from './defaults.js';
 import {schemaProblems} from './issues.js';
 import {locate} from './locate.js';
+import type {PlanOverrides} from './load.js';
 import {normalize} from './normalize.js';
 import type {Plan} from './plan.js';
 import {packSchema} from './schema.js';
+import {yamlValue} from './yamlValue.js';
 
 /** Lists whose broken entries are dropped whole rather than key by key. */
 const LISTS = new Set(['sources', 'series', 'groups']);
@@ -18,9 +20,10 @@ const ROUNDS = 8;
  * every problem in one run. Each round drops what the schema and cross-checks reject (an unknown or invalid key;
  * a whole source, series or group entry with any problem, which in turn drops the series that named it) until
  * the rest validates. Returns null when nothing usable is left (e.g. a YAML syntax error or no valid frequency).
- * Never used to build: `loadPlan` is the only way to a plan that writes output.
+ * Never used to build: `loadPlan` is the only way to a plan that writes output. `allowDirs` widens the
+ * file-access rule as for `loadPlan`; files outside are dropped like any other rejected entry.
  */
-export async function salvagePlan(packFile: string): Promise<Plan | null> {
+export async function salvagePlan(packFile: string, overrides: Pick<PlanOverrides, 'allowDirs'> = {}): Promise<Plan | null> {
   const absFile = path.resolve(packFile);
   let text: string;
   try {
@@ -31,12 +34,14 @@ export async function salvagePlan(packFile: string): Promise<Plan | null> {
   const lineCounter = new LineCounter();
   const doc = parseDocument(text, {lineCounter, uniqueKeys: true});
   if (doc.errors.length > 0) return null;
-  const raw: unknown = doc.toJS();
+  const converted = yamlValue(doc, lineCounter);
+  if (!converted.ok) return null;
+  const raw = converted.value;
   if (!isRecord(raw)) return null;
   const packDir = path.dirname(absFile);
   for (let round = 0; round < ROUNDS; round++) {
     const parsed = packSchema.safeParse(raw);
-    const problems = [...(parsed.success ? [] : schemaProblems(parsed.error.issues, packSchema)), ...(await crossCheck(raw, packDir))];
+    const problems = [...(parsed.success ? [] : schemaProblems(parsed.error.issues, packSchema)), ...(await crossCheck(raw, packDir, overrides.allowDirs))];
     if (parsed.success && problems.length === 0) {
       return normalize(parsed.data, {
         packFile: absFile,

@@ -1,6 +1,7 @@
 import {existsSync, readdirSync, readFileSync, statSync} from 'node:fs';
-import {extname, join} from 'node:path';
+import {join} from 'node:path';
 import Handlebars from 'handlebars';
+import {imageMatches, imageTypeOf} from '../config/image.js';
 import {packageRoot} from '../version.js';
 import type {Report} from './types.js';
 import {buildView, pageGeometry, type FigureSlot} from './view.js';
@@ -81,21 +82,16 @@ function pageCss(report: Report, theme: Theme): string {
   );
 }
 
-const IMAGE_TYPES: Record<string, string> = {'.png': 'image/png', '.jpg': 'image/jpeg', '.jpeg': 'image/jpeg', '.svg': 'image/svg+xml'};
-
 /**
  * The logo as a base64 data: URI for an `<img>` element. An SVG logo is only ever shown through `<img>`,
- * where browsers run no script and load nothing external; PNG and JPEG are checked by their magic bytes.
+ * where browsers run no script and load nothing external; the content check (shared with the config
+ * cross-check, which reports it as a pack problem) is repeated here in case the file changed since.
  */
 export function inlineLogo(path: string | null): string | null {
   if (!path) return null;
-  const type = IMAGE_TYPES[extname(path).toLowerCase()];
+  const type = imageTypeOf(path);
   if (!type) throw new Error(`unsupported logo type: ${path}`);
   const bytes = readFileSync(path);
-  const png = bytes.subarray(0, 8).equals(Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]));
-  const jpeg = bytes[0] === 0xff && bytes[1] === 0xd8;
-  const svg = /<svg[\s>]/i.test(bytes.subarray(0, 4096).toString('utf8'));
-  const ok = type === 'image/png' ? png : type === 'image/jpeg' ? jpeg : svg;
-  if (!ok) throw new Error(`logo content does not match its extension: ${path}`);
+  if (!imageMatches(type, bytes)) throw new Error(`logo content does not match its extension: ${path}`);
   return `data:${type};base64,${bytes.toString('base64')}`;
 }

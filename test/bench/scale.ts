@@ -1,6 +1,6 @@
 import {execFileSync} from 'node:child_process';
 import {createHash} from 'node:crypto';
-import {createReadStream, createWriteStream, mkdtempSync, rmSync, statSync, writeFileSync} from 'node:fs';
+import {createReadStream, createWriteStream, mkdtempSync, readdirSync, rmSync, statSync, writeFileSync} from 'node:fs';
 import {tmpdir} from 'node:os';
 import {join} from 'node:path';
 import {fileURLToPath} from 'node:url';
@@ -26,6 +26,7 @@ export async function run(): Promise<void> {
     await writeData(dir);
     const cli = fileURLToPath(new URL('../../src/cli/main.js', import.meta.url));
     const digests: string[] = [];
+    const builtAt = newestBuild();
     for (const jobs of JOBS) {
       const t0 = performance.now();
       const out = execFileSync(
@@ -43,7 +44,9 @@ export async function run(): Promise<void> {
           `peak RSS ${maxRssMiB.toFixed(0)} MiB, results.json ${(statSync(results).size / 2 ** 20).toFixed(0)} MiB`,
       );
     }
-    if (digests.length > 1) {
+    if (newestBuild() !== builtAt) {
+      console.log('dist/ was rebuilt while the benchmark ran: the runs used different code, so they are not compared');
+    } else if (digests.length > 1) {
       const same = digests.every((d) => d === digests[0]);
       console.log(`results.json identical across --jobs ${JOBS.join(', ')}: ${same ? 'yes' : 'NO'}`);
       if (!same) process.exitCode = 1;
@@ -91,6 +94,13 @@ async function writeData(dir: string): Promise<void> {
       '',
     ].join('\n'),
   );
+}
+
+/** Newest modification time among the compiled sources: a rebuild between the runs voids their comparison. */
+function newestBuild(): number {
+  const dist = fileURLToPath(new URL('../../src/', import.meta.url));
+  const files = readdirSync(dist, {recursive: true, encoding: 'utf8'}).filter((f) => f.endsWith('.js'));
+  return Math.max(...files.map((f) => statSync(join(dist, f)).mtimeMs));
 }
 
 async function sha256File(file: string): Promise<string> {

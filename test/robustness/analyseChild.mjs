@@ -28,7 +28,9 @@ try {
     history: null,
   });
   const texts = [...told.pack, ...(told.bySeries.get(series.id) ?? [])].map((c) => c.text);
-  const {original, notes, notAdjustedReason} = analysis;
+  const {original, notAdjustedReason} = analysis;
+  // The analysis' own notes and its forecast's (gaps filled, fallbacks) both explain poor data.
+  const notes = [...analysis.notes, ...(analysis.forecast?.notes ?? [])];
   process.stdout.write(JSON.stringify({length: original.length, notes, notAdjustedReason, texts}));
 } catch (e) {
   const at = String(e?.stack).split('\n')[1]?.trim();

@@ -70,6 +70,15 @@ export function baseConfig(theme: Theme): Config {
 }
 
 /**
+ * The time field `t` on a UTC scale. Every layer that encodes `t` uses it (not only the one carrying the
+ * axis): vega-lite formats a layer's tooltips and aria labels in local time unless that layer's own scale
+ * is UTC, which would shift dates by the reader's time zone.
+ */
+export function utcTime() {
+  return {field: 't', type: 'temporal' as const, scale: {type: 'utc' as const}};
+}
+
+/**
  * A UTC time x-axis whose ticks suit the span: yearly ticks for long spans, quarters or months for short
  * ones, labelled with locale month names (`%b %Y`) or years.
  */
@@ -81,7 +90,7 @@ export function timeX(frequency: Frequency, periods: number, title: string | nul
       : years > 1.5
         ? {format: '%b %Y', tickCount: {interval: 'month' as const, step: 6}}
         : {format: '%b %Y', tickCount: {interval: 'month' as const, step: frequency === 'quarterly' ? 3 : 2}};
-  return {field: 't', type: 'temporal' as const, scale: {type: 'utc' as const}, title, axis: {...axis, grid: false}};
+  return {...utcTime(), title, axis: {...axis, grid: false}};
 }
 
 export const VALUE_FORMAT = ',~r';

@@ -1,6 +1,6 @@
 import type {TopLevelSpec} from 'vega-lite';
 import type {TurningPoint} from '../../analyse/cycle/types.js';
-import {SCHEMA, when, baseConfig, epoch, finite, round, timeX, type ChartContext} from './common.js';
+import {SCHEMA, when, baseConfig, epoch, finite, round, timeX, utcTime, type ChartContext} from './common.js';
 
 /** Deviation from long-run trend (percent) with dated turning points and the current phase. */
 export interface CycleInput {
@@ -54,13 +54,13 @@ export function cycleChart(input: CycleInput, ctx: ChartContext): TopLevelSpec {
           y2: {datum: 0},
         },
       },
-      {data: {values}, mark: {type: 'line', color: theme.deep, strokeWidth: 1.6}, encoding: {x: {field: 't', type: 'temporal'}, y: {field: 'v', type: 'quantitative'}}},
+      {data: {values}, mark: {type: 'line', color: theme.deep, strokeWidth: 1.6}, encoding: {x: utcTime(), y: {field: 'v', type: 'quantitative'}}},
       {data: {values: [{}]}, mark: {type: 'rule', color: theme.ink, strokeWidth: 0.8}, encoding: {y: {datum: 0}}},
       ...when(turns.length > 0, {
         data: {values: turns},
         mark: {type: 'point', size: 60, strokeWidth: 1.3, opacity: 1, color: theme.contrast},
         encoding: {
-          x: {field: 't', type: 'temporal'},
+          x: utcTime(),
           y: {field: 'v', type: 'quantitative'},
           shape: {
             field: 'k',
@@ -79,7 +79,7 @@ export function cycleChart(input: CycleInput, ctx: ChartContext): TopLevelSpec {
       ...when(last.length > 0, {
         data: {values: last},
         mark: {type: 'point', filled: true, size: 45, color: theme.deep},
-        encoding: {x: {field: 't', type: 'temporal'}, y: {field: 'v', type: 'quantitative'}},
+        encoding: {x: utcTime(), y: {field: 'v', type: 'quantitative'}},
       }),
     ],
   };

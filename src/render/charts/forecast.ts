@@ -1,7 +1,7 @@
 import type {TopLevelSpec} from 'vega-lite';
 import type {ForecastResult} from '../../analyse/forecast/types.js';
 import {periodsPerYear} from '../../time/period.js';
-import {SCHEMA, when, VALUE_FORMAT, baseConfig, epoch, finite, round, timeX, type ChartContext} from './common.js';
+import {SCHEMA, when, VALUE_FORMAT, baseConfig, epoch, finite, round, timeX, utcTime, type ChartContext} from './common.js';
 
 /** Recent actuals, the forecast with its bands, and the back-test's one-step-ahead forecasts. */
 export interface ForecastInput {
@@ -80,7 +80,7 @@ export function forecastChart(input: ForecastInput, ctx: ChartContext): TopLevel
         data: {values: actual},
         mark: {type: 'line', strokeWidth: 1.4},
         encoding: {
-          x: {field: 't', type: 'temporal'},
+          x: utcTime(),
           y: {field: 'v', type: 'quantitative'},
           color: {field: 's', type: 'nominal', scale: {domain: keys, range: [theme.ink, theme.accent, theme.contrast].slice(0, keys.length)}},
         },
@@ -88,12 +88,12 @@ export function forecastChart(input: ForecastInput, ctx: ChartContext): TopLevel
       {
         data: {values: mean},
         mark: {type: 'line', strokeWidth: 2, strokeDash: [5, 3]},
-        encoding: {x: {field: 't', type: 'temporal'}, y: {field: 'v', type: 'quantitative'}, color: {field: 's', type: 'nominal'}},
+        encoding: {x: utcTime(), y: {field: 'v', type: 'quantitative'}, color: {field: 's', type: 'nominal'}},
       },
       ...when(backtest.length > 0, {
         data: {values: backtest},
         mark: {type: 'point', shape: 'circle', filled: false, size: 26, strokeWidth: 1.2, opacity: 1},
-        encoding: {x: {field: 't', type: 'temporal'}, y: {field: 'v', type: 'quantitative'}, color: {field: 's', type: 'nominal'}},
+        encoding: {x: utcTime(), y: {field: 'v', type: 'quantitative'}, color: {field: 's', type: 'nominal'}},
       }),
     ],
   };

@@ -1,6 +1,6 @@
 import type {TopLevelSpec} from 'vega-lite';
 import type {Outlier} from '../../analyse/decompose/types.js';
-import {SCHEMA, when, baseConfig, epoch, finite, round, timeX, type ChartContext} from './common.js';
+import {SCHEMA, when, baseConfig, epoch, finite, round, timeX, utcTime, type ChartContext} from './common.js';
 
 /** Irregular component with the flagged points. */
 export interface IrregularInput {
@@ -69,7 +69,7 @@ export function irregularChart(input: IrregularInput, ctx: ChartContext): TopLev
           {
             mark: {type: 'point', filled: true, size: 70, opacity: 1, color: theme.contrast, stroke: 'white', strokeWidth: 0.8},
             encoding: {
-              x: {field: 't', type: 'temporal'},
+              x: utcTime(),
               y: {field: 'v', type: 'quantitative'},
               shape: {
                 field: 'k',
@@ -83,7 +83,7 @@ export function irregularChart(input: IrregularInput, ctx: ChartContext): TopLev
             when(flagged.some((r) => r.above === above), {
               transform: [{filter: {field: 'above', equal: above}}],
               mark: {type: 'text', fontSize: 9, color: theme.ink, dy: above ? -10 : 12},
-              encoding: {x: {field: 't', type: 'temporal'}, y: {field: 'v', type: 'quantitative'}, text: {field: 'label'}},
+              encoding: {x: utcTime(), y: {field: 'v', type: 'quantitative'}, text: {field: 'label'}},
             }),
           ),
         ],
