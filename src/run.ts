@@ -1,4 +1,4 @@
-import {loadPlan, salvagePlan} from './config/index.js';
+import {loadPlan, portablePlan, salvagePlan} from './config/index.js';
 import type {OutputFormat, Plan} from './config/plan.js';
 import {ingest} from './ingest/index.js';
 import type {Dataset} from './ingest/types.js';
@@ -7,7 +7,7 @@ import {narrate} from './narrate/index.js';
 import {renderHtml, openBrowser, type PdfBrowser} from './render/index.js';
 import {exportTables} from './render/exports.js';
 import {toResults} from './render/results.js';
-import {archive, loadHistory} from './archive/index.js';
+import {archive, loadHistory, refuseExisting} from './archive/index.js';
 import type {Report} from './render/types.js';
 import type {SeriesAnalysis} from './analyse/types.js';
 import type {History} from './archive/types.js';
@@ -49,6 +49,7 @@ export async function build(request: BuildRequest, log: Logger): Promise<BuildSu
   // The plan as used: `fromSource` entries expanded into the series ingest found.
   const plan: Plan = {...loaded, series: data.plans};
   const periodLabel = formatPeriod(plan.frequency, data.period);
+  await refuseExisting(plan.outDir, plan.id, periodLabel, request.force);
   log.info(`${plan.id} ${periodLabel}: ${data.series.length} series read`);
   const analyses = await analyseAll(plan, data, {jobs: request.jobs, log});
   const draft = assemble(plan, data, analyses, null);
@@ -69,10 +70,12 @@ export async function build(request: BuildRequest, log: Logger): Promise<BuildSu
     }
     if (pdfSkipped) log.warn(pdfSkipped);
   }
-  const tables = exportTables(report);
   const exports: {name: string; content: string | Uint8Array}[] = [];
-  if (plan.formats.includes('csv')) exports.push(...tables.csv);
-  if (plan.formats.includes('xlsx')) exports.push({name: 'tables.xlsx', content: await tables.xlsx()});
+  if (plan.formats.includes('csv') || plan.formats.includes('xlsx')) {
+    const tables = exportTables(report);
+    if (plan.formats.includes('csv')) exports.push(...tables.csv);
+    if (plan.formats.includes('xlsx')) exports.push({name: 'tables.xlsx', content: await tables.xlsx()});
+  }
 
   const written = await archive({
     report,
@@ -81,7 +84,7 @@ export async function build(request: BuildRequest, log: Logger): Promise<BuildSu
     exports,
     outDir: plan.outDir,
     force: request.force,
-    packYaml: JSON.stringify(plan, null, 2),
+    packYaml: JSON.stringify(portablePlan(plan), null, 2),
     warnings: analyses.flatMap((a) =>
       [a.notAdjustedReason ?? [], a.notes, a.forecast?.notes ?? []].flat().map((note) => `${a.id}: ${note}`),
     ),

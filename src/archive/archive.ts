@@ -62,9 +62,7 @@ export async function archive(args: ArchiveArgs): Promise<{folder: string; outpu
 
   await mkdir(packDir, {recursive: true});
   await recoverPackDir(packDir);
-  if (!force && (await exists(folder))) {
-    throw new InputError([{file: folder, line: null, column: null, message: folderExists()}]);
-  }
+  await refuseExisting(args.outDir, report.plan.id, label, force);
 
   const files: {path: string; content: string | Uint8Array}[] = [];
   if (args.html !== null) files.push({path: 'report.html', content: args.html});
@@ -150,4 +148,15 @@ async function writeChunksDurable(path: string, chunks: Iterable<string>): Promi
     await handle.close();
   }
   return {bytes, sha256: hash.digest('hex')};
+}
+
+/**
+ * Refuse early when the period is already archived and `force` is off, so a refusal costs no analysis or PDF.
+ * `archive` checks again at the last moment.
+ */
+export async function refuseExisting(outDir: string, packId: string, period: string, force: boolean): Promise<void> {
+  const folder = join(outDir, packId, period);
+  if (!force && (await exists(folder))) {
+    throw new InputError([{file: folder, line: null, column: null, message: folderExists()}]);
+  }
 }

@@ -1,4 +1,4 @@
-export {archive, type ArchiveArgs} from './archive.js';
+export {archive, refuseExisting, type ArchiveArgs} from './archive.js';
 export {loadHistory, buildHistory} from './history.js';
 export {writeIndex} from './writeIndex.js';
 export {recoverPackDir} from './recover.js';

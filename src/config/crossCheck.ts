@@ -51,7 +51,11 @@ async function kindOf(file: string): Promise<'file' | 'folder' | 'missing'> {
  * problem at the key's line and is never opened. `pack.browser` must name an executable Chromium-family
  * browser. The logo's first bytes must match its extension, and template files must parse and print escaped.
  */
-export async function crossCheck(raw: unknown, packDir: string, allowDirs: readonly string[] = []): Promise<PathProblem[]> {
+export async function crossCheck(
+  raw: unknown,
+  packDir: string,
+  allowDirs: readonly string[] = [],
+): Promise<PathProblem[]> {
   const out: PathProblem[] = [];
   const add = (at: PropertyKey[], message: string) => out.push({path: at, message});
   const root = record(raw);

@@ -53,7 +53,10 @@ export async function resolveInside(abs: string, roots: readonly string[]): Prom
 
 /** The problem text for a path outside the allowed folders. */
 export function outsideMessage(key: string, real: string): string {
-  return `${key} is outside the pack's folder (${real}); move the file next to the pack or allow its folder with --allow-dir`;
+  return (
+    `${key} is outside the pack's folder (${real}); ` +
+    'move the file next to the pack or allow its folder with --allow-dir'
+  );
 }
 
 /** The first 4096 bytes of a file: enough to recognise a PNG, JPEG or SVG. */
@@ -95,12 +98,21 @@ async function executable(file: string): Promise<boolean> {
 export async function browserProblem(browser: string, packDir: string): Promise<string | null> {
   const base = path.basename(browser).replace(/\.exe$/i, '');
   if (!BROWSER_NAME.test(base))
-    return `pack.browser ${browser} does not look like a Chromium browser; set the EBBFLOW_CHROMIUM environment variable instead`;
+    return (
+      `pack.browser ${browser} does not look like a Chromium browser; ` +
+      'set the EBBFLOW_CHROMIUM environment variable instead'
+    );
   const candidates = /[\\/]/.test(browser)
     ? [path.resolve(packDir, browser)]
-    : (process.env.PATH ?? '').split(path.delimiter).filter((d) => d !== '').map((d) => path.join(d, browser));
+    : (process.env.PATH ?? '')
+        .split(path.delimiter)
+        .filter((d) => d !== '')
+        .map((d) => path.join(d, browser));
   for (const c of candidates) if (await executable(c)) return null;
-  return `pack.browser ${browser} is not an executable file; install it or set the EBBFLOW_CHROMIUM environment variable`;
+  return (
+    `pack.browser ${browser} is not an executable file; ` +
+    'install it or set the EBBFLOW_CHROMIUM environment variable'
+  );
 }
 
 /** A problem in one file of a pack's template folder. */

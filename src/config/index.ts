@@ -3,3 +3,4 @@ export {defaultConfig} from './defaults.js';
 export {slugify} from './slug.js';
 export type * from './plan.js';
 export {salvagePlan} from './salvage.js';
+export {portablePlan} from './portable.js';

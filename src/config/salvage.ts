@@ -23,7 +23,10 @@ const ROUNDS = 8;
  * Never used to build: `loadPlan` is the only way to a plan that writes output. `allowDirs` widens the
  * file-access rule as for `loadPlan`; files outside are dropped like any other rejected entry.
  */
-export async function salvagePlan(packFile: string, overrides: Pick<PlanOverrides, 'allowDirs'> = {}): Promise<Plan | null> {
+export async function salvagePlan(
+  packFile: string,
+  overrides: Pick<PlanOverrides, 'allowDirs'> = {},
+): Promise<Plan | null> {
   const absFile = path.resolve(packFile);
   let text: string;
   try {

@@ -14,6 +14,7 @@ import {irregularChart} from './charts/irregular.js';
 import {forecastChart} from './charts/forecast.js';
 import {cycleChart} from './charts/cycle.js';
 import {trackingChart} from './charts/tracking.js';
+import {phaseLabels} from '../analyse/cycle/index.js';
 import {sparkline} from './charts/sparkline.js';
 import {
   CAUTIONS,
@@ -139,6 +140,10 @@ export interface ViewModel {
     previous: string;
     revisions: {series: string; period: string; measure: string; kind: string; previous: string; current: string; change: string; large: boolean}[];
     tracking: {series: string; publishedIn: string; period: string; horizon: string; forecast: string; actual: string; error: string; inside: string}[];
+    /** Sentence on the smaller revisions left out of the table, or null when none were left out. */
+    revisionsNote: string | null;
+    /** Sentence pointing to the full tracking export, or null when there is nothing to check. */
+    trackingNote: string | null;
     summary: {series: string; count: string; mase: string; coverage: string}[];
     chart: FigureSlot | null;
   } | null;
@@ -519,6 +524,15 @@ function outturnWords(a: SeriesAnalysis, f: Formatter): string {
   return o.target !== null ? `${base}, against a target of ${f.number(o.target)} (${f.percent(o.gapPct)}).` : `${base}.`;
 }
 
+/** Forecast horizons listed in the tracking table; longer ones stay in the export and the summary. */
+const TRACKING_TABLE_HORIZON = 3;
+
+/**
+ * History section. Hidden series are left out everywhere. The revisions table lists the large revisions
+ * and every change of trend direction or cycle phase, with one sentence counting the smaller ones; the
+ * tracking table lists the forecasts made for the review period itself (up to three steps ahead). The
+ * summary table and the chart use every tracked forecast of the visible series; the exports hold all rows.
+ */
 function historyView(
   report: Report,
   f: Formatter,
@@ -529,15 +543,20 @@ function historyView(
   const h = report.history;
   if (!h) return null;
   const frequency = report.plan.frequency;
+  const hidden = new Set(report.series.filter((s) => s.plan.hidden).map((s) => s.plan.id));
+  const shown = <T extends {seriesId: string}>(rows: T[]) => rows.filter((r) => !hidden.has(r.seriesId));
+  const revisions = shown(h.revisions);
+  const tracking = shown(h.tracking);
   const label = (id: string) => labels.get(id) ?? id;
   const period = (p: string) => {
     const index = parsePeriod(frequency, p);
     return index === undefined ? p : f.period(frequency, index);
   };
-  const value = (v: number | string) => (typeof v === 'number' ? f.number(v) : v);
-  const levels = [...new Set(h.tracking.flatMap((t) => Object.keys(t.inside)))].sort((x, y) => Number(x) - Number(y));
+  const value = (measure: string, v: number | string) =>
+    typeof v === 'number' ? f.number(v) : measure === 'cycle-phase' ? (phaseLabels[v as keyof typeof phaseLabels] ?? v) : v;
+  const levels = [...new Set(tracking.flatMap((t) => Object.keys(t.inside)))].sort((x, y) => Number(x) - Number(y));
   const inner = levels[0] ?? '80';
-  const points = h.tracking.flatMap((t) => {
+  const points = tracking.flatMap((t) => {
     const index = parsePeriod(frequency, t.period);
     return index === undefined || t.actual === 0
       ? []
@@ -564,19 +583,28 @@ function historyView(
           svg: null,
         }
       : null;
+  const listed = revisions.filter((r) => r.large || r.measure === 'trend-direction' || r.measure === 'cycle-phase');
+  const smaller = revisions.length - listed.length;
+  const threshold = report.plan.thresholds.revisionPct;
+  const thresholdText = f.share(threshold, Number.isInteger(threshold) ? 0 : Number.isInteger(threshold * 10) ? 1 : 2);
+  const current = tracking.filter((t) => t.period === report.periodLabel && t.horizon <= TRACKING_TABLE_HORIZON);
   return {
     previous: period(h.previousPeriod),
-    revisions: h.revisions.map((r) => ({
+    revisions: listed.map((r) => ({
       series: label(r.seriesId),
       period: period(r.period),
       measure: MEASURE[r.measure] ?? r.measure,
       kind: REVISION_KIND[r.kind] ?? r.kind,
-      previous: value(r.previous),
-      current: value(r.current),
+      previous: value(r.measure, r.previous),
+      current: value(r.measure, r.current),
       change: r.revisionPct === null ? '–' : f.percent(r.revisionPct),
       large: r.large,
     })),
-    tracking: h.tracking.map((t) => ({
+    revisionsNote:
+      smaller > 0
+        ? `${plural(smaller, 'smaller revision', 'smaller revisions')} (${smaller === 1 ? '' : 'each '}under ${thresholdText}) ${smaller === 1 ? 'is' : 'are'} not listed; ${smaller === 1 ? 'it is' : 'all of them are'} in exports/revisions.csv.`
+        : null,
+    tracking: current.map((t) => ({
       series: label(t.seriesId),
       publishedIn: period(t.publishedIn),
       period: period(t.period),
@@ -586,7 +614,13 @@ function historyView(
       error: f.number(t.error),
       inside: levels.map((l) => `${l}%: ${t.inside[l] ? 'inside' : 'outside'}`).join(', '),
     })),
-    summary: h.trackingSummary.map((s) => ({
+    trackingNote:
+      tracking.length > 0
+        ? tracking.length === 1
+          ? 'The one checked forecast is in exports/tracking.csv.'
+          : `All ${f.number(tracking.length, 0)} checked forecasts are in exports/tracking.csv.`
+        : null,
+    summary: shown(h.trackingSummary).map((s) => ({
       series: label(s.seriesId),
       count: f.number(s.count, 0),
       mase: s.mase === null ? '–' : f.number(s.mase, 2),
