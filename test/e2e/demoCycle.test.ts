@@ -1,0 +1,48 @@
+import {describe, expect, it} from 'vitest';
+import {loadPlan} from '../../src/config/index.js';
+import {ingest} from '../../src/ingest/index.js';
+import {analyseSeries} from '../../src/analyse/index.js';
+import {formatPeriod, parsePeriod} from '../../src/time/period.js';
+
+// The demo generator (sample-config/generate.mjs) plants a business cycle with known turning points, listed in
+// sample-config/README.md: peak 2019-04, trough 2020-05, peak 2022-10, trough 2024-07. The monthly rule
+// (Bry-Boschan on the gap from the HP trend of the seasonally adjusted series) should find them within a few months.
+const planted = [
+  {period: '2019-04', type: 'peak'},
+  {period: '2020-05', type: 'trough'},
+  {period: '2022-10', type: 'peak'},
+  {period: '2024-07', type: 'trough'},
+];
+
+describe('demo pack: the planted business cycle is recovered', () => {
+  it('dates the turns of net sales within three months of the planted ones', async () => {
+    const plan = await loadPlan('sample-config/monthly-pack.yaml');
+    const data = await ingest(plan);
+    const i = data.plans.findIndex((s) => s.id === 'net-sales');
+    const series = data.series[i];
+    const a = analyseSeries({
+      id: 'net-sales',
+      frequency: 'monthly',
+      start: series.start,
+      values: series.values,
+      kind: 'flow',
+      fiscalYearStart: plan.fiscalYearStart,
+      target: null,
+      options: data.plans[i].analysis,
+      residualSigma: plan.thresholds.residualSigma,
+    });
+    const found = a.cycle!.turningPoints.map((t) => ({index: series.start + t.index, type: t.type}));
+    const matched = planted.map((p) => {
+      const at = parsePeriod('monthly', p.period)!;
+      const hit = found.find((f) => f.type === p.type && Math.abs(f.index - at) <= 3);
+      return {...p, found: hit ? formatPeriod('monthly', hit.index) : null};
+    });
+    // Measured: trough 2020-03, peak 2022-12, trough 2024-09 (each two months off). The first peak, a +3% swing
+    // only 15 months after the data start, is not dated: the rule censors turns whose phase before them is too
+    // short to judge, and the two-sided trend near the start of the data leans toward the data.
+    expect(matched.filter((m) => m.found !== null).map((m) => m.period)).toEqual(['2020-05', '2022-10', '2024-07']);
+    // No turn the generator did not plant.
+    expect(found.length).toBe(3);
+    expect(a.cycle!.phase).toBe('rising-above');
+  });
+});
