@@ -139,7 +139,7 @@ export interface ViewModel {
   history: {
     previous: string;
     revisions: {series: string; period: string; measure: string; kind: string; previous: string; current: string; change: string; large: boolean}[];
-    tracking: {series: string; publishedIn: string; period: string; horizon: string; forecast: string; actual: string; error: string; inside: string}[];
+    tracking: {series: string; publishedIn: string; horizon: string; forecast: string; actual: string; error: string; inside: string}[];
     /** Sentence on the smaller revisions left out of the table, or null when none were left out. */
     revisionsNote: string | null;
     /** Sentence pointing to the full tracking export, or null when there is nothing to check. */
@@ -552,8 +552,10 @@ function historyView(
     const index = parsePeriod(frequency, p);
     return index === undefined ? p : f.period(frequency, index);
   };
-  const value = (measure: string, v: number | string) =>
-    typeof v === 'number' ? f.number(v) : measure === 'cycle-phase' ? (phaseLabels[v as keyof typeof phaseLabels] ?? v) : v;
+  const value = (measure: string, v: number | string) => {
+    if (typeof v === 'number') return f.number(v);
+    return measure === 'cycle-phase' ? (phaseLabels[v as keyof typeof phaseLabels] ?? v) : v;
+  };
   const levels = [...new Set(tracking.flatMap((t) => Object.keys(t.inside)))].sort((x, y) => Number(x) - Number(y));
   const inner = levels[0] ?? '80';
   const points = tracking.flatMap((t) => {
@@ -598,16 +600,18 @@ function historyView(
       previous: value(r.measure, r.previous),
       current: value(r.measure, r.current),
       change: r.revisionPct === null ? '–' : f.percent(r.revisionPct),
-      large: r.large,
+      // Only numeric revisions are flagged: a changed call is listed anyway and has no size.
+      large: r.large && (r.measure === 'original' || r.measure === 'adjusted'),
     })),
     revisionsNote:
-      smaller > 0
-        ? `${plural(smaller, 'smaller revision', 'smaller revisions')} (${smaller === 1 ? '' : 'each '}under ${thresholdText}) ${smaller === 1 ? 'is' : 'are'} not listed; ${smaller === 1 ? 'it is' : 'all of them are'} in exports/revisions.csv.`
-        : null,
+      smaller === 0
+        ? null
+        : smaller === 1
+          ? `1 smaller revision (under ${thresholdText}) is not listed; it is in exports/revisions.csv.`
+          : `${f.number(smaller, 0)} smaller revisions (each under ${thresholdText}) are not listed; all of them are in exports/revisions.csv.`,
     tracking: current.map((t) => ({
       series: label(t.seriesId),
       publishedIn: period(t.publishedIn),
-      period: period(t.period),
       horizon: f.number(t.horizon, 0),
       forecast: f.number(t.forecast),
       actual: f.number(t.actual),

@@ -227,6 +227,16 @@ describe('trackingChart', () => {
     );
     expect(layers(spec)[1].data!.values).toEqual([{t: t(0), v: 2.5, s: 'A', k: 'Inside 80% range'}]);
   });
+
+  test('a single checked period still gets its axis label', () => {
+    const spec = trackingChart(
+      {points: [{period: jan2024, series: 'A', errorPct: 2.5, inside: true}, {period: jan2024, series: 'B', errorPct: -1, inside: false}], level: 80, description: 'd'},
+      ctx,
+    );
+    const x = (layers(spec)[1] as unknown as {encoding: {x: {axis: {values: number[]}; scale: object}}}).encoding.x;
+    expect(x.axis.values).toEqual([t(0)]);
+    expect(x.scale).toEqual({type: 'utc', padding: 12});
+  });
 });
 
 describe('sparkline', () => {

@@ -90,11 +90,11 @@ describe('history view', () => {
 
   test('tracking table lists forecasts for the review period up to three steps ahead', () => {
     const h = buildView(backfilled(0), null).history!;
-    expect(h.tracking.map((r) => [r.series, r.period, r.horizon])).toEqual([
-      ['Net sales', 'Oct 2026', '1'],
-      ['Net sales', 'Oct 2026', '2'],
-      ['Net sales', 'Oct 2026', '3'],
-      [h.summary[1].series, 'Oct 2026', '1'],
+    expect(h.tracking.map((r) => [r.series, r.publishedIn, r.horizon])).toEqual([
+      ['Net sales', 'Sept 2026', '1'],
+      ['Net sales', 'Aug 2026', '2'],
+      ['Net sales', 'Jul 2026', '3'],
+      [h.summary[1].series, 'Sept 2026', '1'],
     ]);
     expect(h.trackingNote).toBe('All 6 checked forecasts are in exports/tracking.csv.');
   });

@@ -19,6 +19,9 @@ export interface TrackingInput {
   description: string;
 }
 
+/** Spans up to this many periods get one axis label per period. */
+const FEW_PERIODS = 6;
+
 /**
  * Forecast tracking: error of each published forecast in percent of the actual, by period, filled when the
  * actual fell inside the published inner band and hollow when outside. O(n).
@@ -32,6 +35,9 @@ export function trackingChart(input: TrackingInput, ctx: ChartContext): TopLevel
     .map((p) => ({t: epoch(frequency, p.period), v: round(p.errorPct), s: p.series, k: p.inside ? inside : outside}));
   const periods = input.points.map((p) => p.period);
   const span = periods.length > 0 ? Math.max(...periods) - Math.min(...periods) + 1 : 1;
+  const x = timeX(frequency, Math.max(span, 3));
+  // Over a few periods the regular ticks can all fall outside the padded domain, so each period is labelled.
+  const few = span <= FEW_PERIODS ? {values: [...new Set(values.map((r) => r.t))].sort((a, b) => a - b)} : {};
   return {
     $schema: SCHEMA,
     description: input.description,
@@ -46,7 +52,7 @@ export function trackingChart(input: TrackingInput, ctx: ChartContext): TopLevel
         mark: {type: 'point', size: 50, strokeWidth: 1.4, color: theme.accent},
         encoding: {
           // Padding keeps points at the first and last period from being cut by the plot edge.
-          x: {...timeX(frequency, Math.max(span, 3)), scale: {type: 'utc', padding: 12}},
+          x: {...x, scale: {...x.scale, padding: 12}, axis: {...x.axis, ...few}},
           y: {field: 'v', type: 'quantitative', title: 'Actual vs forecast, %', axis: {format: ',~r'}},
           fill: {field: 'k', type: 'nominal', scale: {domain: [inside, outside], range: [theme.accent, 'white']}},
           shape: {field: 'k', type: 'nominal', scale: {domain: [inside, outside], range: ['circle', 'diamond']}},
