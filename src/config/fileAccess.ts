@@ -76,8 +76,8 @@ export async function logoContentProblem(file: string, written: string): Promise
   const type = imageTypeOf(file);
   if (type === undefined) return 'branding.logo must be a .png, .jpg or .svg file';
   if (imageMatches(type, await head(file))) return null;
-  const name = type === 'image/png' ? 'PNG' : type === 'image/jpeg' ? 'JPEG' : 'SVG';
-  return `branding.logo ${written} is not a ${name} image (its content does not match the file name)`;
+  const name = type === 'image/png' ? 'a PNG' : type === 'image/jpeg' ? 'a JPEG' : 'an SVG';
+  return `branding.logo ${written} is not ${name} image (its content does not match the file name)`;
 }
 
 const BROWSER_NAME = /^(chromium|chromium-browser|chrome|google-chrome(-stable)?|msedge|microsoft-edge)$/;
@@ -100,7 +100,7 @@ export async function browserProblem(browser: string, packDir: string): Promise<
   if (!BROWSER_NAME.test(base))
     return (
       `pack.browser ${browser} does not look like a Chromium browser; ` +
-      'set the EBBFLOW_CHROMIUM environment variable instead'
+      'set EBBFLOW_CHROMIUM in the environment instead'
     );
   const candidates = /[\\/]/.test(browser)
     ? [path.resolve(packDir, browser)]

@@ -99,10 +99,14 @@ export async function ingest(plan: Plan): Promise<Dataset> {
 /** Columns (wide) or keys (long) of one source that the pack's series name; every key for `fromSource`. */
 function wantedFrom(plan: Plan, sourceId: string): Wanted {
   const names = new Map<string, string[]>();
+  const lines = new Map<string, number>();
   for (const s of plan.series) {
-    if (s.source === sourceId) names.set(s.column, [...(names.get(s.column) ?? []), s.id]);
+    if (s.source !== sourceId) continue;
+    names.set(s.column, [...(names.get(s.column) ?? []), s.id]);
+    if (!lines.has(s.column)) lines.set(s.column, s.line);
   }
-  return {names, all: (plan.fromSource ?? []).some((f) => f.source === sourceId)};
+  const all = (plan.fromSource ?? []).some((f) => f.source === sourceId);
+  return {names, all, pack: {file: plan.packFile, lines}};
 }
 
 /** Targets and group members must name a series once `fromSource` entries are expanded. */

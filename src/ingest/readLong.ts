@@ -1,3 +1,4 @@
+import {basename} from 'node:path';
 import {didYouMean} from '../config/suggest.js';
 import {formatPeriod} from '../time/period.js';
 import type {CellReader} from './cells.js';
@@ -9,7 +10,8 @@ import type {SourceData, Wanted} from './sourceData.js';
 /**
  * Visitor for a long source: one row per (key, period) with date, key and value columns. Only the keys
  * the pack asks for are kept (all of them for `fromSource`), each straight into its own store, so memory
- * grows with keys × periods, not with rows. `finish` reports keys the pack names but the file lacks.
+ * grows with keys × periods, not with rows. `finish` reports keys the pack names but the file lacks,
+ * at the pack line of the series that names the key when `wanted.pack` gives it.
  */
 export function longVisitor(cells: CellReader, wanted: Wanted, data: SourceData): CsvVisitor & {finish(): void} {
   const {file, keyColumn: keyName, valueColumn: valueName} = cells.source;
@@ -68,9 +70,13 @@ export function longVisitor(cells: CellReader, wanted: Wanted, data: SourceData)
       if (outOfOrder !== 0) data.notes.push({file, line: outOfOrder, message: msg.outOfOrder(outOfOrder)});
       const keys = [...data.stores.keys(), ...skipped];
       for (const [key, ids] of wanted.names) {
-        if (!data.stores.has(key)) {
-          cells.problems.add(file, null, null, msg.missingKey(keyLabel, key, ids.join(', '), didYouMean(key, keys)));
-        }
+        if (data.stores.has(key)) continue;
+        const message = msg.missingKey(keyLabel, key, ids.join(', '), didYouMean(key, keys));
+        // The key is written in the pack, so the problem points at the series entry that names it.
+        const line = wanted.pack?.lines.get(key);
+        if (wanted.pack !== undefined && line !== undefined)
+          cells.problems.add(wanted.pack.file, line, null, `${basename(file)}: ${message}`);
+        else cells.problems.add(file, null, null, message);
       }
     },
   };

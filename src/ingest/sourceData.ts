@@ -17,4 +17,6 @@ export interface SourceData {
 export interface Wanted {
   names: Map<string, string[]>;
   all: boolean;
+  /** Pack file and the pack line of the first series naming each key, so a missing key points at the pack. */
+  pack?: {file: string; lines: Map<string, number>};
 }

@@ -349,12 +349,13 @@ describe('long layout', () => {
     const d = await ingest(plan('monthly', [web], [series('uk', 'web', {column: 'Web visits (UK)'})]));
     expect(values(d, 'uk')).toEqual([100, 110, 120]);
     const problems = await problemsOf(plan('monthly', [web], [series('fr', 'web', {column: 'Web visit (UK)'})]));
+    // The key is written in the pack, so the problem points at the series' pack line (10 in these test plans).
     expect(problems).toEqual([
       {
-        file: join(FIXTURES, 'long.csv'),
-        line: null,
+        file: join(FIXTURES, 'pack.yaml'),
+        line: 10,
         column: null,
-        message: 'no rows with series = "Web visit (UK)" (series fr); did you mean "Web visits (UK)"?',
+        message: 'long.csv: no rows with series = "Web visit (UK)" (series fr); did you mean "Web visits (UK)"?',
       },
     ]);
   });
