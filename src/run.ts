@@ -25,6 +25,8 @@ export interface BuildRequest {
   force: boolean;
   /** Worker threads for the analyse stage. */
   jobs: number;
+  /** Folders outside the pack's own that its files may come from (`--allow-dir`). */
+  allowDirs?: string[];
   /** A browser already open (batch builds reuse one); otherwise one is opened and closed here. */
   browser?: PdfBrowser | {missing: string} | null;
 }
@@ -44,7 +46,12 @@ export interface BuildSummary {
  *   pack.yaml ─► loadPlan ─► ingest ─► analyse ─► narrate ─► render ─► archive ─► out/<pack>/<period>/
  */
 export async function build(request: BuildRequest, log: Logger): Promise<BuildSummary> {
-  const loaded = await loadPlan(request.packFile, {period: request.period, outDir: request.outDir, formats: request.formats});
+  const loaded = await loadPlan(request.packFile, {
+    period: request.period,
+    outDir: request.outDir,
+    formats: request.formats,
+    allowDirs: request.allowDirs,
+  });
   const data = await ingest(loaded);
   // The plan as used: `fromSource` entries expanded into the series ingest found.
   const plan: Plan = {...loaded, series: data.plans};
@@ -97,15 +104,15 @@ export async function build(request: BuildRequest, log: Logger): Promise<BuildSu
  * Validate config and data, build nothing. Throws one InputError listing every problem: when the pack itself has
  * problems, the data is still read through a salvaged plan (see `salvagePlan`) so CSV problems show in the same run.
  */
-export async function check(packFile: string, log: Logger): Promise<void> {
+export async function check(packFile: string, log: Logger, allowDirs: string[] = []): Promise<void> {
   let plan: Plan | null;
   const problems: Problem[] = [];
   try {
-    plan = await loadPlan(packFile);
+    plan = await loadPlan(packFile, {allowDirs});
   } catch (e) {
     if (!(e instanceof InputError)) throw e;
     problems.push(...e.problems);
-    plan = await salvagePlan(packFile);
+    plan = await salvagePlan(packFile, {allowDirs});
   }
   let data: Dataset | null = null;
   if (plan) {

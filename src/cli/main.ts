@@ -32,6 +32,7 @@ interface BuildOptions {
   force: boolean;
   jobs: number;
   shard?: Shard;
+  allowDir: string[];
 }
 
 /**
@@ -69,13 +70,14 @@ async function runBuild(given: string[], opts: BuildOptions, io: Io): Promise<nu
     log.info(`shard ${index}/${count}: ${packs.length} of ${total} pack${total === 1 ? '' : 's'}`);
     if (packs.length === 0) return 0;
   }
+  const allowDirs = opts.allowDir.map((d) => path.resolve(d));
   const jobs: {packFile: string; plan: Plan; period: string | undefined}[] = [];
   const problems: InputError['problems'] = [];
   for (const packFile of packs) {
     try {
       const range = opts.period !== undefined && isPeriodRange(opts.period);
       const single = range ? undefined : opts.period;
-      const plan = await loadPlan(packFile, {period: single, outDir: opts.out, formats: opts.formats});
+      const plan = await loadPlan(packFile, {period: single, outDir: opts.out, formats: opts.formats, allowDirs});
       const periods = range ? expandPeriodRange(plan.frequency, opts.period ?? '') : [opts.period];
       for (const period of periods) jobs.push({packFile, plan, period});
     } catch (e) {
@@ -98,7 +100,7 @@ async function runBuild(given: string[], opts: BuildOptions, io: Io): Promise<nu
       }
       const {packFile, period} = job;
       const {out: outDir, formats, force, jobs: threads} = opts;
-      const summary = await build({packFile, period, outDir, formats, force, jobs: threads, browser}, log);
+      const summary = await build({packFile, period, outDir, formats, force, jobs: threads, browser, allowDirs}, log);
       io.stdout.write(`${summary.folder}\n`);
       built++;
     }
@@ -112,12 +114,13 @@ async function runBuild(given: string[], opts: BuildOptions, io: Io): Promise<nu
 }
 
 /** Check every pack, collecting the problems of all of them. */
-async function runCheck(packs: string[], io: Io): Promise<number> {
+async function runCheck(packs: string[], allowDir: string[], io: Io): Promise<number> {
   const log = cliLogger(io.stderr);
+  const allowDirs = allowDir.map((d) => path.resolve(d));
   const problems: InputError['problems'] = [];
   for (const packFile of packs) {
     try {
-      await check(packFile, log);
+      await check(packFile, log, allowDirs);
     } catch (e) {
       if (!(e instanceof InputError)) return fail(e, io);
       problems.push(...e.problems);
@@ -136,6 +139,13 @@ async function runInit(dir: string, io: Io): Promise<number> {
   } catch (e) {
     return fail(e, io);
   }
+}
+
+const ALLOW_DIR_HELP =
+  "let packs read files from this folder too (repeatable); by default only the pack's own folder and below";
+
+function collect(value: string, previous: string[]): string[] {
+  return [...previous, value];
 }
 
 /**
@@ -172,6 +182,7 @@ export async function main(argv: string[], io: Io): Promise<number> {
     )
     .option('--force', 'replace a period folder that already exists', false)
     .option('-j, --jobs <n>', 'worker threads for the analysis', parseJobs, availableParallelism())
+    .option('--allow-dir <dir>', ALLOW_DIR_HELP, collect, [])
     .option(
       '--shard <i/n>',
       'build only part i of n of the packs (sorted by full path, every n-th from the i-th), for batch schedulers',
@@ -191,8 +202,9 @@ export async function main(argv: string[], io: Io): Promise<number> {
     .command('check')
     .description('validate pack files and their data, print every problem, write nothing')
     .argument('<pack...>', 'pack files (YAML)')
-    .action(async (packs: string[]) => {
-      code = await runCheck(packs, io);
+    .option('--allow-dir <dir>', ALLOW_DIR_HELP, collect, [])
+    .action(async (packs: string[], opts: {allowDir: string[]}) => {
+      code = await runCheck(packs, opts.allowDir, io);
     });
 
   program
