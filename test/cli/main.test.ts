@@ -56,7 +56,7 @@ describe('help and version', () => {
     const {code, stdout} = await run(['--help']);
     expect(code).toBe(0);
     expect(stdout).toMatch(/^Usage: ebbflow \[options\] \[command\]/);
-    for (const c of ['build [options] <pack...>', 'check <pack...>', 'init [dir]']) expect(stdout).toContain(c);
+    for (const c of ['build [options] <pack...>', 'check [options] <pack...>', 'init [dir]']) expect(stdout).toContain(c);
   });
 
   test.each([
@@ -103,6 +103,7 @@ describe('build', () => {
       force: true,
       jobs: 3,
       browser: undefined,
+      allowDirs: [],
     });
     expect(pipeline.openBrowser).not.toHaveBeenCalled();
   });

@@ -159,10 +159,9 @@ describe('the demo pack built under TZ=America/New_York', () => {
     expect(b.equals(a)).toBe(true);
   });
 
-  // Known bug, kept visible: chart layers that encode `{field: 't', type: 'temporal'}` without a UTC scale
-  // (src/render/charts/irregular.ts, cycle.ts, forecast.ts) get local-time aria-labels from vega, so under
-  // New York time "t: Sept 01, 2019" becomes "t: Aug 31, 2019" in the SVG. Passes (fails here) until fixed.
-  it.fails('gives the same report.html bytes as the TZ=UTC builds', () => {
+  // Every temporal chart layer uses a UTC scale, so vega's labels (e.g. "t: Sept 01, 2019") do not move to
+  // "Aug 31, 2019" under New York time.
+  it('gives the same report.html bytes as the TZ=UTC builds', () => {
     const a = readFileSync(join(first, PERIOD, 'report.html'));
     const b = readFileSync(join(ny, PERIOD, 'report.html'));
     expect(b.equals(a)).toBe(true);
