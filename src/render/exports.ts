@@ -37,7 +37,7 @@ export interface Table {
  * XLSX alike; csv-stringify's `escape_formulas` is on as well. Numbers are written as numbers, never as
  * text, so `-1.5` stays a number and is not quoted. Missing values (NaN) are empty cells.
  *
- * CSV: RFC 4180 quoting, CRLF line ends, UTF-8 with a byte-order mark (Excel needs it to read UTF-8).
+ * CSV: RFC 4180 quoting, CRLF line ends, UTF-8 with a byte-order mark (spreadsheet programs need it to read UTF-8).
  * XLSX: see {@link writeXlsx}; deterministic bytes for the same report.
  */
 export function exportTables(report: Report): {

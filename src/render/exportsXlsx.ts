@@ -46,7 +46,7 @@ export async function writeXlsx(tables: Table[], report: Report): Promise<Uint8A
 /**
  * Valid, unique worksheet names: characters `[]:*?/\` replaced by `_`, no leading/trailing apostrophe,
  * at most 31 characters, not blank, unique ignoring case (a `~2`, `~3`… suffix is added when needed).
- * These are Excel's rules for sheet names.
+ * These are the XLSX rules for sheet names (ECMA-376 and common spreadsheet programs).
  */
 export function sheetNames(wanted: string[]): string[] {
   const used = new Set<string>();
