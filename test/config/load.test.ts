@@ -4,31 +4,14 @@ import {describe, expect, test} from 'vitest';
 import {defaultConfig, loadPlan} from '../../src/config/index.js';
 import type {AnalysisOptions} from '../../src/config/plan.js';
 import {monthIndex, quarterIndex} from '../../src/time/period.js';
+import {analysisOptions} from '../fixtures/analysisOptions.js';
 
 const fixtures = fileURLToPath(new URL('../fixtures/config/', import.meta.url));
 const validPack = path.join(fixtures, 'valid', 'pack.yaml');
 const minimalPack = path.join(fixtures, 'minimal', 'quarterly-minimal.yaml');
 
 /** Every analysis option when nothing is set (quarterly data). */
-const untouched: AnalysisOptions = {
-  decomposition: {
-    method: 'stl',
-    model: 'auto',
-    seasonalWindow: 13,
-    trendWindow: null,
-    lowpassWindow: null,
-    robust: true,
-    seasonalDegree: null,
-    trendDegree: null,
-    lowpassDegree: null,
-    innerIterations: null,
-    outerIterations: null,
-  },
-  calendar: {workingDays: 'auto', easter: 'auto', holidays: []},
-  outliers: {enabled: true},
-  forecast: {method: 'auto', horizon: 4, levels: [80, 95], backtestOrigins: 6},
-  cycle: {method: 'hp', lambda: null},
-};
+const untouched: AnalysisOptions = analysisOptions({forecast: {horizon: 4}});
 
 describe('a valid pack', async () => {
   const plan = await loadPlan(validPack);

@@ -2,28 +2,11 @@ import {dirname, join} from 'node:path';
 import {fileURLToPath} from 'node:url';
 import type {AnalysisOptions, FromSourcePlan, Plan, SeriesPlan, SourcePlan} from '../../src/config/plan.js';
 import type {Frequency} from '../../src/time/period.js';
+import {analysisOptions} from '../fixtures/analysisOptions.js';
 
 export const FIXTURES = join(dirname(fileURLToPath(import.meta.url)), '..', 'fixtures', 'ingest');
 
-const analysis: AnalysisOptions = {
-  decomposition: {
-    method: 'stl',
-    model: 'auto',
-    seasonalWindow: 13,
-    trendWindow: null,
-    lowpassWindow: null,
-    robust: true,
-    seasonalDegree: null,
-    trendDegree: null,
-    lowpassDegree: null,
-    innerIterations: null,
-    outerIterations: null,
-  },
-  calendar: {workingDays: 'auto', easter: 'auto', holidays: []},
-  outliers: {enabled: true},
-  forecast: {method: 'auto', horizon: 12, levels: [80, 95], backtestOrigins: 6},
-  cycle: {method: 'hp', lambda: null},
-};
+const analysis: AnalysisOptions = analysisOptions();
 
 /** A source plan for a fixture (or any absolute path), wide and comma-separated unless told otherwise. */
 export function source(id: string, file: string, more: Partial<SourcePlan> = {}): SourcePlan {

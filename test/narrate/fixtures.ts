@@ -5,25 +5,7 @@ import {monthIndex} from '../../src/time/period.js';
 /** Hand-built inputs for the callout rules: a monthly series ending in October 2026 unless told otherwise. */
 export const OCT_2026 = monthIndex(2026, 10);
 
-export const options: AnalysisOptions = {
-  decomposition: {
-    method: 'stl',
-    model: 'multiplicative',
-    seasonalWindow: 13,
-    trendWindow: null,
-    lowpassWindow: null,
-    robust: true,
-    seasonalDegree: null,
-    trendDegree: null,
-    lowpassDegree: null,
-    innerIterations: null,
-    outerIterations: null,
-  },
-  calendar: {workingDays: 'auto', easter: 'auto', holidays: []},
-  outliers: {enabled: true},
-  forecast: {method: 'auto', horizon: 12, levels: [80, 95], backtestOrigins: 6},
-  cycle: {method: 'hp', lambda: null},
-};
+export const options: AnalysisOptions = analysisOptions({decomposition: {model: 'multiplicative'}});
 
 export function makePlan(over: Partial<Plan> = {}): Plan {
   return {
@@ -139,6 +121,7 @@ export function cycleOf(pattern: number[], n: number): number[] {
 import type {History} from '../../src/archive/types.js';
 import type {Draft, Rule} from '../../src/narrate/context.js';
 import {narrateFormat} from '../../src/narrate/format.js';
+import {analysisOptions} from '../fixtures/analysisOptions.js';
 
 /** Run one rule on one series with the en-GB (or given) locale. */
 export function runRule(

@@ -5,6 +5,7 @@ import type {Callout} from '../../src/narrate/types.js';
 import type {History} from '../../src/archive/types.js';
 import type {Report, ReportSeries} from '../../src/render/types.js';
 import {monthIndex, periodsPerYear, quarterIndex, type Frequency} from '../../src/time/period.js';
+import {analysisOptions} from '../fixtures/analysisOptions.js';
 
 /**
  * Synthetic reports for render tests and the render benchmark. Values are a seeded trend + sine season +
@@ -24,25 +25,7 @@ function rng(seed: number): () => number {
   };
 }
 
-export const options: AnalysisOptions = {
-  decomposition: {
-    method: 'stl',
-    model: 'auto',
-    seasonalWindow: 13,
-    trendWindow: null,
-    lowpassWindow: null,
-    robust: true,
-    seasonalDegree: null,
-    trendDegree: null,
-    lowpassDegree: null,
-    innerIterations: null,
-    outerIterations: null,
-  },
-  calendar: {workingDays: 'auto', easter: 'auto', holidays: []},
-  outliers: {enabled: true},
-  forecast: {method: 'auto', horizon: 12, levels: [80, 95], backtestOrigins: 6},
-  cycle: {method: 'hp', lambda: null},
-};
+export const options: AnalysisOptions = analysisOptions();
 
 export interface FixtureOptions {
   frequency?: Frequency;
