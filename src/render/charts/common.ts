@@ -40,6 +40,18 @@ export function round(value: number | null): number | null {
   return value === null ? null : Number(value.toPrecision(6));
 }
 
+/** The top of every chart spec: schema, the accessible description, size fitted with its padding, our config. */
+export function frame(description: string, width: number, height: number, theme: Theme) {
+  return {
+    $schema: SCHEMA,
+    description,
+    width,
+    height,
+    autosize: {type: 'fit' as const, contains: 'padding' as const},
+    config: baseConfig(theme),
+  };
+}
+
 export function baseConfig(theme: Theme): Config {
   return {
     font: theme.font,

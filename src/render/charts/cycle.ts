@@ -1,6 +1,6 @@
 import type {TopLevelSpec} from 'vega-lite';
 import type {TurningPoint} from '../../analyse/cycle/types.js';
-import {SCHEMA, when, baseConfig, epoch, finite, round, timeX, utcTime, type ChartContext} from './common.js';
+import {when, epoch, finite, round, timeX, utcTime, type ChartContext, frame} from './common.js';
 
 /** Deviation from long-run trend (percent) with dated turning points and the current phase. */
 export interface CycleInput {
@@ -38,12 +38,7 @@ export function cycleChart(input: CycleInput, ctx: ChartContext): TopLevelSpec {
     encode: {symbols: {update: {stroke: {value: theme.contrast}, strokeWidth: {value: 1.3}}}},
   };
   return {
-    $schema: SCHEMA,
-    description: input.description,
-    width: ctx.width,
-    height: ctx.height,
-    autosize: {type: 'fit', contains: 'padding'},
-    config: baseConfig(theme),
+    ...frame(input.description, ctx.width, ctx.height, theme),
     layer: [
       {
         data: {values},

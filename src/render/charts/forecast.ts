@@ -1,7 +1,7 @@
 import type {TopLevelSpec} from 'vega-lite';
 import type {ForecastResult} from '../../analyse/forecast/types.js';
 import {periodsPerYear} from '../../time/period.js';
-import {SCHEMA, when, VALUE_FORMAT, baseConfig, epoch, finite, round, timeX, utcTime, type ChartContext} from './common.js';
+import {when, VALUE_FORMAT, epoch, finite, round, timeX, utcTime, type ChartContext, frame} from './common.js';
 
 /** Recent actuals, the forecast with its bands, and the back-test's one-step-ahead forecasts. */
 export interface ForecastInput {
@@ -52,12 +52,7 @@ export function forecastChart(input: ForecastInput, ctx: ChartContext): TopLevel
   const bandColours = [theme.wash, theme.tint].slice(-bandNames.length);
   const x = timeX(frequency, n - first + f.mean.length);
   return {
-    $schema: SCHEMA,
-    description: input.description,
-    width: ctx.width,
-    height: ctx.height,
-    autosize: {type: 'fit', contains: 'padding'},
-    config: baseConfig(theme),
+    ...frame(input.description, ctx.width, ctx.height, theme),
     layer: [
       // Outer band first so the inner band is drawn on top of it.
       ...bandNames.map((name) => ({

@@ -1,6 +1,6 @@
 import type {TopLevelSpec} from 'vega-lite';
 import type {Outlier} from '../../analyse/decompose/types.js';
-import {SCHEMA, when, baseConfig, epoch, finite, round, timeX, utcTime, type ChartContext} from './common.js';
+import {when, epoch, finite, round, timeX, utcTime, type ChartContext, frame} from './common.js';
 
 /** Irregular component with the flagged points. */
 export interface IrregularInput {
@@ -40,12 +40,7 @@ export function irregularChart(input: IrregularInput, ctx: ChartContext): TopLev
   const shapes: Record<string, string> = {[OUTLIER_KINDS.additive]: 'circle', [OUTLIER_KINDS['level-shift']]: 'square', [OUTLIER_KINDS.temporary]: 'triangle-up'};
   const kinds = Object.values(OUTLIER_KINDS).filter((k) => flagged.some((r) => r.k === k));
   return {
-    $schema: SCHEMA,
-    description: input.description,
-    width: ctx.width,
-    height: ctx.height,
-    autosize: {type: 'fit', contains: 'padding'},
-    config: baseConfig(theme),
+    ...frame(input.description, ctx.width, ctx.height, theme),
     layer: [
       {
         data: {values},

@@ -1,5 +1,5 @@
 import type {TopLevelSpec} from 'vega-lite';
-import {SCHEMA, VALUE_FORMAT, baseConfig, epoch, finite, round, timeX, type ChartContext} from './common.js';
+import {VALUE_FORMAT, epoch, finite, round, timeX, type ChartContext, frame} from './common.js';
 
 /** Original values with, when available, the seasonally adjusted series and the trend-cycle. */
 export interface OverviewInput {
@@ -35,12 +35,7 @@ export function overviewChart(input: OverviewInput, ctx: ChartContext): TopLevel
   };
   const domain = present.map(([s]) => s);
   return {
-    $schema: SCHEMA,
-    description: input.description,
-    width: ctx.width,
-    height: ctx.height,
-    autosize: {type: 'fit', contains: 'padding'},
-    config: baseConfig(theme),
+    ...frame(input.description, ctx.width, ctx.height, theme),
     data: {values},
     // A one-entry ordinal width scale gives NaN widths, so a single line takes its width from the mark.
     mark: {type: 'line', interpolate: 'linear', ...(domain.length === 1 ? {strokeWidth: styles[domain[0]][1]} : {})},

@@ -1,5 +1,5 @@
 import type {TopLevelSpec} from 'vega-lite';
-import {SCHEMA, baseConfig, epoch, round, timeX, type ChartContext} from './common.js';
+import {epoch, round, timeX, type ChartContext, frame} from './common.js';
 
 /** Published forecasts set against the actuals that arrived since. */
 export interface TrackingPoint {
@@ -39,12 +39,7 @@ export function trackingChart(input: TrackingInput, ctx: ChartContext): TopLevel
   // Over a few periods the regular ticks can all fall outside the padded domain, so each period is labelled.
   const few = span <= FEW_PERIODS ? {values: [...new Set(values.map((r) => r.t))].sort((a, b) => a - b)} : {};
   return {
-    $schema: SCHEMA,
-    description: input.description,
-    width: ctx.width,
-    height: ctx.height,
-    autosize: {type: 'fit', contains: 'padding'},
-    config: baseConfig(theme),
+    ...frame(input.description, ctx.width, ctx.height, theme),
     layer: [
       {data: {values: [{}]}, mark: {type: 'rule', color: theme.ink, strokeWidth: 0.8}, encoding: {y: {datum: 0}}},
       {

@@ -1,6 +1,6 @@
 import type {TopLevelSpec} from 'vega-lite';
 import {periodsPerYear} from '../../time/period.js';
-import {SCHEMA, baseConfig, epoch, finite, round, timeX, type ChartContext} from './common.js';
+import {epoch, finite, round, timeX, type ChartContext, frame} from './common.js';
 
 /** Year-on-year percent change aligned with the series (NaN for the first year). */
 export interface YearOnYearInput {
@@ -27,12 +27,7 @@ export function yearOnYearChart(input: YearOnYearInput, ctx: ChartContext): TopL
   const bar = round(Math.min(16, Math.max(1, ((ctx.width - 50) / Math.max(1, values.length)) * 0.72)))!;
   const x = timeX(frequency, input.yearOnYear.length - first);
   return {
-    $schema: SCHEMA,
-    description: input.description,
-    width: ctx.width,
-    height: ctx.height,
-    autosize: {type: 'fit', contains: 'padding'},
-    config: baseConfig(theme),
+    ...frame(input.description, ctx.width, ctx.height, theme),
     data: {values},
     layer: [
       {
