@@ -49,7 +49,11 @@ function normal(rng) {
   return Math.sqrt(-2 * Math.log(u)) * Math.cos(2 * Math.PI * rng());
 }
 
-/** Easter Sunday (Gregorian computus, anonymous algorithm): {month, day}. */
+/**
+ * Easter Sunday (Gregorian computus, anonymous algorithm): {month, day}. The same algorithm as src/time/easter.ts,
+ * kept here so the demo data can be regenerated with plain Node before anything is built; the generator plants the
+ * effect, the engine must find it independently.
+ */
 function easter(year) {
   const a = year % 19;
   const b = Math.floor(year / 100);

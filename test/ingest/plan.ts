@@ -2,7 +2,7 @@ import {dirname, join} from 'node:path';
 import {fileURLToPath} from 'node:url';
 import type {AnalysisOptions, FromSourcePlan, Plan, SeriesPlan, SourcePlan} from '../../src/config/plan.js';
 import type {Frequency} from '../../src/time/period.js';
-import {analysisOptions} from '../fixtures/analysisOptions.js';
+import {analysisOptions, defaultBranding, defaultThresholds} from '../fixtures/planDefaults.js';
 
 export const FIXTURES = join(dirname(fileURLToPath(import.meta.url)), '..', 'fixtures', 'ingest');
 
@@ -60,16 +60,8 @@ export function plan(frequency: Frequency, sources: SourcePlan[], list: SeriesPl
     formats: ['json'],
     locale: 'en-GB',
     fiscalYearStart: 1,
-    branding: {
-      logo: null,
-      accent: '#1d6f64',
-      font: 'Liberation Sans',
-      paper: 'A4',
-      orientation: 'portrait',
-      footer: null,
-      templates: null,
-    },
-    thresholds: {residualSigma: 3, revisionPct: 1},
+    branding: {...defaultBranding},
+    thresholds: {...defaultThresholds},
     outDir: '/tmp/out',
     browser: null,
     sources,

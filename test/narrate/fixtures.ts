@@ -21,16 +21,8 @@ export function makePlan(over: Partial<Plan> = {}): Plan {
     formats: ['html'],
     locale: 'en-GB',
     fiscalYearStart: 4,
-    branding: {
-      logo: null,
-      accent: '#1d6f64',
-      font: 'Liberation Sans',
-      paper: 'A4',
-      orientation: 'portrait',
-      footer: null,
-      templates: null,
-    },
-    thresholds: {residualSigma: 3, revisionPct: 1},
+    branding: {...defaultBranding},
+    thresholds: {...defaultThresholds},
     outDir: '/out',
     browser: null,
     sources: [],
@@ -121,7 +113,7 @@ export function cycleOf(pattern: number[], n: number): number[] {
 import type {History} from '../../src/archive/types.js';
 import type {Draft, Rule} from '../../src/narrate/context.js';
 import {narrateFormat} from '../../src/narrate/format.js';
-import {analysisOptions} from '../fixtures/analysisOptions.js';
+import {analysisOptions, defaultBranding, defaultThresholds} from '../fixtures/planDefaults.js';
 
 /** Run one rule on one series with the en-GB (or given) locale. */
 export function runRule(

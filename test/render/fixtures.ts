@@ -5,7 +5,7 @@ import type {Callout} from '../../src/narrate/types.js';
 import type {History} from '../../src/archive/types.js';
 import type {Report, ReportSeries} from '../../src/render/types.js';
 import {monthIndex, periodsPerYear, quarterIndex, type Frequency} from '../../src/time/period.js';
-import {analysisOptions} from '../fixtures/analysisOptions.js';
+import {analysisOptions} from '../fixtures/planDefaults.js';
 
 /**
  * Synthetic reports for render tests and the render benchmark. Values are a seeded trend + sine season +
