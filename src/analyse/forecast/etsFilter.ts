@@ -41,23 +41,33 @@ export function etsFilter(
   const residuals = new Float64Array(y.length);
   const fitted = new Float64Array(y.length);
   const finalStates = new Float64Array(initialStates.length);
-  const {lik, mse} = etsRecurse(y, spec, params, initialStates, residuals, fitted, finalStates);
+  const {lik, mse} = etsRecurse(y, spec, params, initialStates, {residuals, fitted, finalStates, mse: true});
   return {lik, mse, residuals, fitted, finalStates};
 }
 
 /**
  * The same recursions without allocation, for optimisers: writes into the optional buffers and returns the
- * criterion and the one-step mean squared error.
+ * criterion and, when `mse` is asked for, the one-step mean squared error (NaN otherwise). Work that only some
+ * forms need (the log term, the running MSE, the output buffers) is skipped when not needed.
  */
 export function etsRecurse(
   y: Float64Array,
   spec: EtsSpec,
   params: EtsParams,
   initialStates: Float64Array,
-  residuals: Float64Array | null = null,
-  fitted: Float64Array | null = null,
-  finalStates: Float64Array | null = null,
-  seasonBuffer: Float64Array = new Float64Array(Math.max(1, spec.period)),
+  {
+    residuals = null,
+    fitted = null,
+    finalStates = null,
+    seasonBuffer = new Float64Array(Math.max(1, spec.period)),
+    mse: wantMse = false,
+  }: {
+    residuals?: Float64Array | null;
+    fitted?: Float64Array | null;
+    finalStates?: Float64Array | null;
+    seasonBuffer?: Float64Array;
+    mse?: boolean;
+  } = {},
 ): {lik: number; mse: number} {
   const n = y.length;
   const hasTrend = spec.trend !== 'N';
@@ -79,34 +89,45 @@ export function etsRecurse(
   let sse = 0;
   let logSum = 0;
   let mse = 0;
+  const keep = residuals !== null || fitted !== null;
   for (let t = 0; t < n; t++) {
     const phib = phi * b;
     const q = l + phib;
-    const oldIdx = (head + m - 1) % m;
-    const old = season === 'N' ? 0 : s[oldIdx];
-    const f = season === 'N' ? q : season === 'A' ? q + old : q * old;
     const yt = y[t];
-    const e = multError ? (yt - f) / f : yt - f;
-    if (residuals) residuals[t] = e;
-    if (fitted) fitted[t] = f;
-    const d = yt - f;
-    mse = (mse * t + d * d) / (t + 1);
-    let p: number;
-    if (season === 'N') p = yt;
-    else if (season === 'A') p = yt - old;
-    else p = Math.abs(old) < TOL ? HUGE : yt / old;
-    const lNew = q + alpha * (p - q);
-    if (hasTrend) b = phib + ratio * (lNew - l - phib);
-    if (season !== 'N') {
+    let f: number;
+    let lNew: number;
+    if (season === 'N') {
+      f = q;
+      lNew = q + alpha * (yt - q);
+    } else {
+      const oldIdx = head === 0 ? m - 1 : head - 1;
+      const old = s[oldIdx];
       let target: number;
-      if (season === 'A') target = yt - q;
-      else target = Math.abs(q) < TOL ? HUGE : yt / q;
+      if (season === 'A') {
+        f = q + old;
+        lNew = q + alpha * (yt - old - q);
+        target = yt - q;
+      } else {
+        f = q * old;
+        lNew = q + alpha * ((Math.abs(old) < TOL ? HUGE : yt / old) - q);
+        target = Math.abs(q) < TOL ? HUGE : yt / q;
+      }
       head = oldIdx;
       s[head] = old + gamma * (target - old);
     }
+    const e = multError ? (yt - f) / f : yt - f;
+    if (keep) {
+      if (residuals) residuals[t] = e;
+      if (fitted) fitted[t] = f;
+    }
+    if (wantMse) {
+      const d = yt - f;
+      mse = (mse * t + d * d) / (t + 1);
+    }
+    if (hasTrend) b = phib + ratio * (lNew - l - phib);
     l = lNew;
     sse += e * e;
-    logSum += Math.log(Math.abs(f));
+    if (multError) logSum += Math.log(Math.abs(f));
   }
   if (finalStates) {
     finalStates[0] = l;
@@ -115,5 +136,5 @@ export function etsRecurse(
   }
   let lik = n * Math.log(sse);
   if (multError) lik += 2 * logSum;
-  return {lik, mse};
+  return {lik, mse: wantMse ? mse : NaN};
 }

@@ -140,7 +140,7 @@ export function fitEts(
       full[nStates] = (spec.season === 'M' ? m : 0) - sum;
       if (spec.season === 'M') for (let i = firstSeason; i <= nStates; i++) if (full[i] < 0) return Infinity;
     }
-    const {lik, mse} = etsRecurse(y, spec, params, full, null, null, null, seasonBuffer);
+    const {lik, mse} = etsRecurse(y, spec, params, full, {seasonBuffer, mse: optCrit === 'mse'});
     let value = optCrit === 'lik' ? lik : mse;
     if (value < -1e10) value = -1e10;
     return Number.isNaN(value) ? Infinity : value;
