@@ -45,6 +45,12 @@ export interface EtsFitOptions {
   optCrit?: 'lik' | 'mse';
   /** Default: 2000. */
   maxEvaluations?: number;
+  /**
+   * Warm start: begin the search at these smoothing parameters and initial states (e.g. the same model fitted
+   * to a shorter stretch of the same series) instead of the heuristic start values; ignored when they are not
+   * feasible for this model.
+   */
+  start?: {params: EtsParams; initialStates: Float64Array};
 }
 
 const LOWER = [1e-4, 1e-4, 1e-4, 0.8];
@@ -53,7 +59,7 @@ const UPPER = [0.9999, 0.9999, 0.9999, 0.98];
 export function fitEts(
   y: Float64Array,
   spec: EtsSpec,
-  {fixed = {}, optCrit = 'lik', maxEvaluations = 2000}: EtsFitOptions = {},
+  {fixed = {}, optCrit = 'lik', maxEvaluations = 2000, start: warm}: EtsFitOptions = {},
 ): EtsFit | null {
   const n = y.length;
   const seasonal = spec.season !== 'N';
@@ -98,9 +104,8 @@ export function fitEts(
     start.push(phi0);
   }
   const nSmoothing = start.length;
-  const states0 = etsInitialStates(y, spec);
   const nStates = freeStateCount(spec);
-  start.push(...states0);
+  start.push(...etsInitialStates(y, spec));
   const np = start.length;
   if (np >= n - 1) return null;
 
@@ -146,8 +151,16 @@ export function fitEts(
     return Number.isNaN(value) ? Infinity : value;
   };
   let result;
+  const warmStart = warm ? warmVector(warm, free, nStates) : null;
+  if (warmStart && Number.isFinite(objective(warmStart))) {
+    try {
+      result = nelderMead(objective, warmStart, {maxEvaluations});
+    } catch {
+      result = undefined;
+    }
+  }
   try {
-    result = nelderMead(objective, Float64Array.from(start), {maxEvaluations});
+    result ??= nelderMead(objective, Float64Array.from(start), {maxEvaluations});
   } catch {
     return null;
   }
@@ -187,4 +200,20 @@ export function fitEts(
     fitted: run.fitted,
     options: {optCrit, evaluations: result.evaluations},
   };
+}
+
+/** The optimiser's vector [free smoothing parameters…, free initial states…] for a warm start. */
+function warmVector(
+  warm: {params: EtsParams; initialStates: Float64Array},
+  free: {alpha: boolean; beta: boolean; gamma: boolean; phi: boolean},
+  nStates: number,
+): Float64Array | null {
+  if (warm.initialStates.length < nStates) return null;
+  const x: number[] = [];
+  if (free.alpha) x.push(warm.params.alpha);
+  if (free.beta) x.push(warm.params.beta);
+  if (free.gamma) x.push(warm.params.gamma);
+  if (free.phi) x.push(warm.params.phi);
+  for (let i = 0; i < nStates; i++) x.push(warm.initialStates[i]);
+  return Float64Array.from(x);
 }

@@ -15,6 +15,8 @@ import type {EtsSpec} from './etsModel.js';
  */
 export interface EtsSelection {
   best: EtsFit;
+  /** Every model that could be fitted, in the order tried. */
+  fits: EtsFit[];
   /** AICc of every model tried, by name (Infinity when it could not be fitted). */
   candidates: {method: string; aicc: number}[];
 }
@@ -29,6 +31,7 @@ export function selectEts(
   const allowSeason = seasonal && period > 1 && period <= 24 && n > period;
   const seasons: EtsSpec['season'][] = allowSeason ? ['N', 'A', 'M'] : ['N'];
   let best: EtsFit | null = null;
+  const fits: EtsFit[] = [];
   const candidates: {method: string; aicc: number}[] = [];
   for (const error of ['A', 'M'] as const) {
     if (error === 'M' && !positive) continue;
@@ -41,10 +44,11 @@ export function selectEts(
           const fit = fitEts(y, spec);
           const aicc = fit && Number.isFinite(fit.aicc) ? fit.aicc : Infinity;
           candidates.push({method: `ETS(${error},${trend}${damped ? 'd' : ''},${season})`, aicc});
+          if (fit && Number.isFinite(aicc)) fits.push(fit);
           if (fit && aicc < (best?.aicc ?? Infinity)) best = fit;
         }
       }
     }
   }
-  return best ? {best, candidates} : null;
+  return best ? {best, fits, candidates} : null;
 }

@@ -104,7 +104,7 @@ export function forecastSeries(
           origins: backtestOrigins,
           minTrain: 4,
           offset: prepared.first,
-          etsSpec: run.etsSpec,
+          etsModels: run.etsModels,
         });
   return {
     method: forecast.method,

@@ -1,11 +1,11 @@
 import {averageForecasts} from './averageForecasts.js';
 import {reseasonalise} from './adjustedForecast.js';
 import {forecastBenchmarks} from './benchmarks.js';
-import {forecastEts} from './etsForecast.js';
-import {simulateEts} from './etsSimulate.js';
-import {runningTotalIntervals} from './runningTotalIntervals.js';
+import {akaikeWeights} from './akaikeWeights.js';
 import {fitEts} from './etsFit.js';
-import type {EtsSpec} from './etsModel.js';
+import {forecastEtsMixture, simulateEtsMixture} from './etsMixture.js';
+import type {EtsParams, EtsSpec} from './etsModel.js';
+import {runningTotalIntervals} from './runningTotalIntervals.js';
 import {selectEts} from './etsSelect.js';
 import type {Forecast} from './model.js';
 import {forecastNaive, forecastSeasonalNaive} from './naive.js';
@@ -20,9 +20,11 @@ import {fitTheta, forecastTheta} from './theta.js';
  *   periods (weekly data, m = 52) the series is seasonally adjusted first (classical decomposition, when the
  *   seasonality test finds a pattern) and non-seasonal ETS forecasts the adjusted series.
  * - `theta`: the Theta method (seasonal adjustment as in Theta's definition, any m).
- * - `ets-theta`: equal-weight mean of automatic ETS and Theta — the most accurate of the combinations measured
- *   on M3 (test/bench/m3.ts: monthly sMAPE 13.59 vs 14.14 ETS and 13.86 Theta; quarterly 8.92 vs 9.69 and 9.20).
- * - `combination`: equal-weight mean of automatic ETS, Theta and damped trend on adjusted data.
+ * - `ets-theta`: equal-weight mean of Akaike-weighted ETS (every model of automatic ETS with a weight of at
+ *   least 1%, see akaikeWeights.ts) and Theta — the most accurate of the combinations measured on M3
+ *   (test/bench/m3.ts: monthly sMAPE 13.51 vs 14.14 ETS and 13.86 Theta, 13.59 with the single best ETS model;
+ *   quarterly 8.83 vs 9.69, 9.20 and 8.92).
+ * - `combination`: equal-weight mean of Akaike-weighted ETS, Theta and damped trend on adjusted data.
  *   Combination intervals average the members' bounds and widen them about the mean by
  *   {@link combinationIntervalScale} (see averageForecasts).
  * - `seasonal-naive`, `naive` and the M3 benchmarks (`naive2`, `ses`, `holt`, `damped`, `comb-shd`).
@@ -30,7 +32,7 @@ import {fitTheta, forecastTheta} from './theta.js';
  * ETS, Theta and their combinations also give intervals for running totals of the forecasts (simulated ETS
  * sample paths, seeded; Theta's closed form), which the fiscal-year outturn uses.
  *
- * Complexity: dominated by automatic ETS (up to 15 fits). NaN policy: rejects NaN. Needs n ≥ 4 except for
+ * Complexity: dominated by automatic ETS (up to 15 fits; a back-test origin refits only the models kept). NaN policy: rejects NaN. Needs n ≥ 4 except for
  * the naive methods.
  */
 export type MethodName =
@@ -50,8 +52,15 @@ export interface MethodRun {
   forecast: Forecast;
   /** Chosen model and parameters, for the result's options. */
   details: Record<string, unknown>;
-  /** The ETS model used (by `ets` and the combinations), so a back-test can refit the same model class. */
-  etsSpec?: EtsSpec;
+  /** The ETS models used (by `ets` and the combinations) with their estimates, so a back-test can refit them. */
+  etsModels?: EtsStart[];
+}
+
+/** An ETS model class to refit, optionally with estimates to warm-start from. */
+export interface EtsStart {
+  spec: EtsSpec;
+  params?: EtsParams;
+  initialStates?: Float64Array;
 }
 
 /**
@@ -67,7 +76,13 @@ export function combinationIntervalScale(level: number): number {
 export function runMethod(
   name: MethodName,
   values: Float64Array,
-  {period, h, levels, etsSpec}: {period: number; h: number; levels: number[]; etsSpec?: EtsSpec},
+  {
+    period,
+    h,
+    levels,
+    etsModels,
+    runningTotals = true,
+  }: {period: number; h: number; levels: number[]; etsModels?: EtsStart[]; runningTotals?: boolean},
 ): MethodRun {
   const options = {h, levels};
   switch (name) {
@@ -92,10 +107,10 @@ export function runMethod(
       };
     }
     case 'ets':
-      return runEts(values, period, options, etsSpec);
+      return runEts(values, period, options, etsModels, {weighted: false, withRunningTotals: runningTotals});
     case 'ets-theta':
     case 'combination': {
-      const ets = runEts(values, period, options, etsSpec);
+      const ets = runEts(values, period, options, etsModels, {weighted: true, withRunningTotals: runningTotals});
       const theta = runMethod('theta', values, {period, h, levels});
       const members = [ets.forecast, theta.forecast];
       if (name === 'combination') members.push(forecastBenchmarks(values, period, options, ['Damped']).get('Damped')!);
@@ -103,44 +118,72 @@ export function runMethod(
       const scale = Object.fromEntries(levels.map((l) => [l, combinationIntervalScale(l)]));
       const forecast = averageForecasts(members, `Combination (${labels.join(', ')})`, scale);
       const details = {members: labels, intervalScale: scale, ets: ets.details, theta: theta.details};
-      return {forecast, details, etsSpec: ets.etsSpec};
+      return {forecast, details, etsModels: ets.etsModels};
     }
   }
 }
 
+/** Weights under this share are dropped from the Akaike-weighted ETS forecast (see akaikeWeights.ts). */
+const MIN_WEIGHT = 0.01;
+/** Evaluation budget of a warm-started refit (the start is already close to the optimum). */
+const WARM_EVALUATIONS = 500;
+
 /**
- * Automatic ETS, or a refit of the given model class (`spec`: smoothing parameters and states re-estimated, no
- * selection), as back-tests do to keep their cost at one fit per origin.
+ * Automatic ETS: every model of the stable subset is fitted (selectEts); `weighted` averages the forecasts of
+ * those with an Akaike weight of at least 1% by weight, otherwise the model with the smallest AICc is kept.
+ * With `models` (a back-test origin) the same model classes are refitted instead, warm-started from the given
+ * estimates when there are any, and re-weighted by their AICc on this stretch of data.
  */
 function runEts(
   values: Float64Array,
   period: number,
   options: {h: number; levels: number[]},
-  spec?: EtsSpec,
+  models: EtsStart[] | undefined,
+  {weighted, withRunningTotals}: {weighted: boolean; withRunningTotals: boolean},
 ): MethodRun {
   const n = values.length;
   const seasonalOk = period <= 24 && n >= 2 * period;
   const sa = period <= 24 ? null : seasonalAdjustment(values, period);
   const y = sa ? sa.adjusted : values;
-  const usable = spec && (spec.season === 'N' || seasonalOk) && !(spec.error === 'M' && y.some((v) => !(v > 0)));
-  const fit =
-    (usable ? fitEts(y, spec) : null) ?? selectEts(y, {period: sa ? 1 : period, seasonal: !sa && seasonalOk})?.best;
-  if (!fit) return {forecast: forecastNaive(values, options), details: {fallback: 'naive'}};
-  const details = {model: fit.method, params: fit.params, aicc: fit.aicc, ...(sa ? {seasonalAdjustment: sa.kind} : {})};
+  const positive = y.every((v) => v > 0);
+  const usable = (models ?? []).filter((m) => (m.spec.season === 'N' || seasonalOk) && (m.spec.error === 'A' || positive));
+  let fits = usable.flatMap((m) => {
+    const warm = m.params && m.initialStates ? {start: {params: m.params, initialStates: m.initialStates}} : {};
+    return fitEts(y, m.spec, m.params ? {...warm, maxEvaluations: WARM_EVALUATIONS} : warm) ?? [];
+  });
+  if (fits.length === 0) fits = selectEts(y, {period: sa ? 1 : period, seasonal: !sa && seasonalOk})?.fits ?? [];
+  if (fits.length === 0) return {forecast: forecastNaive(values, options), details: {fallback: 'naive'}};
+  const criteria = fits.map((f) => f.aicc);
+  // Not weighted: the first model with the smallest AICc, as selectEts picks it.
+  const all = weighted
+    ? akaikeWeights(criteria, MIN_WEIGHT)
+    : Float64Array.from(criteria, (_, i) => (i === criteria.indexOf(Math.min(...criteria)) ? 1 : 0));
+  const kept = fits.filter((_, i) => all[i] > 0);
+  const weights = all.filter((w) => w > 0);
+  const etsModels = kept.map((f) => ({spec: f.spec, params: f.params, initialStates: f.initialStates}));
+  const details = {
+    models: kept.map((f, i) => ({model: f.method, weight: weights[i], params: f.params, aicc: f.aicc})),
+    ...(sa ? {seasonalAdjustment: sa.kind} : {}),
+  };
+  const mixture = forecastEtsMixture(kept, weights, options);
   if (!sa) {
-    const forecast = forecastEts(fit, options);
-    forecast.runningTotals = runningTotalIntervals(simulateEts(fit, {h: options.h}), options.h, forecast.levels);
-    return {forecast, details, etsSpec: fit.spec};
+    if (withRunningTotals) {
+      const paths = simulateEtsMixture(kept, weights, {h: options.h});
+      mixture.runningTotals = runningTotalIntervals(paths, options.h, mixture.levels);
+    }
+    return {forecast: mixture, details, etsModels};
   }
-  const method = sa.seasonal ? `${fit.method} on seasonally adjusted data` : fit.method;
-  const forecast = reseasonalise(forecastEts(fit, options), sa, method);
-  const paths = simulateEts(fit, {h: options.h});
-  const factors = sa.ahead(options.h);
-  for (let i = 0; i < paths.length; i++) {
-    const t = i % options.h;
-    if (sa.kind === 'multiplicative') paths[i] *= factors[t];
-    else if (sa.kind === 'additive') paths[i] += factors[t];
+  const method = sa.seasonal ? `${mixture.method} on seasonally adjusted data` : mixture.method;
+  const forecast = reseasonalise(mixture, sa, method);
+  if (withRunningTotals) {
+    const paths = simulateEtsMixture(kept, weights, {h: options.h});
+    const factors = sa.ahead(options.h);
+    for (let i = 0; i < paths.length; i++) {
+      const t = i % options.h;
+      if (sa.kind === 'multiplicative') paths[i] *= factors[t];
+      else if (sa.kind === 'additive') paths[i] += factors[t];
+    }
+    forecast.runningTotals = runningTotalIntervals(paths, options.h, forecast.levels);
   }
-  forecast.runningTotals = runningTotalIntervals(paths, options.h, forecast.levels);
-  return {forecast, details, etsSpec: fit.spec};
+  return {forecast, details, etsModels};
 }

@@ -1,5 +1,6 @@
 import {readFileSync} from 'node:fs';
 import {describe, expect, it} from 'vitest';
+import {etsFilter} from '../../../src/analyse/forecast/etsFilter.js';
 import {fitEts} from '../../../src/analyse/forecast/etsFit.js';
 import {forecastEts} from '../../../src/analyse/forecast/etsForecast.js';
 import type {EtsSpec} from '../../../src/analyse/forecast/etsModel.js';
@@ -92,6 +93,23 @@ describe('automatic selection against forecast::ets(y)', () => {
 const SES: EtsSpec = {error: 'A', trend: 'N', damped: false, season: 'N', period: 1};
 
 describe('fitEts edge cases', () => {
+  it('warm-starts from given estimates: never worse than the start, within the evaluation budget', () => {
+    // Start from the AirPassengers estimates on the first 132 months: the refit on all 144 months must end at or
+    // below the criterion at that start, within the budget of 500 evaluations.
+    const air = (ref.auto as Case[]).find((c) => c.name === 'AirPassengers')!;
+    const y = Float64Array.from(air.values);
+    const spec: EtsSpec = {error: 'M', trend: 'A', damped: true, season: 'M', period: 12};
+    const short = fitEts(y.subarray(0, 132), spec)!;
+    const atStart = etsFilter(y, spec, short.params, short.initialStates).lik;
+    const warm = fitEts(y, spec, {start: short, maxEvaluations: 500})!;
+    // The budget is checked after each simplex step, so it can be passed by the last step's few evaluations.
+    expect(warm.options.evaluations).toBeLessThanOrEqual(500 + 20);
+    expect(warm.lik).toBeLessThanOrEqual(atStart);
+    // An infeasible start (alpha outside its bounds) is ignored: the usual start values are used instead.
+    const bad = fitEts(y, spec, {start: {params: {...short.params, alpha: 2}, initialStates: short.initialStates}})!;
+    expect(bad.lik).toBeCloseTo(fitEts(y, spec)!.lik, 10);
+  });
+
   it('returns null when the model has more parameters than the data can support', () => {
     const y = Float64Array.from({length: 14}, (_, i) => 10 + (i % 12));
     expect(fitEts(y, {error: 'A', trend: 'A', damped: true, season: 'A', period: 12})).toBeNull();
