@@ -58,24 +58,29 @@ export async function build(request: BuildRequest, log: Logger): Promise<BuildSu
   const periodLabel = formatPeriod(plan.frequency, data.period);
   await refuseExisting(plan.outDir, plan.id, periodLabel, request.force);
   log.info(`${plan.id} ${periodLabel}: ${data.series.length} series read`);
-  const analyses = await analyseAll(plan, data, {jobs: request.jobs, log});
-  const draft = assemble(plan, data, analyses, null);
-  const history = await loadHistory(plan.outDir, plan.id, periodLabel, toResults(draft), plan.thresholds.revisionPct);
-  const report = assemble(plan, data, analyses, history);
-
   const wantPdf = plan.formats.includes('pdf');
-  const html = plan.formats.includes('html') || wantPdf ? await renderHtml(report) : null;
+  // A browser of our own starts now, while the series are analysed, and is closed whatever happens next.
+  // Settled at once into a value or an error, so a failed launch cannot go unhandled while the analysis runs.
+  const ownBrowser = wantPdf && !request.browser ? settle(openBrowser(plan.browser)) : null;
+  let html: string | null;
+  let report: Report;
   let pdf: Uint8Array | null = null;
   let pdfSkipped: string | null = null;
-  if (wantPdf && html) {
-    const browser = request.browser ?? (await openBrowser(plan.browser));
-    try {
+  try {
+    const analyses = await analyseAll(plan, data, {jobs: request.jobs, log});
+    const draft = assemble(plan, data, analyses, null);
+    const history = await loadHistory(plan.outDir, plan.id, periodLabel, toResults(draft), plan.thresholds.revisionPct);
+    report = assemble(plan, data, analyses, history);
+    html = plan.formats.includes('html') || wantPdf ? await renderHtml(report) : null;
+    if (wantPdf && html) {
+      const browser = request.browser ?? unwrap((await ownBrowser)!);
       if ('missing' in browser) pdfSkipped = browser.missing;
       else pdf = await browser.pdf(html, pdfOptions(plan, data.period, periodLabel));
-    } finally {
-      if (!request.browser && !('missing' in browser)) await browser.close();
+      if (pdfSkipped) log.warn(pdfSkipped);
     }
-    if (pdfSkipped) log.warn(pdfSkipped);
+  } finally {
+    const launched = await ownBrowser;
+    if (launched && 'value' in launched && !('missing' in launched.value)) await launched.value.close();
   }
   const exports: {name: string; content: string | Uint8Array}[] = [];
   if (plan.formats.includes('csv') || plan.formats.includes('xlsx')) {
@@ -92,7 +97,7 @@ export async function build(request: BuildRequest, log: Logger): Promise<BuildSu
     outDir: plan.outDir,
     force: request.force,
     packYaml: JSON.stringify(portablePlan(plan), null, 2),
-    warnings: analyses.flatMap((a) =>
+    warnings: report.series.map((s) => s.analysis).flatMap((a) =>
       [a.notAdjustedReason ?? [], a.notes, a.forecast?.notes ?? []].flat().map((note) => `${a.id}: ${note}`),
     ),
   });
@@ -128,6 +133,20 @@ export async function check(packFile: string, log: Logger, allowDirs: string[] =
   if (plan && data) {
     log.info(`${packFile}: ${data.series.length} series, review period ${formatPeriod(plan.frequency, data.period)}, no problems`);
   }
+}
+
+type Settled<T> = {value: T} | {error: unknown};
+
+function settle<T>(promise: Promise<T>): Promise<Settled<T>> {
+  return promise.then(
+    (value) => ({value}),
+    (error: unknown) => ({error}),
+  );
+}
+
+function unwrap<T>(settled: Settled<T>): T {
+  if ('error' in settled) throw settled.error;
+  return settled.value;
 }
 
 function assemble(plan: Plan, data: Dataset, analyses: SeriesAnalysis[], history: History | null): Report {

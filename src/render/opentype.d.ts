@@ -2,6 +2,8 @@
 declare module 'opentype.js' {
   interface Font {
     getAdvanceWidth(text: string, fontSize: number, options?: {kerning?: boolean}): number;
+    charToGlyph(c: string): {advanceWidth?: number};
+    unitsPerEm: number;
   }
   const opentype: {parse(buffer: ArrayBuffer): Font};
   export default opentype;

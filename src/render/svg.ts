@@ -91,10 +91,15 @@ export async function specToSvg(spec: TopLevelSpec, options: SvgOptions): Promis
   return finishSvg(svg, options);
 }
 
-/** Prefix ids, drop fixed pixel size so CSS scales the chart, and add `<title>`/`<desc>`. */
+/** Prefix ids, drop fixed pixel size and vega's interaction attributes, and add `<title>`/`<desc>`. */
 function finishSvg(svg: string, options: SvgOptions): string {
   const prefix = options.idPrefix.replace(/[^A-Za-z0-9_-]/g, '-');
+  // vega's class names and pointer-events serve interactive views, and its ARIA roles on groups and marks
+  // describe pieces of what is here one image with a title and description; none of them prints, and the
+  // roles make the PDF step tag every piece. Only tags are touched: vega escapes `<` and `>` in text and
+  // attribute values, so `<…>` is always a tag.
   const body = svg
+    .replace(/<[^>]*>/g, (tag) => tag.replace(/ (class|pointer-events|role|aria-[a-z]+)="[^"]*"/g, ''))
     .replace(/\bid="([^"]+)"/g, `id="${prefix}-$1"`)
     .replace(/url\(#([^)]+)\)/g, `url(#${prefix}-$1)`)
     .replace(/\b(href|xlink:href)="#([^"]+)"/g, `$1="#${prefix}-$2"`);
@@ -103,7 +108,6 @@ function finishSvg(svg: string, options: SvgOptions): string {
   const head = open[0]
     .replace(/\swidth="[^"]*"/, '')
     .replace(/\sheight="[^"]*"/, '')
-    .replace(/\sclass="[^"]*"/, '')
     .replace(/>$/, ` role="img" aria-labelledby="${prefix}-title ${prefix}-desc" preserveAspectRatio="xMidYMid meet">`);
   return (
     head +

@@ -12,6 +12,8 @@ import opentype from 'opentype.js';
  */
 interface Face {
   getAdvanceWidth(text: string, size: number): number;
+  charToGlyph(c: string): {advanceWidth?: number};
+  unitsPerEm: number;
 }
 
 const faces = new Map<string, Face>();
@@ -41,10 +43,24 @@ export function measureText(family: string, bold: boolean, size: number, text: s
   const key = `${family}|${bold}|${size}|${text}`;
   let w = widths.get(key);
   if (w === undefined) {
-    w = text ? face(family, bold).getAdvanceWidth(text, size) : 0;
+    w = text ? advance(face(family, bold), text, size) : 0;
     widths.set(key, w);
   }
   return w;
+}
+
+/**
+ * Shaped width; when opentype.js cannot apply one of the font's substitution tables (some fonts use lookup
+ * types it does not support), the plain sum of the characters' advance widths, without kerning.
+ */
+function advance(f: Face, text: string, size: number): number {
+  try {
+    return f.getAdvanceWidth(text, size);
+  } catch {
+    let units = 0;
+    for (const c of text) units += f.charToGlyph(c).advanceWidth ?? 0;
+    return (units * size) / f.unitsPerEm;
+  }
 }
 
 /** A vega text item, as much of it as the measurement reads. */

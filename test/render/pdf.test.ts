@@ -5,7 +5,7 @@ import {tmpdir} from 'node:os';
 import {join} from 'node:path';
 import puppeteer, {type Browser} from 'puppeteer-core';
 import {renderHtml} from '../../src/render/index.js';
-import {LAUNCH_ARGS, findBrowser, fixDates, openBrowser, periodWords, printPdf, type PdfOptions, type PrintRecord} from '../../src/render/pdf.js';
+import {LAUNCH_ARGS, findBrowser, fixDates, openBrowser, periodWords, printPdf, stableNodeIds, type PdfOptions, type PrintRecord} from '../../src/render/pdf.js';
 import {makeReport} from './fixtures.js';
 
 const chromium = findBrowser(null);
@@ -36,6 +36,16 @@ describe('fixDates and periodWords', () => {
     const fixed = new TextDecoder().decode(fixDates(raw, '20261101'));
     expect(fixed).toBe("<< /CreationDate (D:20261101000000+00'00') /ModDate (D:20261101000000+00'00') >>");
     expect(() => fixDates(raw, '2026-11-01')).toThrow(/invalid pdf date/);
+  });
+
+  test('structure-element node numbers become their rank, keeping order and length', () => {
+    const raw = new TextEncoder().encode('/ID (node00000071) /ID (node00000069) /Names [(node00000069) 9 0 R (node00000071) 7 0 R]');
+    const fixed = new TextDecoder().decode(stableNodeIds(raw));
+    expect(fixed).toBe('/ID (node00000002) /ID (node00000001) /Names [(node00000001) 9 0 R (node00000002) 7 0 R]');
+    expect(fixed.length).toBe(raw.length);
+    // Another run numbering the same nodes from elsewhere gives the same bytes.
+    const shifted = new TextEncoder().encode('/ID (node00000075) /ID (node00000073) /Names [(node00000073) 9 0 R (node00000075) 7 0 R]');
+    expect(new TextDecoder().decode(stableNodeIds(shifted))).toBe(fixed);
   });
 
   test('period labels in words', () => {

@@ -54,6 +54,8 @@ export function frame(description: string, width: number, height: number, theme:
 
 export function baseConfig(theme: Theme): Config {
   return {
+    // The chart as a whole is one image with a title and description (svg.ts), not a set of labelled marks.
+    aria: false,
     font: theme.font,
     background: 'white',
     view: {stroke: null},
