@@ -68,8 +68,8 @@ export async function build(request: BuildRequest, log: Logger): Promise<BuildSu
   let pdfSkipped: string | null = null;
   try {
     const analyses = await analyseAll(plan, data, {jobs: request.jobs, log});
-    const draft = assemble(plan, data, analyses, null);
-    const history = await loadHistory(plan.outDir, plan.id, periodLabel, toResults(draft), plan.thresholds.revisionPct);
+    const draft = () => toResults(assemble(plan, data, analyses, null));
+    const history = await loadHistory(plan.outDir, plan.id, periodLabel, plan.frequency, draft, plan.thresholds.revisionPct);
     report = assemble(plan, data, analyses, history);
     html = plan.formats.includes('html') || wantPdf ? await renderHtml(report) : null;
     if (wantPdf && html) {

@@ -4,6 +4,7 @@ import {join} from 'node:path';
 import type {Report} from '../render/types.js';
 import {resultsJsonChunks} from '../render/results.js';
 import {InputError} from '../errors.js';
+import {headlinesJson} from './headlines.js';
 import {buildManifest} from './manifest.js';
 import {recoverPackDir} from './recover.js';
 import {writeIndex} from './writeIndex.js';
@@ -36,7 +37,7 @@ export interface ArchiveArgs {
 
 /**
  * Write one period's folder `<outDir>/<pack-id>/<period>/` (report.html, report.pdf, results.json,
- * exports/, manifest.json), then regenerate the pack's index.html.
+ * headlines.json, exports/, manifest.json), then regenerate the pack's index.html.
  *
  * Crash safety: everything is written into a hidden sibling `.<period>.tmp-<pid>` and renamed into
  * place in one step, so the period folder is always either absent, the previous complete folder, or
@@ -68,6 +69,7 @@ export async function archive(args: ArchiveArgs): Promise<{folder: string; outpu
   if (args.html !== null) files.push({path: 'report.html', content: args.html});
   if (args.pdf !== null) files.push({path: 'report.pdf', content: args.pdf});
   const reportFiles = files.length;
+  files.push({path: 'headlines.json', content: headlinesJson(report)});
   for (const e of [...args.exports].sort((a, b) => (a.name < b.name ? -1 : a.name > b.name ? 1 : 0))) {
     files.push({path: `exports/${e.name}`, content: e.content});
   }
@@ -109,7 +111,7 @@ export async function archive(args: ArchiveArgs): Promise<{folder: string; outpu
   }
   await writeIndex(args.outDir, report.plan.id);
   await step('done');
-  // Listed in the order report files, results.json, exports, manifest.
+  // Listed in the order report files, results.json, headlines, exports, manifest.
   const paths = files.map((f) => f.path);
   paths.splice(reportFiles, 0, 'results.json');
   return {folder, outputs: paths.map((p) => join(folder, p))};

@@ -1,7 +1,7 @@
 import {readFile} from 'node:fs/promises';
 import {join} from 'node:path';
-import {frequencyOf, parseResults} from '../render/results.js';
-import {parsePeriod} from '../time/period.js';
+import {parseResults} from '../render/results.js';
+import {parsePeriod, type Frequency} from '../time/period.js';
 import type {History} from './types.js';
 import {revisions, type ResultsLike} from './revisions.js';
 import {summariseTracking, trackForecasts} from './tracking.js';
@@ -28,9 +28,10 @@ export function buildHistory(
 }
 
 /**
- * Read the archived packs of `packId` older than `period` and compare them with `current`, the
+ * Read the archived packs of `packId` older than `period` and compare them with `current()`, the
  * results of this run built without history (the analyse stage needs History before the report is
- * rendered, so this works from results alone). Returns null when no earlier period is archived.
+ * rendered, so this works from results alone). Returns null when no earlier period is archived, without
+ * calling `current` (building the results of a large pack costs time and memory).
  *
  * Period folders whose name is not a period of the pack's frequency, or that hold no results.json,
  * are ignored. An unreadable results.json throws the {@link parseResults} InputError naming the file.
@@ -39,10 +40,10 @@ export async function loadHistory(
   outDir: string,
   packId: string,
   period: string,
-  current: ResultsLike,
+  freq: Frequency,
+  current: () => ResultsLike,
   thresholdPct: number,
 ): Promise<History | null> {
-  const freq = frequencyOf(current.pack.frequency);
   const now = parsePeriod(freq, period);
   if (now === undefined) throw new RangeError(`invalid period: ${period}`);
   const packDir = join(outDir, packId);
@@ -61,5 +62,5 @@ export async function loadHistory(
     earlier.push(parseResults(text, file));
   }
   if (earlier.length === 0) return null;
-  return buildHistory(earlier[earlier.length - 1], earlier, current, thresholdPct);
+  return buildHistory(earlier[earlier.length - 1], earlier, current(), thresholdPct);
 }

@@ -1,25 +1,17 @@
 import {frequencyOf} from '../render/results.js';
 import {parsePeriod, periodLabel} from '../time/period.js';
 import {escapeHtml} from './escapeHtml.js';
+import type {Headlines} from './headlines.js';
 import {unreadableResults} from './messages.js';
 
-/** The parts of a results.json the index shows (a full `ResultsV1` fits). */
-export interface Headlines {
-  pack: {title: string; locale: string; frequency: 12 | 4 | 52};
-  series: {
-    label: string;
-    unit: string | null;
-    hidden: boolean;
-    original: (number | null)[];
-    changes: {yearOnYear: number | null};
-  }[];
-}
+/** At most this many series are listed per period; a line says how many more the report has. */
+const MAX_ROWS = 50;
 
 /** One archived period as the index page shows it. */
 export interface IndexEntry {
   /** Folder name, the canonical period label (`2026-10`). */
   folder: string;
-  /** Its results.json, or null when missing or unreadable. */
+  /** Its headline figures, or null when missing or unreadable. */
   results: Headlines | null;
   /** Files present in the folder (top level), to decide which links to show. */
   files: string[];
@@ -42,8 +34,8 @@ th{text-align:left;font-weight:600}td,th.num{text-align:right}td{font-variant-nu
 
 /**
  * The archive's index.html: every archived period of one pack, newest first, with links to its files
- * and headline figures from its results.json (each visible series' value in the review period and its
- * year-on-year change). Self-contained (inline CSS, no script, no external resource); every text from
+ * and headline figures (each visible series' value in the review period and its year-on-year change, for the
+ * first 50 visible series). Self-contained (inline CSS, no script, no external resource); every text from
  * a pack or a folder name is escaped; no clock values, so the same archive gives the same bytes.
  *
  * Complexity: O(periods × series).
@@ -90,12 +82,12 @@ ${body}
 
 function table(r: Headlines): string {
   const locale = safeLocale(r.pack.locale);
-  const rows = r.series
-    .filter((s) => !s.hidden)
+  const visible = r.series.filter((s) => !s.hidden);
+  const rows = visible
+    .slice(0, MAX_ROWS)
     .map((s) => {
-      const latest = s.original.length > 0 ? s.original[s.original.length - 1] : null;
       const unit = s.unit === null ? '' : ` ${s.unit}`;
-      const cells = [value(latest, locale) + (latest === null ? '' : unit), percent(s.changes.yearOnYear, locale)];
+      const cells = [value(s.latest, locale) + (s.latest === null ? '' : unit), percent(s.yearOnYear, locale)];
       const tds = cells.map((c) => `<td>${escapeHtml(c)}</td>`).join('');
       return `<tr><th scope="row">${escapeHtml(s.label)}</th>${tds}</tr>`;
     })
@@ -105,7 +97,13 @@ function table(r: Headlines): string {
 <tbody>
 ${rows}
 </tbody>
-</table>`;
+</table>${more(visible.length - MAX_ROWS, locale)}`;
+}
+
+function more(count: number, locale: string): string {
+  if (count <= 0) return '';
+  const n = new Intl.NumberFormat(locale).format(count);
+  return `\n<p class="muted">and ${n} more series.</p>`;
 }
 
 /** Whole numbers from 100 up, else up to two decimals; a dash when missing. */

@@ -34,6 +34,7 @@ describe('archive', () => {
     expect(await listFiles(folder)).toEqual([
       'exports/series.csv',
       'exports/tables.xlsx',
+      'headlines.json',
       'manifest.json',
       'report.html',
       'report.pdf',
@@ -93,7 +94,7 @@ describe('archive', () => {
     await archive(args(out, oct(), {force: true, html: '<p>second</p>', pdf: null, exports: []}));
     const folder = join(out, 'harbourline-monthly', '2026-10');
     expect(await readFile(join(folder, 'report.html'), 'utf8')).toBe('<p>second</p>');
-    expect(await listFiles(folder)).toEqual(['manifest.json', 'report.html', 'results.json']);
+    expect(await listFiles(folder)).toEqual(['headlines.json', 'manifest.json', 'report.html', 'results.json']);
     expect(await readdir(join(out, 'harbourline-monthly'))).toEqual(['2026-10', 'index.html']);
   });
 

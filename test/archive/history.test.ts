@@ -27,7 +27,10 @@ describe('loadHistory', () => {
   it('is null when no earlier period is archived', async () => {
     const out = await tempDir();
     await archiveMonth(out, 11);
-    expect(await loadHistory(out, packId, '2026-11', toResults(report(2026, 11, [{id: 'net-sales'}])), 1)).toBeNull();
+    const current = () => {
+      throw new Error('not needed without an earlier period');
+    };
+    expect(await loadHistory(out, packId, '2026-11', 'monthly', current, 1)).toBeNull();
   });
 
   it('compares with the latest earlier period, tracks forecasts of every earlier one (hand-checked)', async () => {
@@ -35,7 +38,7 @@ describe('loadHistory', () => {
     for (const month of [8, 9, 10, 11, 12]) await archiveMonth(out, month);
     await mkdir(join(out, packId, 'notes'));
     const current = toResults(report(2026, 11, [{id: 'net-sales'}]));
-    const h = (await loadHistory(out, packId, '2026-11', current, 1))!;
+    const h = (await loadHistory(out, packId, '2026-11', 'monthly', () => current, 1))!;
     // The fixture puts y = 100 + 0.5·t + seasonal with t counted from each pack's own start (48 months
     // back), so a pack ending at e forecasts period p as 100 + 0.5·(p − e + 47) + s(p) while the 2026-11
     // pack has 100 + 0.5·(p − 2026-11 + 47) + s(p): error = 0.5·(e − 2026-11).
@@ -70,7 +73,7 @@ describe('loadHistory', () => {
     const file = join(out, packId, '2026-09', 'results.json');
     await writeFile(file, '{"schema": "ebbflow/results/v1", "pack": {}}');
     const current = toResults(report(2026, 10, [{id: 'net-sales'}]));
-    const error = await loadHistory(out, packId, '2026-10', current, 1).catch((e: unknown) => e);
+    const error = await loadHistory(out, packId, '2026-10', 'monthly', () => current, 1).catch((e: unknown) => e);
     expect(error).toBeInstanceOf(InputError);
     expect((error as Error).message.startsWith(`${file}: unreadable results file: pack.id: `)).toBe(true);
   });
@@ -78,6 +81,6 @@ describe('loadHistory', () => {
   it('rejects a period label that does not match the pack frequency', async () => {
     const current = toResults(report(2026, 10, [{id: 'net-sales'}]));
     const out = await tempDir();
-    await expect(loadHistory(out, packId, '2026-Q3', current, 1)).rejects.toThrow(/invalid period: 2026-Q3/);
+    await expect(loadHistory(out, packId, '2026-Q3', 'monthly', () => current, 1)).rejects.toThrow(/invalid period: 2026-Q3/);
   });
 });

@@ -1,10 +1,11 @@
 import {describe, expect, it} from 'vitest';
-import {mkdir, readFile} from 'node:fs/promises';
+import {mkdir, readFile, rm, writeFile} from 'node:fs/promises';
 import {join} from 'node:path';
 import {archive} from '../../src/archive/archive.js';
 import {writeIndex} from '../../src/archive/writeIndex.js';
 import {renderIndex} from '../../src/archive/indexPage.js';
-import {toResults} from '../../src/render/results.js';
+import {headlinesFromResults, headlinesJson, headlinesOf} from '../../src/archive/headlines.js';
+import {resultsJson} from '../../src/render/results.js';
 import {report} from './fixtures/report.js';
 import {tempDir} from './helpers.js';
 
@@ -43,7 +44,7 @@ describe('index.html', () => {
   });
 
   it('shows the review-period value with its unit and the year-on-year change in the pack locale', () => {
-    const r = toResults(report(2026, 10, [{id: 'net-sales', label: 'Net sales'}], {locale: 'de-DE'}));
+    const r = headlinesOf(report(2026, 10, [{id: 'net-sales', label: 'Net sales'}], {locale: 'de-DE'}));
     // Latest value of the fixture: 100 + 0.5·47 + 10·sin(2π·(2026·12 + 9)/12) = 123.5 + 10·sin(1.5π) = 113.5
     // → "114" (whole numbers from 100 up); year-on-year 6.1 → "+6,1%" in German.
     const html = renderIndex('harbourline-monthly', [{folder: '2026-10', results: r, files: ['results.json']}]);
@@ -52,8 +53,42 @@ describe('index.html', () => {
   });
 
   it('is the same bytes for the same archive', () => {
-    const r = toResults(report(2026, 10, [{id: 'net-sales'}]));
+    const r = headlinesOf(report(2026, 10, [{id: 'net-sales'}]));
     const entries = [{folder: '2026-10', results: r, files: ['report.html', 'results.json']}];
     expect(renderIndex('p', entries)).toBe(renderIndex('p', entries));
+  });
+
+  it('reads headlines.json, not results.json, and gives the same figures as results.json would', async () => {
+    const out = await tempDir();
+    const rep = report(2026, 10, [{id: 'net-sales', label: 'Net sales'}]);
+    await archive({report: rep, html: null, pdf: null, exports: [], outDir: out, force: false, packYaml: '', warnings: []});
+    const dir = join(out, 'harbourline-monthly', '2026-10');
+    expect(await readFile(join(dir, 'headlines.json'), 'utf8')).toBe(headlinesJson(rep));
+    expect(headlinesFromResults(resultsJson(rep))).toEqual(headlinesOf(rep));
+    const before = await readFile(join(out, 'harbourline-monthly', 'index.html'), 'utf8');
+    // A broken results.json does not matter to the index while headlines.json is there.
+    await writeFile(join(dir, 'results.json'), 'not json');
+    await writeIndex(out, 'harbourline-monthly');
+    expect(await readFile(join(out, 'harbourline-monthly', 'index.html'), 'utf8')).toBe(before);
+    expect(before).toContain('<th scope="row">Net sales</th>');
+  });
+
+  it('falls back to results.json for a folder archived before headlines.json existed', async () => {
+    const out = await tempDir();
+    const rep = report(2026, 10, [{id: 'net-sales', label: 'Net sales'}]);
+    await archive({report: rep, html: null, pdf: null, exports: [], outDir: out, force: false, packYaml: '', warnings: []});
+    const before = await readFile(join(out, 'harbourline-monthly', 'index.html'), 'utf8');
+    await rm(join(out, 'harbourline-monthly', '2026-10', 'headlines.json'));
+    await writeIndex(out, 'harbourline-monthly');
+    expect(await readFile(join(out, 'harbourline-monthly', 'index.html'), 'utf8')).toBe(before);
+  });
+
+  it('lists at most 50 visible series per period and says how many more there are', () => {
+    const specs = Array.from({length: 1234}, (_, i) => ({id: `s${i}`, label: `Series ${i}`}));
+    const html = renderIndex('p', [{folder: '2026-10', results: headlinesOf(report(2026, 10, specs)), files: []}]);
+    expect(html.match(/<tr><th scope="row">/g)).toHaveLength(50);
+    expect(html).toContain('Series 49<');
+    expect(html).not.toContain('Series 50<');
+    expect(html).toContain('<p class="muted">and 1,184 more series.</p>');
   });
 });

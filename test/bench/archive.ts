@@ -61,7 +61,7 @@ export async function run(): Promise<void> {
       indexMs.push(t1());
       const current = toResults(report(2027, 1, specs));
       const t2 = start();
-      await loadHistory(out, 'harbourline-monthly', '2027-01', current, 1);
+      await loadHistory(out, 'harbourline-monthly', '2027-01', 'monthly', () => current, 1);
       historyMs.push(t2());
     } finally {
       await rm(out, {recursive: true, force: true});
