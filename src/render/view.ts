@@ -62,6 +62,8 @@ export interface FigureSlot {
   chart: ChartJob;
   /** Filled by html.ts with the drawn SVG. */
   svg: unknown;
+  /** Filled by html.ts: the chart's title and description, read out in place of the drawing. */
+  alt?: string;
 }
 
 export interface KeyFigure {

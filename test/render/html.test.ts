@@ -39,11 +39,12 @@ describe('renderHtml', () => {
     expect(html).not.toMatch(/\s(src|href)="(https?:|file:|\/\/)/i);
   });
 
-  test('every chart is a figure with a caption and an accessible svg', () => {
+  test('every chart is a figure with a caption and one named image, its drawing hidden from assistive technology', () => {
     const figures = html.match(/<figure class="fig fig-(full|half)" id="chart-[^"]+">/g) ?? [];
     expect(figures.length).toBeGreaterThan(6);
     expect(html.match(/<figcaption>/g)?.length).toBe(figures.length);
-    expect(html.match(/<svg [^>]*role="img" aria-labelledby="chart-/g)?.length).toBe(figures.length);
+    expect(html.match(/<div class="fig-chart" role="img" aria-label="[^"]+\. [^"]+"><svg aria-hidden="true" /g)?.length).toBe(figures.length);
+    expect(html).not.toMatch(/<svg [^>]*aria-labelledby/);
   });
 
   test('callouts link to their chart when it exists', () => {
