@@ -14,6 +14,9 @@ import {seasonalAdjustment, type SeasonalAdjustment} from './seasonalAdjustment.
  * forecasting, IJF 16, 521–530; R. J. Hyndman and B. Billah (2003), Unmasking the Theta method, IJF 19,
  * 287–290; the same steps as R's forecast::thetaf (equal within 1e-6, see the tests).
  *
+ * `adjust` replaces the classical seasonal adjustment (the combinations use robust STL, see
+ * stlSeasonalAdjustment.ts).
+ *
  * Complexity: O(E·n) for the SES fit. NaN policy: rejects NaN.
  */
 export interface ThetaFit {
@@ -30,9 +33,12 @@ export interface ThetaFit {
   residuals: Float64Array;
 }
 
-export function fitTheta(values: Float64Array, {period}: {period: number}): ThetaFit {
+export function fitTheta(
+  values: Float64Array,
+  {period, adjust = seasonalAdjustment}: {period: number; adjust?: (values: Float64Array, period: number) => SeasonalAdjustment},
+): ThetaFit {
   const n = values.length;
-  const sa = seasonalAdjustment(values, period);
+  const sa = adjust(values, period);
   const x = sa.adjusted;
   const ses = fitEts(x, {error: 'A', trend: 'N', damped: false, season: 'N', period: 1}, {optCrit: 'mse'});
   if (!ses) throw new RangeError('theta needs at least four values');
