@@ -650,6 +650,13 @@ function params(options: Record<string, unknown>): string {
   return parts.length > 0 ? parts.join(', ') : 'defaults';
 }
 
+/** The ETS models a forecast averaged, with their Akaike weights, when it averaged more than one. */
+function etsModels(options: Record<string, unknown>): {model: string; weight: number}[] | null {
+  const ets = (options.ets ?? options) as {models?: unknown};
+  const models = Array.isArray(ets.models) ? (ets.models as {model: string; weight: number}[]) : null;
+  return models && models.length > 1 ? models : null;
+}
+
 function methodsView(s: ReportSeries, f: Formatter): MethodsView {
   const a = s.analysis;
   const items: KeyFigure[] = [];
@@ -696,6 +703,8 @@ function methodsView(s: ReportSeries, f: Formatter): MethodsView {
   const fc = a.forecast;
   if (fc) {
     items.push({label: 'Forecast model', value: `${fc.method}; ${params(fc.options)}`});
+    const weighted = etsModels(fc.options);
+    if (weighted) items.push({label: 'ETS models and weights', value: weighted.map((m) => `${m.model} ${f.share(m.weight * 100)}`).join(', ')});
     items.push({label: 'Back-test', value: accuracyWords(fc.backtest, f) ?? 'not run (too little data)'});
   } else {
     items.push({label: 'Forecast model', value: 'none'});

@@ -65,4 +65,14 @@ describe('demo pack, end to end', () => {
     }
     expect(html).not.toMatch(/<script/i);
   });
+
+  it('lists the averaged ETS models with their Akaike weights in the methods appendix', () => {
+    const models = results.series[0].forecast.options.ets.models as {model: string; weight: number}[];
+    expect(models.reduce((a, m) => a + m.weight, 0)).toBeCloseTo(1, 12);
+    const html = readFileSync(join(folder, 'report.html'), 'utf8');
+    if (models.length > 1) {
+      const line = models.map((m) => `${m.model} ${Math.round(m.weight * 100)}%`).join(', ');
+      expect(html).toContain(line);
+    }
+  });
 });

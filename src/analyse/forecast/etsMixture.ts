@@ -7,7 +7,7 @@ import type {Forecast, ForecastOptions} from './model.js';
  * Forecasts of several fitted ETS models averaged with given weights (Akaike weights, see akaikeWeights.ts):
  * the weighted mean of the point forecasts and, per level, the weighted mean of the lower and of the upper
  * bounds (quantile averaging, as for the other combinations). With one model this is that model's forecast.
- * The label lists the models with their weights in percent.
+ * The label counts the models (`ETS (3 models, Akaike-weighted)`); the caller keeps the list with the weights.
  *
  * Reference: Kolassa (2011), IJF 27, 238–251 (Akaike-weighted exponential smoothing); Lichtendahl,
  * Grushka-Cockayne & Winkler (2013) for quantile averaging.
@@ -38,8 +38,7 @@ export function forecastEtsMixture(fits: EtsFit[], weights: Float64Array, option
       }
     }
   });
-  const parts = members.map(({fit, w}) => `${fit.method} ${Math.round(100 * w)}%`).join(', ');
-  return {method: `Akaike-weighted ETS (${parts})`, mean, levels, lower, upper};
+  return {method: `ETS (${members.length} models, Akaike-weighted)`, mean, levels, lower, upper};
 }
 
 /**

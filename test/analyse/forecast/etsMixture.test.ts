@@ -14,7 +14,7 @@ const fits = [
 ];
 
 describe('forecastEtsMixture', () => {
-  it('averages the members’ point forecasts and bounds by weight, and names them', () => {
+  it('averages the members’ point forecasts and bounds by weight, and counts them in its name', () => {
     const w = Float64Array.of(0.7, 0.3);
     const mix = forecastEtsMixture(fits, w, {h: 8, levels: [80, 95]});
     const [a, b] = fits.map((f) => forecastEts(f, {h: 8, levels: [80, 95]}));
@@ -23,7 +23,7 @@ describe('forecastEtsMixture', () => {
       expect(mix.lower.get(95)![i]).toBeCloseTo(0.7 * a.lower.get(95)![i] + 0.3 * b.lower.get(95)![i], 9);
       expect(mix.upper.get(80)![i]).toBeCloseTo(0.7 * a.upper.get(80)![i] + 0.3 * b.upper.get(80)![i], 9);
     }
-    expect(mix.method).toBe('Akaike-weighted ETS (ETS(M,A,M) 70%, ETS(M,Ad,M) 30%)');
+    expect(mix.method).toBe('ETS (2 models, Akaike-weighted)');
   });
 
   it('is the single model’s forecast when only one has weight', () => {

@@ -59,7 +59,7 @@ describe('forecastSeries', () => {
   it('forecasts auto as Akaike-weighted ETS with Theta on STL-adjusted data and back-tests it by refitting those ETS classes', () => {
     const r = forecastSeries(air, {frequency: 'monthly', options: opts({backtestOrigins: 6})});
     // R's ets picks ETS(M,Ad,M) for AirPassengers (test/reference/ets.json); it carries most of the weight.
-    expect(r.method).toMatch(/^Combination \(Akaike-weighted ETS \(ETS\(M,Ad,M\) \d+%(, ETS\([^)]+\) \d+%)+\), Theta on STL-adjusted data\)$/);
+    expect(r.method).toMatch(/^Combination \(ETS \(\d+ models, Akaike-weighted\), Theta on STL-adjusted data\)$/);
     const models = (r.options.ets as {models: {model: string; weight: number}[]}).models;
     expect(models[0].model).toBe('ETS(M,Ad,M)');
     expect(models.reduce((a, m) => a + m.weight, 0)).toBeCloseTo(1, 12);
