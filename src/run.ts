@@ -61,7 +61,8 @@ export async function build(request: BuildRequest, log: Logger): Promise<BuildSu
   const wantPdf = plan.formats.includes('pdf');
   // A browser of our own starts now, while the series are analysed, and is closed whatever happens next.
   // Settled at once into a value or an error, so a failed launch cannot go unhandled while the analysis runs.
-  const ownBrowser = wantPdf && !request.browser ? settle(import('./render/pdf.js').then((m) => m.openBrowser(plan.browser))) : null;
+  const launch = async () => (await import('./render/pdf.js')).openBrowser(plan.browser);
+  const ownBrowser = wantPdf && !request.browser ? settle(launch()) : null;
   let html: string | null;
   let report: Report;
   let pdf: Uint8Array | null = null;
@@ -69,10 +70,12 @@ export async function build(request: BuildRequest, log: Logger): Promise<BuildSu
   try {
     const analyses = await analyseAll(plan, data, {jobs: request.jobs, log});
     const draft = () => toResults(assemble(plan, data, analyses, null));
-    const history = await loadHistory(plan.outDir, plan.id, periodLabel, plan.frequency, draft, plan.thresholds.revisionPct);
+    const {revisionPct} = plan.thresholds;
+    const history = await loadHistory(plan.outDir, plan.id, periodLabel, plan.frequency, draft, revisionPct);
     report = assemble(plan, data, analyses, history);
     // The chart and browser libraries load only for packs that draw (about a second of start-up).
-    html = plan.formats.includes('html') || wantPdf ? await (await import('./render/html.js')).renderHtml(report) : null;
+    const draw = async () => (await import('./render/html.js')).renderHtml(report);
+    html = plan.formats.includes('html') || wantPdf ? await draw() : null;
     if (wantPdf && html) {
       const browser = request.browser ?? unwrap((await ownBrowser)!);
       if ('missing' in browser) pdfSkipped = browser.missing;

@@ -51,7 +51,13 @@ const headlinesFile = z.object({
   schema: z.literal(HEADLINES_SCHEMA),
   pack,
   series: z.array(
-    z.object({label: z.string(), unit: z.string().nullable(), hidden: z.boolean(), latest: numberOrNull, yearOnYear: numberOrNull}),
+    z.object({
+      label: z.string(),
+      unit: z.string().nullable(),
+      hidden: z.boolean(),
+      latest: numberOrNull,
+      yearOnYear: numberOrNull,
+    }),
   ),
 });
 

@@ -95,7 +95,8 @@ async function runBuild(given: string[], opts: BuildOptions, io: Io): Promise<nu
     for (const job of jobs) {
       let browser: PdfBrowser | {missing: string} | undefined;
       if (shareBrowser && job.plan.formats.includes('pdf')) {
-        browser = browsers.get(job.plan.browser) ?? (await (await import('../render/index.js')).openBrowser(job.plan.browser));
+        const open = async () => (await import('../render/index.js')).openBrowser(job.plan.browser);
+        browser = browsers.get(job.plan.browser) ?? (await open());
         browsers.set(job.plan.browser, browser);
       }
       const {packFile, period} = job;

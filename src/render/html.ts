@@ -25,18 +25,20 @@ export async function renderHtml(report: Report): Promise<string> {
   const view = buildView(report, inlineLogo(report.plan.branding.logo));
   const slots: FigureSlot[] = [...view.series.flatMap((s) => s.rows.flat()), ...(view.history?.chart ? [view.history.chart] : [])];
   for (const slot of slots) {
-    const description = typeof slot.chart.spec.description === 'string' ? slot.chart.spec.description : slot.chart.title;
-    const svg = await specToSvg(slot.chart.spec, {
+    const {title, spec} = slot.chart;
+    const description = typeof spec.description === 'string' ? spec.description : title;
+    const svg = await specToSvg(spec, {
       locale: view.lang,
       font: report.plan.branding.font,
       idPrefix: slot.chart.id,
-      title: slot.chart.title,
+      title,
       description,
     });
     // In the page the chart is one image named by its wrapper; the drawing itself is hidden from assistive
     // technology, which also keeps the tagged PDF from describing every tick and line (about 15% of its time).
-    slot.svg = new Handlebars.SafeString(svg.replace(/^<svg ([^>]*?) role="img" aria-labelledby="[^"]*"/, '<svg aria-hidden="true" $1'));
-    slot.alt = `${slot.chart.title}. ${description}`;
+    const hidden = svg.replace(/^<svg ([^>]*?) role="img" aria-labelledby="[^"]*"/, '<svg aria-hidden="true" $1');
+    slot.svg = new Handlebars.SafeString(hidden);
+    slot.alt = `${title}. ${description}`;
   }
   const theme = themeFor(report.plan.branding.accent, report.plan.branding.font);
   const css = pageCss(report, theme) + files.css;

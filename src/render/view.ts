@@ -704,7 +704,10 @@ function methodsView(s: ReportSeries, f: Formatter): MethodsView {
   if (fc) {
     items.push({label: 'Forecast model', value: `${fc.method}; ${params(fc.options)}`});
     const weighted = etsModels(fc.options);
-    if (weighted) items.push({label: 'ETS models and weights', value: weighted.map((m) => `${m.model} ${f.share(m.weight * 100)}`).join(', ')});
+    if (weighted) {
+      const value = weighted.map((m) => `${m.model} ${f.share(m.weight * 100)}`).join(', ');
+      items.push({label: 'ETS models and weights', value});
+    }
     items.push({label: 'Back-test', value: accuracyWords(fc.backtest, f) ?? 'not run (too little data)'});
   } else {
     items.push({label: 'Forecast model', value: 'none'});

@@ -53,7 +53,8 @@ export function simulateEtsMixture(
   const exact = Array.from(weights, (w) => w * paths);
   const counts = exact.map(Math.floor);
   let left = paths - counts.reduce((a, b) => a + b, 0);
-  const order = exact.map((e, i) => i).sort((a, b) => exact[b] - Math.floor(exact[b]) - (exact[a] - Math.floor(exact[a])) || a - b);
+  const remainder = exact.map((e) => e - Math.floor(e));
+  const order = exact.map((_, i) => i).sort((a, b) => remainder[b] - remainder[a] || a - b);
   for (const i of order) {
     if (left <= 0) break;
     if (weights[i] > 0) {

@@ -34,8 +34,8 @@ import {fitTheta, forecastTheta, type ThetaFit} from './theta.js';
  * ETS, Theta and their combinations also give intervals for running totals of the forecasts (simulated ETS
  * sample paths, seeded; Theta's closed form), which the fiscal-year outturn uses.
  *
- * Complexity: dominated by automatic ETS (up to 15 fits; a back-test origin refits only the models kept). NaN policy: rejects NaN. Needs n ≥ 4 except for
- * the naive methods.
+ * Complexity: dominated by automatic ETS (up to 15 fits; a back-test origin refits only the models kept).
+ * NaN policy: rejects NaN. Needs n ≥ 4 except for the naive methods.
  */
 export type MethodName =
   | 'ets'
@@ -152,7 +152,9 @@ function runEts(
   const sa = period <= 24 ? null : seasonalAdjustment(values, period);
   const y = sa ? sa.adjusted : values;
   const positive = y.every((v) => v > 0);
-  const usable = (models ?? []).filter((m) => (m.spec.season === 'N' || seasonalOk) && (m.spec.error === 'A' || positive));
+  const usable = (models ?? []).filter(
+    (m) => (m.spec.season === 'N' || seasonalOk) && (m.spec.error === 'A' || positive),
+  );
   let fits = usable.flatMap((m) => {
     const warm = m.params && m.initialStates ? {start: {params: m.params, initialStates: m.initialStates}} : {};
     return fitEts(y, m.spec, m.params ? {...warm, maxEvaluations: WARM_EVALUATIONS} : warm) ?? [];

@@ -35,7 +35,10 @@ export interface ThetaFit {
 
 export function fitTheta(
   values: Float64Array,
-  {period, adjust = seasonalAdjustment}: {period: number; adjust?: (values: Float64Array, period: number) => SeasonalAdjustment},
+  {
+    period,
+    adjust = seasonalAdjustment,
+  }: {period: number; adjust?: (values: Float64Array, period: number) => SeasonalAdjustment},
 ): ThetaFit {
   const n = values.length;
   const sa = adjust(values, period);

@@ -25,14 +25,18 @@ describe('akaikeWeights', () => {
 
   it('sums to 1, favours smaller criteria and ignores a common shift (property)', () => {
     fc.assert(
-      fc.property(fc.array(fc.double({min: -1e4, max: 1e4, noNaN: true}), {minLength: 1, maxLength: 15}), fc.double({min: -1e3, max: 1e3, noNaN: true}), (c, shift) => {
-        const w = akaikeWeights(c);
-        expect(w.reduce((a, b) => a + b, 0)).toBeCloseTo(1, 12);
-        const best = c.indexOf(Math.min(...c));
-        expect(w[best]).toBe(Math.max(...w));
-        const shifted = akaikeWeights(c.map((v) => v + shift));
-        shifted.forEach((v, i) => expect(v).toBeCloseTo(w[i], 9));
-      }),
+      fc.property(
+        fc.array(fc.double({min: -1e4, max: 1e4, noNaN: true}), {minLength: 1, maxLength: 15}),
+        fc.double({min: -1e3, max: 1e3, noNaN: true}),
+        (c, shift) => {
+          const w = akaikeWeights(c);
+          expect(w.reduce((a, b) => a + b, 0)).toBeCloseTo(1, 12);
+          const best = c.indexOf(Math.min(...c));
+          expect(w[best]).toBe(Math.max(...w));
+          const shifted = akaikeWeights(c.map((v) => v + shift));
+          shifted.forEach((v, i) => expect(v).toBeCloseTo(w[i], 9));
+        },
+      ),
     );
   });
 });
