@@ -1,4 +1,9 @@
+import {mkdtempSync, rmSync, writeFileSync} from 'node:fs';
+import {availableParallelism, tmpdir} from 'node:os';
+import {join} from 'node:path';
 import {performance} from 'node:perf_hooks';
+import {main} from '../../src/cli/main.js';
+import {mulberry32} from '../../src/analyse/numeric/mulberry32.js';
 import {makeReport} from '../render/fixtures.js';
 import {buildView} from '../../src/render/view.js';
 import {specToSvg} from '../../src/render/svg.js';
@@ -6,7 +11,9 @@ import {openBrowser, renderHtml} from '../../src/render/index.js';
 
 /**
  * Render benchmark: a 50-series monthly fixture report (eight years each, with history) to HTML and PDF.
- * Prints milliseconds per chart (by chart kind), for the whole HTML, and per PDF page.
+ * Prints milliseconds per chart (by chart kind), for the whole HTML, and per PDF page; then the whole build of a
+ * 50-series pack (eight years of monthly data each) through the command line: read, analyse, narrate, HTML, PDF
+ * and archive, with --jobs at the core count.
  * Run after `npm run build`: `TZ=UTC node -e "import('./dist/test/bench/render.js').then((m) => m.run())"`.
  */
 export async function run(): Promise<void> {
@@ -52,6 +59,45 @@ export async function run(): Promise<void> {
     console.log(`pdf: ${ms.toFixed(0)} ms, ${pages} pages, ${(ms / Math.max(1, pages)).toFixed(0)} ms per page, ${(pdf.length / 1024).toFixed(0)} KiB`);
   } finally {
     await browser.close();
+  }
+  await wholePack();
+}
+
+/** `ebbflow build` of a generated 50-series monthly pack to HTML and PDF, timed from the command line call. */
+async function wholePack(): Promise<void> {
+  const dir = mkdtempSync(join(tmpdir(), 'ebbflow-render-'));
+  try {
+    const rng = mulberry32(42);
+    let csv = 'month,series,value\n';
+    for (let s = 0; s < 50; s++) {
+      const level = 100 + 900 * rng();
+      const growth = (rng() - 0.3) * 0.01;
+      const amp = 0.05 + 0.2 * rng();
+      for (let t = 0; t < 96; t++) {
+        const season = 1 + amp * Math.sin((2 * Math.PI * (t % 12)) / 12);
+        const v = level * (1 + growth) ** t * season * (1 + 0.03 * (rng() - 0.5));
+        csv += `${2018 + Math.floor(t / 12)}-${String((t % 12) + 1).padStart(2, '0')},Line ${s + 1},${v.toFixed(2)}\n`;
+      }
+    }
+    writeFileSync(join(dir, 'data.csv'), csv);
+    writeFileSync(
+      join(dir, 'pack.yaml'),
+      'pack: {title: Fifty lines, frequency: monthly, formats: [html, pdf]}\n' +
+        'sources: [{id: d, file: data.csv, layout: long, dateColumn: month, keyColumn: series, valueColumn: value}]\n' +
+        'series: [{fromSource: d}]\n',
+    );
+    const jobs = String(availableParallelism());
+    const quiet = {write: () => undefined};
+    const start = performance.now();
+    const code = await main(['build', join(dir, 'pack.yaml'), '--out', join(dir, 'out'), '--jobs', jobs], {
+      stdout: quiet,
+      stderr: quiet,
+    });
+    const seconds = (performance.now() - start) / 1000;
+    const failed = code === 0 ? '' : ` (exit ${code})`;
+    console.log(`whole pack, 50 series to HTML + PDF (--jobs ${jobs}): ${seconds.toFixed(1)} s${failed}`);
+  } finally {
+    rmSync(dir, {recursive: true, force: true});
   }
 }
 
