@@ -4,7 +4,8 @@ import type {Logger} from '../log.js';
 import {analyseSeries} from './analyse.js';
 import type {SeriesAnalysis, SeriesInput} from './types.js';
 
-const workerFile = new URL('./worker.js', import.meta.url);
+// CommonJS entry that imports worker.js (see workerEntry.cts for why).
+const workerFile = new URL('./workerEntry.cjs', import.meta.url);
 /** Worker threads need compiled JavaScript; under the TypeScript test runner everything runs in-process. */
 const compiled = import.meta.url.endsWith('.js');
 
@@ -27,8 +28,8 @@ export interface ProgressLogger extends Logger {
  * when jobs is 1, when there are fewer than 8 series, or when running from TypeScript sources. Results are the
  * same either way: `analyseSeries` is pure and the worker returns exactly its result.
  *
- * An error while analysing a series is rethrown naming the series (`series s12: …`), whichever path ran it; the
- * pool is shut down before the error leaves.
+ * An error while analysing a series is rethrown naming the series (`series s12: …`, the first in input order),
+ * whichever path ran it; the pool finishes its other tasks and is shut down before the error leaves.
  */
 export async function runPool(
   inputs: SeriesInput[],
@@ -49,18 +50,20 @@ export async function runPool(
   }
   const pool = new Piscina({filename: fileURLToPath(workerFile), minThreads: jobs, maxThreads: jobs});
   try {
-    return await Promise.all(
+    // Every task is let finish before the pool is shut down, even after a failure: shutting down with tasks in
+    // flight makes the pool throw an uncatchable "unexpected message" when their results arrive. Failures are
+    // rare (analyseSeries guards its engines), so the extra wait costs nothing in practice.
+    const settled = await Promise.allSettled(
       inputs.map(async (input) => {
-        let result: SeriesAnalysis;
-        try {
-          result = (await pool.run(input)) as SeriesAnalysis;
-        } catch (e) {
-          throw seriesError(input.id, e);
-        }
+        const result = (await pool.run(input)) as SeriesAnalysis;
         progress();
         return result;
       }),
     );
+    return settled.map((r, i) => {
+      if (r.status === 'rejected') throw seriesError(inputs[i].id, r.reason);
+      return r.value;
+    });
   } finally {
     await pool.destroy();
   }
