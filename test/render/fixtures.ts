@@ -241,7 +241,7 @@ export function makeReport(opts: FixtureOptions = {}): Report {
     return {plan, analysis, callouts};
   });
   const plan: Plan = {
-    packFile: '/packs/northwind/monthly-pack.yaml',
+    packFile: '/packs/harbourline/monthly-pack.yaml',
     id: 'monthly-pack',
     title: 'Harbourline Trading monthly review',
     subtitle: 'Sales, orders and staffing',
@@ -268,7 +268,7 @@ export function makeReport(opts: FixtureOptions = {}): Report {
     sources: [
       {
         id: 'trading',
-        file: '/packs/northwind/data/trading.csv',
+        file: '/packs/harbourline/data/trading.csv',
         layout: 'wide',
         dateColumn: 'month',
         keyColumn: null,
@@ -312,8 +312,8 @@ export function makeReport(opts: FixtureOptions = {}): Report {
     toolVersion: '0.1.0',
     series,
     callouts: series.flatMap((s) => s.callouts).sort((a, b) => b.rank - a.rank).slice(0, 5),
-    inputs: [{file: '/packs/northwind/data/trading.csv', sha256: 'ab'.repeat(32), bytes: 12345, rows: 96}],
-    notes: [{file: '/packs/northwind/data/trading.csv', line: 42, message: 'Blank value for col_1 in Apr 2021.'}],
+    inputs: [{file: '/packs/harbourline/data/trading.csv', sha256: 'ab'.repeat(32), bytes: 12345, rows: 96}],
+    notes: [{file: '/packs/harbourline/data/trading.csv', line: 42, message: 'Blank value for col_1 in Apr 2021.'}],
     history,
   };
 }

@@ -17,7 +17,7 @@ function hostile(): Report {
   report.series[1].plan.label = FORMULA;
   report.series[0].callouts[0].text = `Rose <script>alert(1)</script> & "quoted"`;
   report.plan.title = 'Title </style><script>x</script>';
-  report.notes.push({file: '/packs/northwind/data/trading.csv', line: 3, message: XSS});
+  report.notes.push({file: '/packs/harbourline/data/trading.csv', line: 3, message: XSS});
   return report;
 }
 
