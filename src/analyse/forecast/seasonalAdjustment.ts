@@ -23,24 +23,42 @@ export interface SeasonalAdjustment {
 
 export function seasonalAdjustment(values: Float64Array, period: number): SeasonalAdjustment {
   const n = values.length;
-  const none: SeasonalAdjustment = {
+  if (!Number.isInteger(period) || period <= 1 || n < 2 * period || !seasonalityTest(values, period)) {
+    return noSeasonalAdjustment(values);
+  }
+  const positive = values.every((v) => v > 0);
+  const kind = positive ? 'multiplicative' : 'additive';
+  const figure = classicalSeasonal(values, period, kind);
+  if (positive && figure.some((f) => !(Math.abs(f) >= 1e-10))) return noSeasonalAdjustment(values);
+  const adjusted = values.map((v, t) => (positive ? v / figure[t % period] : v - figure[t % period]));
+  const nextYear = Float64Array.from({length: period}, (_, i) => figure[(n - period + i) % period]);
+  return seasonalAdjustmentOf(kind, adjusted, nextYear);
+}
+
+/** The adjustment of a series found not seasonal: the series itself, factors of 1. */
+export function noSeasonalAdjustment(values: Float64Array): SeasonalAdjustment {
+  return {
     seasonal: false,
     kind: 'none',
     adjusted: values,
     ahead: (h) => new Float64Array(h).fill(1),
     restore: (path) => Float64Array.from(path),
   };
-  if (!Number.isInteger(period) || period <= 1 || n < 2 * period || !seasonalityTest(values, period)) return none;
-  const positive = values.every((v) => v > 0);
-  const kind = positive ? 'multiplicative' : 'additive';
-  const figure = classicalSeasonal(values, period, kind);
-  if (positive && figure.some((f) => !(Math.abs(f) >= 1e-10))) return none;
-  const adjusted = values.map((v, t) => (positive ? v / figure[t % period] : v - figure[t % period]));
-  const ahead = (h: number): Float64Array =>
-    Float64Array.from({length: h}, (_, i) => figure[(n - period + (i % period)) % period]);
+}
+
+/**
+ * A seasonal adjustment from the adjusted series and the seasonal figure of the next `nextYear.length` periods
+ * (factors when multiplicative, differences when additive), repeated for longer horizons.
+ */
+export function seasonalAdjustmentOf(
+  kind: 'multiplicative' | 'additive',
+  adjusted: Float64Array,
+  nextYear: Float64Array,
+): SeasonalAdjustment {
+  const ahead = (h: number): Float64Array => Float64Array.from({length: h}, (_, i) => nextYear[i % nextYear.length]);
   const restore = (path: Float64Array): Float64Array => {
     const f = ahead(path.length);
-    return path.map((v, i) => (positive ? v * f[i] : v + f[i]));
+    return path.map((v, i) => (kind === 'multiplicative' ? v * f[i] : v + f[i]));
   };
   return {seasonal: true, kind, adjusted, ahead, restore};
 }

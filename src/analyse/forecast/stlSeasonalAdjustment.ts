@@ -1,5 +1,5 @@
 import {stl} from '../decompose/stl.js';
-import type {SeasonalAdjustment} from './seasonalAdjustment.js';
+import {noSeasonalAdjustment, seasonalAdjustmentOf, type SeasonalAdjustment} from './seasonalAdjustment.js';
 import {seasonalityTest} from './seasonalityTest.js';
 
 /**
@@ -20,26 +20,16 @@ import {seasonalityTest} from './seasonalityTest.js';
  */
 export function stlSeasonalAdjustment(values: Float64Array, period: number): SeasonalAdjustment {
   const n = values.length;
-  const none: SeasonalAdjustment = {
-    seasonal: false,
-    kind: 'none',
-    adjusted: values,
-    ahead: (h) => new Float64Array(h).fill(1),
-    restore: (path) => Float64Array.from(path),
-  };
-  if (!Number.isInteger(period) || period <= 1 || n <= 2 * period || !seasonalityTest(values, period)) return none;
+  if (!Number.isInteger(period) || period <= 1 || n <= 2 * period || !seasonalityTest(values, period)) {
+    return noSeasonalAdjustment(values);
+  }
   const positive = values.every((v) => v > 0);
   const x = positive ? values.map(Math.log) : values;
   const {seasonal} = stl(x, {period, seasonalWindow: 13, robust: true});
   const adjusted = positive ? values.map((v, t) => v / Math.exp(seasonal[t])) : values.map((v, t) => v - seasonal[t]);
-  const ahead = (h: number): Float64Array =>
-    Float64Array.from({length: h}, (_, i) => {
-      const s = seasonal[n - period + (i % period)];
-      return positive ? Math.exp(s) : s;
-    });
-  const restore = (path: Float64Array): Float64Array => {
-    const f = ahead(path.length);
-    return path.map((v, i) => (positive ? v * f[i] : v + f[i]));
-  };
-  return {seasonal: true, kind: positive ? 'multiplicative' : 'additive', adjusted, ahead, restore};
+  const nextYear = Float64Array.from({length: period}, (_, i) => {
+    const s = seasonal[n - period + i];
+    return positive ? Math.exp(s) : s;
+  });
+  return seasonalAdjustmentOf(positive ? 'multiplicative' : 'additive', adjusted, nextYear);
 }
