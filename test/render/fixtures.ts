@@ -5,25 +5,15 @@ import type {Callout} from '../../src/narrate/types.js';
 import type {History} from '../../src/archive/types.js';
 import type {Report, ReportSeries} from '../../src/render/types.js';
 import {monthIndex, periodsPerYear, quarterIndex, type Frequency} from '../../src/time/period.js';
-import {analysisOptions} from '../fixtures/planDefaults.js';
+import {mulberry32} from '../../src/analyse/numeric/mulberry32.js';
+import {analysisOptions, defaultBranding, defaultThresholds} from '../fixtures/planDefaults.js';
+import {source} from '../ingest/plan.js';
 
 /**
  * Synthetic reports for render tests and the render benchmark. Values are a seeded trend + sine season +
  * noise; the decomposition-like arrays are built from the same parts, so charts look like real output.
  * They are drawing inputs only, not checks of any method.
  */
-
-/** Mulberry32: a small seeded generator, so fixtures are identical on every run. */
-function rng(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 export const options: AnalysisOptions = analysisOptions();
 
@@ -42,7 +32,7 @@ export interface FixtureOptions {
 }
 
 export function seriesAnalysis(id: string, frequency: Frequency, end: number, length: number, seed: number): SeriesAnalysis {
-  const rand = rng(seed);
+  const rand = mulberry32(seed);
   const p = periodsPerYear[frequency];
   const start = end - length + 1;
   const level = 800 + seed * 137;
@@ -253,32 +243,11 @@ export function makeReport(opts: FixtureOptions = {}): Report {
     formats: ['html', 'pdf'],
     locale: opts.locale ?? 'en-GB',
     fiscalYearStart: 1,
-    branding: {
-      logo: null,
-      accent: '#1d6f64',
-      font: 'Liberation Sans',
-      paper: 'A4',
-      orientation: 'portrait',
-      footer: 'Harbourline Trading · internal',
-      templates: null,
-    },
-    thresholds: {residualSigma: 3, revisionPct: 1},
+    branding: {...defaultBranding, footer: 'Harbourline Trading · internal'},
+    thresholds: {...defaultThresholds},
     outDir: '/tmp/out',
     browser: null,
-    sources: [
-      {
-        id: 'trading',
-        file: '/packs/harbourline/data/trading.csv',
-        layout: 'wide',
-        dateColumn: 'month',
-        keyColumn: null,
-        valueColumn: null,
-        delimiter: 'auto',
-        decimal: '.',
-        encoding: 'utf-8',
-        line: 5,
-      },
-    ],
+    sources: [source('trading', '/packs/harbourline/data/trading.csv', {line: 5})],
     series: series.map((s) => s.plan),
     groups: count >= 3 ? [{id: 'sales', title: 'Sales and orders', series: ['series-1', 'series-2']}] : [],
   };
