@@ -40,6 +40,15 @@ export function round(value: number | null): number | null {
   return value === null ? null : Number(value.toPrecision(6));
 }
 
+/** A thin ink rule at zero, the reference line of the charts of changes and deviations. */
+export function zeroRule(theme: Theme) {
+  return {
+    data: {values: [{}]},
+    mark: {type: 'rule' as const, color: theme.ink, strokeWidth: 0.8},
+    encoding: {y: {datum: 0}},
+  };
+}
+
 /** The top of every chart spec: schema, the accessible description, size fitted with its padding, our config. */
 export function frame(description: string, width: number, height: number, theme: Theme) {
   return {

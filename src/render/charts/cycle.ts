@@ -1,6 +1,6 @@
 import type {TopLevelSpec} from 'vega-lite';
 import type {TurningPoint} from '../../analyse/cycle/types.js';
-import {when, epoch, finite, round, timeX, utcTime, type ChartContext, frame} from './common.js';
+import {epoch, finite, frame, round, timeX, type ChartContext, utcTime, when, zeroRule} from './common.js';
 
 /** Deviation from long-run trend (percent) with dated turning points and the current phase. */
 export interface CycleInput {
@@ -50,7 +50,7 @@ export function cycleChart(input: CycleInput, ctx: ChartContext): TopLevelSpec {
         },
       },
       {data: {values}, mark: {type: 'line', color: theme.deep, strokeWidth: 1.6}, encoding: {x: utcTime(), y: {field: 'v', type: 'quantitative'}}},
-      {data: {values: [{}]}, mark: {type: 'rule', color: theme.ink, strokeWidth: 0.8}, encoding: {y: {datum: 0}}},
+      zeroRule(theme),
       ...when(turns.length > 0, {
         data: {values: turns},
         mark: {type: 'point', size: 60, strokeWidth: 1.3, opacity: 1, color: theme.contrast},

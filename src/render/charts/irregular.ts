@@ -1,6 +1,6 @@
 import type {TopLevelSpec} from 'vega-lite';
 import type {Outlier} from '../../analyse/decompose/types.js';
-import {when, epoch, finite, round, timeX, utcTime, type ChartContext, frame} from './common.js';
+import {epoch, finite, frame, round, timeX, type ChartContext, utcTime, when, zeroRule} from './common.js';
 
 /** Irregular component with the flagged points. */
 export interface IrregularInput {
@@ -57,7 +57,7 @@ export function irregularChart(input: IrregularInput, ctx: ChartContext): TopLev
           y2: {datum: 0},
         },
       },
-      {data: {values: [{}]}, mark: {type: 'rule', color: theme.ink, strokeWidth: 0.8}, encoding: {y: {datum: 0}}},
+      zeroRule(theme),
       ...when(flagged.length > 0, {
         data: {values: flagged},
         layer: [

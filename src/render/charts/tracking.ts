@@ -1,5 +1,5 @@
 import type {TopLevelSpec} from 'vega-lite';
-import {epoch, round, timeX, type ChartContext, frame} from './common.js';
+import {epoch, frame, round, timeX, type ChartContext, zeroRule} from './common.js';
 
 /** Published forecasts set against the actuals that arrived since. */
 export interface TrackingPoint {
@@ -41,7 +41,7 @@ export function trackingChart(input: TrackingInput, ctx: ChartContext): TopLevel
   return {
     ...frame(input.description, ctx.width, ctx.height, theme),
     layer: [
-      {data: {values: [{}]}, mark: {type: 'rule', color: theme.ink, strokeWidth: 0.8}, encoding: {y: {datum: 0}}},
+      zeroRule(theme),
       {
         data: {values},
         mark: {type: 'point', size: 50, strokeWidth: 1.4, color: theme.accent},
