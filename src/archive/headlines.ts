@@ -46,19 +46,13 @@ const pack = z.object({
   frequency: z.union([z.literal(12), z.literal(4), z.literal(52)]),
 });
 const numberOrNull = z.number().nullable();
+/** What a series is called and whether it is shown, the same in both files. */
+const seriesName = z.object({label: z.string(), unit: z.string().nullable(), hidden: z.boolean()});
 
 const headlinesFile = z.object({
   schema: z.literal(HEADLINES_SCHEMA),
   pack,
-  series: z.array(
-    z.object({
-      label: z.string(),
-      unit: z.string().nullable(),
-      hidden: z.boolean(),
-      latest: numberOrNull,
-      yearOnYear: numberOrNull,
-    }),
-  ),
+  series: z.array(seriesName.extend({latest: numberOrNull, yearOnYear: numberOrNull})),
 });
 
 /** Just the results.json fields the headlines come from, for folders archived before headlines.json existed. */
@@ -66,13 +60,7 @@ const resultsFile = z.object({
   schema: z.literal(RESULTS_SCHEMA),
   pack,
   series: z.array(
-    z.object({
-      label: z.string(),
-      unit: z.string().nullable(),
-      hidden: z.boolean(),
-      original: z.array(numberOrNull),
-      changes: z.object({yearOnYear: numberOrNull}),
-    }),
+    seriesName.extend({original: z.array(numberOrNull), changes: z.object({yearOnYear: numberOrNull})}),
   ),
 });
 
