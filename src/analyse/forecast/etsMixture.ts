@@ -1,3 +1,4 @@
+import {averageForecasts} from './averageForecasts.js';
 import type {EtsFit} from './etsFit.js';
 import {forecastEts} from './etsForecast.js';
 import {simulateEts} from './etsSimulate.js';
@@ -19,26 +20,8 @@ export function forecastEtsMixture(fits: EtsFit[], weights: Float64Array, option
   if (members.length === 0) throw new RangeError('no ETS model with a positive weight');
   const forecasts = members.map(({fit}) => forecastEts(fit, options));
   if (members.length === 1) return forecasts[0];
-  const {h} = options;
-  const levels = forecasts[0].levels;
-  const mean = new Float64Array(h);
-  const lower = new Map(levels.map((l) => [l, new Float64Array(h)]));
-  const upper = new Map(levels.map((l) => [l, new Float64Array(h)]));
-  forecasts.forEach((f, k) => {
-    const w = members[k].w;
-    for (let i = 0; i < h; i++) mean[i] += w * f.mean[i];
-    for (const l of levels) {
-      const lo = lower.get(l)!;
-      const hi = upper.get(l)!;
-      const flo = f.lower.get(l)!;
-      const fhi = f.upper.get(l)!;
-      for (let i = 0; i < h; i++) {
-        lo[i] += w * flo[i];
-        hi[i] += w * fhi[i];
-      }
-    }
-  });
-  return {method: `ETS (${members.length} models, Akaike-weighted)`, mean, levels, lower, upper};
+  const label = `ETS (${members.length} models, Akaike-weighted)`;
+  return averageForecasts(forecasts, label, {}, members.map(({w}) => w));
 }
 
 /**
