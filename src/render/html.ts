@@ -33,11 +33,11 @@ export async function renderHtml(report: Report): Promise<string> {
       idPrefix: slot.chart.id,
       title,
       description,
+      // In the page the chart is one image named by its wrapper; the drawing itself is hidden from assistive
+      // technology, which also keeps the tagged PDF from describing every tick and line (about 15% of its time).
+      hidden: true,
     });
-    // In the page the chart is one image named by its wrapper; the drawing itself is hidden from assistive
-    // technology, which also keeps the tagged PDF from describing every tick and line (about 15% of its time).
-    const hidden = svg.replace(/^<svg ([^>]*?) role="img" aria-labelledby="[^"]*"/, '<svg aria-hidden="true" $1');
-    slot.svg = new Handlebars.SafeString(hidden);
+    slot.svg = new Handlebars.SafeString(svg);
     slot.alt = `${title}. ${description}`;
   }
   const theme = themeFor(report.plan.branding.accent, report.plan.branding.font);

@@ -24,6 +24,11 @@ export interface SvgOptions {
   /** Accessible title and longer description embedded as `<title>`/`<desc>`. */
   title: string;
   description: string;
+  /**
+   * Hide the drawing from assistive technology (`aria-hidden`), for a page that names the chart on its wrapper.
+   * Default: false (the SVG is an image labelled by its own title and description).
+   */
+  hidden?: boolean;
 }
 
 interface VegaScenegraphMetrics {
@@ -162,7 +167,11 @@ function finishSvg(svg: string, options: SvgOptions): string {
   const head = open[0]
     .replace(/\swidth="[^"]*"/, '')
     .replace(/\sheight="[^"]*"/, '')
-    .replace(/>$/, ` role="img" aria-labelledby="${prefix}-title ${prefix}-desc" preserveAspectRatio="xMidYMid meet">`);
+    .replace(/^<svg /, options.hidden ? '<svg aria-hidden="true" ' : '<svg ')
+    .replace(
+      />$/,
+      `${options.hidden ? '' : ` role="img" aria-labelledby="${prefix}-title ${prefix}-desc"`} preserveAspectRatio="xMidYMid meet">`,
+    );
   return (
     head +
     `<title id="${prefix}-title">${escapeXml(options.title)}</title>` +

@@ -58,6 +58,9 @@ describe('specToSvg', () => {
     // One image to assistive technology and the PDF tags: no roles, classes or pointer events inside it.
     expect(svg.match(/ role="/g)).toHaveLength(1);
     expect(svg).not.toMatch(/ (class|pointer-events|aria-roledescription)="/);
+    const hidden = await specToSvg(spec, {...options, hidden: true});
+    expect(hidden).toMatch(/^<svg aria-hidden="true" /);
+    expect(hidden).not.toContain(' role="');
   });
 
   test('external data is refused', async () => {
