@@ -149,7 +149,7 @@ export interface AnalysisOptions {
   };
   outliers: {enabled: boolean};
   forecast: {
-    method: 'auto' | 'ets' | 'theta' | 'seasonal-naive' | 'combination';
+    method: 'auto' | 'ets' | 'theta' | 'arima' | 'seasonal-naive' | 'combination';
     /** Periods ahead. Default: 12 monthly, 4 quarterly, 13 weekly. */
     horizon: number;
     levels: number[];

@@ -69,7 +69,7 @@ export const calendarSchema = z.strictObject({
 export const outliersSchema = z.strictObject({enabled: z.boolean().nullish()});
 
 export const forecastSchema = z.strictObject({
-  method: z.enum(['auto', 'ets', 'theta', 'seasonal-naive', 'combination']).nullish(),
+  method: z.enum(['auto', 'ets', 'theta', 'arima', 'seasonal-naive', 'combination']).nullish(),
   horizon: z.number().int().min(1).nullish(),
   levels: z
     .array(z.number().min(50, {error: 'must be between 50 and 99.9'}).max(99.9, {error: 'must be between 50 and 99.9'}))

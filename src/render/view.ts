@@ -657,6 +657,13 @@ function etsModels(options: Record<string, unknown>): {model: string; weight: nu
   return models && models.length > 1 ? models : null;
 }
 
+/** The members of a weighted combination with their shares, when the forecast is one. */
+function memberShares(options: Record<string, unknown>): {member: string; weight: number}[] | null {
+  const {members, weights} = options as {members?: unknown; weights?: unknown};
+  if (!Array.isArray(members) || !Array.isArray(weights) || members.length !== weights.length) return null;
+  return members.map((member, i) => ({member: String(member), weight: Number(weights[i])}));
+}
+
 function methodsView(s: ReportSeries, f: Formatter): MethodsView {
   const a = s.analysis;
   const items: KeyFigure[] = [];
@@ -703,6 +710,11 @@ function methodsView(s: ReportSeries, f: Formatter): MethodsView {
   const fc = a.forecast;
   if (fc) {
     items.push({label: 'Forecast model', value: `${fc.method}; ${params(fc.options)}`});
+    const shares = memberShares(fc.options);
+    if (shares) {
+      const value = shares.map((m) => `${m.member} ${f.share(m.weight * 100)}`).join(', ');
+      items.push({label: 'Combination weights', value});
+    }
     const weighted = etsModels(fc.options);
     if (weighted) {
       const value = weighted.map((m) => `${m.model} ${f.share(m.weight * 100)}`).join(', ');

@@ -10,8 +10,9 @@ import {seasonalityTest} from './seasonalityTest.js';
  *
  * Why: the classical decomposition fixes one seasonal figure for the whole sample and is pulled by outliers;
  * STL lets the pattern drift and the robustness weights ignore one-off values. Measured on M3 (test/bench/m3.ts):
- * Theta on STL-adjusted data combined with Akaike-weighted ETS gives monthly sMAPE 13.47 and MASE 0.832, against
- * 13.51 and 0.838 with classically adjusted Theta; quarterly 8.81 against 8.83.
+ * Theta on STL-adjusted data combined with Akaike-weighted ETS gave monthly sMAPE 13.47 and MASE 0.832, against
+ * 13.51 and 0.838 with classically adjusted Theta; quarterly 8.81 against 8.83. The ARIMA member of the `auto`
+ * combination uses the same adjustment.
  * Reference: Cleveland, Cleveland, McRae & Terpenning (1990), STL (see decompose/stl.ts); R. J. Hyndman and
  * G. Athanasopoulos, Forecasting: Principles and Practice, 3rd ed., section "Forecasting with decomposition"
  * (forecast the adjusted series, add back the seasonal naive forecast of the seasonal part).

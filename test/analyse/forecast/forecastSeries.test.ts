@@ -56,10 +56,15 @@ describe('forecastSeries', () => {
     expect(b.benchmarks.map((x) => x.method)).toEqual(['Seasonal naive', 'Naive2']);
   });
 
-  it('forecasts auto as Akaike-weighted ETS with Theta on STL-adjusted data and back-tests it by refitting those ETS classes', () => {
+  it('forecasts auto as Akaike-weighted ETS, Theta and ARIMA on STL-adjusted data and back-tests it', () => {
     const r = forecastSeries(air, {frequency: 'monthly', options: opts({backtestOrigins: 6})});
     // R's ets picks ETS(M,Ad,M) for AirPassengers (test/reference/ets.json); it carries most of the weight.
-    expect(r.method).toMatch(/^Combination \(ETS \(\d+ models, Akaike-weighted\), Theta on STL-adjusted data\)$/);
+    expect(r.method).toMatch(
+      /^Combination \(ETS \(\d+ models, Akaike-weighted\), Theta on STL-adjusted data, ARIMA\(\d,[01],\d\) with drift on STL-adjusted data\)$/,
+    );
+    expect(r.options.weights).toEqual([0.45, 0.45, 0.1]);
+    // AirPassengers trends: the KPSS test asks for a difference.
+    expect((r.options.arima as {order: number[]}).order[1]).toBe(1);
     const models = (r.options.ets as {models: {model: string; weight: number}[]}).models;
     expect(models[0].model).toBe('ETS(M,Ad,M)');
     expect(models.reduce((a, m) => a + m.weight, 0)).toBeCloseTo(1, 12);
