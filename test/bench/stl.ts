@@ -43,7 +43,7 @@ function cpuMicros(): number {
 function microsPerCall(x: Float64Array, robust: boolean): number {
   const options = {period: 12, seasonalWindow: 13, robust};
   for (let i = 0; i < 200; i++) stl(x, options);
-  const calls = Math.max(5, Math.round(20_000 / x.length / (robust ? 8 : 1)));
+  const calls = Math.max(20, Math.round(20_000 / x.length / (robust ? 8 : 1)));
   let best = Infinity;
   for (let block = 0; block < 10; block++) {
     const t0 = cpuMicros();

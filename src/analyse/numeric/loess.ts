@@ -43,15 +43,33 @@ export function loessAt(
   const kernel = tricubeTable(h);
   // A local line through a symmetric window with symmetric weights passes through the weighted mean at its
   // centre, so the slope terms are skipped there (and for local constants); the result differs only by rounding.
+  // Two loops (left of x, then from x) so the distance |j − x| needs no branch; robust and plain fits apart.
+  const split = Math.min(Math.max(x, left), right + 1);
   if (degree === 0 || h === 0 || (robustness === null && x - left === right - x)) {
     let sw = 0;
     let swy = 0;
-    for (let j = left; j <= right; j++) {
-      const u = j - x;
-      let w = kernel[u < 0 ? -u : u];
-      if (robustness !== null) w *= robustness[j - 1];
-      sw += w;
-      swy += w * y[j - 1];
+    if (robustness === null) {
+      for (let j = left; j < split; j++) {
+        const w = kernel[x - j];
+        sw += w;
+        swy += w * y[j - 1];
+      }
+      for (let j = split; j <= right; j++) {
+        const w = kernel[j - x];
+        sw += w;
+        swy += w * y[j - 1];
+      }
+    } else {
+      for (let j = left; j < split; j++) {
+        const w = kernel[x - j] * robustness[j - 1];
+        sw += w;
+        swy += w * y[j - 1];
+      }
+      for (let j = split; j <= right; j++) {
+        const w = kernel[j - x] * robustness[j - 1];
+        sw += w;
+        swy += w * y[j - 1];
+      }
     }
     return sw > 0 ? swy / sw : NaN;
   }
@@ -60,8 +78,6 @@ export function loessAt(
   let swuu = 0;
   let swy = 0;
   let swuy = 0;
-  // Two loops (left of x, then from x) so the distance |j − x| needs no branch.
-  const split = Math.min(Math.max(x, left), right + 1);
   for (let j = left; j < split; j++) {
     const u = j - x;
     const w = robustness === null ? kernel[-u] : kernel[-u] * robustness[j - 1];
