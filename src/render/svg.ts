@@ -1,6 +1,7 @@
 import * as vega from 'vega';
 import {compile, type TopLevelSpec} from 'vega-lite';
 import {vegaLocale} from './locale.js';
+import {compactSvg} from './svgCompact.js';
 import {vegaWidth, type TextItem} from './textMetrics.js';
 
 /**
@@ -150,15 +151,19 @@ function withValues(node: unknown, values: unknown[]): unknown {
   return copy;
 }
 
-/** Prefix ids, drop fixed pixel size and vega's interaction attributes, and add `<title>`/`<desc>`. */
+/**
+ * Prefix ids, drop fixed pixel size and vega's interaction attributes, compact the drawing (svgCompact.ts) and add
+ * `<title>`/`<desc>`.
+ */
 function finishSvg(svg: string, options: SvgOptions): string {
   const prefix = options.idPrefix.replace(/[^A-Za-z0-9_-]/g, '-');
   // vega's class names and pointer-events serve interactive views, and its ARIA roles on groups and marks
   // describe pieces of what is here one image with a title and description; none of them prints, and the
   // roles make the PDF step tag every piece. Only tags are touched: vega escapes `<` and `>` in text and
   // attribute values, so `<…>` is always a tag.
-  const body = svg
-    .replace(/<[^>]*>/g, (tag) => tag.replace(/ (class|pointer-events|role|aria-[a-z]+)="[^"]*"/g, ''))
+  const body = compactSvg(
+    svg.replace(/<[^>]*>/g, (tag) => tag.replace(/ (class|pointer-events|role|aria-[a-z]+)="[^"]*"/g, '')),
+  )
     .replace(/\bid="([^"]+)"/g, `id="${prefix}-$1"`)
     .replace(/url\(#([^)]+)\)/g, `url(#${prefix}-$1)`)
     .replace(/\b(href|xlink:href)="#([^"]+)"/g, `$1="#${prefix}-$2"`);
