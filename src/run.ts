@@ -68,13 +68,25 @@ export async function build(request: BuildRequest, log: Logger): Promise<BuildSu
   let pdf: Uint8Array | null = null;
   let pdfSkipped: string | null = null;
   try {
-    const analyses = await analyseAll(plan, data, {jobs: request.jobs, log});
+    // Charts of each series are drawn as soon as its analysis arrives, while the pool works on the others.
+    const wantCharts = plan.formats.includes('html') || wantPdf;
+    const drawn = new Map<string, string>();
+    let drawing: Promise<void> = Promise.resolve();
+    const drawAhead = (index: number, analysis: SeriesAnalysis) => {
+      drawing = drawing
+        .then(async () => (await import('./render/html.js')).drawSeriesCharts(plan, plan.series[index], analysis, drawn))
+        // A chart that fails here is drawn again by renderHtml, which reports the failure in its place.
+        .catch(() => undefined);
+    };
+    const onResult = wantCharts ? drawAhead : undefined;
+    const analyses = await analyseAll(plan, data, {jobs: request.jobs, log, onResult});
+    await drawing;
     const draft = () => toResults(assemble(plan, data, analyses, null));
     const {revisionPct} = plan.thresholds;
     const history = await loadHistory(plan.outDir, plan.id, periodLabel, plan.frequency, draft, revisionPct);
     report = assemble(plan, data, analyses, history);
     // The chart and browser libraries load only for packs that draw (about a second of start-up).
-    const draw = async () => (await import('./render/html.js')).renderHtml(report);
+    const draw = async () => (await import('./render/html.js')).renderHtml(report, drawn);
     html = plan.formats.includes('html') || wantPdf ? await draw() : null;
     if (wantPdf && html) {
       const browser = request.browser ?? unwrap((await ownBrowser)!);

@@ -2,7 +2,7 @@ import type {Plan} from '../config/plan.js';
 import type {Dataset} from '../ingest/types.js';
 import type {Logger} from '../log.js';
 import {analyseSeries} from './analyse.js';
-import {runPool} from './pool.js';
+import {runPool, type ResultListener} from './pool.js';
 import type {SeriesAnalysis, SeriesInput} from './types.js';
 
 export {analyseSeries};
@@ -15,7 +15,7 @@ export type {SeriesAnalysis, SeriesInput};
 export async function analyseAll(
   plan: Plan,
   data: Dataset,
-  {jobs, log}: {jobs: number; log: Logger},
+  {jobs, log, onResult}: {jobs: number; log: Logger; onResult?: ResultListener},
 ): Promise<SeriesAnalysis[]> {
   const byId = new Map(data.series.map((s) => [s.id, s]));
   const inputs: SeriesInput[] = plan.series.map((sp) => {
@@ -34,7 +34,7 @@ export async function analyseAll(
       residualSigma: plan.thresholds.residualSigma,
     };
   });
-  return runPool(inputs, {jobs, log});
+  return runPool(inputs, {jobs, log, onResult});
 }
 
 function concat(a: Float64Array, b: Float64Array): Float64Array {

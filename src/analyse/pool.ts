@@ -23,21 +23,26 @@ export interface ProgressLogger extends Logger {
   progress?(done: number, total: number): void;
 }
 
+/** Told of each result as it arrives (in completion order), with the input's index; must not throw. */
+export type ResultListener = (index: number, result: SeriesAnalysis) => void;
+
 /**
  * Run `analyseSeries` over the inputs on `jobs` worker threads and give the results in input order. In-process
  * when jobs is 1, when there are fewer than 8 series, or when running from TypeScript sources. Results are the
  * same either way: `analyseSeries` is pure and the worker returns exactly its result.
+ *
+ * `onResult` hears of each result as soon as it is ready, so later stages can start on it while the pool works.
  *
  * An error while analysing a series is rethrown naming the series (`series s12: …`, the first in input order),
  * whichever path ran it; the pool finishes its other tasks and is shut down before the error leaves.
  */
 export async function runPool(
   inputs: SeriesInput[],
-  {jobs, log}: {jobs: number; log: ProgressLogger},
+  {jobs, log, onResult}: {jobs: number; log: ProgressLogger; onResult?: ResultListener},
 ): Promise<SeriesAnalysis[]> {
   const progress = progressReporter(inputs.length, log);
   if (jobs <= 1 || inputs.length < POOL_MIN_SERIES || !compiled) {
-    return inputs.map((input) => {
+    return inputs.map((input, index) => {
       let result: SeriesAnalysis;
       try {
         result = analyseSeries(input);
@@ -45,6 +50,7 @@ export async function runPool(
         throw seriesError(input.id, e);
       }
       progress();
+      onResult?.(index, result);
       return result;
     });
   }
@@ -54,9 +60,10 @@ export async function runPool(
     // flight makes the pool throw an uncatchable "unexpected message" when their results arrive. Failures are
     // rare (analyseSeries guards its engines), so the extra wait costs nothing in practice.
     const settled = await Promise.allSettled(
-      inputs.map(async (input) => {
+      inputs.map(async (input, index) => {
         const result = (await pool.run(input)) as SeriesAnalysis;
         progress();
+        onResult?.(index, result);
         return result;
       }),
     );

@@ -4,7 +4,10 @@ import Handlebars from 'handlebars';
 import {imageMatches, imageTypeOf} from '../config/image.js';
 import {packageRoot} from '../version.js';
 import type {Report} from './types.js';
-import {buildView, pageGeometry, type FigureSlot} from './view.js';
+import type {SeriesAnalysis} from '../analyse/types.js';
+import type {Plan, SeriesPlan} from '../config/plan.js';
+import {formatter} from './format.js';
+import {buildView, pageGeometry, seriesFigureSlots, type FigureSlot} from './view.js';
 import {specToSvg} from './svg.js';
 import {themeFor, type Theme} from './theme.js';
 
@@ -18,25 +21,17 @@ import {themeFor, type Theme} from './theme.js';
  * the only unescaped inserts are our own SVG and CSS, passed as `SafeString`. Templates compile in strict
  * mode with known helpers only, so a misspelt field fails the build instead of printing nothing.
  */
-export async function renderHtml(report: Report): Promise<string> {
+export async function renderHtml(report: Report, drawn: ReadonlyMap<string, string> = new Map()): Promise<string> {
   const files = templateFiles(report.plan.branding.templates);
   const env = Handlebars.create();
   for (const [name, source] of files.partials) env.registerPartial(name, source);
   const view = buildView(report, inlineLogo(report.plan.branding.logo));
   const slots: FigureSlot[] = [...view.series.flatMap((s) => s.rows.flat()), ...(view.history?.chart ? [view.history.chart] : [])];
+  const font = report.plan.branding.font;
   for (const slot of slots) {
     const {title, spec} = slot.chart;
     const description = typeof spec.description === 'string' ? spec.description : title;
-    const svg = await specToSvg(spec, {
-      locale: view.lang,
-      font: report.plan.branding.font,
-      idPrefix: slot.chart.id,
-      title,
-      description,
-      // In the page the chart is one image named by its wrapper; the drawing itself is hidden from assistive
-      // technology, which also keeps the tagged PDF from describing every tick and line (about 15% of its time).
-      hidden: true,
-    });
+    const svg = drawn.get(chartKey(slot, view.lang, font)) ?? (await drawSlot(slot, view.lang, font));
     slot.svg = new Handlebars.SafeString(svg);
     slot.alt = `${title}. ${description}`;
   }
@@ -47,6 +42,42 @@ export async function renderHtml(report: Report): Promise<string> {
   // Sparklines are our own SVG, built from numbers only.
   const summary = view.summary.map((row) => ({...row, spark: new Handlebars.SafeString(row.spark)}));
   return template({...view, summary, css: new Handlebars.SafeString(css.replace(/<\//g, '<\\/'))});
+}
+
+/**
+ * Draw the charts of one series ahead of the report into `into` (keyed by {@link chartKey}), for `renderHtml` to
+ * pick up: the build calls this as each series' analysis arrives, so drawing overlaps the analysis of the others.
+ */
+export async function drawSeriesCharts(
+  plan: Plan,
+  series: SeriesPlan,
+  analysis: SeriesAnalysis,
+  into: Map<string, string>,
+): Promise<void> {
+  if (series.hidden) return;
+  const lang = formatter(plan.locale).locale;
+  for (const slot of seriesFigureSlots(plan, series, analysis)) {
+    into.set(chartKey(slot, lang, plan.branding.font), await drawSlot(slot, lang, plan.branding.font));
+  }
+}
+
+/** Everything a chart's drawing depends on, so a chart drawn ahead is used only for the very same chart. */
+function chartKey(slot: FigureSlot, lang: string, font: string): string {
+  return JSON.stringify([slot.chart.id, slot.chart.title, lang, font, slot.chart.spec]);
+}
+
+function drawSlot(slot: FigureSlot, lang: string, font: string): Promise<string> {
+  const {title, spec} = slot.chart;
+  return specToSvg(spec, {
+    locale: lang,
+    font,
+    idPrefix: slot.chart.id,
+    title,
+    description: typeof spec.description === 'string' ? spec.description : title,
+    // In the page the chart is one image named by its wrapper; the drawing itself is hidden from assistive
+    // technology, which also keeps the tagged PDF from describing every tick and line (about 15% of its time).
+    hidden: true,
+  });
 }
 
 interface TemplateFiles {

@@ -3,6 +3,7 @@ import type {TopLevelSpec} from 'vega-lite';
 import type {SeriesAnalysis} from '../analyse/types.js';
 import type {Callout} from '../narrate/types.js';
 import {parsePeriod, periodsPerYear, type Frequency} from '../time/period.js';
+import type {Plan, SeriesPlan} from '../config/plan.js';
 import type {Report, ReportSeries} from './types.js';
 import {formatter, type Formatter} from './format.js';
 import {themeFor, type Theme} from './theme.js';
@@ -221,6 +222,17 @@ export function buildView(report: Report, logo: string | null): ViewModel {
     version: report.toolVersion,
     period: f.periodLong(plan.frequency, report.period),
   };
+}
+
+/**
+ * The chart slots of one series exactly as its section will hold them, from the plan and the series' analysis
+ * alone, so that charts can be drawn while other series are still being analysed.
+ */
+export function seriesFigureSlots(plan: Plan, series: SeriesPlan, analysis: SeriesAnalysis): FigureSlot[] {
+  const f = formatter(plan.locale);
+  const theme = themeFor(plan.branding.accent, plan.branding.font);
+  const geometry = pageGeometry(plan.branding.paper, plan.branding.orientation);
+  return seriesView({plan: series, analysis, callouts: []}, null, f, theme, geometry, plan.frequency).rows.flat();
 }
 
 /** Groups first, in plan order; then every visible series not in a group, each on its own. */

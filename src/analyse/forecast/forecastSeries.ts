@@ -106,6 +106,7 @@ export function forecastSeries(
           minTrain: 4,
           offset: prepared.first,
           etsModels: run.etsModels,
+          arimaOrder: run.arimaOrder,
         });
   return {
     method: forecast.method,

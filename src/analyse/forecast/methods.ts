@@ -2,7 +2,7 @@ import {averageForecasts} from './averageForecasts.js';
 import {reseasonalise} from './adjustedForecast.js';
 import {forecastBenchmarks} from './benchmarks.js';
 import {akaikeWeights} from './akaikeWeights.js';
-import {arimaErrorWeights, forecastArima, runningTotalVariance} from './arima.js';
+import {arimaErrorWeights, fitArima, forecastArima, runningTotalVariance, type ArimaOrder} from './arima.js';
 import {selectArima} from './arimaSelect.js';
 import {fitEts} from './etsFit.js';
 import {forecastEtsMixture, simulateEtsMixture} from './etsMixture.js';
@@ -64,6 +64,8 @@ export interface MethodRun {
   details: Record<string, unknown>;
   /** The ETS models used (by `ets` and the combinations) with their estimates, so a back-test can refit them. */
   etsModels?: EtsStart[];
+  /** The ARIMA order chosen (by `arima` and `ets-theta-arima`), so a back-test can refit it. */
+  arimaOrder?: ArimaOrder;
 }
 
 /** An ETS model class to refit, optionally with estimates to warm-start from. */
@@ -91,8 +93,16 @@ export function runMethod(
     h,
     levels,
     etsModels,
+    arimaOrder,
     runningTotals = true,
-  }: {period: number; h: number; levels: number[]; etsModels?: EtsStart[]; runningTotals?: boolean},
+  }: {
+    period: number;
+    h: number;
+    levels: number[];
+    etsModels?: EtsStart[];
+    arimaOrder?: ArimaOrder;
+    runningTotals?: boolean;
+  },
 ): MethodRun {
   const options = {h, levels};
   switch (name) {
@@ -117,7 +127,7 @@ export function runMethod(
       return runEts(values, period, options, etsModels, {weighted: false, withRunningTotals: runningTotals});
     case 'arima': {
       const adjustment = stlSeasonalAdjustment(values, period);
-      return runArima(values, adjustment, options) ?? {forecast: forecastNaive(values, options), details: {}};
+      return runArima(values, adjustment, options, arimaOrder) ?? {forecast: forecastNaive(values, options), details: {}};
     }
     case 'ets-theta-arima':
     case 'combination': {
@@ -127,7 +137,7 @@ export function runMethod(
       const thetaForecast = forecastTheta(thetaFit, options);
       if (adjustment.seasonal) thetaForecast.method = 'Theta on STL-adjusted data';
       const runs = [ets, {forecast: thetaForecast, details: thetaDetails(thetaFit)}];
-      const arima = name === 'ets-theta-arima' ? runArima(values, adjustment, options) : null;
+      const arima = name === 'ets-theta-arima' ? runArima(values, adjustment, options, arimaOrder) : null;
       if (arima) runs.push(arima);
       const members = runs.map((r) => r.forecast);
       if (name === 'combination') members.push(forecastBenchmarks(values, period, options, ['Damped']).get('Damped')!);
@@ -143,7 +153,7 @@ export function runMethod(
         theta: runs[1].details,
         ...(arima ? {arima: arima.details} : {}),
       };
-      return {forecast, details, etsModels: ets.etsModels};
+      return {forecast, details, etsModels: ets.etsModels, arimaOrder: arima?.arimaOrder};
     }
   }
 }
@@ -151,13 +161,17 @@ export function runMethod(
 /** Shares of ETS, Theta and ARIMA in `ets-theta-arima` (measured on M3, see above). */
 const AUTO_WEIGHTS = Float64Array.of(0.45, 0.45, 0.1);
 
-/** Automatic ARIMA on the adjusted series, reseasonalised; null when the series is too short for any order. */
+/**
+ * Automatic ARIMA on the adjusted series, reseasonalised; with `order` (a back-test origin) that order is refitted
+ * instead of searched. Null when the series is too short for any order.
+ */
 function runArima(
   values: Float64Array,
   adjustment: SeasonalAdjustment,
   options: {h: number; levels: number[]},
+  order?: ArimaOrder,
 ): MethodRun | null {
-  const fit = selectArima(adjustment.adjusted);
+  const fit = (order && fitArima(adjustment.adjusted, order)) || selectArima(adjustment.adjusted);
   if (!fit) return null;
   const plain = forecastArima(fit, options);
   const label = adjustment.seasonal ? `${fit.method} on STL-adjusted data` : fit.method;
@@ -172,7 +186,11 @@ function runArima(
   }
   const {p, d, q} = fit.order;
   const details = {order: [p, d, q], ar: Array.from(fit.ar), ma: Array.from(fit.ma), constant: fit.constant};
-  return {forecast, details: {...details, sigma2: fit.sigma2, seasonalAdjustment: adjustment.kind}};
+  return {
+    forecast,
+    details: {...details, sigma2: fit.sigma2, seasonalAdjustment: adjustment.kind},
+    arimaOrder: fit.order,
+  };
 }
 
 function thetaDetails(fit: ThetaFit): Record<string, unknown> {

@@ -8,7 +8,7 @@ import {prepareSeries} from '../../../src/analyse/forecast/prepareSeries.js';
 const ref = JSON.parse(readFileSync(new URL('../../reference/ets.json', import.meta.url), 'utf8'));
 const air = Float64Array.from(ref.auto.find((c: {name: string}) => c.name === 'AirPassengers').values);
 const austres = Float64Array.from(ref.auto.find((c: {name: string}) => c.name === 'austres').values);
-type Method = 'auto' | 'ets' | 'theta' | 'seasonal-naive' | 'combination';
+type Method = 'auto' | 'ets' | 'theta' | 'arima' | 'seasonal-naive' | 'combination';
 const opts = (over: Partial<{method: Method; horizon: number; levels: number[]; backtestOrigins: number}> = {}) => ({
   method: 'auto' as const,
   horizon: 12,
@@ -71,6 +71,14 @@ describe('forecastSeries', () => {
     for (const m of models) expect(m.weight).toBeGreaterThanOrEqual(0.01);
     expect(r.backtest!.points).toHaveLength(6);
     expect(Number.isFinite(r.backtest!.mase)).toBe(true);
+  });
+
+  it('forecasts with ARIMA on STL-adjusted data, intervals nested, running totals given', () => {
+    const r = forecastSeries(air, {frequency: 'monthly', options: opts({method: 'arima', backtestOrigins: 3})});
+    expect(r.method).toMatch(/^ARIMA\(\d,1,\d\) with drift on STL-adjusted data$/);
+    expectWellFormed(r, 12);
+    expect(r.runningTotals!.upper['95'][11]).toBeGreaterThan(r.mean.reduce((a, b) => a + b, 0));
+    expect(r.backtest!.points).toHaveLength(3);
   });
 
   it('forecasts a constant series as the constant, without error', () => {
