@@ -186,7 +186,31 @@ export function forecastOutlook(a: {
   const tail = a.last
     ? ` and ${a.last.mean} for ${a.last.period}, ${a.last.ahead} ahead (${a.level}% range ${a.last.range})`
     : '';
-  return `${head}${tail}; model: ${a.method}.`;
+  return `${head}${tail}; model: ${shortMethod(a.method)}.`;
+}
+
+/**
+ * A forecast method's name for prose: a combination is named by its members' families (`a combination of ETS,
+ * Theta and ARIMA`); the full name, with each member's settings, stays in the methods appendix.
+ */
+export function shortMethod(method: string): string {
+  const inner = /^Combination \((.*)\)$/.exec(method)?.[1];
+  if (inner === undefined) return method;
+  const members: string[] = [];
+  let depth = 0;
+  let start = 0;
+  for (let i = 0; i <= inner.length; i++) {
+    const c = inner[i];
+    if (c === '(') depth++;
+    else if (c === ')') depth--;
+    else if ((c === ',' && depth === 0) || i === inner.length) {
+      members.push(inner.slice(start, i).trim());
+      start = i + 1;
+    }
+  }
+  const family = (m: string) => (m.startsWith('Damped') ? 'damped trend' : (/^(ETS|Theta|ARIMA)\b/.exec(m)?.[1] ?? m));
+  const families = [...new Set(members.map(family))];
+  return `a combination of ${list(families, families.length)}`;
 }
 
 export function outturn(a: {
