@@ -2,6 +2,7 @@ import {fileURLToPath} from 'node:url';
 import {Piscina} from 'piscina';
 import type {Logger} from '../log.js';
 import {analyseSeries} from './analyse.js';
+import {packNumberArrays} from './packNumberArrays.js';
 import type {SeriesAnalysis, SeriesInput} from './types.js';
 
 // CommonJS entry that imports worker.js (see workerEntry.cts for why).
@@ -61,7 +62,8 @@ export async function runPool(
     // rare (analyseSeries guards its engines), so the extra wait costs nothing in practice.
     const settled = await Promise.allSettled(
       inputs.map(async (input, index) => {
-        const result = (await pool.run(input)) as SeriesAnalysis;
+        // Results cross from the thread with boxed numbers; repacked, they take about a third of the memory.
+        const result = packNumberArrays((await pool.run(input)) as SeriesAnalysis);
         progress();
         onResult?.(index, result);
         return result;
