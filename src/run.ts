@@ -112,7 +112,7 @@ export async function build(request: BuildRequest, log: Logger): Promise<BuildSu
     exports,
     outDir: plan.outDir,
     force: request.force,
-    packYaml: JSON.stringify(portablePlan(plan), null, 2),
+    plan: portablePlan(plan),
     warnings: report.series.map((s) => s.analysis).flatMap((a) =>
       [a.notAdjustedReason ?? [], a.notes, a.forecast?.notes ?? []].flat().map((note) => `${a.id}: ${note}`),
     ),

@@ -24,8 +24,8 @@ export interface ArchiveArgs {
   outDir: string;
   /** Replace an existing period folder instead of refusing. */
   force: boolean;
-  /** The fully-defaulted plan as JSON or YAML, copied into the manifest. */
-  packYaml: string;
+  /** The fully-defaulted plan as the run used it (a JSON-ready value), copied into the manifest. */
+  plan: unknown;
   /** Warnings of the run, copied into the manifest. */
   warnings: string[];
   /**
@@ -83,7 +83,7 @@ export async function archive(args: ArchiveArgs): Promise<{folder: string; outpu
     // results.json is streamed series by series (it can exceed the longest string V8 holds); its size and hash
     // are taken while writing and placed among the manifest's outputs in the same path order.
     const results = await writeChunksDurable(join(tmp, 'results.json'), resultsJsonChunks(report));
-    const manifest = buildManifest({report, packYaml: args.packYaml, outputs: files, warnings: args.warnings});
+    const manifest = buildManifest({report, plan: args.plan, outputs: files, warnings: args.warnings});
     manifest.outputs.push({path: 'results.json', ...results});
     manifest.outputs.sort((a, b) => (a.path < b.path ? -1 : a.path > b.path ? 1 : 0));
     files.push({path: 'manifest.json', content: `${JSON.stringify(manifest, null, 2)}\n`});

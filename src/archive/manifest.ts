@@ -1,5 +1,4 @@
 import {dirname, isAbsolute, relative, sep} from 'node:path';
-import {parse} from 'yaml';
 import type {Report} from '../render/types.js';
 import type {Frequency} from '../time/period.js';
 import {RESULTS_SCHEMA} from '../render/results.js';
@@ -25,11 +24,12 @@ export interface Manifest {
 /**
  * The manifest of one archived period. Pure: everything comes from the arguments, so the same
  * inputs give the same manifest (no run date, host or clock value is recorded).
- * `packYaml` is the fully-defaulted plan as JSON or YAML (JSON is read as YAML 1.2).
+ * `plan` is the fully-defaulted plan as the run used it, a JSON-ready value (taken as is: parsing it back from
+ * text cost hundreds of megabytes for packs of thousands of series).
  */
 export function buildManifest(args: {
   report: Report;
-  packYaml: string;
+  plan: unknown;
   outputs: {path: string; content: string | Uint8Array}[];
   warnings: string[];
 }): Manifest {
@@ -40,7 +40,7 @@ export function buildManifest(args: {
     tool: {name: 'ebbflow', version: report.toolVersion},
     resultsSchema: RESULTS_SCHEMA,
     pack: {id: report.plan.id, title: report.plan.title, period: report.periodLabel, frequency: report.plan.frequency},
-    plan: parse(args.packYaml) as unknown,
+    plan: args.plan,
     inputs: report.inputs
       .map((f) => ({file: portable(base, f.file), bytes: f.bytes, sha256: f.sha256, rows: f.rows}))
       .sort((a, b) => compare(a.file, b.file)),

@@ -18,7 +18,7 @@ function args(outDir: string, rep: Report, extra: Partial<ArchiveArgs> = {}): Ar
     ],
     outDir,
     force: false,
-    packYaml: JSON.stringify({id: rep.plan.id, title: rep.plan.title, frequency: 'monthly'}),
+    plan: {id: rep.plan.id, title: rep.plan.title, frequency: 'monthly'},
     warnings: ['net-sales: 1 value missing'],
     ...extra,
   };

@@ -16,7 +16,7 @@ async function archiveMonth(out: string, month: number): Promise<void> {
     exports: [],
     outDir: out,
     force: false,
-    packYaml: '{}',
+    plan: {},
     warnings: [],
   });
 }

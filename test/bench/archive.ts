@@ -51,7 +51,7 @@ export async function run(): Promise<void> {
           exports: [{name: 'series.csv', content: 'period,value\n'.repeat(2_000)}],
           outDir: out,
           force: false,
-          packYaml: JSON.stringify(rep.plan),
+          plan: rep.plan,
           warnings: [],
         });
         archiveMs.push(t0());
