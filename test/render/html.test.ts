@@ -5,7 +5,7 @@ import {join} from 'node:path';
 import Handlebars from 'handlebars';
 import {renderHtml} from '../../src/render/index.js';
 import {buildView} from '../../src/render/view.js';
-import {inlineLogo} from '../../src/render/html.js';
+import {drawSeriesCharts, inlineLogo} from '../../src/render/html.js';
 import {makeReport} from './fixtures.js';
 import type {Report} from '../../src/render/types.js';
 
@@ -22,6 +22,18 @@ function hostile(): Report {
 }
 
 describe('renderHtml', () => {
+  test('charts drawn ahead, series by series, give the same page as charts drawn by renderHtml itself', async () => {
+    const report = makeReport({count: 2});
+    const drawn = new Map<string, string>();
+    for (const s of report.series) await drawSeriesCharts(report.plan, s.plan, s.analysis, drawn);
+    expect(drawn.size).toBeGreaterThan(6);
+    expect(await renderHtml(report, drawn)).toBe(await renderHtml(report));
+    // And they are the ones used: marked stand-ins all appear in the page.
+    const marked = new Map([...drawn.keys()].map((k, i) => [k, `<svg data-mark="${i}"></svg>`]));
+    const page = await renderHtml(report, marked);
+    for (let i = 0; i < marked.size; i++) expect(page).toContain(`data-mark="${i}"`);
+  });
+
   let html = '';
   beforeAll(async () => {
     html = await renderHtml(hostile());

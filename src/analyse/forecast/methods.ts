@@ -127,7 +127,7 @@ export function runMethod(
       return runEts(values, period, options, etsModels, {weighted: false, withRunningTotals: runningTotals});
     case 'arima': {
       const adjustment = stlSeasonalAdjustment(values, period);
-      return runArima(values, adjustment, options, arimaOrder) ?? {forecast: forecastNaive(values, options), details: {}};
+      return runArima(adjustment, options, arimaOrder) ?? {forecast: forecastNaive(values, options), details: {}};
     }
     case 'ets-theta-arima':
     case 'combination': {
@@ -137,7 +137,7 @@ export function runMethod(
       const thetaForecast = forecastTheta(thetaFit, options);
       if (adjustment.seasonal) thetaForecast.method = 'Theta on STL-adjusted data';
       const runs = [ets, {forecast: thetaForecast, details: thetaDetails(thetaFit)}];
-      const arima = name === 'ets-theta-arima' ? runArima(values, adjustment, options, arimaOrder) : null;
+      const arima = name === 'ets-theta-arima' ? runArima(adjustment, options, arimaOrder) : null;
       if (arima) runs.push(arima);
       const members = runs.map((r) => r.forecast);
       if (name === 'combination') members.push(forecastBenchmarks(values, period, options, ['Damped']).get('Damped')!);
@@ -166,7 +166,6 @@ const AUTO_WEIGHTS = Float64Array.of(0.45, 0.45, 0.1);
  * instead of searched. Null when the series is too short for any order.
  */
 function runArima(
-  values: Float64Array,
   adjustment: SeasonalAdjustment,
   options: {h: number; levels: number[]},
   order?: ArimaOrder,
