@@ -124,7 +124,7 @@ describe('forecastSeries', () => {
     fc.assert(
       fc.property(
         fc.array(fc.double({min: -1e4, max: 1e4, noNaN: true}), {minLength: 1, maxLength: 40}),
-        fc.constantFrom<Method>('auto', 'ets', 'theta', 'seasonal-naive'),
+        fc.constantFrom<Method>('auto', 'ets', 'theta', 'arima', 'seasonal-naive'),
         (values, method) => {
           const options = opts({method, horizon: 5});
           const r = forecastSeries(Float64Array.from(values), {frequency: 'quarterly', options});
