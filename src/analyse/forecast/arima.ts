@@ -42,8 +42,7 @@ export interface ArimaFit {
   /** μ: mean of w (d = 0) or drift per period (d = 1); 0 without a constant. */
   constant: number;
   sigma2: number;
-  /** Sum of squared residuals and their count (n_w − c). */
-  css: number;
+  /** Number of residuals in the sum of squares (n_w − p). */
   residualCount: number;
   /** Last value of the series (d = 1), the w values and residuals the forecast recursion starts from. */
   last: number;
@@ -51,8 +50,8 @@ export interface ArimaFit {
   residuals: Float64Array;
 }
 
-/** ARIMA(1,1,0) with drift etc. */
-export function arimaName({p, d, q, constant}: ArimaOrder): string {
+/** The model's name, e.g. `ARIMA(1,1,0) with drift`. */
+function arimaName({p, d, q, constant}: ArimaOrder): string {
   const what = d === 1 ? 'drift' : 'mean';
   return `ARIMA(${p},${d},${q})${constant ? ` with ${what}` : ''}`;
 }
@@ -79,13 +78,13 @@ export function fitArima(values: Float64Array, order: ArimaOrder): ArimaFit | nu
   const shift = constant ? 0 : -centre / spread;
   const objective = (x: Float64Array): number => {
     if (!admissible(x, p, q, arPoly, maPoly)) return Infinity;
-    return sumOfSquares(z, x, p, q, constant ? x[p + q] : shift, p, e);
+    return sumOfSquares(z, x, p, q, constant ? x[p + q] : shift, e);
   };
   const k = p + q + (constant ? 1 : 0);
   const x0 = new Float64Array(k);
   const x = k === 0 ? x0 : nelderMead(objective, x0, {maxEvaluations: 200 * k}).x;
   const mu = constant ? x[p + q] : shift;
-  const css = sumOfSquares(z, x, p, q, mu, p, e) * spread * spread;
+  const css = sumOfSquares(z, x, p, q, mu, e) * spread * spread;
   return {
     method: arimaName(order),
     order,
@@ -93,7 +92,6 @@ export function fitArima(values: Float64Array, order: ArimaOrder): ArimaFit | nu
     ma: x.slice(p, p + q),
     constant: constant ? centre + spread * mu : 0,
     sigma2: css / count,
-    css,
     residualCount: count,
     last: values[values.length - 1],
     w,
@@ -101,22 +99,14 @@ export function fitArima(values: Float64Array, order: ArimaOrder): ArimaFit | nu
   };
 }
 
-/** Σ eₜ² for t ≥ c of the ARMA recursion on z with mean mu; residuals written to e (0 before c). */
-function sumOfSquares(
-  z: Float64Array,
-  x: Float64Array,
-  p: number,
-  q: number,
-  mu: number,
-  c: number,
-  e: Float64Array,
-): number {
+/** Σ eₜ² for t ≥ p of the ARMA recursion on z with mean mu; residuals written to e (0 before p). */
+function sumOfSquares(z: Float64Array, x: Float64Array, p: number, q: number, mu: number, e: Float64Array): number {
   let ss = 0;
-  e.fill(0, 0, c);
-  for (let t = c; t < z.length; t++) {
+  e.fill(0, 0, p);
+  for (let t = p; t < z.length; t++) {
     let r = z[t] - mu;
     for (let i = 1; i <= p; i++) r -= x[i - 1] * (z[t - i] - mu);
-    for (let j = 1; j <= q && t - j >= c; j++) r -= x[p + j - 1] * e[t - j];
+    for (let j = 1; j <= q && t - j >= p; j++) r -= x[p + j - 1] * e[t - j];
     e[t] = r;
     ss += r * r;
   }
