@@ -167,17 +167,30 @@ export function forecastArima(fit: ArimaFit, options: ForecastOptions): Forecast
   const variance = new Float64Array(h);
   let sum = 0;
   for (let j = 0; j < h; j++) variance[j] = fit.sigma2 * (sum += weights[j] * weights[j]);
-  const totals = new Float64Array(h);
-  let running = 0;
-  for (let k = 0; k < h; k++) totals[k] = running += mean[k];
-  const totalVariance = runningTotalVariance(weights, fit.sigma2);
   return {
     method: fit.method,
     mean,
     levels,
     ...normalIntervals(mean, variance, levels),
-    runningTotals: normalIntervals(totals, totalVariance, levels),
+    runningTotals: arimaRunningTotals(fit, mean, levels),
   };
+}
+
+/**
+ * Normal intervals for the running totals of a forecast path `mean` of the fit, the forecast errors weighted per
+ * step by `scales` when given (seasonal factors of a multiplicatively reseasonalised forecast).
+ */
+export function arimaRunningTotals(
+  fit: ArimaFit,
+  mean: Float64Array,
+  levels: number[],
+  scales?: Float64Array,
+): {lower: Map<number, Float64Array>; upper: Map<number, Float64Array>} {
+  const h = mean.length;
+  const totals = new Float64Array(h);
+  let running = 0;
+  for (let k = 0; k < h; k++) totals[k] = running += mean[k];
+  return normalIntervals(totals, runningTotalVariance(arimaErrorWeights(fit, h), fit.sigma2, scales), levels);
 }
 
 /**

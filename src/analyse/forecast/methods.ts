@@ -2,7 +2,7 @@ import {averageForecasts} from './averageForecasts.js';
 import {reseasonalise} from './adjustedForecast.js';
 import {forecastBenchmarks} from './benchmarks.js';
 import {akaikeWeights} from './akaikeWeights.js';
-import {arimaErrorWeights, fitArima, forecastArima, runningTotalVariance, type ArimaOrder} from './arima.js';
+import {arimaRunningTotals, fitArima, forecastArima, type ArimaOrder} from './arima.js';
 import {selectArima} from './arimaSelect.js';
 import {fitEts} from './etsFit.js';
 import {forecastEtsMixture, simulateEtsMixture} from './etsMixture.js';
@@ -11,7 +11,6 @@ import {runningTotalIntervals} from './runningTotalIntervals.js';
 import {selectEts} from './etsSelect.js';
 import type {Forecast} from './model.js';
 import {forecastNaive, forecastSeasonalNaive} from './naive.js';
-import {normalIntervals} from './normalIntervals.js';
 import {seasonalAdjustment, type SeasonalAdjustment} from './seasonalAdjustment.js';
 import {stlSeasonalAdjustment} from './stlSeasonalAdjustment.js';
 import {fitTheta, forecastTheta, type ThetaFit} from './theta.js';
@@ -177,11 +176,7 @@ function runArima(
   const forecast = reseasonalise(plain, adjustment, label);
   if (adjustment.seasonal) {
     const factors = adjustment.kind === 'multiplicative' ? adjustment.ahead(options.h) : undefined;
-    const variance = runningTotalVariance(arimaErrorWeights(fit, options.h), fit.sigma2, factors);
-    const totals = new Float64Array(options.h);
-    let running = 0;
-    for (let k = 0; k < options.h; k++) totals[k] = running += forecast.mean[k];
-    forecast.runningTotals = normalIntervals(totals, variance, forecast.levels);
+    forecast.runningTotals = arimaRunningTotals(fit, forecast.mean, forecast.levels, factors);
   }
   const {p, d, q} = fit.order;
   const details = {order: [p, d, q], ar: Array.from(fit.ar), ma: Array.from(fit.ma), constant: fit.constant};
