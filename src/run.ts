@@ -91,7 +91,10 @@ export async function build(request: BuildRequest, log: Logger): Promise<BuildSu
     if (wantPdf && html) {
       const browser = request.browser ?? unwrap((await ownBrowser)!);
       if ('missing' in browser) pdfSkipped = browser.missing;
-      else pdf = await browser.pdf(html, pdfOptions(plan, data.period, periodLabel));
+      else {
+        const outline = (await import('./render/view.js')).reportOutline(report);
+        pdf = await browser.pdf(html, {...pdfOptions(plan, data.period, periodLabel), outline});
+      }
       if (pdfSkipped) log.warn(pdfSkipped);
     }
   } finally {
@@ -196,6 +199,7 @@ function pdfOptions(plan: Plan, period: number, periodLabel: string) {
     font: plan.branding.font,
     footer: plan.branding.footer,
     locale: plan.locale,
+    tagged: plan.branding.taggedPdf,
     date: `${year}${String(month).padStart(2, '0')}${String(day).padStart(2, '0')}`,
   };
 }

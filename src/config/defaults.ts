@@ -42,6 +42,8 @@ export const defaultConfig = {
     footer: null,
     /** Default: none (the built-in templates). */
     templates: null,
+    /** Default: false (bookmarks are written either way). */
+    taggedPdf: false,
   } satisfies Branding as Branding,
   thresholds: {
     /** Default: 3 robust standard deviations (common practice for flagging irregulars). */

@@ -125,6 +125,7 @@ export function normalize(cfg: PackConfig, ctx: NormalizeContext): Plan {
       orientation: b.orientation ?? defaultConfig.branding.orientation,
       footer: b.footer ?? defaultConfig.branding.footer,
       templates: fromPack(packDir, b.templates),
+      taggedPdf: b.taggedPdf ?? defaultConfig.branding.taggedPdf,
     },
     thresholds: mergeDefined(defaultConfig.thresholds, cfg.thresholds),
     outDir: ctx.outDir,

@@ -65,6 +65,8 @@ export interface Branding {
   footer: string | null;
   /** Absolute path of a folder of templates overriding the built-in ones, or null. */
   templates: string | null;
+  /** Tag the PDF's structure for screen readers (slower to print, larger file). Default: false. */
+  taggedPdf: boolean;
 }
 
 export interface Thresholds {

@@ -121,6 +121,7 @@ const brandingSection = z.strictObject({
   orientation: z.enum(['portrait', 'landscape']).nullish(),
   footer: optionalText,
   templates: optionalText,
+  taggedPdf: z.boolean().nullish(),
 });
 
 const thresholdsSection = z.strictObject({

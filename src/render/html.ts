@@ -58,6 +58,9 @@ export async function drawSeriesCharts(
   const lang = formatter(plan.locale).locale;
   for (const slot of seriesFigureSlots(plan, series, analysis)) {
     into.set(chartKey(slot, lang, plan.branding.font), await drawSlot(slot, lang, plan.branding.font));
+    // Drawing settles in promise callbacks only; a turn of the event loop between charts lets the analysis
+    // threads' finished results in, so that they get their next series without waiting for the drawing.
+    await new Promise((resolve) => setImmediate(resolve));
   }
 }
 

@@ -5,6 +5,7 @@ import type {Callout} from '../narrate/types.js';
 import {parsePeriod, periodsPerYear, type Frequency} from '../time/period.js';
 import type {Plan, SeriesPlan} from '../config/plan.js';
 import type {Report, ReportSeries} from './types.js';
+import type {OutlineEntry} from './pdfOutline.js';
 import {formatter, type Formatter} from './format.js';
 import {themeFor, type Theme} from './theme.js';
 import type {ChartContext} from './charts/common.js';
@@ -156,6 +157,8 @@ export interface ViewModel {
   notes: {where: string; message: string}[];
   version: string;
   period: string;
+  /** Sections the PDF bookmarks point to, for the page's hidden list of links to them. */
+  outline: {title: string; dest: string}[];
 }
 
 export interface PageGeometry {
@@ -221,6 +224,7 @@ export function buildView(report: Report, logo: string | null): ViewModel {
     })),
     version: report.toolVersion,
     period: f.periodLong(plan.frequency, report.period),
+    outline: flatten(reportOutline(report)).map(({title, dest}) => ({title, dest})),
   };
 }
 
@@ -235,21 +239,59 @@ export function seriesFigureSlots(plan: Plan, series: SeriesPlan, analysis: Seri
   return seriesView({plan: series, analysis, callouts: []}, null, f, theme, geometry, plan.frequency).rows.flat();
 }
 
+interface Placed {
+  entry: ReportSeries;
+  kicker: string | null;
+  /** Index of the pack's group that placed the series, or null. */
+  group: number | null;
+}
+
 /** Groups first, in plan order; then every visible series not in a group, each on its own. */
-function orderSeries(report: Report, visible: ReportSeries[]): {entry: ReportSeries; kicker: string | null}[] {
+function orderSeries(report: Report, visible: ReportSeries[]): Placed[] {
   const byId = new Map(visible.map((s) => [s.plan.id, s]));
   const placed = new Set<string>();
-  const out: {entry: ReportSeries; kicker: string | null}[] = [];
-  for (const group of report.plan.groups) {
+  const out: Placed[] = [];
+  report.plan.groups.forEach((group, index) => {
     for (const id of group.series) {
       const entry = byId.get(id);
       if (!entry || placed.has(id)) continue;
       placed.add(id);
-      out.push({entry, kicker: group.title});
+      out.push({entry, kicker: group.title, group: index});
     }
-  }
-  for (const entry of visible) if (!placed.has(entry.plan.id)) out.push({entry, kicker: null});
+  });
+  for (const entry of visible) if (!placed.has(entry.plan.id)) out.push({entry, kicker: null, group: null});
   return out;
+}
+
+/**
+ * The PDF's bookmarks: the summary; each series section, under its group's title when the pack groups them;
+ * the history section when there is one; the methods appendix with an entry per series; the data notes.
+ * The page carries a hidden list of links to these ids, which is what makes the browser record them.
+ */
+export function reportOutline(report: Report): OutlineEntry[] {
+  const visible = report.series.filter((s) => !s.plan.hidden);
+  const series: OutlineEntry[] = [];
+  let lastGroup: number | null = null;
+  for (const {entry, kicker, group} of orderSeries(report, visible)) {
+    const item: OutlineEntry = {title: entry.plan.label, dest: `series-${entry.plan.id}`, children: []};
+    if (group === null || kicker === null) series.push(item);
+    else if (group === lastGroup) series[series.length - 1].children.push(item);
+    else series.push({title: kicker, dest: item.dest, children: [item]});
+    lastGroup = group;
+  }
+  const methods = visible.map((s) => ({title: s.plan.label, dest: `methods-${s.plan.id}`, children: []}));
+  return [
+    {title: SECTION.summary, dest: 'summary', children: []},
+    ...series,
+    ...(report.history ? [{title: SECTION.history, dest: 'history', children: []}] : []),
+    {title: SECTION.methods, dest: 'methods', children: methods},
+    {title: SECTION.dataNotes, dest: 'data-notes', children: []},
+  ];
+}
+
+/** Every entry of an outline, parents before their children. */
+function flatten(entries: OutlineEntry[]): OutlineEntry[] {
+  return entries.flatMap((e) => [e, ...flatten(e.children)]);
 }
 
 function calloutView(c: Callout, labels: Map<string, string>, link: (c: Callout) => string | null): CalloutView {

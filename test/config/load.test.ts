@@ -137,6 +137,12 @@ describe('a minimal pack', async () => {
     expect(plan.series[0].analysis).toEqual(untouched);
   });
 
+  test('a tagged PDF is asked for by branding.taggedPdf', async () => {
+    const tagged = await loadPlan(path.join(fixtures, 'minimal', 'quarterly-tagged.yaml'));
+    expect(plan.branding.taggedPdf).toBe(false);
+    expect(tagged.branding).toEqual({...defaultConfig.branding, taggedPdf: true});
+  });
+
   test('command-line values win over the pack', async () => {
     const p = await loadPlan(minimalPack, {period: '2024-Q3', outDir: 'elsewhere', formats: ['json']});
     expect(p.period).toBe(quarterIndex(2024, 3));

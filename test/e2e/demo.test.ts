@@ -57,6 +57,16 @@ describe('demo pack, end to end', () => {
     expect(flat).toContain(callout.split(' ').slice(0, 5).join(' '));
   });
 
+  it('bookmarks list the groups with their series, as the pack arranges them (read by poppler)', () => {
+    const xml = execFileSync('pdftohtml', ['-xml', '-i', '-q', '-stdout', join(folder, 'report.pdf')], {encoding: 'utf8'});
+    const outline = xml.slice(xml.indexOf('<outline>'));
+    // sample-config/monthly-pack.yaml: group "Trading" holds net-sales, footfall, avg-basket, returns-rate.
+    expect(outline).toMatch(/<item page="\d+">Trading<\/item>\s*<outline>\s*<item page="\d+">Net sales<\/item>/);
+    for (const title of ['At a glance', 'Web store', 'Costs and stock', 'Methods and cautions', 'Data notes']) {
+      expect(outline).toContain(`>${title}</item>`);
+    }
+  });
+
   it('shows no stray NaN, undefined or [object Object] anywhere in the PDF or HTML', () => {
     const html = readFileSync(join(folder, 'report.html'), 'utf8');
     for (const bad of ['NaN', 'undefined', '[object Object]', 'Infinity']) {

@@ -1,11 +1,12 @@
 import {afterAll, beforeAll, describe, expect, test} from 'vitest';
-import {execFileSync} from 'node:child_process';
+import {execFileSync, spawnSync} from 'node:child_process';
 import {mkdtempSync, readFileSync, writeFileSync} from 'node:fs';
 import {tmpdir} from 'node:os';
 import {join} from 'node:path';
 import puppeteer, {type Browser} from 'puppeteer-core';
 import {renderHtml} from '../../src/render/index.js';
 import {LAUNCH_ARGS, findBrowser, fixDates, openBrowser, periodWords, printPdf, stableNodeIds, type PdfOptions, type PrintRecord} from '../../src/render/pdf.js';
+import {reportOutline} from '../../src/render/view.js';
 import {makeReport} from './fixtures.js';
 
 const chromium = findBrowser(null);
@@ -61,8 +62,8 @@ describe.skipIf(chromium === null)('PDF with Chromium', () => {
   let pdf: Uint8Array;
   beforeAll(async () => {
     browser = await puppeteer.launch({executablePath: chromium!, headless: true, args: LAUNCH_ARGS});
-    const html = await renderHtml(makeReport({count: 2}));
-    pdf = await printPdf(browser, html, opts);
+    const report = makeReport({count: 2});
+    pdf = await printPdf(browser, await renderHtml(report), {...opts, outline: reportOutline(report)});
     file = join(dir, 'report.pdf');
     writeFileSync(file, pdf);
   });
@@ -89,10 +90,42 @@ describe.skipIf(chromium === null)('PDF with Chromium', () => {
     expect(fonts.join('\n')).toContain('LiberationSans');
   });
 
+  test('bookmarks lead to the summary, each series, the methods and the data notes (as poppler reads them)', () => {
+    const check = spawnSync('pdfinfo', [file], {encoding: 'utf8'});
+    expect(check.stderr).toBe('');
+    expect(check.stdout).toMatch(/Tagged:\s+no/);
+    const xml = run('pdftohtml', ['-xml', '-i', '-q', '-stdout', file]);
+    const items = Array.from(xml.matchAll(/<item page="(\d+)">([^<]*)<\/item>/g), (m) => ({page: Number(m[1]), title: m[2]}));
+    const titles = items.map((i) => i.title);
+    expect(titles).toEqual(['At a glance', 'Net sales', 'Orders received', 'Methods and cautions', 'Net sales', 'Orders received', 'Data notes']);
+    // Nested under the methods: poppler prints the children in an <outline> of their own after their parent.
+    expect(xml).toMatch(/Methods and cautions<\/item>\s*<outline>\s*<item page="\d+">Net sales<\/item>/);
+    // Each bookmark's page holds its heading.
+    for (const {page, title} of items) {
+      const text = run('pdftotext', ['-f', String(page), '-l', String(page), file, '-']);
+      expect(text.toLowerCase()).toContain(title.toLowerCase());
+    }
+    const pages = items.map((i) => i.page);
+    expect(pages).toEqual([...pages].sort((a, b) => a - b));
+  });
+
   test('a rebuild gives the same bytes', async () => {
-    const html = await renderHtml(makeReport({count: 2}));
-    const again = await printPdf(browser, html, opts);
+    const report = makeReport({count: 2});
+    const again = await printPdf(browser, await renderHtml(report), {...opts, outline: reportOutline(report)});
     expect(Buffer.from(again).equals(Buffer.from(pdf))).toBe(true);
+  });
+
+  test('tagged on request, with the same bookmarks and the same bytes on a rebuild', async () => {
+    const report = makeReport({count: 2});
+    const html = await renderHtml(report);
+    const tagged = {...opts, outline: reportOutline(report), tagged: true};
+    const first = await printPdf(browser, html, tagged);
+    const taggedFile = join(dir, 'tagged.pdf');
+    writeFileSync(taggedFile, first);
+    expect(run('pdfinfo', [taggedFile])).toMatch(/Tagged:\s+yes/);
+    const xml = run('pdftohtml', ['-xml', '-i', '-q', '-stdout', taggedFile]);
+    expect(xml.match(/<item page="\d+">/g)).toHaveLength(7);
+    expect(Buffer.from(await printPdf(browser, html, tagged)).equals(Buffer.from(first))).toBe(true);
   });
 
   test('network and file requests are blocked and listed', async () => {
