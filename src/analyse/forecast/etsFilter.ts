@@ -87,7 +87,11 @@ export function etsRecurse(
   let head = 0;
   if (season !== 'N') for (let j = 0; j < m; j++) s[j] = initialStates[first + j];
   let sse = 0;
+  // Σ log|ŷ| is kept as a running product of the |ŷ| within 1e±100, folded into its logarithm once it leaves that
+  // range (so it can neither overflow nor underflow): one logarithm every few steps instead of one per step, the
+  // sum differing only by rounding. Zero, NaN and extreme ŷ go straight to the sum, as before.
   let logSum = 0;
+  let product = 1;
   let mse = 0;
   const keep = residuals !== null || fitted !== null;
   for (let t = 0; t < n; t++) {
@@ -127,8 +131,18 @@ export function etsRecurse(
     if (hasTrend) b = phib + ratio * (lNew - l - phib);
     l = lNew;
     sse += e * e;
-    if (multError) logSum += Math.log(Math.abs(f));
+    if (multError) {
+      const size = Math.abs(f);
+      if (size < 1e100 && size > 1e-100) {
+        product *= size;
+        if (!(product < 1e100 && product > 1e-100)) {
+          logSum += Math.log(product);
+          product = 1;
+        }
+      } else logSum += Math.log(size);
+    }
   }
+  logSum += Math.log(product);
   if (finalStates) {
     finalStates[0] = l;
     if (hasTrend) finalStates[1] = b;
