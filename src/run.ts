@@ -79,7 +79,7 @@ export async function build(request: BuildRequest, log: Logger): Promise<BuildSu
         .catch(() => undefined);
     };
     const onResult = wantCharts ? drawAhead : undefined;
-    const analyses = await analyseAll(plan, data, {jobs: request.jobs, log, onResult});
+    const analyses = await analyseAll(plan, data, {jobs: request.jobs, log, onResult, drawing: wantCharts});
     await drawing;
     const draft = () => toResults(assemble(plan, data, analyses, null));
     const {revisionPct} = plan.thresholds;

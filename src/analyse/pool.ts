@@ -28,8 +28,8 @@ export interface ProgressLogger extends Logger {
 export type ResultListener = (index: number, result: SeriesAnalysis) => void;
 
 /**
- * Run `analyseSeries` over the inputs on `jobs` worker threads and give the results in input order. In-process
- * when jobs is 1, when there are fewer than 8 series, or when running from TypeScript sources. Results are the
+ * Run `analyseSeries` over the inputs on `threads` worker threads and give the results in input order. In-process
+ * when threads is 0, when there are fewer than 8 series, or when running from TypeScript sources. Results are the
  * same either way: `analyseSeries` is pure and the worker returns exactly its result.
  *
  * `onResult` hears of each result as soon as it is ready, so later stages can start on it while the pool works.
@@ -39,10 +39,10 @@ export type ResultListener = (index: number, result: SeriesAnalysis) => void;
  */
 export async function runPool(
   inputs: SeriesInput[],
-  {jobs, log, onResult}: {jobs: number; log: ProgressLogger; onResult?: ResultListener},
+  {threads, log, onResult}: {threads: number; log: ProgressLogger; onResult?: ResultListener},
 ): Promise<SeriesAnalysis[]> {
   const progress = progressReporter(inputs.length, log);
-  if (jobs <= 1 || inputs.length < POOL_MIN_SERIES || !compiled) {
+  if (threads < 1 || inputs.length < POOL_MIN_SERIES || !compiled) {
     return inputs.map((input, index) => {
       let result: SeriesAnalysis;
       try {
@@ -55,7 +55,7 @@ export async function runPool(
       return result;
     });
   }
-  const pool = new Piscina({filename: fileURLToPath(workerFile), minThreads: jobs, maxThreads: jobs});
+  const pool = new Piscina({filename: fileURLToPath(workerFile), minThreads: threads, maxThreads: threads});
   try {
     // Every task is let finish before the pool is shut down, even after a failure: shutting down with tasks in
     // flight makes the pool throw an uncatchable "unexpected message" when their results arrive. Failures are

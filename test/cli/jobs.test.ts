@@ -6,6 +6,7 @@ import path from 'node:path';
 import {fileURLToPath} from 'node:url';
 import {promisify} from 'node:util';
 import {beforeAll, describe, expect, test} from 'vitest';
+import {analysisThreads} from '../../src/analyse/index.js';
 import {runPool} from '../../src/analyse/pool.js';
 import type {SeriesInput} from '../../src/analyse/types.js';
 import {mulberry32} from '../../src/analyse/numeric/mulberry32.js';
@@ -31,11 +32,11 @@ function shortInput(id: string): SeriesInput {
   };
 }
 
-describe('runPool in-process (jobs 1, or TypeScript sources)', () => {
+describe('runPool in-process (no threads, or TypeScript sources)', () => {
   test('results come in input order, with a plain progress line every 10% through the logger', async () => {
     const log = collectingLogger();
     const inputs = Array.from({length: 120}, (_, i) => shortInput(`s${i}`));
-    const results = await runPool(inputs, {jobs: 1, log});
+    const results = await runPool(inputs, {threads: 0, log});
     expect(results.map((r) => r.id)).toEqual(inputs.map((i) => i.id));
     expect(log.infos).toEqual([12, 24, 36, 48, 60, 72, 84, 96, 108, 120].map((n) => `analysed ${n}/120 series`));
   });
@@ -47,19 +48,19 @@ describe('runPool in-process (jobs 1, or TypeScript sources)', () => {
       warn: () => undefined,
       progress: (d: number, t: number) => steps.push(`${d}/${t}`),
     };
-    await runPool(Array.from({length: 100}, (_, i) => shortInput(`s${i}`)), {jobs: 2, log});
+    await runPool(Array.from({length: 100}, (_, i) => shortInput(`s${i}`)), {threads: 2, log});
     expect(steps).toEqual(Array.from({length: 100}, (_, i) => `${i + 1}/100`));
   });
 
   test('no progress for small packs', async () => {
     const log = collectingLogger();
-    await runPool([shortInput('a'), shortInput('b')], {jobs: 1, log});
+    await runPool([shortInput('a'), shortInput('b')], {threads: 0, log});
     expect(log.infos).toEqual([]);
   });
 
   test('an error names the series', async () => {
     const bad = {...shortInput('broken-one'), values: undefined} as unknown as SeriesInput;
-    await expect(runPool([shortInput('a'), bad], {jobs: 1, log: collectingLogger()})).rejects.toThrow(
+    await expect(runPool([shortInput('a'), bad], {threads: 0, log: collectingLogger()})).rejects.toThrow(
       /^series broken-one: analysis failed: /,
     );
   });
@@ -84,6 +85,13 @@ function distIsFresh(): boolean {
 const run = promisify(execFile);
 let compiled = root;
 
+
+describe('analysis threads for --jobs', () => {
+  test('one job analyses in-process; while charts are drawn the main thread counts as one of the jobs', () => {
+    expect([1, 2, 4].map((jobs) => analysisThreads(jobs, false))).toEqual([0, 2, 4]);
+    expect([1, 2, 4].map((jobs) => analysisThreads(jobs, true))).toEqual([0, 1, 3]);
+  });
+});
 
 describe('worker-thread pool from the compiled code', () => {
   beforeAll(async () => {
@@ -137,7 +145,7 @@ describe('worker-thread pool from the compiled code', () => {
       const values = () => Float64Array.from([5, NaN, NaN]);
       const inputs = Array.from({length: 12}, (_, i) => ({...good, id: 'k' + i, values: values()}));
       inputs[7] = {...inputs[7], values: null};
-      try { await runPool(inputs, {jobs: 2, log: {info() {}, warn() {}}}); console.log('no error'); }
+      try { await runPool(inputs, {threads: 2, log: {info() {}, warn() {}}}); console.log('no error'); }
       catch (e) { console.log(e.message.split('\\n')[0]); }`;
     // Ten times: the failure comes while the other thread may still be starting or busy, and shutting the pool
     // down at such a moment once crashed Node itself now and then (see src/analyse/workerEntry.cts).
