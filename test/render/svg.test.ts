@@ -7,6 +7,8 @@ import {measureText} from '../../src/render/textMetrics.js';
 import {monthIndex} from '../../src/time/period.js';
 import type {ChartContext} from '../../src/render/charts/common.js';
 import type {TopLevelSpec} from 'vega-lite';
+import {buildView} from '../../src/render/view.js';
+import {makeReport} from './fixtures.js';
 
 const theme = themeFor('#1d6f64', 'Liberation Sans');
 const ctx: ChartContext = {frequency: 'monthly', theme, width: 320, height: 120, unit: null, seasonNames: []};
@@ -19,6 +21,20 @@ describe('specToSvg', () => {
     const a = await specToSvg(spec, options);
     const b = await specToSvg(spec, options);
     expect(a).toBe(b);
+  });
+
+  test('a chart does not depend on the charts drawn before it (Views are reused per structure)', async () => {
+    // Every chart of a 6-series report, drawn first to last and then last to first: each chart then follows a
+    // different chart of its structure, and the first of each structure is drawn by a new View the first time.
+    const view = buildView(makeReport({count: 6}), null);
+    const slots = view.series.flatMap((s) => s.rows.flat());
+    const draw = (slot: (typeof slots)[number]) =>
+      specToSvg(slot.chart.spec, {...options, idPrefix: slot.chart.id, title: slot.chart.title, description: 'd'});
+    const forward: string[] = [];
+    for (const slot of slots) forward.push(await draw(slot));
+    const backward: string[] = [];
+    for (const slot of [...slots].reverse()) backward.unshift(await draw(slot));
+    for (let i = 0; i < slots.length; i++) expect(backward[i], slots[i].chart.id).toBe(forward[i]);
   });
 
   test('January data is labelled Jan in any time zone', async () => {
