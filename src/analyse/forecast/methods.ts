@@ -194,7 +194,7 @@ function thetaDetails(fit: ThetaFit): Record<string, unknown> {
 /** Weights under this share are dropped from the Akaike-weighted ETS forecast (see akaikeWeights.ts). */
 const MIN_WEIGHT = 0.01;
 /** Evaluation budget of a warm-started refit (the start is already close to the optimum). */
-const WARM_EVALUATIONS = 500;
+const WARM_EVALUATIONS = 300;
 
 /**
  * Automatic ETS: every model of the stable subset is fitted (selectEts); `weighted` averages the forecasts of

@@ -1,7 +1,7 @@
 /**
  * Nelder-Mead simplex minimisation, in the variant of Nash's Algorithm 14 ("Nelder-Mead minimisation"):
  * reflection coefficient `alpha`, contraction `beta`, expansion `gamma`, one axial start step of
- * 0.1·max|x₀ᵢ| (0.1 when x₀ = 0), and a stop when the spread of function values over the simplex falls
+ * 0.1·max|x₀ᵢ| (0.1 when x₀ = 0) unless `steps` gives one per coordinate, and a stop when the spread of function values over the simplex falls
  * below `relTol`·(|f(x₀)| + relTol) or after `maxEvaluations` evaluations.
  *
  * Why: ETS and Theta fits need a derivative-free minimiser over a handful of smoothing parameters and initial
@@ -29,6 +29,11 @@ export interface NelderMeadOptions {
   gamma?: number;
   /** Maximum number of function evaluations. Default: 500. */
   maxEvaluations?: number;
+  /**
+   * Start step along each coordinate, for a start already near the minimum (a smaller simplex than the one axial
+   * step suited to a rough start); a step that is not positive falls back to the one step. Default: null.
+   */
+  steps?: Float64Array | null;
 }
 
 export interface NelderMeadResult {
@@ -51,6 +56,7 @@ export function nelderMead(
     beta = 0.5,
     gamma = 2,
     maxEvaluations = 500,
+    steps = null,
   }: NelderMeadOptions = {},
 ): NelderMeadResult {
   const n = start.length;
@@ -72,7 +78,7 @@ export function nelderMead(
   let size = 0;
   for (let j = 1; j <= n; j++) {
     const v = Float64Array.from(start);
-    let tryStep = step;
+    let tryStep = steps !== null && steps[j - 1] > 0 ? steps[j - 1] : step;
     // Grow the step until it changes the coordinate (tiny steps vanish against large values).
     while (v[j - 1] === start[j - 1]) {
       v[j - 1] = start[j - 1] + tryStep;

@@ -105,6 +105,10 @@ describe('fitEts edge cases', () => {
     // The budget is checked after each simplex step, so it can be passed by the last step's few evaluations.
     expect(warm.options.evaluations).toBeLessThanOrEqual(500 + 20);
     expect(warm.lik).toBeLessThanOrEqual(atStart);
+    // Warm refits start from a small simplex around the estimates: 300 evaluations end lower than the same
+    // model fitted from the usual start values with the full budget of 2000.
+    const refit = fitEts(y, spec, {start: short, maxEvaluations: 300})!;
+    expect(refit.lik).toBeLessThan(fitEts(y, spec)!.lik);
     // An infeasible start (alpha outside its bounds) is ignored: the usual start values are used instead.
     const bad = fitEts(y, spec, {start: {params: {...short.params, alpha: 2}, initialStates: short.initialStates}})!;
     expect(bad.lik).toBeCloseTo(fitEts(y, spec)!.lik, 10);

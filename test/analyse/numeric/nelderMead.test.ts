@@ -21,6 +21,23 @@ describe('nelderMead', () => {
     });
   }
 
+  it('a start step per coordinate: the first simplex is the start plus each step along its axis', () => {
+    const f = functions['weighted quadratic'];
+    const start = Float64Array.of(1.01, -2.02, 3.03);
+    const seen: number[][] = [];
+    const small = nelderMead((x) => (seen.push(Array.from(x)), f(x)), start, {maxEvaluations: 2000, steps: Float64Array.of(0.01, 0.02, 0.03)});
+    expect(seen.slice(0, 4)).toEqual([
+      [1.01, -2.02, 3.03],
+      [1.01 + 0.01, -2.02, 3.03],
+      [1.01, -2.02 + 0.02, 3.03],
+      [1.01, -2.02, 3.03 + 0.03],
+    ]);
+    expect(small.value).toBeCloseTo(0.5, 6);
+    // A step that is not positive falls back to the usual one: the same run as without steps.
+    const usual = nelderMead(f, start, {maxEvaluations: 2000});
+    expect(nelderMead(f, start, {maxEvaluations: 2000, steps: Float64Array.of(0, 0, 0)})).toEqual(usual);
+  });
+
   it('treats an infinite objective as infeasible and stays inside the region', () => {
     const f = (x: Float64Array) => (x[0] < 0 || x[1] < 0 ? Infinity : (x[0] + 1) ** 2 + (x[1] - 2) ** 2);
     const r = nelderMead(f, Float64Array.of(1, 1));
