@@ -1,5 +1,6 @@
 import {describe, expect, it} from 'vitest';
-import {mkdir, readdir, readFile, writeFile} from 'node:fs/promises';
+import {execFileSync} from 'node:child_process';
+import {mkdir, readdir, readFile, stat, writeFile} from 'node:fs/promises';
 import {join} from 'node:path';
 import {archive, type ArchiveArgs} from '../../src/archive/archive.js';
 import {InputError} from '../../src/errors.js';
@@ -63,6 +64,20 @@ describe('archive', () => {
     const text = await readFile(join(folder, 'manifest.json'), 'utf8');
     expect(text).not.toMatch(/20\d\d-\d\d-\d\dT|"(date|time|created)"/i);
     expect(await readdir(join(out, 'harbourline-monthly'))).toEqual(['2026-10', 'index.html']);
+  });
+
+  it('records the real size and SHA-256 of results.json, written in blocks, with multi-byte text (coreutils sha256sum)', async () => {
+    // 300 series whose labels hold 2- and 3-byte UTF-8 characters: a results.json of several write blocks.
+    const labels = Array.from({length: 300}, (_, i) => ({id: `s${i}`, label: `Umsätze – Linie ${i} €`}));
+    const out = await tempDir();
+    const {folder} = await archive(args(out, report(2026, 10, labels)));
+    const file = join(folder, 'results.json');
+    const manifest = JSON.parse(await readFile(join(folder, 'manifest.json'), 'utf8'));
+    const entry = manifest.outputs.find((o: {path: string}) => o.path === 'results.json');
+    expect(entry.bytes).toBe((await stat(file)).size);
+    expect(entry.bytes).toBeGreaterThan(1 << 20);
+    expect(entry.sha256).toBe(execFileSync('sha256sum', [file], {encoding: 'utf8'}).split(' ')[0]);
+    expect(JSON.parse(await readFile(file, 'utf8')).series[299].label).toBe('Umsätze – Linie 299 €');
   });
 
   it('gives byte-identical folders and index for the same inputs', async () => {
