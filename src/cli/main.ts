@@ -182,7 +182,7 @@ export async function main(argv: string[], io: Io): Promise<number> {
       parseFormats,
     )
     .option('--force', 'replace a period folder that already exists', false)
-    .option('-j, --jobs <n>', 'threads at once: analysis threads, one fewer when charts are drawn', parseJobs, availableParallelism())
+    .option('-j, --jobs <n>', 'threads at once (analysis; one fewer when drawing)', parseJobs, availableParallelism())
     .option('--allow-dir <dir>', ALLOW_DIR_HELP, collect, [])
     .option(
       '--shard <i/n>',

@@ -79,7 +79,7 @@ export async function specToSvg(spec: TopLevelSpec, options: SvgOptions): Promis
   const values: unknown[] = [];
   const skeleton = withPlaceholders(spec, values) as TopLevelSpec;
   const key = JSON.stringify([options.locale, skeleton]);
-  const drawer = views.get(key) ?? newDrawer(skeleton, options);
+  const drawer = views.get(key) ?? newDrawer(skeleton, values.length, options);
   // Taken out while in use, so a chart that fails leaves no half-used View behind.
   views.delete(key);
   const {view, messages, datasets, size} = drawer;
@@ -90,17 +90,21 @@ export async function specToSvg(spec: TopLevelSpec, options: SvgOptions): Promis
     resetIds();
     svg = await view.toSVG();
     if (messages.length > 0) throw new Error(`chart ${options.idPrefix}: ${messages.join('; ')}`);
-    await clear(drawer);
   } catch (e) {
     view.finalize();
     throw e;
   }
-  if (views.size >= MAX_VIEWS) {
-    const [oldest, kept] = views.entries().next().value!;
-    kept.view.finalize();
-    views.delete(oldest);
+  try {
+    await clear(drawer);
+    if (views.size >= MAX_VIEWS) {
+      const [oldest, kept] = views.entries().next().value!;
+      kept.view.finalize();
+      views.delete(oldest);
+    }
+    views.set(key, drawer);
+  } catch {
+    view.finalize();
   }
-  views.set(key, drawer);
   return finishSvg(svg, options);
 }
 
@@ -128,12 +132,16 @@ interface Drawer {
 const views = new Map<string, Drawer>();
 const MAX_VIEWS = 32;
 
-function newDrawer(skeleton: TopLevelSpec, options: SvgOptions): Drawer {
+/** A new View for a skeleton with `slots` data placeholders, each of which must feed a dataset of its own. */
+function newDrawer(skeleton: TopLevelSpec, slots: number, options: SvgOptions): Drawer {
   const messages: string[] = [];
   const logger = collectingLogger(messages);
   const parsed = parseCached(skeleton, logger);
   if (messages.length > 0) throw new Error(`chart ${options.idPrefix}: ${messages.join('; ')}`);
   const datasets = inlineDatasets(parsed);
+  if (new Set(datasets.map((d) => d.slot)).size !== slots) {
+    throw new Error(`chart ${options.idPrefix}: inline data that feeds no dataset of its own`);
+  }
   const empty = withValues(parsed, Array.from({length: datasets.length}, () => [])) as vega.Runtime;
   const view = new vega.View(empty, {
     renderer: 'none',
@@ -156,7 +164,8 @@ function inlineDatasets(parsed: vega.Runtime): {name: string; slot: number}[] {
   const out: {name: string; slot: number}[] = [];
   for (const op of (parsed as unknown as {operators: RuntimeOperator[]}).operators) {
     const ingest = op.value?.$ingest;
-    const slot = Array.isArray(ingest) && ingest.length === 1 ? (ingest[0] as Record<string, unknown>)?.[SLOT] : undefined;
+    const first = Array.isArray(ingest) && ingest.length === 1 ? (ingest[0] as Record<string, unknown> | null) : null;
+    const slot = first?.[SLOT];
     const names = Object.keys(op.data ?? {});
     if (typeof slot === 'number' && names.length === 1) out.push({name: names[0], slot});
   }

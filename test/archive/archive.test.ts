@@ -66,7 +66,7 @@ describe('archive', () => {
     expect(await readdir(join(out, 'harbourline-monthly'))).toEqual(['2026-10', 'index.html']);
   });
 
-  it('records the real size and SHA-256 of results.json, written in blocks, with multi-byte text (coreutils sha256sum)', async () => {
+  it('records the size and SHA-256 of results.json written in blocks, with multi-byte text (sha256sum)', async () => {
     // 300 series whose labels hold 2- and 3-byte UTF-8 characters: a results.json of several write blocks.
     const labels = Array.from({length: 300}, (_, i) => ({id: `s${i}`, label: `Umsätze – Linie ${i} €`}));
     const out = await tempDir();

@@ -58,7 +58,8 @@ describe('demo pack, end to end', () => {
   });
 
   it('bookmarks list the groups with their series, as the pack arranges them (read by poppler)', () => {
-    const xml = execFileSync('pdftohtml', ['-xml', '-i', '-q', '-stdout', join(folder, 'report.pdf')], {encoding: 'utf8'});
+    const pdf = join(folder, 'report.pdf');
+    const xml = execFileSync('pdftohtml', ['-xml', '-i', '-q', '-stdout', pdf], {encoding: 'utf8'});
     const outline = xml.slice(xml.indexOf('<outline>'));
     // sample-config/monthly-pack.yaml: group "Trading" holds net-sales, footfall, avg-basket, returns-rate.
     expect(outline).toMatch(/<item page="\d+">Trading<\/item>\s*<outline>\s*<item page="\d+">Net sales<\/item>/);

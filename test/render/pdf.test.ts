@@ -95,9 +95,13 @@ describe.skipIf(chromium === null)('PDF with Chromium', () => {
     expect(check.stderr).toBe('');
     expect(check.stdout).toMatch(/Tagged:\s+no/);
     const xml = run('pdftohtml', ['-xml', '-i', '-q', '-stdout', file]);
-    const items = Array.from(xml.matchAll(/<item page="(\d+)">([^<]*)<\/item>/g), (m) => ({page: Number(m[1]), title: m[2]}));
+    const items = Array.from(xml.matchAll(/<item page="(\d+)">([^<]*)<\/item>/g), (m) => ({
+      page: Number(m[1]),
+      title: m[2],
+    }));
     const titles = items.map((i) => i.title);
-    expect(titles).toEqual(['At a glance', 'Net sales', 'Orders received', 'Methods and cautions', 'Net sales', 'Orders received', 'Data notes']);
+    const series = ['Net sales', 'Orders received'];
+    expect(titles).toEqual(['At a glance', ...series, 'Methods and cautions', ...series, 'Data notes']);
     // Nested under the methods: poppler prints the children in an <outline> of their own after their parent.
     expect(xml).toMatch(/Methods and cautions<\/item>\s*<outline>\s*<item page="\d+">Net sales<\/item>/);
     // Each bookmark's page holds its heading.

@@ -1,8 +1,8 @@
 /**
  * Nelder-Mead simplex minimisation, in the variant of Nash's Algorithm 14 ("Nelder-Mead minimisation"):
  * reflection coefficient `alpha`, contraction `beta`, expansion `gamma`, one axial start step of
- * 0.1·max|x₀ᵢ| (0.1 when x₀ = 0) unless `steps` gives one per coordinate, and a stop when the spread of function values over the simplex falls
- * below `relTol`·(|f(x₀)| + relTol) or after `maxEvaluations` evaluations.
+ * 0.1·max|x₀ᵢ| (0.1 when x₀ = 0) unless `steps` gives one per coordinate, and a stop when the spread of
+ * function values over the simplex falls below `relTol`·(|f(x₀)| + relTol) or after `maxEvaluations` evaluations.
  *
  * Why: ETS and Theta fits need a derivative-free minimiser over a handful of smoothing parameters and initial
  * states; this variant is the one statistical software has long used for those fits, so results agree with

@@ -25,7 +25,8 @@ describe('nelderMead', () => {
     const f = functions['weighted quadratic'];
     const start = Float64Array.of(1.01, -2.02, 3.03);
     const seen: number[][] = [];
-    const small = nelderMead((x) => (seen.push(Array.from(x)), f(x)), start, {maxEvaluations: 2000, steps: Float64Array.of(0.01, 0.02, 0.03)});
+    const steps = Float64Array.of(0.01, 0.02, 0.03);
+    const small = nelderMead((x) => (seen.push(Array.from(x)), f(x)), start, {maxEvaluations: 2000, steps});
     expect(seen.slice(0, 4)).toEqual([
       [1.01, -2.02, 3.03],
       [1.01 + 0.01, -2.02, 3.03],
