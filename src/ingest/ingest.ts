@@ -69,11 +69,12 @@ export async function ingest(plan: Plan): Promise<Dataset> {
     notes.push({file: plan.packFile, line: null, message: msg.inferredPeriod(formatPeriod(plan.frequency, period))});
   }
 
+  // A set, not a search of the plans per series: with 10,000 series that search took 14 s.
+  const targets = new Set(plans.flatMap((p) => p.target ?? []));
   const series: Series[] = [];
   for (const {plan: s, data, store, range} of found) {
     // A target (budget) keeps its values past the review period: the fiscal-year outturn compares against them.
-    const isTarget = plans.some((other) => other.target === s.id);
-    const placed = placeSeries(s.id, store, range, period, plan.frequency, isTarget);
+    const placed = placeSeries(s.id, store, range, period, plan.frequency, targets.has(s.id));
     const file = data.input!.file;
     if (!placed.ok) {
       problems.add(plan.packFile, s.line, null, placed.problem);
