@@ -65,6 +65,19 @@ function easterMarchShare(year: number, window: number): number {
 }
 
 const EASTER_MEAN_YEARS = {first: 1800, last: 2299};
+const meanShares = new Map<number, number>();
+
+/** Mean of {@link easterMarchShare} over 1800–2299, worked out once per window (500 Easter dates each time). */
+function meanEasterMarchShare(window: number): number {
+  let mean = meanShares.get(window);
+  if (mean === undefined) {
+    let sum = 0;
+    for (let y = EASTER_MEAN_YEARS.first; y <= EASTER_MEAN_YEARS.last; y++) sum += easterMarchShare(y, window);
+    mean = sum / (EASTER_MEAN_YEARS.last - EASTER_MEAN_YEARS.first + 1);
+    meanShares.set(window, mean);
+  }
+  return mean;
+}
 
 /**
  * Easter regressor: the share of the `window` days before Easter Sunday that fall in the period (March/Q1 or
@@ -74,9 +87,7 @@ const EASTER_MEAN_YEARS = {first: 1800, last: 2299};
  */
 export function easterRegressor(frequency: Frequency, start: number, n: number, window = 8): Float64Array {
   checkFrequency(frequency);
-  let meanMarch = 0;
-  for (let y = EASTER_MEAN_YEARS.first; y <= EASTER_MEAN_YEARS.last; y++) meanMarch += easterMarchShare(y, window);
-  meanMarch /= EASTER_MEAN_YEARS.last - EASTER_MEAN_YEARS.first + 1;
+  const meanMarch = meanEasterMarchShare(window);
   const out = new Float64Array(n);
   for (let i = 0; i < n; i++) {
     const index = start + i;

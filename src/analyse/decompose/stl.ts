@@ -156,11 +156,12 @@ export function stl(values: Float64Array, options: StlOptions): StlResult {
 let cached: {m: number; work: Work} | null = null;
 
 /**
- * Six work arrays of length m, kept between calls and rebuilt only when m changes: typed-array allocation,
- * not arithmetic, dominated short series. Safe because `stl` never re-enters itself.
+ * Six work arrays of at least length m, kept between calls and rebuilt only when a longer series comes: typed-array
+ * allocation, not arithmetic, dominated short series, and the revision diagnostic calls `stl` on ever shorter
+ * stretches of one series. Every routine uses the first m places only. Safe because `stl` never re-enters itself.
  */
 function workspace(m: number): Work {
-  if (cached === null || cached.m !== m) {
+  if (cached === null || cached.m < m) {
     const buffer = new Float64Array(6 * m);
     const view = (k: number): Float64Array => buffer.subarray(k * m, (k + 1) * m);
     const work = {

@@ -80,6 +80,19 @@ describe('stl against R stats::stl', () => {
 });
 
 describe('stl', () => {
+  it('gives the same result whatever series it decomposed before (its work arrays are shared)', () => {
+    const series = [600, 241, 49].map((n) =>
+      Float64Array.from({length: n}, (_, t) => 100 + 0.1 * t + 10 * Math.sin((2 * Math.PI * t) / 12) + ((t * 7) % 5)),
+    );
+    const run = (x: Float64Array) => stl(x, {period: 12, seasonalWindow: 7, robust: true});
+    const longFirst = series.map(run);
+    const shortFirst = [...series].reverse().map(run).reverse();
+    longFirst.forEach((f, i) => {
+      expect(Array.from(f.trend)).toEqual(Array.from(shortFirst[i].trend));
+      expect(Array.from(f.seasonal)).toEqual(Array.from(shortFirst[i].seasonal));
+    });
+  });
+
   it('nextOdd rounds then makes odd, like R', () => {
     expect([nextOdd(12), nextOdd(13), nextOdd(4.4), nextOdd(4.6)]).toEqual([13, 13, 5, 5]);
   });
