@@ -172,7 +172,7 @@ export function forecastArima(fit: ArimaFit, options: ForecastOptions): Forecast
     mean,
     levels,
     ...normalIntervals(mean, variance, levels),
-    runningTotals: arimaRunningTotals(fit, mean, levels),
+    runningTotals: totalsInterval(weights, fit.sigma2, mean, levels),
   };
 }
 
@@ -186,11 +186,21 @@ export function arimaRunningTotals(
   levels: number[],
   scales?: Float64Array,
 ): {lower: Map<number, Float64Array>; upper: Map<number, Float64Array>} {
-  const h = mean.length;
-  const totals = new Float64Array(h);
+  return totalsInterval(arimaErrorWeights(fit, mean.length), fit.sigma2, mean, levels, scales);
+}
+
+/** {@link arimaRunningTotals} from error weights already worked out. */
+function totalsInterval(
+  weights: Float64Array,
+  sigma2: number,
+  mean: Float64Array,
+  levels: number[],
+  scales?: Float64Array,
+): {lower: Map<number, Float64Array>; upper: Map<number, Float64Array>} {
+  const totals = new Float64Array(mean.length);
   let running = 0;
-  for (let k = 0; k < h; k++) totals[k] = running += mean[k];
-  return normalIntervals(totals, runningTotalVariance(arimaErrorWeights(fit, h), fit.sigma2, scales), levels);
+  for (let k = 0; k < mean.length; k++) totals[k] = running += mean[k];
+  return normalIntervals(totals, runningTotalVariance(weights, sigma2, scales), levels);
 }
 
 /**
