@@ -1,5 +1,4 @@
-import {loessAt, loessInto} from '../numeric/loess.js';
-import {movingAverageInto} from '../numeric/movingAverage.js';
+import {kernel, kernelHeap, slotAddress} from '../numeric/loessKernel.js';
 import {partialSortInPlace} from '../numeric/partialSort.js';
 
 /** Options of {@link stl}. Windows are in observations; `null` means the default rule written beside it. */
@@ -117,7 +116,7 @@ export function resolveStlOptions(n: number, options: StlOptions): StlResolved {
  * Agrees with R's `stats::stl` to better than 1e−10 relative on nine reference cases (test/reference/stl.R).
  *
  * Complexity: O((inner · (outer + 1)) · n · (ns/sJump + nt/tJump + nl/lJump)) time, O(n + period) memory:
- * the four result arrays, plus a work buffer reused across calls.
+ * the four result arrays, plus the kernel's heap (about 13·n slots), reused across calls.
  *
  * NaN policy: rejects NaN and infinities (R's `na.fail`); fill gaps first.
  *
@@ -133,114 +132,42 @@ export function stl(values: Float64Array, options: StlOptions): StlResult {
   const ns = oddAtLeast3(o.seasonalWindow);
   const nt = oddAtLeast3(o.trendWindow);
   const nl = oddAtLeast3(o.lowpassWindow);
-  const w = workspace(n + 2 * np);
-  const trend = new Float64Array(n);
-  const seasonal = new Float64Array(n);
-  const weights = new Float64Array(n).fill(1);
-  let robustness: Float64Array | null = null;
+  // Kernel heap, in slots: data, trend, seasonal, robustness weights (n each); ones (m = n + 2·np); the wide-table
+  // area (n + 2); the inner pass's work areas (4·m + 3·p, p = ⌊n/np⌋ + 3).
+  const m = n + 2 * np;
+  const [Y, T, S, W, ONES, WIDE, WORK] = [0, n, 2 * n, 3 * n, 4 * n, 4 * n + m, 5 * n + m + 2];
+  const heap = kernelHeap(WORK + 4 * m + 3 * (Math.trunc(n / np) + 3));
+  heap.set(values, Y);
+  heap.fill(0, T, W);
+  heap.fill(1, W, WIDE);
+  kernel.setWideArea(slotAddress(WIDE));
+  const weights = heap.subarray(W, W + n);
+  let plain = 1;
   for (let pass = 0; ; pass++) {
     for (let j = 0; j < o.inner; j++) {
-      innerPass(values, n, np, ns, nt, nl, o, robustness, seasonal, trend, w);
+      kernel.innerPass(
+        slotAddress(Y), n, np, ns, nt, nl, o.seasonalDegree, o.trendDegree, o.lowpassDegree,
+        o.seasonalJump, o.trendJump, o.lowpassJump, slotAddress(plain === 1 ? ONES : W), plain, slotAddress(ONES),
+        slotAddress(S), slotAddress(T), slotAddress(WORK),
+      );
     }
     if (pass >= o.outer) break;
-    for (let i = 0; i < n; i++) w.scratch[i] = trend[i] + seasonal[i];
-    robustnessWeightsInto(values, w.scratch, n, weights, w.scratch2);
-    robustness = weights;
+    const fit = heap.subarray(WORK, WORK + n);
+    for (let i = 0; i < n; i++) fit[i] = heap[T + i] + heap[S + i];
+    robustnessWeightsInto(values, fit, n, weights, heap.subarray(WORK + n, WORK + 2 * n));
+    plain = 0;
   }
+  const trend = heap.slice(T, T + n);
+  const seasonal = heap.slice(S, S + n);
   if (o.periodic) averagePerPosition(seasonal, np);
   const remainder = new Float64Array(n);
   for (let i = 0; i < n; i++) remainder[i] = values[i] - seasonal[i] - trend[i];
-  return {seasonal, trend, remainder, weights, options: o};
-}
-
-let cached: {m: number; work: Work} | null = null;
-
-/**
- * Six work arrays of at least length m, kept between calls and rebuilt only when a longer series comes: typed-array
- * allocation, not arithmetic, dominated short series, and the revision diagnostic calls `stl` on ever shorter
- * stretches of one series. Every routine uses the first m places only. Safe because `stl` never re-enters itself.
- */
-function workspace(m: number): Work {
-  if (cached === null || cached.m < m) {
-    const buffer = new Float64Array(6 * m);
-    const view = (k: number): Float64Array => buffer.subarray(k * m, (k + 1) * m);
-    const work = {
-      detrended: view(0),
-      cycle: view(1),
-      lowpass: view(2),
-      scratch: view(3),
-      scratch2: view(4),
-      subWeights: view(5),
-    };
-    cached = {m, work};
-  }
-  return cached.work;
+  return {seasonal, trend, remainder, weights: weights.slice(), options: o};
 }
 
 function oddAtLeast3(window: number): number {
   const v = Math.max(3, window);
   return v % 2 === 0 ? v + 1 : v;
-}
-
-interface Work {
-  detrended: Float64Array;
-  cycle: Float64Array;
-  lowpass: Float64Array;
-  scratch: Float64Array;
-  scratch2: Float64Array;
-  subWeights: Float64Array;
-}
-
-function innerPass(
-  y: Float64Array,
-  n: number,
-  np: number,
-  ns: number,
-  nt: number,
-  nl: number,
-  o: StlResolved,
-  robustness: Float64Array | null,
-  seasonal: Float64Array,
-  trend: Float64Array,
-  w: Work,
-): void {
-  for (let i = 0; i < n; i++) w.detrended[i] = y[i] - trend[i];
-  cycleSubseriesInto(w.detrended, n, np, ns, o.seasonalDegree, o.seasonalJump, robustness, w);
-  // Low-pass: moving averages of length np, np, 3 over the n + 2·np smoothed cycle-subseries, then LOESS.
-  movingAverageInto(w.cycle, n + 2 * np, np, w.lowpass);
-  movingAverageInto(w.lowpass, n + np + 1, np, w.scratch);
-  movingAverageInto(w.scratch, n + 2, 3, w.lowpass);
-  loessInto(w.lowpass, n, nl, o.lowpassDegree, o.lowpassJump, null, w.detrended, 0);
-  for (let i = 0; i < n; i++) seasonal[i] = w.cycle[np + i] - w.detrended[i];
-  for (let i = 0; i < n; i++) w.detrended[i] = y[i] - seasonal[i];
-  loessInto(w.detrended, n, nt, o.trendDegree, o.trendJump, robustness, trend, 0);
-}
-
-/** Smooth each cycle-subseries, extended by one point at both ends, into `w.cycle` (length n + 2·np). */
-function cycleSubseriesInto(
-  x: Float64Array,
-  n: number,
-  np: number,
-  ns: number,
-  degree: number,
-  jump: number,
-  robustness: Float64Array | null,
-  w: Work,
-): void {
-  const sub = w.lowpass;
-  const fit = w.scratch2;
-  const subWeights = robustness === null ? null : w.subWeights;
-  for (let j = 0; j < np; j++) {
-    const k = Math.trunc((n - j - 1) / np) + 1;
-    for (let i = 0; i < k; i++) sub[i] = x[i * np + j];
-    if (subWeights !== null) for (let i = 0; i < k; i++) subWeights[i] = robustness![i * np + j];
-    loessInto(sub, k, ns, degree, jump, subWeights, fit, 1);
-    const first = loessAt(sub, k, ns, degree, 0, 1, Math.min(ns, k), subWeights);
-    fit[0] = Number.isNaN(first) ? fit[1] : first;
-    const last = loessAt(sub, k, ns, degree, k + 1, Math.max(1, k - ns + 1), k, subWeights);
-    fit[k + 1] = Number.isNaN(last) ? fit[k] : last;
-    for (let i = 0; i < k + 2; i++) w.cycle[i * np + j] = fit[i];
-  }
 }
 
 /**

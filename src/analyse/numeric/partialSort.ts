@@ -78,18 +78,20 @@ export function partialSortInPlace(a: Float64Array, ind: readonly number[]): voi
         break;
       }
       case 181:
-        l -= 1;
-        if (a[l - 1] <= t) {
-          const tt = a[l - 1];
-          do k += 1;
-          while (!(a[k - 1] >= t));
-          if (k > l) {
-            label = 183;
-            break;
+        // The published code returns to label 181 until the scans cross; the loop stays here instead of
+        // dispatching once per element.
+        for (;;) {
+          l -= 1;
+          if (a[l - 1] <= t) {
+            const tt = a[l - 1];
+            do k += 1;
+            while (!(a[k - 1] >= t));
+            if (k > l) break;
+            a[l - 1] = a[k - 1];
+            a[k - 1] = tt;
           }
-          a[l - 1] = a[k - 1];
-          a[k - 1] = tt;
         }
+        label = 183;
         break;
       case 183: {
         indl[m] = jl;
