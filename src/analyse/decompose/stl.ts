@@ -1,5 +1,4 @@
 import {kernel, kernelHeap, slotAddress} from '../numeric/loessKernel.js';
-import {partialSortInPlace} from '../numeric/partialSort.js';
 
 /** Options of {@link stl}. Windows are in observations; `null` means the default rule written beside it. */
 export interface StlOptions {
@@ -116,7 +115,7 @@ export function resolveStlOptions(n: number, options: StlOptions): StlResolved {
  * Agrees with R's `stats::stl` to better than 1e−10 relative on nine reference cases (test/reference/stl.R).
  *
  * Complexity: O((inner · (outer + 1)) · n · (ns/sJump + nt/tJump + nl/lJump)) time, O(n + period) memory:
- * the four result arrays, plus the kernel's heap (about 13·n slots), reused across calls.
+ * the four result arrays, plus the kernel's heap (about 12·n + 10·period slots), reused across calls.
  *
  * NaN policy: rejects NaN and infinities (R's `na.fail`); fill gaps first.
  *
@@ -133,14 +132,14 @@ export function stl(values: Float64Array, options: StlOptions): StlResult {
   const nt = oddAtLeast3(o.trendWindow);
   const nl = oddAtLeast3(o.lowpassWindow);
   // Kernel heap, in slots: data, trend, seasonal, robustness weights (n each); ones (m = n + 2·np); the wide-table
-  // area (n + 2); the inner pass's work areas (4·m + 3·p, p = ⌊n/np⌋ + 3).
+  // area (2·n + 3: distances −(n + 1) to n + 1); the inner pass's work areas (4·m + 3·p, p = ⌊n/np⌋ + 3).
   const m = n + 2 * np;
-  const [Y, T, S, W, ONES, WIDE, WORK] = [0, n, 2 * n, 3 * n, 4 * n, 4 * n + m, 5 * n + m + 2];
+  const [Y, T, S, W, ONES, WIDE, WORK] = [0, n, 2 * n, 3 * n, 4 * n, 4 * n + m, 6 * n + m + 3];
   const heap = kernelHeap(WORK + 4 * m + 3 * (Math.trunc(n / np) + 3));
   heap.set(values, Y);
   heap.fill(0, T, W);
   heap.fill(1, W, WIDE);
-  kernel.setWideArea(slotAddress(WIDE));
+  kernel.setWideArea(slotAddress(WIDE), n + 1);
   const weights = heap.subarray(W, W + n);
   let plain = 1;
   for (let pass = 0; ; pass++) {
@@ -152,9 +151,7 @@ export function stl(values: Float64Array, options: StlOptions): StlResult {
       );
     }
     if (pass >= o.outer) break;
-    const fit = heap.subarray(WORK, WORK + n);
-    for (let i = 0; i < n; i++) fit[i] = heap[T + i] + heap[S + i];
-    robustnessWeightsInto(values, fit, n, weights, heap.subarray(WORK + n, WORK + 2 * n));
+    kernel.robustnessWeights(slotAddress(Y), slotAddress(T), slotAddress(S), n, slotAddress(W), slotAddress(WORK));
     plain = 0;
   }
   const trend = heap.slice(T, T + n);
@@ -168,36 +165,6 @@ export function stl(values: Float64Array, options: StlOptions): StlResult {
 function oddAtLeast3(window: number): number {
   const v = Math.max(3, window);
   return v % 2 === 0 ? v + 1 : v;
-}
-
-/**
- * Bisquare robustness weights from |y − fit| (Cleveland et al. 1990, §2.3): h = 6 · median, weight
- * (1 − (r/h)²)², 1 below 0.001·h and 0 above 0.999·h. The median is the paper's: mean of the values its
- * partial sort leaves at ranks ⌊n/2⌋+1 and n − ⌊n/2⌋ (see {@link partialSortInPlace} for why not a true median).
- */
-function robustnessWeightsInto(
-  y: Float64Array,
-  fit: Float64Array,
-  n: number,
-  out: Float64Array,
-  scratch: Float64Array,
-): void {
-  const abs = scratch.subarray(0, n);
-  for (let i = 0; i < n; i++) abs[i] = Math.abs(y[i] - fit[i]);
-  const mid1 = (n >> 1) + 1;
-  const mid2 = n - mid1 + 1;
-  partialSortInPlace(abs, [mid1, mid2]);
-  const cmad = 3 * (abs[mid1 - 1] + abs[mid2 - 1]);
-  const c9 = 0.999 * cmad;
-  const c1 = 0.001 * cmad;
-  for (let i = 0; i < n; i++) {
-    const r = Math.abs(y[i] - fit[i]);
-    if (r <= c1) out[i] = 1;
-    else if (r <= c9) {
-      const q = r / cmad;
-      out[i] = (1 - q * q) * (1 - q * q);
-    } else out[i] = 0;
-  }
 }
 
 /** Replace each value by the mean of its cycle position (R's `tapply(seasonal, cycle(x), mean)`). */

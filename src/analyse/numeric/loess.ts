@@ -38,12 +38,12 @@ export interface LoessOptions {
 export function loess(values: Float64Array, {span, degree = 1, jump = 1, weights = null}: LoessOptions): Float64Array {
   const n = values.length;
   if (n === 0) return new Float64Array(0);
-  // Heap: values, weights (or ones), fits, and the wide-table area.
-  const heap = kernelHeap(4 * n + 2);
+  // Heap: values, weights (or ones), fits, and the wide-table area (distances −(n + 1) to n + 1).
+  const heap = kernelHeap(5 * n + 3);
   heap.set(values, 0);
   if (weights === null) heap.fill(1, n, 2 * n);
   else heap.set(weights.subarray(0, n), n);
-  kernel.setWideArea(slotAddress(3 * n));
+  kernel.setWideArea(slotAddress(3 * n), n + 1);
   kernel.loessInto(
     slotAddress(0), n, span, degree, jump, slotAddress(n), weights === null ? 1 : 0, slotAddress(2 * n),
   );

@@ -10,10 +10,12 @@ import {LOESS_KERNEL_BASE64} from './loessKernelBinary.js';
 interface KernelExports {
   memory: {buffer: ArrayBuffer; grow(pages: number): number};
   heapBase: {value: number};
-  setWideArea(address: number): void;
+  setWideArea(address: number, capacity: number): void;
   loessInto(
     y: number, n: number, span: number, degree: number, jump: number, rw: number, plain: number, out: number,
   ): void;
+  robustnessWeights(y: number, trend: number, seasonal: number, n: number, out: number, scratch: number): void;
+  partialSort(a: number, n: number, ranks: number, count: number): void;
   innerPass(
     y: number, n: number, np: number, ns: number, nt: number, nl: number,
     sDegree: number, tDegree: number, lDegree: number, sJump: number, tJump: number, lJump: number,

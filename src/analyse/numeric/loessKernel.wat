@@ -13,22 +13,25 @@
 ;; and its caller falls back to the data value, as the paper does.
 ;; Build: npm run build:wasm (compiles this file and writes loessKernelBinary.ts).
 (module
-  (memory (export "memory") 18)
+  (memory (export "memory") 33)
 
-  ;; Tricube tables for bandwidths 0 to 512: the table of h starts at f64 slot h(h+1)/2 and holds distances 0 to h.
-  ;; 513 * 514 / 2 = 131,841 slots end at byte 1,054,728; one flag byte per bandwidth follows.
-  (global $FLAGS i32 (i32.const 1054728))
+  ;; Tricube tables for bandwidths 0 to 512, two-sided so that a window reads its weights in one direction: the
+  ;; table of h starts at f64 slot h^2 and holds distances -h to h. 513^2 = 263,169 slots end at byte 2,105,352;
+  ;; one flag byte per bandwidth follows, then the partial sort's four stacks of 17 i32 (indl, indu, il, iu).
+  (global $FLAGS i32 (i32.const 2105352))
   (global $MAX_KEPT i32 (i32.const 512))
-  (global (export "heapBase") i32 (i32.const 1055744))
+  (global $STACKS i32 (i32.const 2105872))
+  (global (export "heapBase") i32 (i32.const 2106144))
 
-  ;; Wider bandwidths (periodic seasonal windows) use one table in the caller's area, rebuilt when h changes.
+  ;; Wider bandwidths (periodic seasonal windows) use one table in the caller's area, rebuilt when h changes:
+  ;; distances -capacity to capacity around the slot at $wide.
   (global $wide (mut i32) (i32.const 0))
   (global $wideH (mut i32) (i32.const -1))
   (global $wideFilled (mut i32) (i32.const -1))
 
-  ;; Name the area for wide tables: at least (longest distance + 1) slots of f64.
-  (func (export "setWideArea") (param $address i32)
-    (global.set $wide (local.get $address))
+  ;; Name the area for wide tables: 2 * capacity + 1 slots from $address, capacity >= the longest distance.
+  (func (export "setWideArea") (param $address i32) (param $capacity i32)
+    (global.set $wide (i32.add (local.get $address) (i32.shl (local.get $capacity) (i32.const 3))))
     (global.set $wideH (i32.const -1))
     (global.set $wideFilled (i32.const -1)))
 
@@ -41,13 +44,15 @@
     (local.set $c (f64.sub (f64.const 1) (f64.mul (f64.mul (local.get $q) (local.get $q)) (local.get $q))))
     (f64.mul (f64.mul (local.get $c) (local.get $c)) (local.get $c)))
 
-  ;; Write tricube weights for distances 0 to $top of bandwidth $h from byte address $table on.
-  (func $fillTable (param $table i32) (param $h i32) (param $top i32)
-    (local $r i32)
+  ;; Write tricube weights of bandwidth $h for distances -$top to $top around the slot at byte address $centre.
+  (func $fillTable (param $centre i32) (param $h i32) (param $top i32)
+    (local $r i32) (local $w f64) (local $at i32)
     (block $done (loop $next
       (br_if $done (i32.gt_s (local.get $r) (local.get $top)))
-      (f64.store (i32.add (local.get $table) (i32.shl (local.get $r) (i32.const 3)))
-        (call $tricube (f64.convert_i32_s (local.get $r)) (f64.convert_i32_s (local.get $h))))
+      (local.set $w (call $tricube (f64.convert_i32_s (local.get $r)) (f64.convert_i32_s (local.get $h))))
+      (local.set $at (i32.shl (local.get $r) (i32.const 3)))
+      (f64.store (i32.add (local.get $centre) (local.get $at)) (local.get $w))
+      (f64.store (i32.sub (local.get $centre) (local.get $at)) (local.get $w))
       (local.set $r (i32.add (local.get $r) (i32.const 1)))
       (br $next))))
 
@@ -57,7 +62,7 @@
     (if (i32.le_s (local.get $h) (global.get $MAX_KEPT))
       (then
         (local.set $table (i32.shl
-          (i32.shr_u (i32.mul (local.get $h) (i32.add (local.get $h) (i32.const 1))) (i32.const 1))
+          (i32.add (i32.mul (local.get $h) (local.get $h)) (local.get $h))
           (i32.const 3)))
         (if (i32.eqz (i32.load8_u (i32.add (global.get $FLAGS) (local.get $h))))
           (then
@@ -73,16 +78,18 @@
 
   ;; Local fit at whole-number position $x (may lie outside 1..n) from points $left..$right of y (routine est).
   ;; $span is the nominal window; $rw the robustness weights (an array of ones for a plain fit, with $plain = 1).
-  ;; One pass sums w, w u, w u^2, w y and w u y with u = j - x; a local constant, a fit without width, and a plain
-  ;; fit at the centre of a symmetric window need only w and w y. Returns NaN when every weight is zero.
+  ;; One pass sums w, w u, w u^2, w y and w u y with u = j - x, two points at a time (SIMD lanes for even and odd
+  ;; steps, added at the end); a local constant, a fit without width, and a plain fit at the centre of a symmetric
+  ;; window need only w and w y. Returns NaN when every weight is zero.
   (func $loessAt (export "loessAt")
     (param $y i32) (param $n i32) (param $span i32) (param $degree i32) (param $x i32)
     (param $left i32) (param $right i32) (param $rw i32) (param $plain i32) (result f64)
-    (local $h i32) (local $kernel i32) (local $split i32) (local $j i32)
-    (local $pk i32) (local $py i32) (local $pr i32) (local $end i32)
+    (local $h i32) (local $end i32) (local $pk i32) (local $py i32) (local $pr i32) (local $last i32)
     (local $w f64) (local $wu f64) (local $wy f64) (local $u f64)
     (local $sw f64) (local $swu f64) (local $swuu f64) (local $swy f64) (local $swuy f64)
     (local $level f64) (local $meanU f64) (local $c f64)
+    (local $vw v128) (local $vwu v128) (local $vwy v128) (local $vu v128)
+    (local $aw v128) (local $awu v128) (local $awuu v128) (local $awy v128) (local $awuy v128)
     (local.set $h (i32.sub (local.get $x) (local.get $left)))
     (if (i32.gt_s (i32.sub (local.get $right) (local.get $x)) (local.get $h))
       (then (local.set $h (i32.sub (local.get $right) (local.get $x)))))
@@ -90,85 +97,69 @@
     (if (i32.gt_s (local.get $span) (local.get $n))
       (then (local.set $h (i32.add (local.get $h)
         (i32.div_s (i32.sub (local.get $span) (local.get $n)) (i32.const 2))))))
-    (local.set $kernel (call $kernel (local.get $h) (local.get $end)))
-    ;; split = min(max(x, left), right + 1): points left of it lie left of x.
-    (local.set $split (local.get $x))
-    (if (i32.lt_s (local.get $split) (local.get $left)) (then (local.set $split (local.get $left))))
-    (if (i32.gt_s (local.get $split) (i32.add (local.get $right) (i32.const 1)))
-      (then (local.set $split (i32.add (local.get $right) (i32.const 1)))))
+    ;; Pointers to the weight of distance left - x, to y[left] and to rw[left]; $last points at y[right].
+    (local.set $pk (i32.add (call $kernel (local.get $h) (local.get $end))
+      (i32.shl (i32.sub (local.get $left) (local.get $x)) (i32.const 3))))
     (local.set $py (i32.add (local.get $y) (i32.shl (i32.sub (local.get $left) (i32.const 1)) (i32.const 3))))
     (local.set $pr (i32.add (local.get $rw) (i32.shl (i32.sub (local.get $left) (i32.const 1)) (i32.const 3))))
+    (local.set $last (i32.add (local.get $y) (i32.shl (i32.sub (local.get $right) (i32.const 1)) (i32.const 3))))
     (if (i32.or (i32.or (i32.eqz (local.get $degree)) (i32.eqz (local.get $h)))
                 (i32.and (local.get $plain)
                   (i32.eq (i32.sub (local.get $x) (local.get $left)) (i32.sub (local.get $right) (local.get $x)))))
       (then
-        ;; Left of x: distance x - j falls as j rises.
-        (local.set $pk (i32.add (local.get $kernel)
-          (i32.shl (i32.sub (local.get $x) (local.get $left)) (i32.const 3))))
-        (local.set $j (local.get $left))
         (block $done (loop $next
-          (br_if $done (i32.ge_s (local.get $j) (local.get $split)))
-          (local.set $w (f64.mul (f64.load (local.get $pk)) (f64.load (local.get $pr))))
-          (local.set $sw (f64.add (local.get $sw) (local.get $w)))
-          (local.set $swy (f64.add (local.get $swy) (f64.mul (local.get $w) (f64.load (local.get $py)))))
-          (local.set $pk (i32.sub (local.get $pk) (i32.const 8)))
-          (local.set $py (i32.add (local.get $py) (i32.const 8)))
-          (local.set $pr (i32.add (local.get $pr) (i32.const 8)))
-          (local.set $j (i32.add (local.get $j) (i32.const 1)))
+          (br_if $done (i32.ge_u (local.get $py) (local.get $last)))
+          (local.set $vw (f64x2.mul (v128.load (local.get $pk)) (v128.load (local.get $pr))))
+          (local.set $aw (f64x2.add (local.get $aw) (local.get $vw)))
+          (local.set $awy (f64x2.add (local.get $awy) (f64x2.mul (local.get $vw) (v128.load (local.get $py)))))
+          (local.set $pk (i32.add (local.get $pk) (i32.const 16)))
+          (local.set $py (i32.add (local.get $py) (i32.const 16)))
+          (local.set $pr (i32.add (local.get $pr) (i32.const 16)))
           (br $next)))
-        ;; From x on: distance j - x rises with j.
-        (local.set $pk (i32.add (local.get $kernel)
-          (i32.shl (i32.sub (local.get $split) (local.get $x)) (i32.const 3))))
-        (block $done (loop $next
-          (br_if $done (i32.gt_s (local.get $j) (local.get $right)))
-          (local.set $w (f64.mul (f64.load (local.get $pk)) (f64.load (local.get $pr))))
-          (local.set $sw (f64.add (local.get $sw) (local.get $w)))
-          (local.set $swy (f64.add (local.get $swy) (f64.mul (local.get $w) (f64.load (local.get $py)))))
-          (local.set $pk (i32.add (local.get $pk) (i32.const 8)))
-          (local.set $py (i32.add (local.get $py) (i32.const 8)))
-          (local.set $pr (i32.add (local.get $pr) (i32.const 8)))
-          (local.set $j (i32.add (local.get $j) (i32.const 1)))
-          (br $next)))
+        (local.set $sw (f64.add (f64x2.extract_lane 0 (local.get $aw)) (f64x2.extract_lane 1 (local.get $aw))))
+        (local.set $swy (f64.add (f64x2.extract_lane 0 (local.get $awy)) (f64x2.extract_lane 1 (local.get $awy))))
+        (if (i32.eq (local.get $py) (local.get $last))
+          (then
+            (local.set $w (f64.mul (f64.load (local.get $pk)) (f64.load (local.get $pr))))
+            (local.set $sw (f64.add (local.get $sw) (local.get $w)))
+            (local.set $swy (f64.add (local.get $swy) (f64.mul (local.get $w) (f64.load (local.get $py)))))))
         (if (f64.gt (local.get $sw) (f64.const 0))
           (then (return (f64.div (local.get $swy) (local.get $sw)))))
         (return (f64.const nan))))
     ;; Local line: five sums, then the closed form of the weighted least-squares line at u = 0.
-    (local.set $pk (i32.add (local.get $kernel) (i32.shl (i32.sub (local.get $x) (local.get $left)) (i32.const 3))))
     (local.set $u (f64.convert_i32_s (i32.sub (local.get $left) (local.get $x))))
-    (local.set $j (local.get $left))
+    (local.set $vu (f64x2.replace_lane 1 (f64x2.splat (local.get $u)) (f64.add (local.get $u) (f64.const 1))))
     (block $done (loop $next
-      (br_if $done (i32.ge_s (local.get $j) (local.get $split)))
-      (local.set $w (f64.mul (f64.load (local.get $pk)) (f64.load (local.get $pr))))
-      (local.set $wu (f64.mul (local.get $w) (local.get $u)))
-      (local.set $wy (f64.mul (local.get $w) (f64.load (local.get $py))))
-      (local.set $sw (f64.add (local.get $sw) (local.get $w)))
-      (local.set $swu (f64.add (local.get $swu) (local.get $wu)))
-      (local.set $swuu (f64.add (local.get $swuu) (f64.mul (local.get $wu) (local.get $u))))
-      (local.set $swy (f64.add (local.get $swy) (local.get $wy)))
-      (local.set $swuy (f64.add (local.get $swuy) (f64.mul (local.get $wy) (local.get $u))))
-      (local.set $u (f64.add (local.get $u) (f64.const 1)))
-      (local.set $pk (i32.sub (local.get $pk) (i32.const 8)))
-      (local.set $py (i32.add (local.get $py) (i32.const 8)))
-      (local.set $pr (i32.add (local.get $pr) (i32.const 8)))
-      (local.set $j (i32.add (local.get $j) (i32.const 1)))
+      (br_if $done (i32.ge_u (local.get $py) (local.get $last)))
+      (local.set $vw (f64x2.mul (v128.load (local.get $pk)) (v128.load (local.get $pr))))
+      (local.set $vwu (f64x2.mul (local.get $vw) (local.get $vu)))
+      (local.set $vwy (f64x2.mul (local.get $vw) (v128.load (local.get $py))))
+      (local.set $aw (f64x2.add (local.get $aw) (local.get $vw)))
+      (local.set $awu (f64x2.add (local.get $awu) (local.get $vwu)))
+      (local.set $awuu (f64x2.add (local.get $awuu) (f64x2.mul (local.get $vwu) (local.get $vu))))
+      (local.set $awy (f64x2.add (local.get $awy) (local.get $vwy)))
+      (local.set $awuy (f64x2.add (local.get $awuy) (f64x2.mul (local.get $vwy) (local.get $vu))))
+      (local.set $vu (f64x2.add (local.get $vu) (v128.const f64x2 2 2)))
+      (local.set $pk (i32.add (local.get $pk) (i32.const 16)))
+      (local.set $py (i32.add (local.get $py) (i32.const 16)))
+      (local.set $pr (i32.add (local.get $pr) (i32.const 16)))
       (br $next)))
-    (local.set $pk (i32.add (local.get $kernel) (i32.shl (i32.sub (local.get $split) (local.get $x)) (i32.const 3))))
-    (block $done (loop $next
-      (br_if $done (i32.gt_s (local.get $j) (local.get $right)))
-      (local.set $w (f64.mul (f64.load (local.get $pk)) (f64.load (local.get $pr))))
-      (local.set $wu (f64.mul (local.get $w) (local.get $u)))
-      (local.set $wy (f64.mul (local.get $w) (f64.load (local.get $py))))
-      (local.set $sw (f64.add (local.get $sw) (local.get $w)))
-      (local.set $swu (f64.add (local.get $swu) (local.get $wu)))
-      (local.set $swuu (f64.add (local.get $swuu) (f64.mul (local.get $wu) (local.get $u))))
-      (local.set $swy (f64.add (local.get $swy) (local.get $wy)))
-      (local.set $swuy (f64.add (local.get $swuy) (f64.mul (local.get $wy) (local.get $u))))
-      (local.set $u (f64.add (local.get $u) (f64.const 1)))
-      (local.set $pk (i32.add (local.get $pk) (i32.const 8)))
-      (local.set $py (i32.add (local.get $py) (i32.const 8)))
-      (local.set $pr (i32.add (local.get $pr) (i32.const 8)))
-      (local.set $j (i32.add (local.get $j) (i32.const 1)))
-      (br $next)))
+    (local.set $sw (f64.add (f64x2.extract_lane 0 (local.get $aw)) (f64x2.extract_lane 1 (local.get $aw))))
+    (local.set $swu (f64.add (f64x2.extract_lane 0 (local.get $awu)) (f64x2.extract_lane 1 (local.get $awu))))
+    (local.set $swuu (f64.add (f64x2.extract_lane 0 (local.get $awuu)) (f64x2.extract_lane 1 (local.get $awuu))))
+    (local.set $swy (f64.add (f64x2.extract_lane 0 (local.get $awy)) (f64x2.extract_lane 1 (local.get $awy))))
+    (local.set $swuy (f64.add (f64x2.extract_lane 0 (local.get $awuy)) (f64x2.extract_lane 1 (local.get $awuy))))
+    (if (i32.eq (local.get $py) (local.get $last))
+      (then
+        (local.set $u (f64x2.extract_lane 0 (local.get $vu)))
+        (local.set $w (f64.mul (f64.load (local.get $pk)) (f64.load (local.get $pr))))
+        (local.set $wu (f64.mul (local.get $w) (local.get $u)))
+        (local.set $wy (f64.mul (local.get $w) (f64.load (local.get $py))))
+        (local.set $sw (f64.add (local.get $sw) (local.get $w)))
+        (local.set $swu (f64.add (local.get $swu) (local.get $wu)))
+        (local.set $swuu (f64.add (local.get $swuu) (f64.mul (local.get $wu) (local.get $u))))
+        (local.set $swy (f64.add (local.get $swy) (local.get $wy)))
+        (local.set $swuy (f64.add (local.get $swuy) (f64.mul (local.get $wy) (local.get $u))))))
     (if (i32.eqz (f64.gt (local.get $sw) (f64.const 0))) (then (return (f64.const nan))))
     (local.set $level (f64.div (local.get $swy) (local.get $sw)))
     (local.set $meanU (f64.div (local.get $swu) (local.get $sw)))
@@ -376,7 +367,167 @@
       (local.set $i (i32.add (local.get $i) (i32.const 1)))
       (br $next))))
 
-  ;; One inner pass of STL (routine onestp, paper section 2.2) on y[1..n], updating seasonal and trend in place.
+  ;; Partial quicksort of STL's published code (routine psort, after R. C. Singleton, ACM Algorithm 347, 1969),
+  ;; ported step by step: rearranges a[1..n] so that the positions ind[1..ni] (1-based, ascending, i32) are meant to
+  ;; hold the order statistics of those ranks. In some inputs it leaves another value at a requested position
+  ;; (seen on R's UKgas and log(AirPassengers)); reproducing R's stats::stl needs this routine, not a true median.
+  ;; The published code's labels are states of one dispatch loop: 0 = 161, 1 = 166, 2 = 173, 3 = 10, 4 = 181,
+  ;; 5 = 183, 6 = 174.
+  (func $partialSort (export "partialSort") (param $a i32) (param $n i32) (param $ind i32) (param $ni i32)
+    (local $state i32) (local $i i32) (local $j i32) (local $m i32) (local $k i32) (local $l i32)
+    (local $jl i32) (local $ju i32) (local $p i32) (local $ij i32) (local $t f64) (local $tt f64)
+    (if (i32.or (i32.lt_s (local.get $n) (i32.const 2)) (i32.eqz (local.get $ni))) (then (return)))
+    (memory.fill (global.get $STACKS) (i32.const 0) (i32.const 272))
+    (local.set $jl (i32.const 1))
+    (local.set $ju (local.get $ni))
+    (i32.store (i32.add (global.get $STACKS) (i32.add (i32.const 0) (i32.shl (i32.const 1) (i32.const 2)))) (i32.const 1))
+    (i32.store (i32.add (global.get $STACKS) (i32.add (i32.const 68) (i32.shl (i32.const 1) (i32.const 2)))) (local.get $ni))
+    (local.set $i (i32.const 1))
+    (local.set $j (local.get $n))
+    (local.set $m (i32.const 1))
+    (loop $dispatch
+      (block $s174 (block $s183 (block $s181 (block $s10 (block $s173 (block $s166 (block $s161
+        (br_table $s161 $s166 $s173 $s10 $s181 $s183 $s174 (local.get $state)))
+        ;; 161
+        (local.set $state (select (i32.const 3) (i32.const 1) (i32.lt_s (local.get $i) (local.get $j))))
+        (br $dispatch))
+        ;; 166: pop a segment
+        (local.set $m (i32.sub (local.get $m) (i32.const 1)))
+        (if (i32.eqz (local.get $m)) (then (return)))
+        (local.set $i (i32.load (i32.add (global.get $STACKS) (i32.add (i32.const 136) (i32.shl (local.get $m) (i32.const 2))))))
+        (local.set $j (i32.load (i32.add (global.get $STACKS) (i32.add (i32.const 204) (i32.shl (local.get $m) (i32.const 2))))))
+        (local.set $jl (i32.load (i32.add (global.get $STACKS) (i32.add (i32.const 0) (i32.shl (local.get $m) (i32.const 2))))))
+        (local.set $ju (i32.load (i32.add (global.get $STACKS) (i32.add (i32.const 68) (i32.shl (local.get $m) (i32.const 2))))))
+        (local.set $state (select (i32.const 2) (i32.const 1) (i32.le_s (local.get $jl) (local.get $ju))))
+        (br $dispatch))
+        ;; 173
+        (local.set $state (select (i32.const 3) (i32.const 6) (i32.gt_s (i32.sub (local.get $j) (local.get $i)) (i32.const 10))))
+        (br $dispatch))
+        ;; 10: median of three as the pivot t
+        (local.set $k (local.get $i))
+        (local.set $ij (i32.shr_s (i32.add (local.get $i) (local.get $j)) (i32.const 1)))
+        (local.set $t (f64.load (i32.add (local.get $a) (i32.shl (i32.sub (local.get $ij) (i32.const 1)) (i32.const 3)))))
+        (if (f64.gt (f64.load (i32.add (local.get $a) (i32.shl (i32.sub (local.get $i) (i32.const 1)) (i32.const 3)))) (local.get $t))
+          (then (f64.store (i32.add (local.get $a) (i32.shl (i32.sub (local.get $ij) (i32.const 1)) (i32.const 3))) (f64.load (i32.add (local.get $a) (i32.shl (i32.sub (local.get $i) (i32.const 1)) (i32.const 3))))) (f64.store (i32.add (local.get $a) (i32.shl (i32.sub (local.get $i) (i32.const 1)) (i32.const 3))) (local.get $t)) (local.set $t (f64.load (i32.add (local.get $a) (i32.shl (i32.sub (local.get $ij) (i32.const 1)) (i32.const 3)))))))
+        (local.set $l (local.get $j))
+        (if (f64.lt (f64.load (i32.add (local.get $a) (i32.shl (i32.sub (local.get $j) (i32.const 1)) (i32.const 3)))) (local.get $t))
+          (then
+            (f64.store (i32.add (local.get $a) (i32.shl (i32.sub (local.get $ij) (i32.const 1)) (i32.const 3))) (f64.load (i32.add (local.get $a) (i32.shl (i32.sub (local.get $j) (i32.const 1)) (i32.const 3))))) (f64.store (i32.add (local.get $a) (i32.shl (i32.sub (local.get $j) (i32.const 1)) (i32.const 3))) (local.get $t)) (local.set $t (f64.load (i32.add (local.get $a) (i32.shl (i32.sub (local.get $ij) (i32.const 1)) (i32.const 3)))))
+            (if (f64.gt (f64.load (i32.add (local.get $a) (i32.shl (i32.sub (local.get $i) (i32.const 1)) (i32.const 3)))) (local.get $t))
+              (then (f64.store (i32.add (local.get $a) (i32.shl (i32.sub (local.get $ij) (i32.const 1)) (i32.const 3))) (f64.load (i32.add (local.get $a) (i32.shl (i32.sub (local.get $i) (i32.const 1)) (i32.const 3))))) (f64.store (i32.add (local.get $a) (i32.shl (i32.sub (local.get $i) (i32.const 1)) (i32.const 3))) (local.get $t)) (local.set $t (f64.load (i32.add (local.get $a) (i32.shl (i32.sub (local.get $ij) (i32.const 1)) (i32.const 3)))))))))
+        (local.set $state (i32.const 4))
+        (br $dispatch))
+        ;; 181: scan from both ends until the scans cross
+        (block $crossed (loop $scan
+          (local.set $l (i32.sub (local.get $l) (i32.const 1)))
+          (if (f64.le (f64.load (i32.add (local.get $a) (i32.shl (i32.sub (local.get $l) (i32.const 1)) (i32.const 3)))) (local.get $t))
+            (then
+              (local.set $tt (f64.load (i32.add (local.get $a) (i32.shl (i32.sub (local.get $l) (i32.const 1)) (i32.const 3)))))
+              (loop $up
+                (local.set $k (i32.add (local.get $k) (i32.const 1)))
+                (br_if $up (i32.eqz (f64.ge (f64.load (i32.add (local.get $a) (i32.shl (i32.sub (local.get $k) (i32.const 1)) (i32.const 3)))) (local.get $t)))))
+              (br_if $crossed (i32.gt_s (local.get $k) (local.get $l)))
+              (f64.store (i32.add (local.get $a) (i32.shl (i32.sub (local.get $l) (i32.const 1)) (i32.const 3))) (f64.load (i32.add (local.get $a) (i32.shl (i32.sub (local.get $k) (i32.const 1)) (i32.const 3)))))
+              (f64.store (i32.add (local.get $a) (i32.shl (i32.sub (local.get $k) (i32.const 1)) (i32.const 3))) (local.get $tt))))
+          (br $scan)))
+        (local.set $state (i32.const 5))
+        (br $dispatch))
+        ;; 183: push the larger part, keep the ranks that fall in the smaller
+        (i32.store (i32.add (global.get $STACKS) (i32.add (i32.const 0) (i32.shl (local.get $m) (i32.const 2)))) (local.get $jl))
+        (i32.store (i32.add (global.get $STACKS) (i32.add (i32.const 68) (i32.shl (local.get $m) (i32.const 2)))) (local.get $ju))
+        (local.set $p (local.get $m))
+        (local.set $m (i32.add (local.get $m) (i32.const 1)))
+        (local.set $state (i32.const 2))
+        (if (i32.le_s (i32.sub (local.get $l) (local.get $i)) (i32.sub (local.get $j) (local.get $k)))
+          (then
+            (i32.store (i32.add (global.get $STACKS) (i32.add (i32.const 136) (i32.shl (local.get $p) (i32.const 2)))) (local.get $k))
+            (i32.store (i32.add (global.get $STACKS) (i32.add (i32.const 204) (i32.shl (local.get $p) (i32.const 2)))) (local.get $j))
+            (local.set $j (local.get $l))
+            (block $found (loop $drop
+              (if (i32.gt_s (local.get $jl) (local.get $ju)) (then (local.set $state (i32.const 1)) (br $found)))
+              (br_if $found (i32.le_s (i32.load (i32.add (local.get $ind) (i32.shl (i32.sub (local.get $ju) (i32.const 1)) (i32.const 2)))) (local.get $j)))
+              (local.set $ju (i32.sub (local.get $ju) (i32.const 1)))
+              (br $drop)))
+            (if (i32.eq (local.get $state) (i32.const 2))
+              (then (i32.store (i32.add (global.get $STACKS) (i32.add (i32.const 0) (i32.shl (local.get $p) (i32.const 2)))) (i32.add (local.get $ju) (i32.const 1))))))
+          (else
+            (i32.store (i32.add (global.get $STACKS) (i32.add (i32.const 136) (i32.shl (local.get $p) (i32.const 2)))) (local.get $i))
+            (i32.store (i32.add (global.get $STACKS) (i32.add (i32.const 204) (i32.shl (local.get $p) (i32.const 2)))) (local.get $l))
+            (local.set $i (local.get $k))
+            (block $found (loop $drop
+              (if (i32.gt_s (local.get $jl) (local.get $ju)) (then (local.set $state (i32.const 1)) (br $found)))
+              (br_if $found (i32.ge_s (i32.load (i32.add (local.get $ind) (i32.shl (i32.sub (local.get $jl) (i32.const 1)) (i32.const 2)))) (local.get $i)))
+              (local.set $jl (i32.add (local.get $jl) (i32.const 1)))
+              (br $drop)))
+            (if (i32.eq (local.get $state) (i32.const 2))
+              (then (i32.store (i32.add (global.get $STACKS) (i32.add (i32.const 68) (i32.shl (local.get $p) (i32.const 2)))) (i32.sub (local.get $jl) (i32.const 1)))))))
+        (br $dispatch))
+      ;; 174: short segment; insertion sort unless it starts the array (then back to 161)
+      (if (i32.eq (local.get $i) (i32.const 1))
+        (then (local.set $state (i32.const 0)) (br $dispatch)))
+      (local.set $i (i32.sub (local.get $i) (i32.const 1)))
+      (block $sorted (loop $insert
+        (local.set $i (i32.add (local.get $i) (i32.const 1)))
+        (br_if $sorted (i32.eq (local.get $i) (local.get $j)))
+        (local.set $t (f64.load (i32.add (local.get $a) (i32.shl (i32.sub (i32.add (local.get $i) (i32.const 1)) (i32.const 1)) (i32.const 3)))))
+        (if (f64.gt (f64.load (i32.add (local.get $a) (i32.shl (i32.sub (local.get $i) (i32.const 1)) (i32.const 3)))) (local.get $t))
+          (then
+            (local.set $k (local.get $i))
+            (loop $shift
+              (f64.store (i32.add (local.get $a) (i32.shl (i32.sub (i32.add (local.get $k) (i32.const 1)) (i32.const 1)) (i32.const 3))) (f64.load (i32.add (local.get $a) (i32.shl (i32.sub (local.get $k) (i32.const 1)) (i32.const 3)))))
+              (local.set $k (i32.sub (local.get $k) (i32.const 1)))
+              (br_if $shift (i32.eqz (f64.ge (local.get $t) (f64.load (i32.add (local.get $a) (i32.shl (i32.sub (local.get $k) (i32.const 1)) (i32.const 3))))))))
+            (f64.store (i32.add (local.get $a) (i32.shl (i32.sub (i32.add (local.get $k) (i32.const 1)) (i32.const 1)) (i32.const 3))) (local.get $t))))
+        (br $insert)))
+      (local.set $state (i32.const 1))
+      (br $dispatch)))
+
+  ;; Bisquare robustness weights (paper section 2.3) into out[1..n] from the residuals y - (trend + seasonal):
+  ;; h = 6 * median |residual|, weight (1 - (r/h)^2)^2, 1 below 0.001 h and 0 above 0.999 h. The median is the
+  ;; paper's: mean of the values the partial sort leaves at ranks floor(n/2) + 1 and n - floor(n/2). $scratch holds
+  ;; n slots and then the two ranks.
+  (func (export "robustnessWeights") (param $y i32) (param $trend i32) (param $seasonal i32) (param $n i32)
+    (param $out i32) (param $scratch i32)
+    (local $i i32) (local $at i32) (local $r f64) (local $q f64) (local $mid1 i32) (local $mid2 i32) (local $ranks i32)
+    (local $cmad f64) (local $c9 f64) (local $c1 f64)
+    (block $done (loop $next
+      (br_if $done (i32.ge_s (local.get $i) (local.get $n)))
+      (local.set $at (i32.shl (local.get $i) (i32.const 3)))
+      (f64.store (i32.add (local.get $scratch) (local.get $at))
+        (f64.abs (f64.sub (f64.load (i32.add (local.get $y) (local.get $at)))
+          (f64.add (f64.load (i32.add (local.get $trend) (local.get $at))) (f64.load (i32.add (local.get $seasonal) (local.get $at)))))))
+      (local.set $i (i32.add (local.get $i) (i32.const 1)))
+      (br $next)))
+    (local.set $mid1 (i32.add (i32.shr_s (local.get $n) (i32.const 1)) (i32.const 1)))
+    (local.set $mid2 (i32.add (i32.sub (local.get $n) (local.get $mid1)) (i32.const 1)))
+    (local.set $ranks (i32.add (local.get $scratch) (i32.shl (local.get $n) (i32.const 3))))
+    (i32.store (local.get $ranks) (local.get $mid1))
+    (i32.store offset=4 (local.get $ranks) (local.get $mid2))
+    (call $partialSort (local.get $scratch) (local.get $n) (local.get $ranks) (i32.const 2))
+    (local.set $cmad (f64.mul (f64.const 3)
+      (f64.add (f64.load (i32.add (local.get $scratch) (i32.shl (i32.sub (local.get $mid1) (i32.const 1)) (i32.const 3))))
+               (f64.load (i32.add (local.get $scratch) (i32.shl (i32.sub (local.get $mid2) (i32.const 1)) (i32.const 3)))))))
+    (local.set $c9 (f64.mul (f64.const 0.999) (local.get $cmad)))
+    (local.set $c1 (f64.mul (f64.const 0.001) (local.get $cmad)))
+    (local.set $i (i32.const 0))
+    (block $done (loop $next
+      (br_if $done (i32.ge_s (local.get $i) (local.get $n)))
+      (local.set $at (i32.shl (local.get $i) (i32.const 3)))
+      (local.set $r (f64.abs (f64.sub (f64.load (i32.add (local.get $y) (local.get $at)))
+        (f64.add (f64.load (i32.add (local.get $trend) (local.get $at))) (f64.load (i32.add (local.get $seasonal) (local.get $at)))))))
+      (if (f64.le (local.get $r) (local.get $c1))
+        (then (f64.store (i32.add (local.get $out) (local.get $at)) (f64.const 1)))
+        (else
+          (if (f64.le (local.get $r) (local.get $c9))
+            (then
+              (local.set $q (f64.div (local.get $r) (local.get $cmad)))
+              (local.set $q (f64.sub (f64.const 1) (f64.mul (local.get $q) (local.get $q))))
+              (f64.store (i32.add (local.get $out) (local.get $at)) (f64.mul (local.get $q) (local.get $q))))
+            (else (f64.store (i32.add (local.get $out) (local.get $at)) (f64.const 0))))))
+      (local.set $i (i32.add (local.get $i) (i32.const 1)))
+      (br $next))))
+
+    ;; One inner pass of STL (routine onestp, paper section 2.2) on y[1..n], updating seasonal and trend in place.
   ;; $rw holds the robustness weights, or is $ones (n + 2 np ones) with $plain = 1; the low-pass fit is always plain.
   ;; $work holds four areas of m = n + 2 np slots (detrended, cycle, low-pass, scratch) and then three of
   ;; p = floor(n / np) + 3 slots for one subseries, its fits and its weights.
