@@ -1,10 +1,10 @@
-;; LOESS and the STL inner pass as WebAssembly: the hot loops of the seasonal adjustment.
+;; LOESS, the STL inner pass and STL's robustness weights as WebAssembly: the hot loops of the seasonal adjustment.
 ;;
-;; Why: STL spends nearly all its time in tricube-weighted sums over short windows. Compiled WebAssembly runs these
-;; loops about twice as fast as the same arithmetic in JavaScript. Every routine follows the published Fortran of
-;; STL (Cleveland, Cleveland, McRae & Terpenning 1990, Journal of Official Statistics 6:3-73; routines est, ess,
-;; fts/ma, ss and onestp), in the same order of operations as the TypeScript it replaced, so results agree with
-;; R's stats::stl to rounding.
+;; Why: STL spends nearly all its time in tricube-weighted sums over short windows. Compiled WebAssembly, summing
+;; two points at a time in SIMD lanes, runs them about twice as fast as the same arithmetic in JavaScript. Every
+;; routine follows the published Fortran of STL (Cleveland, Cleveland, McRae & Terpenning 1990, Journal of Official
+;; Statistics 6:3-73; routines est, ess, ma, ss, onestp, rwts and psort); the LOESS sums are rearranged into one
+;; pass, so results agree with R's stats::stl to rounding (1e-10 relative on the reference cases).
 ;;
 ;; Memory: every array is f64. Positions in comments are 1-based as in the paper; y[j] in a comment is the value at
 ;; byte address y + (j - 1) * 8. Bytes 0 to HEAP_BASE hold kernel tables owned by this module; the caller places
@@ -81,7 +81,7 @@
   ;; One pass sums w, w u, w u^2, w y and w u y with u = j - x, two points at a time (SIMD lanes for even and odd
   ;; steps, added at the end); a local constant, a fit without width, and a plain fit at the centre of a symmetric
   ;; window need only w and w y. Returns NaN when every weight is zero.
-  (func $loessAt (export "loessAt")
+  (func $loessAt
     (param $y i32) (param $n i32) (param $span i32) (param $degree i32) (param $x i32)
     (param $left i32) (param $right i32) (param $rw i32) (param $plain i32) (result f64)
     (local $h i32) (local $end i32) (local $pk i32) (local $py i32) (local $pr i32) (local $last i32)
