@@ -3,7 +3,8 @@
  * series, for the default non-robust (seasonal window 13) and robust settings. When `Rscript` is on the PATH,
  * R's `stats::stl` is timed on the same series in the same run and the ratio ours ÷ R's is printed.
  * Times are CPU time of the process (user + system: `process.cpuUsage`, R's `proc.time`), so a busy machine
- * distorts them less than wall-clock time; each figure is the best of several blocks of calls.
+ * distorts them less than wall-clock time; each figure is the best of several blocks of calls, each block long
+ * enough (about 0.1 s) that the clock's granularity does not matter.
  * Run: `npm run build && node dist/test/bench/run.js stl`.
  */
 import {spawnSync} from 'node:child_process';
@@ -40,10 +41,15 @@ function cpuMicros(): number {
   return user + system;
 }
 
+/** Calls per timed block: enough for about 0.1 s, so the clock's granularity (ticks of a few ms) does not matter. */
+const BLOCK_SECONDS = 0.1;
+
 function microsPerCall(x: Float64Array, robust: boolean): number {
   const options = {period: 12, seasonalWindow: 13, robust};
+  const w0 = performance.now();
   for (let i = 0; i < 200; i++) stl(x, options);
-  const calls = Math.max(20, Math.round(20_000 / x.length / (robust ? 8 : 1)));
+  const estimate = Math.max((performance.now() - w0) / 200, 1e-3);
+  const calls = Math.max(20, Math.ceil((BLOCK_SECONDS * 1000) / estimate));
   let best = Infinity;
   for (let block = 0; block < 10; block++) {
     const t0 = cpuMicros();
@@ -59,8 +65,8 @@ function rMicrosPerCall(dir: string, x: Float64Array, call: string): number | nu
   const script = [
     `x <- ts(scan('${file}', quiet = TRUE), frequency = 12)`,
     `cpu <- function() { t <- proc.time(); t[['user.self']] + t[['sys.self']] }`,
-    `for (i in 1:50) ${call}`,
-    `calls <- max(20, round(100000 / length(x) / ${call.includes('robust') ? 8 : 1}))`,
+    `t0 <- cpu(); for (i in 1:50) ${call}; estimate <- max((cpu() - t0) / 50, 1e-6)`,
+    `calls <- max(20, ceiling(${BLOCK_SECONDS} / estimate))`,
     `best <- Inf`,
     `for (b in 1:5) { t0 <- cpu(); for (i in 1:calls) ${call}; best <- min(best, (cpu() - t0) * 1e6 / calls) }`,
     `cat(best)`,
