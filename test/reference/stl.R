@@ -1,6 +1,6 @@
 # Reference fixtures for the STL and classical decomposition tests.
 # Source: R's stats::stl and stats::decompose on R's built-in datasets (package datasets):
-# co2, nottem, AirPassengers, UKgas, USAccDeaths.
+# co2, nottem, AirPassengers, UKgas, USAccDeaths, JohnsonJohnson, ldeaths, UKDriverDeaths, austres.
 # Run by hand from the repository root:  Rscript test/reference/stl.R
 # Writes test/reference/stl.json and test/reference/decompose.json (R version recorded inside).
 library(stats)
@@ -38,7 +38,14 @@ stlCases <- list(
           s.degree = 1, t.window = 25, t.degree = 0, s.jump = 1, t.jump = 1, l.jump = 1),
   stlCase("USAccDeaths-s9-inner3-outer2", USAccDeaths,
           "stl(USAccDeaths, s.window = 9, t.window = 19, l.window = 15, inner = 3, outer = 2)", 9,
-          t.window = 19, l.window = 15, inner = 3, outer = 2)
+          t.window = 19, l.window = 15, inner = 3, outer = 2),
+  stlCase("logJohnsonJohnson-s7-robust", log(JohnsonJohnson), "stl(log(JohnsonJohnson), s.window = 7, robust = TRUE)", 7,
+          robust = TRUE),
+  stlCase("ldeaths-s13-robust", ldeaths, "stl(ldeaths, s.window = 13, robust = TRUE)", 13, robust = TRUE),
+  stlCase("UKDriverDeaths-s21-deg1-robust", UKDriverDeaths,
+          "stl(UKDriverDeaths, s.window = 21, s.degree = 1, robust = TRUE)", 21, s.degree = 1, robust = TRUE),
+  stlCase("austres-periodic-robust", austres, "stl(austres, s.window = 'periodic', robust = TRUE)", "periodic",
+          robust = TRUE)
 )
 
 decomposeCase <- function(name, x, type) {

@@ -112,7 +112,7 @@ export function resolveStlOptions(n: number, options: StlOptions): StlResolved {
  * replaced by its mean per cycle position and the remainder recomputed, as R's `stats::stl` does.
  *
  * Why: a robust, well-understood decomposition that handles any period and changing seasonal patterns.
- * Agrees with R's `stats::stl` to better than 1e−10 relative on nine reference cases (test/reference/stl.R).
+ * Agrees with R's `stats::stl` to within 4e−10 relative on thirteen reference cases (test/reference/stl.R).
  *
  * Complexity: O((inner · (outer + 1)) · n · (ns/sJump + nt/tJump + nl/lJump)) time, O(n + period) memory:
  * the four result arrays, plus the kernel's heap (about 12·n + 10·period slots), reused across calls.

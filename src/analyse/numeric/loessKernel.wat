@@ -4,7 +4,7 @@
 ;; two points at a time in SIMD lanes, runs them about twice as fast as the same arithmetic in JavaScript. Every
 ;; routine follows the published Fortran of STL (Cleveland, Cleveland, McRae & Terpenning 1990, Journal of Official
 ;; Statistics 6:3-73; routines est, ess, ma, ss, onestp, rwts and psort); the LOESS sums are rearranged into one
-;; pass, so results agree with R's stats::stl to rounding (1e-10 relative on the reference cases).
+;; pass, so results agree with R's stats::stl to rounding (within 4e-10 relative on the reference cases).
 ;;
 ;; Memory: every array is f64. Positions in comments are 1-based as in the paper; y[j] in a comment is the value at
 ;; byte address y + (j - 1) * 8. Bytes 0 to HEAP_BASE hold kernel tables owned by this module; the caller places
