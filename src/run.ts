@@ -1,6 +1,7 @@
 import {loadPlan, portablePlan, salvagePlan} from './config/index.js';
 import type {OutputFormat, Plan} from './config/plan.js';
 import {ingest} from './ingest/index.js';
+import {derive} from './derive/index.js';
 import type {Dataset} from './ingest/types.js';
 import {analyseAll} from './analyse/index.js';
 import {narrate} from './narrate/index.js';
@@ -43,7 +44,7 @@ export interface BuildSummary {
 /**
  * One pack, one period:
  *
- *   pack.yaml ─► loadPlan ─► ingest ─► analyse ─► narrate ─► render ─► archive ─► out/<pack>/<period>/
+ *   pack.yaml ─► loadPlan ─► ingest ─► derive ─► analyse ─► narrate ─► render ─► archive ─► out/<pack>/<period>/
  */
 export async function build(request: BuildRequest, log: Logger): Promise<BuildSummary> {
   const loaded = await loadPlan(request.packFile, {
@@ -52,7 +53,7 @@ export async function build(request: BuildRequest, log: Logger): Promise<BuildSu
     formats: request.formats,
     allowDirs: request.allowDirs,
   });
-  const data = await ingest(loaded);
+  const data = derive(loaded, await ingest(loaded));
   // The plan as used: `fromSource` entries expanded into the series ingest found.
   const plan: Plan = {...loaded, series: data.plans};
   const periodLabel = formatPeriod(plan.frequency, data.period);
@@ -141,7 +142,7 @@ export async function check(packFile: string, log: Logger, allowDirs: string[] =
   let data: Dataset | null = null;
   if (plan) {
     try {
-      data = await ingest(plan);
+      data = derive(plan, await ingest(plan));
     } catch (e) {
       if (!(e instanceof InputError)) throw e;
       const seen = new Set(problems.map(formatProblem));

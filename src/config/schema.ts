@@ -1,4 +1,6 @@
 import {z} from 'zod';
+import {DATE_FORMAT} from '../time/parseDate.js';
+import {isTimeZone} from '../time/zone.js';
 import {SLUG} from './slug.js';
 
 /**
@@ -129,9 +131,11 @@ const thresholdsSection = z.strictObject({
   revisionPct: z.number().min(0).nullish(),
 });
 
+const aggregate = z.enum(['sum', 'mean', 'last', 'first', 'min', 'max', 'count']);
+
 const sourceEntry = z.strictObject({
   id: slug,
-  file: text,
+  file: optionalText,
   layout: z.enum(['wide', 'long']).nullish(),
   dateColumn: optionalText,
   keyColumn: optionalText,
@@ -139,6 +143,19 @@ const sourceEntry = z.strictObject({
   delimiter: z.enum(['auto', ',', ';', '\t']).nullish(),
   decimal: z.enum(['.', ',']).nullish(),
   encoding: z.enum(['utf-8', 'windows-1252']).nullish(),
+  // Data as exported: header position, date spelling, workbooks and queries (crossCheck relates them).
+  headerRow: z.number().int().min(1, {error: 'must be a line number from 1'}).nullish(),
+  dateFormat: z
+    .string()
+    .regex(DATE_FORMAT, {error: 'must be DD/MM/YYYY, MM/DD/YYYY, DD.MM.YYYY or DD-MM-YYYY, optionally with " HH:mm:ss"'})
+    .nullish(),
+  timeZone: z.string().refine(isTimeZone, {error: 'must be a time zone name such as UTC or Europe/Berlin'}).nullish(),
+  emptyMeans: z.enum(['missing', 'zero']).nullish(),
+  sheet: optionalText,
+  query: optionalText,
+  engine: z.enum(['duckdb', 'postgres']).nullish(),
+  connection: z.strictObject({env: z.string().regex(/^[A-Za-z_][A-Za-z0-9_]*$/, {error: 'must be an environment variable name'})}).nullish(),
+  timeoutSeconds: z.number().positive().max(3600).nullish(),
 });
 
 const seriesEntry = z.strictObject({
@@ -150,6 +167,7 @@ const seriesEntry = z.strictObject({
   kind: z.enum(['flow', 'stock']).nullish(),
   target: optionalText,
   hidden: z.boolean().nullish(),
+  aggregate: aggregate.nullish(),
   ...analysisShape,
 });
 
@@ -159,6 +177,7 @@ const fromSourceEntry = z.strictObject({
   unit: optionalText,
   kind: z.enum(['flow', 'stock']).nullish(),
   hidden: z.boolean().nullish(),
+  aggregate: aggregate.nullish(),
   ...analysisShape,
 });
 

@@ -8,25 +8,21 @@ import type {InputFile} from './types.js';
 import type {ProblemLog} from './problemLog.js';
 import {sniffDelimiter} from './sniffDelimiter.js';
 import * as msg from './messages.js';
+import type {RowVisitor} from './rowVisitor.js';
 
-/** Receives the header, then each data record, with the 1-based line where the record ends. */
-export interface CsvVisitor {
-  /** Return false to stop reading (the header lacks a needed column). */
-  header(fields: string[], line: number): boolean;
-  record(fields: string[], line: number): void;
-}
 
 /**
  * Stream one CSV source through a visitor, reading the file once: the raw bytes are hashed (SHA-256)
  * and counted, decoded (UTF-8 validated strictly, or Windows-1252 through iconv-lite because Node 20's
  * TextDecoder maps 0x80–0x9F to control characters), the delimiter is sniffed from the header line when
- * `auto`, and csv-parse turns the text into records. Memory stays bounded by the stream's chunk size.
+ * `auto`, and csv-parse turns the text into records from the source's `headerRow` on (title lines above it are
+ * skipped). Memory stays bounded by the stream's chunk size.
  *
  * File, decoding and CSV-syntax failures go to `problems`; the result is then undefined.
  */
 export async function readCsv(
   source: SourcePlan,
-  visitor: CsvVisitor,
+  visitor: RowVisitor,
   problems: ProblemLog,
 ): Promise<InputFile | undefined> {
   const hash = createHash('sha256');
@@ -35,17 +31,30 @@ export async function readCsv(
   let rows = 0;
   try {
     let head = '';
+    let lines: string[] = [];
     for (;;) {
       const next = await text.next();
       if (next.done) break;
       head += next.value;
-      if (/[\r\n]/.test(head)) break;
+      lines = head.replace(/^\ufeff/, '').split(/\r\n|\r|\n/, source.headerRow + 1);
+      if (lines.length > source.headerRow) break;
     }
-    const headerLine = head.replace(/^\ufeff/, '').split(/\r\n|\r|\n/, 1)[0];
+    const headerLine = lines[source.headerRow - 1];
+    if (headerLine === undefined) {
+      const count = lines.length - (lines.at(-1) === '' ? 1 : 0);
+      if (count === 0) problems.add(source.file, 1, null, msg.emptyFile());
+      else problems.add(source.file, null, null, msg.headerBeyondEnd(source.headerRow, count));
+      return undefined;
+    }
     const delimiter = source.delimiter === 'auto' ? sniffDelimiter(headerLine) : source.delimiter;
+    if (headerLine.split(delimiter).every((f) => f.trim() === '') && head.trim() !== '') {
+      problems.add(source.file, source.headerRow, null, msg.emptyHeader(source.headerRow));
+      return undefined;
+    }
     const parser = parse({
       bom: true,
       info: true,
+      from_line: source.headerRow,
       delimiter,
       relax_column_count: true,
       relax_quotes: true,
