@@ -115,8 +115,9 @@ export const headerBeyondEnd = (headerRow: number, lines: number): string =>
 
 export const notAWorkbook = (detail: string): string =>
   `cannot read the workbook (${detail}); save it from the spreadsheet program as .xlsx (Excel Workbook)`;
-export const sheetNotFound = (sheet: string, sheets: string[]): string =>
-  `the workbook has no sheet "${sheet}"${didYouMeanText(sheet, sheets)}; the sheets are: ${listed(sheets.map((n) => `"${n}"`))}`;
+export const sheetNotFound = (sheet: string, suggestion: string | undefined, sheets: string[]): string =>
+  `the workbook has no sheet "${sheet}"${suggestion !== undefined ? ` (did you mean "${suggestion}"?)` : ''}; ` +
+  `the sheets are: ${listed(sheets.map((n) => `"${n}"`))}`;
 export const noSheets = (): string => 'the workbook has no worksheets';
 export const formulaWithoutResult = (formula: string): string =>
   `the formula =${formula} has no stored result (the workbook was saved without calculating); ` +
@@ -160,9 +161,3 @@ export const combined = (grain: Grain, frequency: Frequency): string =>
   'last for stocks)';
 export const incomplete = (label: string, days: number, length: number, edge: 'start' | 'end'): string =>
   `${label} has data for ${days} of ${length} days (the data ${edge === 'end' ? 'stop' : 'start'} inside it) and is left out`;
-
-function didYouMeanText(name: string, names: string[]): string {
-  const lower = name.toLowerCase();
-  const close = names.find((n) => n.toLowerCase() === lower || n.trim() === name.trim());
-  return close !== undefined ? ` (did you mean "${close}"?)` : '';
-}

@@ -1,6 +1,7 @@
 import {createHash} from 'node:crypto';
 import {readFile} from 'node:fs/promises';
 import ExcelJS from 'exceljs';
+import {didYouMean} from '../config/suggest.js';
 import type {CellReader} from './cells.js';
 import * as msg from './messages.js';
 import type {ProblemLog} from './problemLog.js';
@@ -42,7 +43,7 @@ export async function readXlsx(
   const names = workbook.worksheets.map((w) => w.name);
   const sheet = source.sheet === null ? workbook.worksheets[0] : workbook.getWorksheet(source.sheet);
   if (sheet === undefined) {
-    const message = source.sheet === null ? msg.noSheets() : msg.sheetNotFound(source.sheet, names);
+    const message = source.sheet === null ? msg.noSheets() : msg.sheetNotFound(source.sheet, didYouMean(source.sheet, names), names);
     problems.add(source.file, null, null, message);
     return undefined;
   }
