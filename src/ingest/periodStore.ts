@@ -1,8 +1,5 @@
 import type {Stamp} from '../time/stamp.js';
 
-/** Accumulator arrays, one slot per period. */
-const FIELDS = ['sum', 'min', 'max', 'firstAt', 'first', 'lastAt', 'last', 'seenAt'] as const;
-
 /**
  * The rows of one column or key, summed up by pack period as they arrive in any order: for each period the
  * number of rows and of values, their sum, minimum and maximum, the value at the earliest and at the latest
@@ -21,9 +18,15 @@ export class PeriodStore {
   private valueCount = new Uint32Array(0);
   private lines = new Uint32Array(0);
   private secondLines = new Uint32Array(0);
-  private f: Record<(typeof FIELDS)[number], Float64Array> = Object.fromEntries(
-    FIELDS.map((k) => [k, new Float64Array(0)]),
-  ) as Record<(typeof FIELDS)[number], Float64Array>;
+  // One slot per period each (plain fields: a record of arrays made the hot loop several times slower).
+  private sum = new Float64Array(0);
+  private min = new Float64Array(0);
+  private max = new Float64Array(0);
+  private firstAt = new Float64Array(0);
+  private first = new Float64Array(0);
+  private lastAt = new Float64Array(0);
+  private last = new Float64Array(0);
+  private seenAt = new Float64Array(0);
   /** Cells of this column or key that could not be read, or whose row has an unreadable date (each reported). */
   rejected = 0;
   /** Set when a row arrived for an earlier instant than the row before it. */
@@ -42,38 +45,37 @@ export class PeriodStore {
     this.previous = at;
     this.ensure(stamp.period);
     const i = stamp.period - this.base;
-    const f = this.f;
     // seenAt: the first row's instant, NaN when that row was a label.
     const dated = stamp.grain === 'day';
     if (this.rowCount[i] === 0) {
       this.lines[i] = line;
-      f.seenAt[i] = dated ? at : NaN;
+      this.seenAt[i] = dated ? at : NaN;
     } else {
       if (this.secondLines[i] === 0) this.secondLines[i] = line;
-      if (dated && !Number.isNaN(f.seenAt[i]) && at !== f.seenAt[i]) this.finer = true;
+      if (dated && !Number.isNaN(this.seenAt[i]) && at !== this.seenAt[i]) this.finer = true;
     }
     this.rowCount[i]++;
     if (Number.isNaN(value)) return;
     if (this.valueCount[i] === 0) {
-      f.sum[i] = value;
-      f.min[i] = value;
-      f.max[i] = value;
-      f.firstAt[i] = at;
-      f.first[i] = value;
-      f.lastAt[i] = at;
-      f.last[i] = value;
+      this.sum[i] = value;
+      this.min[i] = value;
+      this.max[i] = value;
+      this.firstAt[i] = at;
+      this.first[i] = value;
+      this.lastAt[i] = at;
+      this.last[i] = value;
     } else {
-      f.sum[i] += value;
-      if (value < f.min[i]) f.min[i] = value;
-      if (value > f.max[i]) f.max[i] = value;
+      this.sum[i] += value;
+      if (value < this.min[i]) this.min[i] = value;
+      if (value > this.max[i]) this.max[i] = value;
       // Ties in time keep the earlier row for `first` and the later row for `last` (file order).
-      if (at < f.firstAt[i]) {
-        f.firstAt[i] = at;
-        f.first[i] = value;
+      if (at < this.firstAt[i]) {
+        this.firstAt[i] = at;
+        this.first[i] = value;
       }
-      if (at >= f.lastAt[i]) {
-        f.lastAt[i] = at;
-        f.last[i] = value;
+      if (at >= this.lastAt[i]) {
+        this.lastAt[i] = at;
+        this.last[i] = value;
       }
     }
     this.valueCount[i]++;
@@ -83,17 +85,16 @@ export class PeriodStore {
   at(period: number): PeriodSummary {
     const i = period - this.base;
     if (i < 0 || i >= this.size || this.rowCount[i] === 0) return EMPTY;
-    const f = this.f;
     const has = this.valueCount[i] > 0;
     const v = (a: Float64Array) => (has ? a[i] : NaN);
     return {
       rows: this.rowCount[i],
       values: this.valueCount[i],
-      sum: v(f.sum),
-      min: v(f.min),
-      max: v(f.max),
-      first: v(f.first),
-      last: v(f.last),
+      sum: v(this.sum),
+      min: v(this.min),
+      max: v(this.max),
+      first: v(this.first),
+      last: v(this.last),
       line: this.lines[i],
       secondLine: this.secondLines[i],
     };
@@ -146,7 +147,15 @@ export class PeriodStore {
     this.valueCount = grow(this.valueCount, (n) => new Uint32Array(n));
     this.lines = grow(this.lines, (n) => new Uint32Array(n));
     this.secondLines = grow(this.secondLines, (n) => new Uint32Array(n));
-    for (const k of FIELDS) this.f[k] = grow(this.f[k], (n) => new Float64Array(n));
+    const float = (n: number) => new Float64Array(n);
+    this.sum = grow(this.sum, float);
+    this.min = grow(this.min, float);
+    this.max = grow(this.max, float);
+    this.firstAt = grow(this.firstAt, float);
+    this.first = grow(this.first, float);
+    this.lastAt = grow(this.lastAt, float);
+    this.last = grow(this.last, float);
+    this.seenAt = grow(this.seenAt, float);
     this.size = capacity;
   }
 }

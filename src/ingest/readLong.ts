@@ -3,7 +3,7 @@ import {didYouMean} from '../config/suggest.js';
 import type {CellReader} from './cells.js';
 import * as msg from './messages.js';
 import {PeriodStore} from './periodStore.js';
-import type {RowVisitor} from './rowVisitor.js';
+import {blankRow, type RowVisitor} from './rowVisitor.js';
 import type {SourceData, Wanted} from './sourceData.js';
 
 /**
@@ -32,7 +32,7 @@ export function longVisitor(cells: CellReader, wanted: Wanted, data: SourceData)
     },
     record(fields, line) {
       // Spreadsheets often end a file with rows of bare delimiters.
-      if (fields.every((f) => f.trim() === '')) return;
+      if (blankRow(fields)) return;
       const key = (fields[keyAt] ?? '').trim();
       let store = data.stores.get(key);
       const stamp = cells.stamp(fields[cells.dateColumn] ?? '', line);

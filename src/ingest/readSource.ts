@@ -4,11 +4,8 @@ import {CellReader} from './cells.js';
 import * as msg from './messages.js';
 import type {ProblemLog} from './problemLog.js';
 import {readCsv} from './readCsv.js';
-import {readDuckdb} from './readDuckdb.js';
 import {longVisitor} from './readLong.js';
-import {readPostgres} from './readPostgres.js';
 import {wideVisitor} from './readWide.js';
-import {readXlsx} from './readXlsx.js';
 import type {RowVisitor} from './rowVisitor.js';
 import type {SourceData, Wanted} from './sourceData.js';
 import type {InputFile} from './types.js';
@@ -38,15 +35,16 @@ export async function readSource(
   return data;
 }
 
-function rowsOf(cells: CellReader, visitor: RowVisitor, problems: ProblemLog): Promise<InputFile | undefined> {
+/** The reader of a source; the workbook and database libraries load only for packs that use them (about 1 s). */
+async function rowsOf(cells: CellReader, visitor: RowVisitor, problems: ProblemLog): Promise<InputFile | undefined> {
   switch (cells.source.reader) {
     case 'csv':
       return readCsv(cells.source, visitor, problems);
     case 'xlsx':
-      return readXlsx(cells, visitor, problems);
+      return (await import('./readXlsx.js')).readXlsx(cells, visitor, problems);
     case 'duckdb':
-      return readDuckdb(cells, visitor);
+      return (await import('./readDuckdb.js')).readDuckdb(cells, visitor);
     case 'postgres':
-      return readPostgres(cells, visitor);
+      return (await import('./readPostgres.js')).readPostgres(cells, visitor);
   }
 }

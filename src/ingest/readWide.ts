@@ -1,7 +1,7 @@
 import type {CellReader} from './cells.js';
 import * as msg from './messages.js';
 import {PeriodStore} from './periodStore.js';
-import type {RowVisitor} from './rowVisitor.js';
+import {blankRow, type RowVisitor} from './rowVisitor.js';
 import type {SourceData, Wanted} from './sourceData.js';
 
 /**
@@ -36,7 +36,7 @@ export function wideVisitor(cells: CellReader, wanted: Wanted, data: SourceData)
     },
     record(fields, line) {
       // Spreadsheets often end a file with rows of bare delimiters.
-      if (fields.every((f) => f.trim() === '')) return;
+      if (blankRow(fields)) return;
       const stamp = cells.stamp(fields[cells.dateColumn] ?? '', line);
       if (stamp === undefined) {
         // The row's values are unusable, not missing: a column is not then reported as all blank.

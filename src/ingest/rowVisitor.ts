@@ -7,3 +7,9 @@ export interface RowVisitor {
   header(fields: string[], line: number): boolean;
   record(fields: string[], line: number): void;
 }
+
+/** Whether every field is blank (spreadsheets end files with rows of bare delimiters); stops at the first that is not. */
+export function blankRow(fields: string[]): boolean {
+  for (const f of fields) if (f.length > 0 && f.trim() !== '') return false;
+  return true;
+}
