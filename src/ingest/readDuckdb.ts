@@ -93,8 +93,7 @@ export async function readDuckdb(cells: CellReader, visitor: RowVisitor): Promis
 function engineProblem(e: unknown): string {
   const text = (e instanceof Error ? e.message : String(e)).replace(/^Failed to extract statements: /, '');
   const first = text.split('\n')[0].trim();
+  if (/extension/i.test(first)) return msg.queryExtension(first);
   if (/^Permission Error/.test(first)) return msg.queryOutside(first.replace(/^Permission Error: /, ''));
-  if (/extension/i.test(first) && /Catalog Error|Extension|IO Error: Extension/.test(first))
-    return msg.queryExtension(first);
   return msg.queryFailed('duckdb', first);
 }
