@@ -12,8 +12,8 @@ import type {InputFile} from './types.js';
 export class QueryRows {
   private readonly hash = createHash('sha256');
   private bytes = 0;
-  private rows = 0;
-  private open = true;
+  /** Data rows handed on so far. */
+  count = 0;
 
   constructor(
     private readonly source: SourcePlan,
@@ -22,23 +22,26 @@ export class QueryRows {
 
   /** The column names; false when the visitor stops (a needed column is missing). */
   header(names: string[]): boolean {
-    this.digest(names);
-    this.open = this.visitor.header(names, 0);
-    return this.open;
+    const text = line(names);
+    this.bytes += Buffer.byteLength(text);
+    this.hash.update(text);
+    return this.visitor.header(names, 0);
   }
 
-  /** One row of text fields (null = SQL NULL). */
-  row(fields: (string | null)[]): void {
-    this.digest(fields);
-    this.rows++;
-    this.visitor.record(
-      fields.map((f) => f ?? ''),
-      this.rows,
-    );
-  }
-
-  get count(): number {
-    return this.rows;
+  /**
+   * The rows of one result chunk, as text fields (null = SQL NULL); each array is handed on with its nulls made
+   * blank. The chunk's canonical text is hashed in one piece (hashing row by row cost more than the rows' parsing).
+   */
+  rows(chunk: (string | null)[][]): void {
+    let text = '';
+    for (const fields of chunk) {
+      text += line(fields);
+      for (let i = 0; i < fields.length; i++) if (fields[i] === null) fields[i] = '';
+      this.count++;
+      this.visitor.record(fields as string[], this.count);
+    }
+    this.bytes += Buffer.byteLength(text);
+    this.hash.update(text);
   }
 
   /** What the manifest records of the query: engine, text, fingerprint, size of the canonical text, rows. */
@@ -48,16 +51,23 @@ export class QueryRows {
       file: `${this.source.id} (${engine} query)`,
       sha256: this.hash.digest('hex'),
       bytes: this.bytes,
-      rows: this.rows,
+      rows: this.count,
       query: {engine, text: this.source.query ?? ''},
     };
   }
+}
 
-  private digest(fields: (string | null)[]): void {
-    const line = fields.map((f) => (f === null ? '\\N' : f.replace(/[\\\t\n\r]/g, escape))).join('\t') + '\n';
-    this.bytes += Buffer.byteLength(line);
-    this.hash.update(line);
+const SPECIAL = /[\\\t\n\r]/;
+
+/** One row in COPY text form: fields tab-separated, NULL as `\N`, backslash, tab and line breaks escaped. */
+function line(fields: readonly (string | null)[]): string {
+  let out = '';
+  for (let i = 0; i < fields.length; i++) {
+    const f = fields[i];
+    if (i > 0) out += '\t';
+    out += f === null ? '\\N' : SPECIAL.test(f) ? f.replace(/[\\\t\n\r]/g, escape) : f;
   }
+  return out + '\n';
 }
 
 function escape(c: string): string {

@@ -72,7 +72,7 @@ export async function readDuckdb(cells: CellReader, visitor: RowVisitor): Promis
     for (;;) {
       const chunk = await result.fetchChunk();
       if (chunk === null || chunk.rowCount === 0) break;
-      for (const row of chunk.getRows()) rows.row(row as (string | null)[]);
+      rows.rows(chunk.getRows() as (string | null)[][]);
     }
     if (rows.count === 0) {
       cells.report(null, null, msg.queryNoRows());

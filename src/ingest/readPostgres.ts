@@ -60,7 +60,7 @@ export async function readPostgres(cells: CellReader, visitor: RowVisitor): Prom
         open = rows.header((result?.fields ?? []).map((f) => f.name));
         if (!open) return;
       }
-      rows.row(row);
+      rows.rows([row]);
     });
     const done = await new Promise<{fields: {name: string}[]}>((resolve, reject) => {
       query.on('end', resolve);
