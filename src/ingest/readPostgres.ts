@@ -53,20 +53,27 @@ export async function readPostgres(cells: CellReader, visitor: RowVisitor): Prom
     let headerSeen = false;
     const config = {text: source.query ?? '', name: `ebbflow-${source.id}`, rowMode: 'array'} as pg.QueryConfig;
     const query = new pg.Query(config);
+    // A failure inside the handler (a bug) must reach this function, not escape from pg's socket callback.
+    let failure: unknown;
     query.on('row', (row: (string | null)[], result?: {fields?: {name: string}[]}) => {
-      if (!open) return;
-      if (!headerSeen) {
-        headerSeen = true;
-        open = rows.header((result?.fields ?? []).map((f) => f.name));
-        if (!open) return;
+      if (!open || failure !== undefined) return;
+      try {
+        if (!headerSeen) {
+          headerSeen = true;
+          open = rows.header((result?.fields ?? []).map((f) => f.name));
+          if (!open) return;
+        }
+        rows.rows([row]);
+      } catch (e) {
+        failure = e;
       }
-      rows.rows([row]);
     });
     const done = await new Promise<{fields: {name: string}[]}>((resolve, reject) => {
       query.on('end', resolve);
       query.on('error', reject);
       client.query(query);
     });
+    if (failure !== undefined) throw failure;
     if (!headerSeen && !rows.header(done.fields.map((f) => f.name))) return undefined;
     if (!open) return undefined;
     if (rows.count === 0) {
@@ -75,6 +82,8 @@ export async function readPostgres(cells: CellReader, visitor: RowVisitor): Prom
     }
     return rows.input();
   } catch (e) {
+    // A bug stays a bug (exit 1); what the server or the network says is a problem with the source.
+    if (e instanceof TypeError || e instanceof RangeError || e instanceof ReferenceError) throw e;
     cells.report(null, null, queryProblem(e, source.timeoutSeconds, env));
     return undefined;
   } finally {

@@ -144,7 +144,7 @@ describe('the same rows through CSV, DuckDB and PostgreSQL', () => {
     // Both engines write DATE as 2022-01-01 and DECIMAL(12,2) with two decimals: the same canonical rows.
     expect(duckManifest.inputs[0].sha256).toBe(manifest.inputs[0].sha256);
     expect(manifest.plan.sources[0]).toMatchObject({connectionEnv: 'EBBFLOW_TEST_LEDGER', reader: 'postgres'});
-  });
+  }, 900_000);
 
   it('the PostgreSQL pack wrote HTML, PDF and JSON, and no output holds the password or the connection string', async () => {
     const folder = join(root, 'out', 'tills-postgres', '2025-05');
@@ -159,5 +159,5 @@ describe('the same rows through CSV, DuckDB and PostgreSQL', () => {
     expect(pdf).toContain('Tills by region');
     const html = await readFile(join(folder, 'report.html'), 'utf8');
     expect(html).toContain('Jun 2025 has data for 14 of 30 days (the data stop inside it) and is left out');
-  });
+  }, 60_000);
 });
