@@ -38,6 +38,8 @@ export class CellReader {
   private readonly reading: DateReading;
   private readonly decimal: '.' | ',';
   private mixedReported = false;
+  private lastText = '';
+  private lastStamp: Stamp | undefined;
   private held: {line: number; text: string; report: () => void}[] = [];
 
   constructor(
@@ -81,6 +83,11 @@ export class CellReader {
 
   /** The stamp of a date cell, or undefined (a problem reported, or the row held back as a possible footer). */
   stamp(text: string, line: number): Stamp | undefined {
+    // Exports repeat a date on consecutive rows (one per key): the last one is checked before the cache.
+    if (text === this.lastText && this.lastStamp !== undefined && this.held.length === 0) {
+      this.cover(this.lastStamp);
+      return this.lastStamp;
+    }
     let stamp = this.dates.get(text);
     if (stamp === undefined && !this.dates.has(text)) {
       const cell = readDateCell(text, this.reading);
@@ -91,15 +98,9 @@ export class CellReader {
     if (stamp !== undefined) {
       this.release();
       if (!this.grains.has(stamp.grain)) this.grains.set(stamp.grain, {line, text: text.trim()});
-      if (this.span === undefined || this.periods === undefined) {
-        this.span = {from: stamp.from, to: stamp.to};
-        this.periods = {first: stamp.period, last: stamp.period};
-      } else {
-        if (stamp.from < this.span.from) this.span.from = stamp.from;
-        if (stamp.to > this.span.to) this.span.to = stamp.to;
-        if (stamp.period < this.periods.first) this.periods.first = stamp.period;
-        if (stamp.period > this.periods.last) this.periods.last = stamp.period;
-      }
+      this.cover(stamp);
+      this.lastText = text;
+      this.lastStamp = stamp;
       return stamp;
     }
     this.badDate(text, line);
@@ -123,6 +124,19 @@ export class CellReader {
     const last = this.held[this.held.length - 1].line;
     this.held = [];
     return [this.note(line, msg.footerIgnored(this.source.dateColumn, line, last, text))];
+  }
+
+  /** Widen the span of days and the range of periods to a stamp. */
+  private cover(stamp: Stamp): void {
+    if (this.span === undefined || this.periods === undefined) {
+      this.span = {from: stamp.from, to: stamp.to};
+      this.periods = {first: stamp.period, last: stamp.period};
+      return;
+    }
+    if (stamp.from < this.span.from) this.span.from = stamp.from;
+    if (stamp.to > this.span.to) this.span.to = stamp.to;
+    if (stamp.period < this.periods.first) this.periods.first = stamp.period;
+    if (stamp.period > this.periods.last) this.periods.last = stamp.period;
   }
 
   private release(): void {
