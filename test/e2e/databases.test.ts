@@ -11,6 +11,7 @@ import {mkdtemp, readdir, readFile, rm, writeFile, mkdir} from 'node:fs/promises
 import {tmpdir} from 'node:os';
 import {join} from 'node:path';
 import {DuckDBInstance} from '@duckdb/node-api';
+import pg from 'pg';
 import {afterAll, beforeAll, describe, expect, it} from 'vitest';
 import {main, type Io} from '../../src/cli/main.js';
 import {startCluster, type Cluster} from '../helpers/postgresCluster.js';
@@ -160,4 +161,31 @@ describe('the same rows through CSV, DuckDB and PostgreSQL', () => {
     const html = await readFile(join(folder, 'report.html'), 'utf8');
     expect(html).toContain('Jun 2025 has data for 14 of 30 days (the data stop inside it) and is left out');
   }, 60_000);
+
+  it('the query runs read-only and under the statement timeout', async () => {
+    const write = "WITH x AS (INSERT INTO tills VALUES ('2030-01-01', 'North', 1) RETURNING *) SELECT day, region, amount FROM x";
+    await writeFile(join(root, 'write.yaml'), pack('tills-write', `engine: postgres\nconnection: {env: EBBFLOW_TEST_LEDGER}\nquery: ${write}`));
+    const slow = 'SELECT day, region, amount FROM tills, pg_sleep(3) LIMIT 5';
+    await writeFile(
+      join(root, 'slow.yaml'),
+      pack('tills-slow', `engine: postgres\nconnection: {env: EBBFLOW_TEST_LEDGER}\ntimeoutSeconds: 1\nquery: ${slow}`),
+    );
+    process.env.EBBFLOW_TEST_LEDGER = cluster.url;
+    try {
+      const w = await cli('check', join(root, 'write.yaml'));
+      expect(w.code).toBe(2);
+      expect(w.stderr).toMatch(/write\.yaml:8: source tills: the PostgreSQL query failed: cannot execute \w+ in a read-only transaction \(SQLSTATE 25006\)/);
+      const t = await cli('check', join(root, 'slow.yaml'));
+      expect(t.code).toBe(2);
+      expect(t.stderr).toMatch(/slow\.yaml:8: source tills: the query ran longer than 1 s and was stopped/);
+    } finally {
+      delete process.env.EBBFLOW_TEST_LEDGER;
+    }
+    // Nothing was written.
+    const client = new pg.Client({connectionString: cluster.url});
+    await client.connect();
+    const written = await client.query("SELECT count(*)::int AS n FROM tills WHERE day = '2030-01-01'");
+    await client.end();
+    expect(written.rows[0].n).toBe(0);
+  }, 120_000);
 });
