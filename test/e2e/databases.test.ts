@@ -188,4 +188,16 @@ describe('the same rows through CSV, DuckDB and PostgreSQL', () => {
     await client.end();
     expect(written.rows[0].n).toBe(0);
   }, 120_000);
+
+  it('a DuckDB query may read another folder only when --allow-dir allows it', async () => {
+    await mkdir(join(root, 'packs'), {recursive: true});
+    const query = `engine: duckdb\nquery: SELECT day, region, amount FROM read_parquet('${join(root, 'data', 'tills.parquet')}')`;
+    await writeFile(join(root, 'packs', 'elsewhere.yaml'), pack('tills-elsewhere', query));
+    const refused = await cli('check', join(root, 'packs', 'elsewhere.yaml'));
+    expect(refused.code).toBe(2);
+    expect(refused.stderr).toMatch(/elsewhere\.yaml:8: source tills: the query reads a file outside the pack's folder/);
+    const allowed = await cli('check', join(root, 'packs', 'elsewhere.yaml'), '--allow-dir', join(root, 'data'));
+    expect(allowed.stderr).toMatch(/3 series, review period 2025-05, no problems/);
+    expect(allowed.code).toBe(0);
+  }, 120_000);
 });
