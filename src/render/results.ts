@@ -145,7 +145,7 @@ const seriesSchema = z.object({
   id: z.string(),
   label: z.string(),
   unit: z.string().nullable(),
-  kind: z.enum(['flow', 'stock']),
+  kind: z.enum(['flow', 'stock', 'ratio']),
   hidden: z.boolean(),
   target: z.string().nullable(),
   periods: labels,

@@ -33,6 +33,8 @@ export function series(id: string, sourceId: string, more: Partial<SeriesPlan> =
     source: sourceId,
     column: id,
     kind: 'flow',
+    formula: null,
+    better: 'higher',
     target: null,
     hidden: false,
     analysis,

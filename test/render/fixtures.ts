@@ -148,9 +148,11 @@ export function seriesAnalysis(id: string, frequency: Frequency, end: number, le
           {method: 'Theta', mase: 0.81, smape: 4.2},
         ],
         points: Array.from({length: 6}, (_, k) => ({offset: length - 6 + k, forecast: original[length - 6 + k] * (1 + (rand() - 0.5) * 0.05)})),
+        paths: [],
       },
       options: {alpha: 0.31, beta: 0.02, gamma: 0.1, phi: 0.97},
       notes: [],
+      residuals: [],
     },
     outturn: {
       fiscalYear: 'FY2026',
@@ -200,6 +202,8 @@ export function makeReport(opts: FixtureOptions = {}): Report {
       source: 'trading',
       column: k === 0 && opts.firstLabel !== undefined ? opts.firstLabel : `col_${k + 1}`,
       kind: 'flow',
+      formula: null,
+      better: 'higher',
       target: null,
       hidden: false,
       analysis: {...options, forecast: {...options.forecast, horizon: 12}},
@@ -249,7 +253,10 @@ export function makeReport(opts: FixtureOptions = {}): Report {
     browser: null,
     sources: [source('trading', '/packs/harbourline/data/trading.csv', {line: 5})],
     series: series.map((s) => s.plan),
-    groups: count >= 3 ? [{id: 'sales', title: 'Sales and orders', series: ['series-1', 'series-2']}] : [],
+    groups:
+      count >= 3
+        ? [{id: 'sales', title: 'Sales and orders', series: ['series-1', 'series-2'], total: null, adjustTotal: 'direct', reconcile: 'mint', line: 1}]
+        : [],
   };
   const history: History | null = opts.history
     ? {

@@ -7,7 +7,8 @@ import {runMethod, type EtsStart, type MethodName} from './methods.js';
  * Rolling-origin back-test: refit the method on the first n − k, n − k + 1, …, n − 1 values and forecast up to
  * `horizon` periods from each origin (fewer at the last origins, where the data end); pool all errors into one
  * MASE (each origin scaled by its own in-sample seasonal-naive MAE) and one sMAPE. Benchmarks (seasonal naive,
- * Naive2) go through the same origins. The one-step forecasts from every origin are kept for the chart.
+ * Naive2) go through the same origins. The one-step forecasts from every origin are kept for the chart, and the
+ * main method's whole path from every origin for the back-test of reconciled forecasts.
  * With `etsModels` the ETS part keeps the model classes chosen on the full series and re-estimates them at each
  * origin (a few fits instead of up to fifteen; common practice for back-testing automatic methods): from the
  * usual start values at the first origin, then each origin starts from the estimates of the one before, which
@@ -55,6 +56,7 @@ export function rollingBacktest(
   ];
   const totals = methods.map(() => ({scaled: 0, smape: 0, count: 0}));
   const points: {offset: number; forecast: number}[] = [];
+  const paths: {offset: number; mean: number[]}[] = [];
   let models = etsModels?.map(({spec}) => ({spec}));
   for (let o = n - k; o < n; o++) {
     const train = values.subarray(0, o);
@@ -76,7 +78,10 @@ export function rollingBacktest(
       t.scaled += acc.MASE * steps;
       t.smape += acc.sMAPE * steps;
       t.count += steps;
-      if (j === 0) points.push({offset: offset + o, forecast: fc.mean[0]});
+      if (j === 0) {
+        points.push({offset: offset + o, forecast: fc.mean[0]});
+        paths.push({offset: offset + o, mean: Array.from(fc.mean)});
+      }
     });
   }
   const score = (j: number) => ({mase: totals[j].scaled / totals[j].count, smape: totals[j].smape / totals[j].count});
@@ -86,5 +91,6 @@ export function rollingBacktest(
     ...score(0),
     benchmarks: methods.slice(1).map((m, j) => ({method: m.label, ...score(j + 1)})),
     points,
+    paths,
   };
 }

@@ -2,11 +2,12 @@ import {averageForecasts} from './averageForecasts.js';
 import {reseasonalise} from './adjustedForecast.js';
 import {forecastBenchmarks} from './benchmarks.js';
 import {akaikeWeights} from './akaikeWeights.js';
-import {arimaRunningTotals, fitArima, forecastArima, type ArimaOrder} from './arima.js';
+import {arimaRunningTotals, fitArima, forecastArima, type ArimaFit, type ArimaOrder} from './arima.js';
 import {selectArima} from './arimaSelect.js';
 import {fitEts} from './etsFit.js';
 import {forecastEtsMixture, simulateEtsMixture} from './etsMixture.js';
 import type {EtsParams, EtsSpec} from './etsModel.js';
+import {inSampleSeasonal} from './inSampleSeasonal.js';
 import {runningTotalIntervals} from './runningTotalIntervals.js';
 import {selectEts} from './etsSelect.js';
 import type {Forecast} from './model.js';
@@ -126,7 +127,7 @@ export function runMethod(
       return runEts(values, period, options, etsModels, {weighted: false, withRunningTotals: runningTotals});
     case 'arima': {
       const adjustment = stlSeasonalAdjustment(values, period);
-      return runArima(adjustment, options, arimaOrder) ?? {forecast: forecastNaive(values, options), details: {}};
+      return runArima(values, adjustment, options, arimaOrder) ?? {forecast: forecastNaive(values, options), details: {}};
     }
     case 'ets-theta-arima':
     case 'combination': {
@@ -136,7 +137,7 @@ export function runMethod(
       const thetaForecast = forecastTheta(thetaFit, options);
       if (adjustment.seasonal) thetaForecast.method = 'Theta on STL-adjusted data';
       const runs = [ets, {forecast: thetaForecast, details: thetaDetails(thetaFit)}];
-      const arima = name === 'ets-theta-arima' ? runArima(adjustment, options, arimaOrder) : null;
+      const arima = name === 'ets-theta-arima' ? runArima(values, adjustment, options, arimaOrder) : null;
       if (arima) runs.push(arima);
       const members = runs.map((r) => r.forecast);
       if (name === 'combination') members.push(forecastBenchmarks(values, period, options, ['Damped']).get('Damped')!);
@@ -165,6 +166,7 @@ const AUTO_WEIGHTS = Float64Array.of(0.45, 0.45, 0.1);
  * instead of searched. Null when the series is too short for any order.
  */
 function runArima(
+  values: Float64Array,
   adjustment: SeasonalAdjustment,
   options: {h: number; levels: number[]},
   order?: ArimaOrder,
@@ -174,6 +176,7 @@ function runArima(
   const plain = forecastArima(fit, options);
   const label = adjustment.seasonal ? `${fit.method} on STL-adjusted data` : fit.method;
   const forecast = reseasonalise(plain, adjustment, label);
+  forecast.fitted = inSampleSeasonal(arimaFitted(adjustment.adjusted, fit), values, adjustment);
   if (adjustment.seasonal) {
     const factors = adjustment.kind === 'multiplicative' ? adjustment.ahead(options.h) : undefined;
     forecast.runningTotals = arimaRunningTotals(fit, forecast.mean, forecast.levels, factors);
@@ -185,6 +188,15 @@ function runArima(
     details: {...details, sigma2: fit.sigma2, seasonalAdjustment: adjustment.kind},
     arimaOrder: fit.order,
   };
+}
+
+/**
+ * In-sample one-step ARIMA forecasts of the series it was fitted to: yₜ − eₜ where the CSS recursion has a residual
+ * (from t = p on, of the differenced series when d = 1); NaN before.
+ */
+function arimaFitted(y: Float64Array, fit: ArimaFit): Float64Array {
+  const d = fit.order.d;
+  return Float64Array.from(y, (v, t) => (t - d >= fit.order.p ? v - fit.residuals[t - d] : NaN));
 }
 
 function thetaDetails(fit: ThetaFit): Record<string, unknown> {
@@ -236,6 +248,11 @@ function runEts(
     ...(sa ? {seasonalAdjustment: sa.kind} : {}),
   };
   const mixture = forecastEtsMixture(kept, weights, options);
+  const fitted = new Float64Array(n);
+  kept.forEach((f, k) => {
+    for (let t = 0; t < n; t++) fitted[t] += weights[k] * f.fitted[t];
+  });
+  mixture.fitted = fitted;
   if (!sa) {
     if (withRunningTotals) {
       const paths = simulateEtsMixture(kept, weights, {h: options.h});
@@ -245,6 +262,7 @@ function runEts(
   }
   const method = sa.seasonal ? `${mixture.method} on seasonally adjusted data` : mixture.method;
   const forecast = reseasonalise(mixture, sa, method);
+  forecast.fitted = inSampleSeasonal(fitted, values, sa);
   if (withRunningTotals) {
     const paths = simulateEtsMixture(kept, weights, {h: options.h});
     const factors = sa.ahead(options.h);

@@ -6,3 +6,4 @@ export {isDivision, ratioParts} from './ratioParts.js';
 export {ratioOfSums} from './ratioOfSums.js';
 export {planFormulas, type FormulaEntry, type FormulaPlan, type LineProblem} from './formulaPlan.js';
 export {deriveSeries, type DerivedEntry, type RatioParts} from './deriveSeries.js';
+export {checkFormulas, deriveFormulas, type CheckedFormulas} from './deriveFormulas.js';
