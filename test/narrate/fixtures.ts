@@ -40,7 +40,9 @@ export function makeSeriesPlan(over: Partial<SeriesPlan> = {}): SeriesPlan {
     source: 'trading',
     column: 'net_sales',
     kind: 'flow',
+    formula: null,
     target: null,
+    better: 'higher',
     hidden: false,
     analysis: options,
     line: 1,
@@ -113,13 +115,20 @@ export function cycleOf(pattern: number[], n: number): number[] {
 import type {History} from '../../src/archive/types.js';
 import type {Draft, Rule} from '../../src/narrate/context.js';
 import {narrateFormat} from '../../src/narrate/format.js';
+import type {GroupResult, SeriesCombination} from '../../src/combine/index.js';
 import {analysisOptions, defaultBranding, defaultThresholds} from '../fixtures/planDefaults.js';
 
 /** Run one rule on one series with the en-GB (or given) locale. */
 export function runRule(
   rule: Rule,
   analysis: SeriesAnalysis,
-  args: {series?: Partial<SeriesPlan>; plan?: Partial<Plan>; history?: History | null} = {},
+  args: {
+    series?: Partial<SeriesPlan>;
+    plan?: Partial<Plan>;
+    history?: History | null;
+    combination?: SeriesCombination | null;
+    groups?: GroupResult[];
+  } = {},
 ): Draft[] {
   const plan = makePlan(args.plan);
   const series = makeSeriesPlan(args.series);
@@ -131,5 +140,7 @@ export function runRule(
     history: args.history ?? null,
     fmt: narrateFormat(plan.locale),
     isRate: series.unit === '%',
+    combination: args.combination ?? null,
+    groups: args.groups ?? [],
   });
 }
