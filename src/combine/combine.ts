@@ -36,7 +36,12 @@ export interface Combined {
  * Pure: no I/O, deterministic. The trend-cycle and the fiscal-year outturn of a total stay those of its own
  * (direct) analysis and base forecast.
  */
-export function combine(plan: Plan, data: Dataset, analyses: SeriesAnalysis[], ratios: ReadonlyMap<string, RatioParts>): Combined {
+export function combine(
+  plan: Plan,
+  data: Dataset,
+  analyses: SeriesAnalysis[],
+  ratios: ReadonlyMap<string, RatioParts>,
+): Combined {
   const frequency = plan.frequency;
   const notes: DataNote[] = [];
   const current = new Map(analyses.map((a) => [a.id, a]));
@@ -45,8 +50,10 @@ export function combine(plan: Plan, data: Dataset, analyses: SeriesAnalysis[], r
   for (const [id, ratio] of ratios) {
     const a = current.get(id);
     if (a === undefined) continue;
-    const ytd = ratioYearToDate(ratio, {start: a.start, end: a.end, frequency, fiscalYearStart: plan.fiscalYearStart}, (i) =>
-      yearAgo(frequency, i),
+    const ytd = ratioYearToDate(
+      ratio,
+      {start: a.start, end: a.end, frequency, fiscalYearStart: plan.fiscalYearStart},
+      (i) => yearAgo(frequency, i),
     );
     current.set(id, {...a, changes: {...a.changes, yearToDate: ytd}});
   }
@@ -69,9 +76,14 @@ export function combine(plan: Plan, data: Dataset, analyses: SeriesAnalysis[], r
     results.set(g.id, result);
     if (result.partsGap) {
       const {period, gap, percent, periods} = result.partsGap;
-      notes.push({file: plan.packFile, line: g.line, message: msg.partsGap(g.id, g.total, period, gap, percent, periods)});
+      notes.push({
+        file: plan.packFile,
+        line: g.line,
+        message: msg.partsGap(g.id, g.total, period, gap, percent, periods),
+      });
     }
-    if (g.adjustTotal === 'indirect') current.set(g.total, withIndirect(current.get(g.total)!, indirect, periodsPerYear[frequency]));
+    if (g.adjustTotal === 'indirect')
+      current.set(g.total, withIndirect(current.get(g.total)!, indirect, periodsPerYear[frequency]));
   }
 
   const combination = new Map<string, SeriesCombination>(
@@ -80,7 +92,8 @@ export function combine(plan: Plan, data: Dataset, analyses: SeriesAnalysis[], r
   const backtests = new Map<string, ReconciledBacktest | null>();
   for (const h of hierarchies(plan.groups)) {
     const {result, notes: said} = reconcileHierarchy(h, current, frequency);
-    for (const message of said) notes.push({file: plan.packFile, line: plan.groups.find((g) => g.id === h.id)!.line, message});
+    for (const message of said)
+      notes.push({file: plan.packFile, line: plan.groups.find((g) => g.id === h.id)!.line, message});
     for (const g of withTotal) if (h.series.includes(g.total)) backtests.set(g.id, result?.backtest ?? null);
     if (result === null) continue;
     for (const [id, forecast] of result.forecasts) {
@@ -100,7 +113,11 @@ export function combine(plan: Plan, data: Dataset, analyses: SeriesAnalysis[], r
     if (a === undefined || t === undefined || tp === undefined) continue;
     const target = {start: t.start, values: [...t.values, ...t.ahead], kind: tp.kind, ratio: ratios.get(tp.id) ?? null};
     const actual = {start: a.start, values: a.original, kind: s.kind, ratio: ratios.get(s.id) ?? null, analysis: a};
-    const versusTarget = seriesVersusTarget(actual, target, {frequency, fiscalYearStart: plan.fiscalYearStart, better: s.better});
+    const versusTarget = seriesVersusTarget(actual, target, {
+      frequency,
+      fiscalYearStart: plan.fiscalYearStart,
+      better: s.better,
+    });
     combination.set(s.id, {...combination.get(s.id)!, versusTarget});
   }
 
@@ -126,4 +143,3 @@ function withIndirect(a: SeriesAnalysis, indirect: Float64Array, perYear: number
     changes: {...a.changes, periodOnPeriodAdjusted: (r - 1) * 100, periodOnPeriodAnnualised: (r ** perYear - 1) * 100},
   };
 }
-

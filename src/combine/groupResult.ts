@@ -27,7 +27,8 @@ export function groupResult(
   const n = total.analysis.original.length;
   const label = (i: number) => formatPeriod(frequency, start + i);
   const original = (a: SeriesAnalysis) => align({start: a.start, values: a.original}, start, n);
-  const adjusted = (a: SeriesAnalysis) => align({start: a.start, values: a.adjustment?.adjusted ?? a.original}, start, n);
+  const adjusted = (a: SeriesAnalysis) =>
+    align({start: a.start, values: a.adjustment?.adjusted ?? a.original}, start, n);
 
   const x = Float64Array.from(total.analysis.original);
   const xs = parts.map((p) => original(p.analysis));

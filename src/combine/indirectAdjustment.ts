@@ -19,7 +19,10 @@ export function indirectTotal(adjustedParts: readonly Float64Array[], n: number)
  * max over t of 100 · |indirect_t − direct_t| / |direct_t|, with the index where it occurs.
  * NaN policy: skips periods where either is missing; `{index: -1, percent: NaN}` when none is left.
  */
-export function largestDifference(direct: Float64Array, indirect: Float64Array): {index: number; percent: number; difference: number} {
+export function largestDifference(
+  direct: Float64Array,
+  indirect: Float64Array,
+): {index: number; percent: number; difference: number} {
   let best = {index: -1, percent: NaN, difference: NaN};
   for (let t = 0; t < direct.length; t++) {
     const d = indirect[t] - direct[t];

@@ -2,7 +2,14 @@
  * Every note text of the combine stage, one function each (notes for the data-notes page and the manifest).
  */
 
-export const partsGap = (group: string, total: string, period: string, gap: number, percent: number, periods: number): string =>
+export const partsGap = (
+  group: string,
+  total: string,
+  period: string,
+  gap: number,
+  percent: number,
+  periods: number,
+): string =>
   `group ${group}: the parts do not add up to ${total} in ${periods} ${periods === 1 ? 'period' : 'periods'}; the largest gap is ${formatNumber(gap)} (${formatNumber(percent)}%) in ${period}`;
 
 export const mintFallback = (group: string, reason: string): string =>

@@ -50,7 +50,8 @@ export function reconcileHierarchy(
   const options = {n, constraints: hierarchy.constraints, method, w};
   const base = Float64Array.from({length: n * h}, (_, k) => forecasts[Math.floor(k / h)].mean[k % h]);
   const reconciled = reconcileForecasts(base, {...options, h});
-  if (reconciled === null) return {result: null, notes: [...notes, msg.notReconciled(hierarchy.id, 'the forecasts are not finite')]};
+  if (reconciled === null)
+    return {result: null, notes: [...notes, msg.notReconciled(hierarchy.id, 'the forecasts are not finite')]};
   const out = new Map<string, ForecastResult>();
   members.forEach((a, i) => {
     const f = a.forecast!;
@@ -81,7 +82,9 @@ function backtestReconciled(
   options: Omit<Parameters<typeof reconcileForecasts>[1], 'h'>,
   frequency: Frequency,
 ): ReconciledBacktest | null {
-  const paths = members.map((a) => new Map((a.forecast!.backtest?.paths ?? []).map((p) => [a.start + p.offset, p.mean])));
+  const paths = members.map(
+    (a) => new Map((a.forecast!.backtest?.paths ?? []).map((p) => [a.start + p.offset, p.mean])),
+  );
   const origins = [...paths[0].keys()].filter((o) => paths.every((p) => p.has(o))).sort((x, y) => x - y);
   if (origins.length === 0) return null;
   const period = periodsPerYear[frequency];
@@ -110,5 +113,12 @@ function backtestReconciled(
     series[a.id] = {base: sums[i].base / sums[i].count, reconciled: sums[i].reconciled / sums[i].count};
   });
   const mean = (key: 'base' | 'reconciled') => members.reduce((s, a) => s + series[a.id][key], 0) / n;
-  return {method: options.method as ReconciledBacktest['method'], origins: origins.length, horizon, series, base: mean('base'), reconciled: mean('reconciled')};
+  return {
+    method: options.method as ReconciledBacktest['method'],
+    origins: origins.length,
+    horizon,
+    series,
+    base: mean('base'),
+    reconciled: mean('reconciled'),
+  };
 }

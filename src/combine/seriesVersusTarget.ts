@@ -36,7 +36,10 @@ export function seriesVersusTarget(
   const t = align(target, fy.first, span);
   const adj = a.adjustment;
   const calendar = align(
-    {start: a.start, values: calendarParts(Float64Array.from(a.original), adj?.calendar?.effect ?? null, adj?.model ?? 'additive')},
+    {
+      start: a.start,
+      values: calendarParts(Float64Array.from(a.original), adj?.calendar?.effect ?? null, adj?.model ?? 'additive'),
+    },
     fy.first,
     span,
   );

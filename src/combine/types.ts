@@ -25,7 +25,11 @@ export interface GroupResult {
     /** On seasonally adjusted parts; the total here is the indirect total (the sum of the adjusted parts). */
     periodOnPeriodAdjusted: ContributionsAt;
     /** Every period from the first with a year-on-year figure to the review period. */
-    history: {period: string; yearOnYear: Omit<ContributionsAt, 'period'>; periodOnPeriodAdjusted: Omit<ContributionsAt, 'period'>}[];
+    history: {
+      period: string;
+      yearOnYear: Omit<ContributionsAt, 'period'>;
+      periodOnPeriodAdjusted: Omit<ContributionsAt, 'period'>;
+    }[];
   };
   /** The indirectly adjusted total (sum of adjusted parts) against the directly adjusted one. */
   indirect: {

@@ -29,9 +29,15 @@ export function structureCheck(raw: unknown, known: ReadonlySet<string> | null):
     .map(record)
     .forEach((s, i) => {
       if (s.better != null && s.target == null)
-        add(['series', i, 'better'], `series[${i}].better needs a target: it says which side of the target is favourable; add target: or remove better`);
+        add(
+          ['series', i, 'better'],
+          `series[${i}].better needs a target: it says which side of the target is favourable; add target: or remove better`,
+        );
       if (s.kind === 'ratio' && !('formula' in s))
-        add(['series', i, 'kind'], `series[${i}] has kind ratio, which needs a formula (numerator / denominator) so that year-to-date figures are ratios of sums; use kind stock for a ratio read from data`);
+        add(
+          ['series', i, 'kind'],
+          `series[${i}] has kind ratio, which needs a formula (numerator / denominator) so that year-to-date figures are ratios of sums; use kind stock for a ratio read from data`,
+        );
     });
 
   const groups = list(root.groups).map(record);
@@ -42,7 +48,8 @@ export function structureCheck(raw: unknown, known: ReadonlySet<string> | null):
     const total = text(g.total);
     if (total === undefined) {
       for (const key of ['adjustTotal', 'reconcile'])
-        if (g[key] != null) add(['groups', i, key], `groups[${i}].${key} applies to a group with a total; add total: or remove ${key}`);
+        if (g[key] != null)
+          add(['groups', i, key], `groups[${i}].${key} applies to a group with a total; add total: or remove ${key}`);
       return;
     }
     if (known !== null && !known.has(total))
@@ -52,7 +59,10 @@ export function structureCheck(raw: unknown, known: ReadonlySet<string> | null):
       const part = text(m);
       if (part === undefined) return;
       if (part === total) {
-        add(['groups', i, 'series', k], `groups[${i}].series[${k}] ${part} is the group's total; a total cannot be its own part`);
+        add(
+          ['groups', i, 'series', k],
+          `groups[${i}].series[${k}] ${part} is the group's total; a total cannot be its own part`,
+        );
         return;
       }
       const earlier = partOf.get(part);
@@ -73,7 +83,10 @@ export function structureCheck(raw: unknown, known: ReadonlySet<string> | null):
     while (stack.length > 0) {
       const p = stack.pop()!;
       if (p === total) {
-        add(['groups', indices[0], 'total'], `groups[${indices[0]}].total ${total} is one of its own parts through nested groups; a total cannot be its own part`);
+        add(
+          ['groups', indices[0], 'total'],
+          `groups[${indices[0]}].total ${total} is one of its own parts through nested groups; a total cannot be its own part`,
+        );
         break;
       }
       if (seen.has(p)) continue;
@@ -108,7 +121,10 @@ export function structureCheck(raw: unknown, known: ReadonlySet<string> | null):
     if (method === 'bottom-up' && (totalsOf.get(total)?.length ?? 0) > 1)
       add(
         ['groups', i, 'reconcile'],
-        `groups[${i}].reconcile bottom-up needs one breakdown per total, but ${total} is the total of groups ${totalsOf.get(total)!.map((j) => `[${j}]`).join(' and ')}; use mint or ols`,
+        `groups[${i}].reconcile bottom-up needs one breakdown per total, but ${total} is the total of groups ${totalsOf
+          .get(total)!
+          .map((j) => `[${j}]`)
+          .join(' and ')}; use mint or ols`,
       );
   });
   return out;

@@ -340,7 +340,9 @@ export function drivers(a: {
   driver: {label: string; points: string};
   against: {label: string; points: string; subtracted: boolean} | null;
 }): string {
-  const other = a.against ? `; ${a.against.label} ${a.against.subtracted ? 'subtracted' : 'added'} ${a.against.points}` : '';
+  const other = a.against
+    ? `; ${a.against.label} ${a.against.subtracted ? 'subtracted' : 'added'} ${a.against.points}`
+    : '';
   return `${a.label} ${a.rose ? 'rose' : 'fell'} ${a.change} on a year earlier in ${a.period}, driven by ${a.driver.label}, ${a.driver.points}${other}.`;
 }
 
@@ -358,6 +360,7 @@ export function versusTarget(a: {
 }): string {
   const when = a.span === null ? 'over the fiscal year to date' : `in ${a.span}`;
   const side = `${a.percent} ${a.above ? 'above' : 'below'} the target of ${a.target}`;
-  const calendar = a.calendar === null ? '' : ` The calendar (working days and Easter) accounts for ${a.calendar} of it.`;
+  const calendar =
+    a.calendar === null ? '' : ` The calendar (working days and Easter) accounts for ${a.calendar} of it.`;
   return `${a.label} came to ${a.actual} ${when}, ${side} (${a.favourable ? 'favourable' : 'unfavourable'}).${calendar}`;
 }

@@ -38,11 +38,25 @@ export async function run(): Promise<void> {
   const ids = ['ldeaths', 'mdeaths', 'fdeaths'];
   for (const method of ['mint', 'ols', 'bottom-up'] as const) {
     const plans = ids.map((id) => seriesPlan(id, 'deaths', {analysis: options}));
-    const group: GroupPlan = {id: 'sex', title: 'By sex', series: ['mdeaths', 'fdeaths'], total: 'ldeaths', adjustTotal: 'direct', reconcile: method, line: 1};
+    const group: GroupPlan = {
+      id: 'sex',
+      title: 'By sex',
+      series: ['mdeaths', 'fdeaths'],
+      total: 'ldeaths',
+      adjustTotal: 'direct',
+      reconcile: method,
+      line: 1,
+    };
     const plan = makePlan('monthly', [], plans, {groups: [group]});
     const series = ids.map((id) => ({
-      id, frequency: 'monthly' as const, start, values: Float64Array.from(ref[id] as number[]), ahead: new Float64Array(0),
-      sourceId: 'deaths', file: 'R datasets', notes: [],
+      id,
+      frequency: 'monthly' as const,
+      start,
+      values: Float64Array.from(ref[id] as number[]),
+      ahead: new Float64Array(0),
+      sourceId: 'deaths',
+      file: 'R datasets',
+      notes: [],
     }));
     await report(`ldeaths ${method}`, plan, {period: start + 71, series, inputs: [], notes: [], plans});
   }
@@ -60,6 +74,8 @@ async function report(name: string, plan: Plan, read: Dataset): Promise<void> {
       continue;
     }
     const rows = Object.entries(b.series).map(([id, s]) => `${id} ${s.base.toFixed(3)}→${s.reconciled.toFixed(3)}`);
-    console.log(`${name} ${g.id}: ${b.method}, ${b.origins} origins, h ≤ ${b.horizon}: mean MASE base ${b.base.toFixed(3)}, reconciled ${b.reconciled.toFixed(3)} (${rows.join(', ')})`);
+    console.log(
+      `${name} ${g.id}: ${b.method}, ${b.origins} origins, h ≤ ${b.horizon}: mean MASE base ${b.base.toFixed(3)}, reconciled ${b.reconciled.toFixed(3)} (${rows.join(', ')})`,
+    );
   }
 }

@@ -13,11 +13,21 @@ const ref = JSON.parse(readFileSync(new URL('../reference/hierarchy.json', impor
 const start = monthIndex(1974, 1);
 const options = analysisOptions({forecast: {method: 'ets', horizon: 6, backtestOrigins: 4}});
 
-function build(group: Partial<GroupPlan>, more: {target?: number[]; better?: 'higher' | 'lower'; fdeaths?: number[]} = {}) {
+function build(
+  group: Partial<GroupPlan>,
+  more: {target?: number[]; better?: 'higher' | 'lower'; fdeaths?: number[]} = {},
+) {
   const ids = ['ldeaths', 'mdeaths', 'fdeaths'];
-  const values: Record<string, number[]> = {ldeaths: ref.ldeaths, mdeaths: ref.mdeaths, fdeaths: more.fdeaths ?? ref.fdeaths};
+  const values: Record<string, number[]> = {
+    ldeaths: ref.ldeaths,
+    mdeaths: ref.mdeaths,
+    fdeaths: more.fdeaths ?? ref.fdeaths,
+  };
   const plans: SeriesPlan[] = ids.map((id) =>
-    seriesPlan(id, 'deaths', {analysis: options, ...(id === 'ldeaths' && more.target ? {target: 'plan', better: more.better ?? 'higher'} : {})}),
+    seriesPlan(id, 'deaths', {
+      analysis: options,
+      ...(id === 'ldeaths' && more.target ? {target: 'plan', better: more.better ?? 'higher'} : {}),
+    }),
   );
   const series: Series[] = ids.map((id) => ({
     id,
@@ -33,11 +43,30 @@ function build(group: Partial<GroupPlan>, more: {target?: number[]; better?: 'hi
     plans.push(seriesPlan('plan', 'deaths', {hidden: true, analysis: options}));
     series.push({...series[0], id: 'plan', values: Float64Array.from(more.target)});
   }
-  const g: GroupPlan = {id: 'sex', title: 'By sex', series: ['mdeaths', 'fdeaths'], total: 'ldeaths', adjustTotal: 'direct', reconcile: 'mint', line: 30, ...group};
+  const g: GroupPlan = {
+    id: 'sex',
+    title: 'By sex',
+    series: ['mdeaths', 'fdeaths'],
+    total: 'ldeaths',
+    adjustTotal: 'direct',
+    reconcile: 'mint',
+    line: 30,
+    ...group,
+  };
   const plan = makePlan('monthly', [], plans, {groups: [g], fiscalYearStart: 1});
   const data: Dataset = {period: start + 71, series, inputs: [], notes: [], plans};
   const analyses = plans.map((p, i) =>
-    analyseSeries({id: p.id, frequency: 'monthly', start, values: series[i].values, kind: 'flow', fiscalYearStart: 1, target: null, options, residualSigma: 3}),
+    analyseSeries({
+      id: p.id,
+      frequency: 'monthly',
+      start,
+      values: series[i].values,
+      kind: 'flow',
+      fiscalYearStart: 1,
+      target: null,
+      options,
+      residualSigma: 3,
+    }),
   );
   return {plan, data, analyses, combined: combine(plan, data, analyses, new Map())};
 }
@@ -86,7 +115,12 @@ describe('combine on ldeaths = mdeaths + fdeaths', () => {
     fdeaths[30] -= 40;
     fdeaths[31] -= 4;
     const {combined: c} = build({reconcile: 'none'}, {fdeaths});
-    expect(c.groups[0].partsGap).toEqual({period: '1976-07', gap: 40, percent: (100 * 40) / ref.ldeaths[30], periods: 2});
+    expect(c.groups[0].partsGap).toEqual({
+      period: '1976-07',
+      gap: 40,
+      percent: (100 * 40) / ref.ldeaths[30],
+      periods: 2,
+    });
     expect(c.notes.map((n) => `${n.line}: ${n.message}`)).toEqual([
       `30: group sex: the parts do not add up to ldeaths in 2 periods; the largest gap is 40 (${Number(((100 * 40) / ref.ldeaths[30]).toPrecision(4))}%) in 1976-07`,
     ]);

@@ -31,7 +31,15 @@ describe('a valid pack', async () => {
       browser: null,
     });
     expect(plan.groups).toEqual([
-      {id: 'money', title: 'Money', series: ['takings', 'staff'], total: null, adjustTotal: 'direct', reconcile: 'mint', line: 45},
+      {
+        id: 'money',
+        title: 'Money',
+        series: ['takings', 'staff'],
+        total: null,
+        adjustTotal: 'direct',
+        reconcile: 'mint',
+        line: 45,
+      },
     ]);
   });
 

@@ -23,5 +23,13 @@ export function reseasonalise<F extends Forecast>(
   }
   // Running totals and in-sample fits of the adjusted series do not carry over to the original scale; the caller
   // recomputes them (inSampleSeasonal.ts for the fits).
-  return {...forecast, method, mean: adjustment.restore(forecast.mean), lower, upper, runningTotals: undefined, fitted: undefined};
+  return {
+    ...forecast,
+    method,
+    mean: adjustment.restore(forecast.mean),
+    lower,
+    upper,
+    runningTotals: undefined,
+    fitted: undefined,
+  };
 }

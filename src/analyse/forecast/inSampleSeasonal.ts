@@ -7,7 +7,11 @@ import type {SeasonalAdjustment} from './seasonalAdjustment.js';
  * Why: one-step in-sample forecasts of a model fitted to adjusted data, on the original scale (their errors feed
  * forecast reconciliation). Complexity O(n). NaN policy: NaN in → NaN out.
  */
-export function inSampleSeasonal(fitted: Float64Array, values: Float64Array, adjustment: SeasonalAdjustment): Float64Array {
+export function inSampleSeasonal(
+  fitted: Float64Array,
+  values: Float64Array,
+  adjustment: SeasonalAdjustment,
+): Float64Array {
   const a = adjustment.adjusted;
   if (!adjustment.seasonal) return Float64Array.from(fitted);
   return fitted.map((f, t) => (adjustment.kind === 'multiplicative' ? (f * values[t]) / a[t] : f + values[t] - a[t]));

@@ -127,7 +127,9 @@ export function runMethod(
       return runEts(values, period, options, etsModels, {weighted: false, withRunningTotals: runningTotals});
     case 'arima': {
       const adjustment = stlSeasonalAdjustment(values, period);
-      return runArima(values, adjustment, options, arimaOrder) ?? {forecast: forecastNaive(values, options), details: {}};
+      return (
+        runArima(values, adjustment, options, arimaOrder) ?? {forecast: forecastNaive(values, options), details: {}}
+      );
     }
     case 'ets-theta-arima':
     case 'combination': {

@@ -24,7 +24,13 @@ export type ReconcileMethod = 'mint' | 'ols' | 'bottom-up' | 'none';
  */
 export function reconcileForecasts(
   base: Float64Array,
-  {n, h, constraints, method, w}: {n: number; h: number; constraints: readonly Constraint[]; method: ReconcileMethod; w?: Float64Array},
+  {
+    n,
+    h,
+    constraints,
+    method,
+    w,
+  }: {n: number; h: number; constraints: readonly Constraint[]; method: ReconcileMethod; w?: Float64Array},
 ): Float64Array | null {
   if (method === 'none' || constraints.length === 0) return Float64Array.from(base);
   if (!base.every(Number.isFinite)) return null;

@@ -9,8 +9,7 @@ import type {Formula} from './types.js';
 
 /** The pack's formulas parsed and ordered, with each series' kind resolved, or the problems at pack lines. */
 export type CheckedFormulas =
-  | {ok: true; order: {plan: SeriesPlan; formula: Formula}[]; plans: SeriesPlan[]}
-  | {ok: false; problems: Problem[]};
+  {ok: true; order: {plan: SeriesPlan; formula: Formula}[]; plans: SeriesPlan[]} | {ok: false; problems: Problem[]};
 
 /**
  * Check every formula of a pack (syntax, ids, cycles; `kind: ratio` only on a division) and resolve the kind of
@@ -34,7 +33,8 @@ export function checkFormulas(plan: Plan, plans: readonly SeriesPlan[]): Checked
     const formula = formulas.get(s.id);
     if (formula === undefined || s.formula === null) return s;
     if (!s.formula.kindGiven && isDivision(formula)) return {...s, kind: 'ratio'};
-    if (s.kind === 'ratio' && ratioParts(formula) === null) problems.push(at(s.formula.line, msg.ratioWithoutDivision(s.id)));
+    if (s.kind === 'ratio' && ratioParts(formula) === null)
+      problems.push(at(s.formula.line, msg.ratioWithoutDivision(s.id)));
     return s;
   });
   if (problems.length > 0) return {ok: false, problems};
@@ -53,7 +53,12 @@ export function deriveFormulas(plan: Plan, data: Dataset): {data: Dataset; ratio
   if (!checked.ok) throw new InputError(checked.problems);
   if (checked.order.length === 0) return {data, ratios: new Map()};
   const {series, ratios} = deriveSeries(
-    checked.order.map((o) => ({id: o.plan.id, formula: o.formula, line: o.plan.formula!.line, ratio: o.plan.kind === 'ratio'})),
+    checked.order.map((o) => ({
+      id: o.plan.id,
+      formula: o.formula,
+      line: o.plan.formula!.line,
+      ratio: o.plan.kind === 'ratio',
+    })),
     data.series,
     {frequency: plan.frequency, period: data.period, packFile: plan.packFile},
   );

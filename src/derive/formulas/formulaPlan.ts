@@ -82,7 +82,8 @@ function hyphenSplit(name: string, known: ReadonlySet<string>): string | null {
   const ok = (s: string) => known.has(s) || /^\d+$/.test(s);
   for (let i = name.indexOf('-'); i > 0; i = name.indexOf('-', i + 1)) {
     const [left, right] = [name.slice(0, i), name.slice(i + 1)];
-    if (ok(left) && (ok(right) || hyphenSplit(right, known) !== null)) return `${left} - ${ok(right) ? right : hyphenSplit(right, known)}`;
+    if (ok(left) && (ok(right) || hyphenSplit(right, known) !== null))
+      return `${left} - ${ok(right) ? right : hyphenSplit(right, known)}`;
   }
   return null;
 }

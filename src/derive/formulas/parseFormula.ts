@@ -63,7 +63,8 @@ export function parseFormula(text: string): Formula {
     if (t.type === 'id') {
       at++;
       if (!isOp(peek(), '(')) return {type: 'series', id: t.text, column: t.column};
-      if (t.text !== 'sum') throw new FormulaSyntaxError(`unknown function ${t.text}; the only function is sum(…)`, t.column);
+      if (t.text !== 'sum')
+        throw new FormulaSyntaxError(`unknown function ${t.text}; the only function is sum(…)`, t.column);
       at++;
       const terms = [expression()];
       while (isOp(peek(), ',')) {
@@ -97,7 +98,8 @@ export function parseFormula(text: string): Formula {
   const tree = expression();
   const rest = peek();
   if (rest !== undefined) {
-    const what = rest.type === 'operator' ? describe(rest) : `${describe(rest)} after a complete value (an operator is missing)`;
+    const what =
+      rest.type === 'operator' ? describe(rest) : `${describe(rest)} after a complete value (an operator is missing)`;
     throw new FormulaSyntaxError(rest.type === 'operator' ? `unexpected ${what}` : what, rest.column);
   }
   return tree;

@@ -8,12 +8,21 @@ import type {Formula} from './types.js';
  * the summed numerator and denominator (margin YTD = YTD profit / YTD sales), so both parts are needed.
  */
 export function ratioParts(formula: Formula): {numerator: Formula; denominator: Formula} | null {
-  if (formula.type === 'binary' && formula.operator === '/') return {numerator: formula.left, denominator: formula.right};
+  if (formula.type === 'binary' && formula.operator === '/')
+    return {numerator: formula.left, denominator: formula.right};
   if (formula.type === 'binary' && formula.operator === '*') {
     const [scale, rest] =
-      formula.left.type === 'number' ? [formula.left, formula.right] : formula.right.type === 'number' ? [formula.right, formula.left] : [null, null];
+      formula.left.type === 'number'
+        ? [formula.left, formula.right]
+        : formula.right.type === 'number'
+          ? [formula.right, formula.left]
+          : [null, null];
     const inner = scale && rest ? ratioParts(rest) : null;
-    if (scale && inner) return {numerator: {type: 'binary', operator: '*', left: scale, right: inner.numerator}, denominator: inner.denominator};
+    if (scale && inner)
+      return {
+        numerator: {type: 'binary', operator: '*', left: scale, right: inner.numerator},
+        denominator: inner.denominator,
+      };
   }
   return null;
 }

@@ -40,7 +40,8 @@ export function tokenize(text: string): Token[] {
     const id = ID.exec(rest);
     // An id wins when it reaches further than the number (`2026-plan`, `12months`).
     if (num && !(id && id[0].length > num[0].length)) {
-      if (ID_CHAR.test(text[i + num[0].length] ?? '')) throw new FormulaSyntaxError(`unexpected "${text[i + num[0].length]}"`, column + num[0].length);
+      if (ID_CHAR.test(text[i + num[0].length] ?? ''))
+        throw new FormulaSyntaxError(`unexpected "${text[i + num[0].length]}"`, column + num[0].length);
       tokens.push({type: 'number', value: Number(num[0]), column});
       i += num[0].length;
       continue;

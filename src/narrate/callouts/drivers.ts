@@ -31,7 +31,11 @@ export const driversRule: Rule = {
               rose: total >= 0,
               period: fmt.period(a.frequency, a.end),
               driver: {label: labels.get(driver.id) ?? driver.id, points: fmt.points(driver.points)},
-              against: against && {label: labels.get(against.id) ?? against.id, points: fmt.size(Math.abs(against.points)), subtracted: against.points < 0},
+              against: against && {
+                label: labels.get(against.id) ?? against.id,
+                points: fmt.size(Math.abs(against.points)),
+                subtracted: against.points < 0,
+              },
             }),
             figures: {total, [driver.id]: driver.points, ...(against ? {[against.id]: against.points} : {})},
             chart: groupChartId(g.id),

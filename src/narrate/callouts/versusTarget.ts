@@ -20,7 +20,8 @@ export const versusTargetRule: Rule = {
       const x = v[span];
       if (!Number.isFinite(x.percent) || Math.abs(x.percent) <= threshold) return [];
       const severity = x.favourable ? 'info' : Math.abs(x.percent) >= ALERT_MULTIPLE * threshold ? 'alert' : 'watch';
-      const calendar = Number.isFinite(x.calendarPart) && x.calendarPart !== 0 && s.kind === 'flow' ? x.calendarPart : null;
+      const calendar =
+        Number.isFinite(x.calendarPart) && x.calendarPart !== 0 && s.kind === 'flow' ? x.calendarPart : null;
       return [
         {
           key: span === 'period' ? 'period' : 'year-to-date',
@@ -35,7 +36,13 @@ export const versusTargetRule: Rule = {
             favourable: x.favourable,
             calendar: calendar === null ? null : fmt.signed(calendar, s.unit),
           }),
-          figures: {actual: x.actual, target: x.target, difference: x.difference, percent: x.percent, calendarPart: x.calendarPart},
+          figures: {
+            actual: x.actual,
+            target: x.target,
+            difference: x.difference,
+            percent: x.percent,
+            calendarPart: x.calendarPart,
+          },
           chart: chartId(s.id, 'overview'),
           magnitude: Math.min(10, Math.abs(x.percent) / threshold),
           periodsAgo: 0,

@@ -50,7 +50,13 @@ export function contributionsChart(input: ContributionsInput, ctx: ChartContext)
         encoding: {
           x: xBars,
           y: {field: 'v', type: 'quantitative', title: input.axisTitle, axis: {format: ',~r'}, stack: 'zero'},
-          color: {field: 'part', type: 'nominal', title: null, scale: {domain: labels, range: ramp(theme, labels.length)}, sort: labels},
+          color: {
+            field: 'part',
+            type: 'nominal',
+            title: null,
+            scale: {domain: labels, range: ramp(theme, labels.length)},
+            sort: labels,
+          },
           order: {field: 'order', type: 'quantitative'},
         },
       },
@@ -59,7 +65,11 @@ export function contributionsChart(input: ContributionsInput, ctx: ChartContext)
         mark: {type: 'tick', color: theme.ink, thickness: 2, size: bar + 4},
         encoding: {x: xBars, y: {field: 'v', type: 'quantitative'}},
       },
-      {data: {values: [{}]}, mark: {type: 'rule', color: theme.ink, strokeWidth: 0.8}, encoding: {y: {datum: 0, type: 'quantitative'}}},
+      {
+        data: {values: [{}]},
+        mark: {type: 'rule', color: theme.ink, strokeWidth: 0.8},
+        encoding: {y: {datum: 0, type: 'quantitative'}},
+      },
     ],
   };
 }

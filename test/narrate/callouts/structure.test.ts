@@ -41,14 +41,20 @@ describe('drivers', () => {
     expect(drafts[0].chart).toBe('chart-group-regions-contributions');
   });
   it('reads a fall the other way round, and says nothing without a driver', () => {
-    expect(mainDrivers(-2, {a: -1.5, b: 0.3, c: -1.5})).toEqual({driver: {id: 'a', points: -1.5}, against: {id: 'b', points: 0.3}});
+    expect(mainDrivers(-2, {a: -1.5, b: 0.3, c: -1.5})).toEqual({
+      driver: {id: 'a', points: -1.5},
+      against: {id: 'b', points: 0.3},
+    });
     expect(mainDrivers(0.01, {a: 0.01, b: 0})).toBeNull();
     expect(runRule(driversRule, makeAnalysis([1, 2, 3]), {plan, groups: [group({north: NaN}, NaN)]})).toEqual([]);
   });
 });
 
 describe('versus target', () => {
-  const combination = (period: ReturnType<typeof variance>, yearToDate: ReturnType<typeof variance>): SeriesCombination => ({
+  const combination = (
+    period: ReturnType<typeof variance>,
+    yearToDate: ReturnType<typeof variance>,
+  ): SeriesCombination => ({
     better: 'lower',
     versusTarget: {period, yearToDate},
     baseMean: null,
@@ -75,6 +81,8 @@ describe('versus target', () => {
       ['period', 'alert'],
       ['year-to-date', 'info'],
     ]);
-    expect(drafts[1].text).toBe('Net sales came to 110 EUR k over the fiscal year to date, 10.0% above the target of 100 EUR k (favourable).');
+    expect(drafts[1].text).toBe(
+      'Net sales came to 110 EUR k over the fiscal year to date, 10.0% above the target of 100 EUR k (favourable).',
+    );
   });
 });
