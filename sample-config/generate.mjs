@@ -25,8 +25,8 @@
 //   Gaps: footfall is blank for 2019-08, 2023-02 and 2023-03 (door counter fault).
 //   Budget: sales_budget runs to 2027-03 (the end of fiscal year 2026/27; the fiscal year starts in April), and so
 //     do payroll_budget and marketing_budget (cost lines: below budget is favourable).
-//   Structure: net sales are the sum of three shop regions (North, Lakes, Coast) and the web store, each rounded
-//     to 0.1 first, so the parts add up exactly; cost of goods sold (cogs) gives a gross margin near 46%, falling by
+//   Structure: net sales are the sum of three shop regions (North, Lakes, Coast), each rounded to 0.1, and the web
+//     store (the rest of net sales, also in tenths), so the parts add up exactly; cost of goods sold (cogs) gives a gross margin near 46%, falling by
 //     about a point in the 2023-11 flash sale; transactions give the average basket (net sales / transactions).
 //     These use a second seeded generator, so every other series keeps its values.
 import {mkdirSync, writeFileSync} from 'node:fs';
@@ -237,8 +237,9 @@ for (let t = START; t <= BUDGET_END; t++) {
   const shopShares = [0.45, 0.33 * (shop ? 1.2 : 1), 0.22].map((s) => s * (1 + 0.02 * normal(split)));
   const shopTotal = shopShares.reduce((a, b) => a + b, 0);
   const [north, lakes, coast] = shopShares.map((s) => round((netSales * (1 - webShare) * s) / shopTotal, 1));
-  const webSales = round(netSales * webShare, 1);
-  const sales = round(north + lakes + coast + webSales, 1);
+  // Web sales are what the shops leave of net sales (in tenths, so the parts add up exactly to what is written).
+  const sales = round(netSales, 1);
+  const webSales = Math.round(sales * 10 - north * 10 - lakes * 10 - coast * 10) / 10;
   const margin = 0.46 - 0.004 * Math.sin((2 * Math.PI * (m - 1)) / 12) - (t === mi(2023, 11) ? 0.012 : 0);
   const cogs = round(sales * (1 - margin * (1 + 0.01 * normal(split))), 1);
 
