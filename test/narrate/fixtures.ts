@@ -110,7 +110,7 @@ export function cycleOf(pattern: number[], n: number): number[] {
   return Array.from({length: n}, (_, i) => pattern[i % pattern.length]);
 }
 
-import type {History} from '../../src/archive/types.js';
+import type {History} from '../../src/results/index.js';
 import type {Draft, Rule} from '../../src/narrate/context.js';
 import {narrateFormat} from '../../src/narrate/format.js';
 import {analysisOptions, defaultBranding, defaultThresholds} from '../fixtures/planDefaults.js';

@@ -2,7 +2,7 @@ import type {AnalysisOptions, Plan, SeriesPlan} from '../../src/config/plan.js';
 import type {SeriesAnalysis} from '../../src/analyse/types.js';
 import type {TurningPoint} from '../../src/analyse/cycle/types.js';
 import type {Callout} from '../../src/narrate/types.js';
-import type {History} from '../../src/archive/types.js';
+import type {History} from '../../src/results/index.js';
 import type {Report, ReportSeries} from '../../src/render/types.js';
 import {monthIndex, periodsPerYear, quarterIndex, type Frequency} from '../../src/time/period.js';
 import {mulberry32} from '../../src/analyse/numeric/mulberry32.js';
