@@ -5,7 +5,7 @@ import path from 'node:path';
 import {fileURLToPath} from 'node:url';
 import {Command, CommanderError} from 'commander';
 import {loadPlan} from '../config/index.js';
-import type {OutputFormat, Plan} from '../config/plan.js';
+import type {OutputFormat} from '../config/plan.js';
 import {formatProblem, InputError} from '../errors.js';
 import {pdfSession} from '../render/pdfSession.js';
 import {build, check} from '../run.js';

@@ -68,10 +68,16 @@ export function trackForecasts(earlier: PublishedForecasts[], current: PeriodDig
  * Pure; O(rows + series length).
  */
 export function summariseTracking(rows: TrackingRow[], current: PeriodDigest): TrackingSummary[] {
+  const bySeries = new Map<string, TrackingRow[]>();
+  for (const r of rows) {
+    const mine = bySeries.get(r.seriesId);
+    if (mine === undefined) bySeries.set(r.seriesId, [r]);
+    else mine.push(r);
+  }
   const out: TrackingSummary[] = [];
   for (const s of current.series) {
-    const mine = rows.filter((r) => r.seriesId === s.id);
-    if (mine.length === 0) continue;
+    const mine = bySeries.get(s.id);
+    if (mine === undefined) continue;
     const scale = seasonalNaiveMae(Float64Array.from(s.original, (v) => v ?? NaN), current.pack.frequency);
     const mae = mine.reduce((sum, r) => sum + Math.abs(r.error), 0) / mine.length;
     const levels = [...new Set(mine.flatMap((r) => Object.keys(r.inside)))].sort((a, b) => Number(a) - Number(b));
