@@ -10,7 +10,7 @@ import {ingest} from '../../src/ingest/index.js';
 import type {Dataset} from '../../src/ingest/types.js';
 import {collectingLogger} from '../../src/log.js';
 import {monthIndex} from '../../src/time/period.js';
-import {analysisOptions} from '../fixtures/planDefaults.js';
+import {analysisOptions} from '../fixtures/plans.js';
 import {plan as makePlan, series as seriesPlan} from '../ingest/plan.js';
 
 /**
@@ -65,7 +65,7 @@ export async function run(): Promise<void> {
 async function report(name: string, plan: Plan, read: Dataset): Promise<void> {
   const {data, ratios} = deriveFormulas(plan, read);
   const full = {...plan, series: data.plans};
-  const analyses = await analyseAll(full, data, {jobs: 1, log: collectingLogger()});
+  const analyses = await analyseAll(full, data, {threads: 0, log: collectingLogger()});
   const combined = combine(full, data, analyses, ratios);
   for (const g of combined.groups) {
     const b = g.backtest;

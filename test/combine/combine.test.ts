@@ -5,7 +5,7 @@ import {combine} from '../../src/combine/index.js';
 import type {GroupPlan, SeriesPlan} from '../../src/config/plan.js';
 import type {Dataset, Series} from '../../src/ingest/types.js';
 import {monthIndex} from '../../src/time/period.js';
-import {analysisOptions} from '../fixtures/planDefaults.js';
+import {analysisOptions} from '../fixtures/plans.js';
 import {plan as makePlan, series as seriesPlan} from '../ingest/plan.js';
 
 // R's datasets ldeaths = mdeaths + fdeaths, monthly 1974-01 … 1979-12 (test/reference/hierarchy.json).

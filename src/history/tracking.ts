@@ -1,8 +1,12 @@
-import {frequencyOf} from '../render/results.js';
+import {frequencyOf, type DigestSeries, type PeriodDigest, type TrackingRow, type TrackingSummary} from '../results/index.js';
 import {parsePeriod} from '../time/period.js';
-import type {TrackingRow, TrackingSummary} from './types.js';
-import type {ResultsLike} from './revisions.js';
 import {seasonalNaiveMae} from './seasonalNaiveMae.js';
+
+/** What tracking reads of an earlier period: its forecasts. */
+export interface PublishedForecasts {
+  pack: PeriodDigest['pack'];
+  series: Pick<DigestSeries, 'id' | 'forecast'>[];
+}
 
 /**
  * Every forecast published in an earlier pack whose actual is now known, set against that actual
@@ -14,18 +18,18 @@ import {seasonalNaiveMae} from './seasonalNaiveMae.js';
  * skipped. Rows come in the current pack's series order, then by publishing period, then by period.
  * Pure; O(earlier packs × series × horizon).
  */
-export function trackForecasts(earlier: ResultsLike[], current: ResultsLike): TrackingRow[] {
+export function trackForecasts(earlier: PublishedForecasts[], current: PeriodDigest): TrackingRow[] {
   const freq = frequencyOf(current.pack.frequency);
   const packs = earlier
     .filter((e) => e.pack.frequency === current.pack.frequency)
-    .map((e) => ({pack: e, index: parsePeriod(freq, e.pack.period)}))
-    .filter((e): e is {pack: ResultsLike; index: number} => e.index !== undefined)
+    .map((e) => ({pack: e, byId: new Map(e.series.map((x) => [x.id, x])), index: parsePeriod(freq, e.pack.period)}))
+    .filter((e): e is {pack: PublishedForecasts; byId: Map<string, PublishedForecasts['series'][number]>; index: number} => e.index !== undefined)
     .sort((a, b) => a.index - b.index);
   const rows: TrackingRow[] = [];
   for (const s of current.series) {
     const position = new Map(s.periods.map((label, j) => [label, j]));
-    for (const {pack, index: published} of packs) {
-      const fc = pack.series.find((x) => x.id === s.id)?.forecast;
+    for (const {pack, byId, index: published} of packs) {
+      const fc = byId.get(s.id)?.forecast;
       if (fc == null) continue;
       const levels = Object.keys(fc.lower).sort((a, b) => Number(a) - Number(b));
       fc.periods.forEach((label, k) => {
@@ -63,11 +67,17 @@ export function trackForecasts(earlier: ResultsLike[], current: ResultsLike): Tr
  * computed; coverage[level] = share of tracked actuals inside the published band.
  * Pure; O(rows + series length).
  */
-export function summariseTracking(rows: TrackingRow[], current: ResultsLike): TrackingSummary[] {
+export function summariseTracking(rows: TrackingRow[], current: PeriodDigest): TrackingSummary[] {
+  const bySeries = new Map<string, TrackingRow[]>();
+  for (const r of rows) {
+    const mine = bySeries.get(r.seriesId);
+    if (mine === undefined) bySeries.set(r.seriesId, [r]);
+    else mine.push(r);
+  }
   const out: TrackingSummary[] = [];
   for (const s of current.series) {
-    const mine = rows.filter((r) => r.seriesId === s.id);
-    if (mine.length === 0) continue;
+    const mine = bySeries.get(s.id);
+    if (mine === undefined) continue;
     const scale = seasonalNaiveMae(Float64Array.from(s.original, (v) => v ?? NaN), current.pack.frequency);
     const mae = mine.reduce((sum, r) => sum + Math.abs(r.error), 0) / mine.length;
     const levels = [...new Set(mine.flatMap((r) => Object.keys(r.inside)))].sort((a, b) => Number(a) - Number(b));
