@@ -226,7 +226,7 @@ export function makeReport(opts: FixtureOptions = {}): Report {
         chart: `chart-${id}-irregular`,
       },
     ];
-    return {plan, analysis, callouts};
+    return {plan, analysis, callouts, combination: null};
   });
   const plan = planFixture({
     id: 'monthly-pack',
@@ -280,5 +280,6 @@ export function makeReport(opts: FixtureOptions = {}): Report {
     inputs: [{file: '/packs/harbourline/data/trading.csv', sha256: 'ab'.repeat(32), bytes: 12345, rows: 96}],
     notes: [{file: '/packs/harbourline/data/trading.csv', line: 42, message: 'Blank value for col_1 in Apr 2021.'}],
     history,
+    groups: [],
   };
 }

@@ -75,9 +75,14 @@ describe('sample packs', () => {
     expect(plan.id).toBe('tarnwick-monthly');
     expect(plan.fiscalYearStart).toBe(4);
     expect(plan.series.map((s) => s.id)).toEqual([
-      'net-sales', 'sales-north', 'sales-lakes', 'sales-coast', 'web-sales', 'cogs', 'transactions', 'footfall',
-      'avg-basket', 'returns-rate', 'payroll', 'inventory', 'marketing', 'sales-budget', 'payroll-budget',
-      'marketing-budget',
+      'net-sales', 'sales-north', 'sales-lakes', 'sales-coast', 'shop-sales', 'web-sales', 'cogs', 'gross-margin',
+      'transactions', 'footfall', 'avg-basket', 'returns-rate', 'payroll', 'inventory', 'marketing', 'sales-budget',
+      'payroll-budget', 'marketing-budget',
+    ]);
+    expect(plan.series.find((s) => s.id === 'gross-margin')!.formula!.text).toBe('100 * (net-sales - cogs) / net-sales');
+    expect(plan.groups.filter((g) => g.total !== null).map((g) => [g.id, g.total, g.adjustTotal])).toEqual([
+      ['channels', 'net-sales', 'direct'],
+      ['regions', 'shop-sales', 'indirect'],
     ]);
     expect(plan.series.find((s) => s.id === 'payroll')).toMatchObject({target: 'payroll-budget', better: 'lower'});
     // The `fromSource: web` entry is expanded by ingest into web-sessions and web-orders.
@@ -90,7 +95,7 @@ describe('sample packs', () => {
   it('quarterly pack loads', async () => {
     const plan = await loadPlan(join(dir, 'quarterly-pack.yaml'));
     expect(plan.frequency).toBe('quarterly');
-    expect(plan.series).toHaveLength(6);
+    expect(plan.series).toHaveLength(7);
     expect(plan.sources[0]).toMatchObject({delimiter: ';', decimal: ','});
   });
 });

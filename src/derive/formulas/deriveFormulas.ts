@@ -64,5 +64,7 @@ export function deriveFormulas(plan: Plan, data: Dataset): {data: Dataset; ratio
   );
   const byId = new Map([...data.series, ...series].map((s) => [s.id, s]));
   const ordered = checked.plans.flatMap((p) => byId.get(p.id) ?? []);
-  return {data: {...data, series: ordered, plans: checked.plans}, ratios};
+  // A formula's data notes (divisions by zero) go to the pack's data notes with those of the sources.
+  const notes = [...data.notes, ...series.flatMap((s) => s.notes)];
+  return {data: {...data, series: ordered, plans: checked.plans, notes}, ratios};
 }
