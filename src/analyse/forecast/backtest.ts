@@ -54,7 +54,7 @@ export function rollingBacktest(
     last = last.refit(train, {warm: o > n - k});
     const fits = [last, fitMethod('seasonal-naive', train, {period}), fitMethod('naive2', train, {period})];
     fits.forEach((f, j) => {
-      const fc = f.forecast({h: steps, levels: [80], runningTotals: false}).forecast;
+      const fc = f.forecast({h: steps, levels: [], runningTotals: false}).forecast;
       const acc = accuracy(fc.mean, actual, {insample: train, period});
       const t = totals[j];
       t.scaled += acc.MASE * steps;

@@ -3,6 +3,7 @@ import {akaikeWeights} from './akaikeWeights.js';
 import {fitEts, type EtsFit} from './etsFit.js';
 import {forecastEtsMixture, simulateEtsMixture} from './etsMixture.js';
 import type {EtsParams, EtsSpec} from './etsModel.js';
+import {selectEtsScreened} from './etsScreen.js';
 import {selectEts} from './etsSelect.js';
 import type {MethodFit, MethodForecastOptions} from './method.js';
 import {forecastNaive} from './naive.js';
@@ -24,8 +25,8 @@ const WARM_EVALUATIONS = 300;
 
 /**
  * Automatic ETS as a method fit (method.ts): every model of the stable subset is fitted (selectEts); `weighted`
- * averages the forecasts of those with an Akaike weight of at least 1% by weight, otherwise the model with the
- * smallest AICc is kept. Seasonal models only with m ≤ 24 and at least two full years; for longer periods
+ * averages the forecasts of those with an Akaike weight of at least 1% by weight (the models that cannot reach
+ * that cut are given up early, see etsScreen.ts), otherwise the model with the smallest AICc is kept. Seasonal models only with m ≤ 24 and at least two full years; for longer periods
  * (weekly data, m = 52) the series is seasonally adjusted first (classical decomposition, when the seasonality
  * test finds a pattern) and non-seasonal ETS forecasts the adjusted series. Running totals come from simulated
  * sample paths of the mixture (seeded).
@@ -54,7 +55,11 @@ export function fitEtsMethod(
     const warm = m.params && m.initialStates ? {start: {params: m.params, initialStates: m.initialStates}} : {};
     return fitEts(y, m.spec, m.params ? {...warm, maxEvaluations: WARM_EVALUATIONS} : warm) ?? [];
   });
-  if (fits.length === 0) fits = selectEts(y, {period: sa ? 1 : period, seasonal: !sa && seasonalOk})?.fits ?? [];
+  if (fits.length === 0) {
+    const options = {period: sa ? 1 : period, seasonal: !sa && seasonalOk};
+    // Weighted: only the models that can reach the 1% cut are fitted to the end (etsScreen.ts).
+    fits = weighted ? selectEtsScreened(y, options) : (selectEts(y, options)?.fits ?? []);
+  }
   if (fits.length === 0) {
     // Nothing to keep: a refit tries the same models again, as given (or selects, when none were given).
     return {
