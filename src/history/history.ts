@@ -50,16 +50,19 @@ export async function loadHistory(
   return previous === null ? null : buildHistory(previous, published, current, thresholdPct);
 }
 
-/** The forecasts of a digest cut to the periods up to `period` (labels of one frequency sort as text). */
+/**
+ * The forecasts of a digest cut to the periods up to `period` (labels of one frequency sort as text). The digest was
+ * just read and is not shared, so its band records are cut in place: a new record keyed by `"80"` and `"95"` would
+ * cost about a kilobyte each (see `sharedRecord` in tracking.ts), the parsed ones a tenth of that.
+ */
 function forecastsUpTo(digest: PeriodDigest, period: string): PublishedForecasts {
   return {
     pack: digest.pack,
     series: digest.series.map(({id, forecast: fc}) => {
       if (fc === null) return {id, forecast: null};
       const k = fc.periods.filter((label) => label <= period).length;
-      const cut = (bands: Record<string, (number | null)[]>) =>
-        Object.fromEntries(Object.entries(bands).map(([level, xs]) => [level, xs.slice(0, k)]));
-      return {id, forecast: {periods: fc.periods.slice(0, k), mean: fc.mean.slice(0, k), lower: cut(fc.lower), upper: cut(fc.upper)}};
+      for (const bands of [fc.lower, fc.upper]) for (const level of Object.keys(bands)) bands[level] = bands[level].slice(0, k);
+      return {id, forecast: {periods: fc.periods.slice(0, k), mean: fc.mean.slice(0, k), lower: fc.lower, upper: fc.upper}};
     }),
   };
 }

@@ -285,7 +285,9 @@ function history(h: History): NonNullable<Results['history']> {
       forecast: num(t.forecast),
       actual: num(t.actual),
       error: num(t.error),
-      inside: plain(t.inside) as Record<string, boolean>,
+      // Shared frozen records of booleans keyed by level (see history/tracking.ts): already JSON-safe, and integer-like
+      // keys enumerate in ascending order, so copying each one would only cost memory.
+      inside: t.inside,
     })),
     trackingSummary: h.trackingSummary.map((t) => ({
       seriesId: t.seriesId,
