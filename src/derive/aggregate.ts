@@ -35,7 +35,10 @@ export function periodValue(s: PeriodSummary, method: Aggregate, zeroWhenEmpty =
   }
 }
 
-/** `sum` for flows (sales add up over a period), `last` for stocks (a level is read at the period's end). */
-export function defaultAggregate(kind: 'flow' | 'stock'): Aggregate {
-  return kind === 'flow' ? 'sum' : 'last';
+/**
+ * `sum` for flows (sales add up over a period), `last` for stocks (a level is read at the period's end), `mean` for
+ * ratios read from a source (a rate has no sum; without its parts, the mean of the period's rates).
+ */
+export function defaultAggregate(kind: 'flow' | 'stock' | 'ratio'): Aggregate {
+  return kind === 'flow' ? 'sum' : kind === 'stock' ? 'last' : 'mean';
 }

@@ -56,6 +56,8 @@ export function derive(plan: Plan, readings: Readings): Dataset {
   const found: Derived[] = [];
   const reported = new Set<string>();
   for (const s of plans) {
+    // Derived series (formulas) are made from the others by derive/formulas.
+    if (s.formula !== null) continue;
     const data = sources.get(s.source);
     if (data === undefined) {
       problems.add(plan.packFile, s.line, null, msg.unknownSource(s.id, s.source));
