@@ -1,4 +1,4 @@
-import {frequencyOf} from '../render/results.js';
+import {frequencyOf} from '../results/index.js';
 import {parsePeriod, periodLabel} from '../time/period.js';
 import {escapeHtml} from './escapeHtml.js';
 import type {Headlines} from './headlines.js';
