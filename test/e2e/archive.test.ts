@@ -224,7 +224,10 @@ describe('archive through the CLI', () => {
       expect(run.code).toBe(0);
 
       const r = await readJson(join(packDir, '2026-10', 'results.json'));
-      const data = r.history.revisions.filter((x: any) => x.kind === 'data');
+      // Net sales changed in the CSV; the series derived from it by formulas change with it, in the same period.
+      const revised = r.history.revisions.filter((x: any) => x.kind === 'data');
+      expect(new Set(revised.map((x: any) => x.period))).toEqual(new Set(['2026-03']));
+      const data = revised.filter((x: any) => x.seriesId === 'net-sales');
       expect(data).toHaveLength(1);
       expect(data[0]).toMatchObject({
         seriesId: 'net-sales',
