@@ -13,6 +13,7 @@ import type {SeriesAnalysis} from './analyse/types.js';
 import type {History} from './archive/types.js';
 import {formatPeriod, periodStartDay, civilFromDays} from './time/period.js';
 import {toolVersion} from './version.js';
+import {wordNote, wordsFor} from './words/index.js';
 import {InputError, formatProblem, type Problem} from './errors.js';
 import type {Logger} from './log.js';
 
@@ -92,7 +93,7 @@ export async function build(request: BuildRequest, log: Logger): Promise<BuildSu
       const browser = request.browser ?? unwrap((await ownBrowser)!);
       if ('missing' in browser) pdfSkipped = browser.missing;
       else {
-        const outline = (await import('./render/view.js')).reportOutline(report);
+        const outline = (await import('./render/view/index.js')).reportOutline(report);
         pdf = await browser.pdf(html, {...pdfOptions(plan, data.period, periodLabel), outline});
       }
       if (pdfSkipped) log.warn(pdfSkipped);
@@ -108,6 +109,7 @@ export async function build(request: BuildRequest, log: Logger): Promise<BuildSu
     if (plan.formats.includes('xlsx')) exports.push({name: 'tables.xlsx', content: await tables.xlsx()});
   }
 
+  const words = wordsFor(plan.locale);
   const written = await archive({
     report,
     html: plan.formats.includes('html') ? html : null,
@@ -117,7 +119,7 @@ export async function build(request: BuildRequest, log: Logger): Promise<BuildSu
     force: request.force,
     plan: portablePlan(plan),
     warnings: report.series.map((s) => s.analysis).flatMap((a) =>
-      [a.notAdjustedReason ?? [], a.notes, a.forecast?.notes ?? []].flat().map((note) => `${a.id}: ${note}`),
+      [a.notAdjustedReason ?? [], a.notes, a.forecast?.notes ?? []].flat().map((note) => `${a.id}: ${wordNote(words, note)}`),
     ),
   });
   log.info(`${plan.id} ${periodLabel}: written to ${written.folder}`);
@@ -180,8 +182,14 @@ function assemble(plan: Plan, data: Dataset, analyses: SeriesAnalysis[], history
     period: data.period,
     periodLabel: formatPeriod(plan.frequency, data.period),
     toolVersion,
-    series: plan.series.map((s, i) => ({plan: s, analysis: analyses[i], callouts: narration.bySeries.get(s.id) ?? []})),
+    series: plan.series.map((s, i) => ({
+      plan: s,
+      analysis: analyses[i],
+      callouts: narration.bySeries.get(s.id) ?? [],
+      commentary: narration.paragraphs.get(s.id) ?? '',
+    })),
     callouts: narration.pack,
+    commentary: narration.opening,
     inputs: data.inputs,
     notes: data.notes,
     history,

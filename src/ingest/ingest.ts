@@ -66,7 +66,7 @@ export async function ingest(plan: Plan): Promise<Dataset> {
     throw new InputError(problems.list());
   }
   if (plan.period === null) {
-    notes.push({file: plan.packFile, line: null, message: msg.inferredPeriod(formatPeriod(plan.frequency, period))});
+    notes.push({file: plan.packFile, line: null, series: null, note: msg.inferredPeriod(formatPeriod(plan.frequency, period))});
   }
 
   // A set, not a search of the plans per series: with 10,000 series that search took 14 s.
@@ -80,7 +80,7 @@ export async function ingest(plan: Plan): Promise<Dataset> {
       problems.add(plan.packFile, s.line, null, placed.problem);
       continue;
     }
-    const seriesNotes = placed.notes.map((message) => ({file, line: null, message: `${s.id}: ${message}`}));
+    const seriesNotes = placed.notes.map((note) => ({file, line: null, series: s.id, note}));
     series.push({
       id: s.id,
       frequency: plan.frequency,

@@ -3,6 +3,7 @@
  * how to fix it; the file, line and column travel beside the text (see errors.ts).
  */
 import type {Frequency} from '../time/period.js';
+import type {Note} from '../words/index.js';
 
 const UNIT: Record<Frequency, [string, string]> = {
   monthly: ['month', 'months'],
@@ -67,16 +68,21 @@ export const noData = (): string => 'the pack names no series with data, so ther
 export const unknownSource = (seriesId: string, sourceId: string): string =>
   `series ${seriesId} names source ${sourceId}, which the pack does not define`;
 
-export const outOfOrder = (line: number): string =>
-  `rows are not in date order (first at line ${line}); they were sorted`;
-export const gaps = (frequency: Frequency, labels: string[]): string =>
-  `${count(frequency, labels.length).replace(/ /, ' missing ')}: ${listed(labels)}`;
-export const truncated = (frequency: Frequency, n: number, period: string, from: string, to: string): string =>
-  `${count(frequency, n)} of data after the review period ${period} ignored (${from === to ? from : `${from} to ${to}`})`;
-export const padded = (frequency: Frequency, last: string, n: number, period: string): string =>
-  `data end at ${last}: the ${count(frequency, n)} up to the review period ${period} are missing`;
-export const inferredPeriod = (period: string): string =>
-  `review period ${period}: the pack sets none, so the last period with data is used`;
+// Data notes are coded (worded in the pack's language by src/words); problems above stay sentences.
+export const outOfOrder = (line: number): Note => ({code: 'outOfOrder', values: {line: String(line)}});
+export const gaps = (frequency: Frequency, labels: string[]): Note => ({
+  code: 'gaps',
+  values: {frequency, n: labels.length, list: labels.slice(0, LISTED).join(', '), more: Math.max(0, labels.length - LISTED)},
+});
+export const truncated = (frequency: Frequency, n: number, period: string, from: string, to: string): Note => ({
+  code: 'truncated',
+  values: {frequency, n, period, from, to, same: from === to ? 'yes' : 'no'},
+});
+export const padded = (frequency: Frequency, last: string, n: number, period: string): Note => ({
+  code: 'padded',
+  values: {frequency, last, n, period},
+});
+export const inferredPeriod = (period: string): Note => ({code: 'inferredPeriod', values: {period}});
 
 function shown(delimiter: string): string {
   return delimiter === '\t' ? 'tabs' : `"${delimiter}"`;

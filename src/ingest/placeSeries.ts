@@ -1,3 +1,4 @@
+import type {Note} from '../words/index.js';
 import {formatPeriod} from '../time/period.js';
 import type {Frequency} from '../time/period.js';
 import * as msg from './messages.js';
@@ -5,7 +6,7 @@ import type {PeriodStore} from './periodStore.js';
 
 /** A series placed on the calendar, or why it could not be. */
 export type Placement =
-  | {ok: true; start: number; values: Float64Array; ahead: Float64Array; notes: string[]}
+  | {ok: true; start: number; values: Float64Array; ahead: Float64Array; notes: Note[]}
   | {ok: false; problem: string};
 
 /**
@@ -38,7 +39,7 @@ export function placeSeries(
     values[p - range.first] = v;
     if (Number.isNaN(v) && p <= end) missing.push(label(p));
   }
-  const notes: string[] = [];
+  const notes: Note[] = [];
   if (missing.length > 0) notes.push(msg.gaps(frequency, missing));
   const ahead = new Float64Array(keepAhead ? Math.max(0, range.last - period) : 0);
   for (let k = 0; k < ahead.length; k++) ahead[k] = store.get(period + 1 + k);

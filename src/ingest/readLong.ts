@@ -67,7 +67,7 @@ export function longVisitor(cells: CellReader, wanted: Wanted, data: SourceData)
       if (outOfOrder === 0 && store.outOfOrderLine !== 0) outOfOrder = store.outOfOrderLine;
     },
     finish() {
-      if (outOfOrder !== 0) data.notes.push({file, line: outOfOrder, message: msg.outOfOrder(outOfOrder)});
+      if (outOfOrder !== 0) data.notes.push({file, line: outOfOrder, series: null, note: msg.outOfOrder(outOfOrder)});
       const keys = [...data.stores.keys(), ...skipped];
       for (const [key, ids] of wanted.names) {
         if (data.stores.has(key)) continue;

@@ -55,7 +55,7 @@ export function wideVisitor(cells: CellReader, wanted: Wanted, data: SourceData)
       rowLines.set(period, line);
       if (period < previous && !outOfOrder) {
         outOfOrder = true;
-        data.notes.push({file, line, message: msg.outOfOrder(line)});
+        data.notes.push({file, line, series: null, note: msg.outOfOrder(line)});
       }
       previous = period;
       for (const {at, name, store} of columns) {

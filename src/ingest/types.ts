@@ -1,3 +1,4 @@
+import type {Note} from '../words/index.js';
 import type {SeriesPlan} from '../config/plan.js';
 import type {Frequency} from '../time/period.js';
 
@@ -20,11 +21,15 @@ export interface Series {
   notes: DataNote[];
 }
 
-/** Something worth telling the reader about the data (not fatal). */
+/**
+ * Something worth telling the reader about the data (not fatal), as a coded note the words module words in the
+ * pack's language; `series` is the id of the series it is about, or null for the whole file or pack.
+ */
 export interface DataNote {
   file: string;
   line: number | null;
-  message: string;
+  series: string | null;
+  note: Note;
 }
 
 /** An input file as read, for the manifest and the data-notes page. */

@@ -2,7 +2,7 @@ import type {Plan, SeriesPlan} from '../config/plan.js';
 import type {SeriesAnalysis} from '../analyse/types.js';
 import type {History} from '../archive/types.js';
 import type {Callout} from './types.js';
-import type {NarrateFormat} from './format.js';
+import type {Words} from '../words/index.js';
 
 /** What a callout rule sees: one visible series with its analysis, the pack, and the archive history. */
 export interface RuleContext {
@@ -12,7 +12,8 @@ export interface RuleContext {
   series: SeriesPlan;
   analysis: SeriesAnalysis;
   history: History | null;
-  fmt: NarrateFormat;
+  /** Words and numbers in the pack's language and locale. */
+  words: Words;
   /** True when the series is a rate in percent (unit `%`): its changes are stated in percentage points. */
   isRate: boolean;
 }
@@ -37,11 +38,4 @@ export interface Rule {
   /** Rule name, e.g. `year-on-year`; becomes `Callout.rule` and part of the id. */
   name: string;
   run(ctx: RuleContext): Draft[];
-}
-
-/** Chart anchor ids in the HTML report: `chart-<series>-<part>`. */
-export type ChartPart = 'overview' | 'seasonal' | 'yoy' | 'irregular' | 'forecast' | 'cycle';
-
-export function chartId(seriesId: string, part: ChartPart): string {
-  return `chart-${seriesId}-${part}`;
 }

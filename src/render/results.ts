@@ -1,4 +1,5 @@
 import {dirname, relative, sep, isAbsolute} from 'node:path';
+import {wordDataNote, wordNote, wordsFor, type Words} from '../words/index.js';
 import {z} from 'zod';
 import type {Report, ReportSeries} from './types.js';
 import type {Callout} from '../narrate/types.js';
@@ -243,6 +244,7 @@ export function frequencyOf(periods: 12 | 4 | 52): Frequency {
 export function toResults(report: Report): ResultsV1 {
   const {plan} = report;
   const f = plan.frequency;
+  const words = wordsFor(plan.locale);
   const base = dirname(plan.packFile);
   return {
     schema: RESULTS_SCHEMA,
@@ -256,9 +258,9 @@ export function toResults(report: Report): ResultsV1 {
       locale: plan.locale,
       fiscalYearStart: plan.fiscalYearStart,
     },
-    series: report.series.map((s) => seriesResults(s, f)),
+    series: report.series.map((s) => seriesResults(s, f, words)),
     callouts: report.callouts.map(callout),
-    notes: report.notes.map((n) => ({file: portablePath(base, n.file), line: n.line, message: n.message})),
+    notes: report.notes.map((n) => ({file: portablePath(base, n.file), line: n.line, message: wordDataNote(words, n)})),
     history: report.history === null ? null : history(report.history),
   };
 }
@@ -285,13 +287,14 @@ export function* resultsJsonChunks(report: Report): Generator<string> {
   const head = JSON.stringify({schema, pack}, null, 2);
   const after = JSON.stringify(tail, null, 2);
   const f = report.plan.frequency;
+  const words = wordsFor(report.plan.locale);
   if (report.series.length === 0) {
     yield `${head.slice(0, -2)},\n  "series": ${JSON.stringify(none)},\n${after.slice(2)}\n`;
     return;
   }
   yield `${head.slice(0, -2)},\n  "series": [\n`;
   for (let i = 0; i < report.series.length; i++) {
-    const text = JSON.stringify(seriesResults(report.series[i], f), null, 2).replace(/\n/g, '\n    ');
+    const text = JSON.stringify(seriesResults(report.series[i], f, words), null, 2).replace(/\n/g, '\n    ');
     yield `    ${text}${i < report.series.length - 1 ? ',' : ''}\n`;
   }
   yield `  ],\n${after.slice(2)}\n`;
@@ -323,7 +326,7 @@ export function parseResults(text: string, file = 'results.json'): ResultsV1 {
   return parsed.data;
 }
 
-function seriesResults(s: ReportSeries, f: Frequency): SeriesResults {
+function seriesResults(s: ReportSeries, f: Frequency, words: Words): SeriesResults {
   const a = s.analysis;
   const label = (offset: number) => formatPeriod(f, a.start + offset);
   const adj = a.adjustment;
@@ -387,7 +390,7 @@ function seriesResults(s: ReportSeries, f: Frequency): SeriesResults {
             },
             options: plain(adj.options) as Record<string, unknown>,
           },
-    notAdjustedReason: a.notAdjustedReason,
+    notAdjustedReason: a.notAdjustedReason === null ? null : wordNote(words, a.notAdjustedReason),
     outliers: (adj?.outliers ?? []).map((o) => ({period: label(o.index), kind: o.kind, score: num(o.score)})),
     cycle:
       a.cycle === null
@@ -447,12 +450,12 @@ function seriesResults(s: ReportSeries, f: Frequency): SeriesResults {
                       forecast: num(p.forecast),
                     })),
                   },
-            notes: [...a.forecast.notes],
+            notes: a.forecast.notes.map((n) => wordNote(words, n)),
             options: plain(a.forecast.options) as Record<string, unknown>,
           },
     outturn: a.outturn === null ? null : (plain(a.outturn) as SeriesResults['outturn']),
     callouts: s.callouts.map(callout),
-    notes: [...a.notes],
+    notes: a.notes.map((n) => wordNote(words, n)),
     options: plain(a.options) as Record<string, unknown>,
   };
 }

@@ -5,7 +5,7 @@ import {performance} from 'node:perf_hooks';
 import {main} from '../../src/cli/main.js';
 import {mulberry32} from '../../src/analyse/numeric/mulberry32.js';
 import {makeReport} from '../render/fixtures.js';
-import {buildView} from '../../src/render/view.js';
+import {buildView} from '../../src/render/view/index.js';
 import {specToSvg} from '../../src/render/svg.js';
 import {openBrowser, renderHtml} from '../../src/render/index.js';
 

@@ -9,6 +9,10 @@ import type {Dataset} from '../../src/ingest/index.js';
 import type {Plan} from '../../src/config/plan.js';
 import {isoWeekIndex, monthIndex, quarterIndex} from '../../src/time/period.js';
 import {FIXTURES, fromSource, plan, series, source} from './plan.js';
+import {wordDataNote, wordsFor} from '../../src/words/index.js';
+
+/** A data note as the English report words it. */
+const said = (n: {series: string | null; note: Parameters<typeof wordDataNote>[1]['note']}): string => wordDataNote(wordsFor('en-GB'), n);
 
 async function problemsOf(p: Plan): Promise<Problem[]> {
   const error = await ingest(p).then(
@@ -20,7 +24,7 @@ async function problemsOf(p: Plan): Promise<Problem[]> {
 }
 
 const values = (d: Dataset, id: string): number[] => [...d.series.find((s) => s.id === id)!.values];
-const notes = (d: Dataset, id: string): string[] => d.series.find((s) => s.id === id)!.notes.map((n) => n.message);
+const notes = (d: Dataset, id: string): string[] => d.series.find((s) => s.id === id)!.notes.map(said);
 const temp = mkdtempSync(join(tmpdir(), 'ebbflow-ingest-'));
 afterAll(() => rmSync(temp, {recursive: true, force: true}));
 /** `2000-01` for i = 0, one month per step. */
@@ -53,7 +57,7 @@ describe('wide layout', () => {
         rows: 6,
       },
     ]);
-    expect(d.notes.map((n) => n.message)).toEqual([
+    expect(d.notes.map(said)).toEqual([
       'review period 2024-06: the pack sets none, so the last period with data is used',
     ]);
     expect(d.plans!.map((s) => s.id)).toEqual(['net_sales', 'orders', 'margin']);
@@ -108,11 +112,8 @@ describe('wide layout', () => {
     const file = write('unsorted.csv', 'month,sales\n2024-03,3\n2024-01,1\n2024-02,2\n');
     const d = await ingest(plan('monthly', [source('s', file)], [series('sales', 's')]));
     expect(values(d, 'sales')).toEqual([1, 2, 3]);
-    expect(d.notes[0]).toEqual({
-      file,
-      line: 3,
-      message: 'rows are not in date order (first at line 3); they were sorted',
-    });
+    expect(d.notes[0]).toMatchObject({file, line: 3, series: null});
+    expect(said(d.notes[0])).toBe('rows are not in date order (first at line 3); they were sorted');
   });
 });
 
@@ -338,11 +339,9 @@ describe('long layout', () => {
     expect(d.period).toBe(monthIndex(2024, 8));
     expect(values(d, 'web-visits-uk')).toEqual([100, 110, 120, NaN, NaN, NaN, NaN, NaN]);
     expect(values(d, 'sign-ups').slice(0, 3)).toEqual([5, 6, 7]);
-    expect(d.notes.find((n) => /date order/.test(n.message))).toEqual({
-      file: join(FIXTURES, 'long.csv'),
-      line: 10,
-      message: 'rows are not in date order (first at line 10); they were sorted',
-    });
+    const sorted = d.notes.find((n) => n.note.code === 'outOfOrder')!;
+    expect(sorted).toMatchObject({file: join(FIXTURES, 'long.csv'), line: 10});
+    expect(said(sorted)).toBe('rows are not in date order (first at line 10); they were sorted');
   });
 
   it('explicit series name keys; a missing key suggests the nearest', async () => {

@@ -112,7 +112,7 @@ export function cycleOf(pattern: number[], n: number): number[] {
 
 import type {History} from '../../src/archive/types.js';
 import type {Draft, Rule} from '../../src/narrate/context.js';
-import {narrateFormat} from '../../src/narrate/format.js';
+import {wordsFor} from '../../src/words/index.js';
 import {analysisOptions, defaultBranding, defaultThresholds} from '../fixtures/planDefaults.js';
 
 /** Run one rule on one series with the en-GB (or given) locale. */
@@ -129,7 +129,7 @@ export function runRule(
     series,
     analysis,
     history: args.history ?? null,
-    fmt: narrateFormat(plan.locale),
+    words: wordsFor(plan.locale),
     isRate: series.unit === '%',
   });
 }

@@ -4,7 +4,7 @@ import {tmpdir} from 'node:os';
 import {join} from 'node:path';
 import Handlebars from 'handlebars';
 import {renderHtml} from '../../src/render/index.js';
-import {buildView} from '../../src/render/view.js';
+import {buildView} from '../../src/render/view/index.js';
 import {drawSeriesCharts, inlineLogo} from '../../src/render/html.js';
 import {makeReport} from './fixtures.js';
 import type {Report} from '../../src/render/types.js';
@@ -17,7 +17,7 @@ function hostile(): Report {
   report.series[1].plan.label = FORMULA;
   report.series[0].callouts[0].text = `Rose <script>alert(1)</script> & "quoted"`;
   report.plan.title = 'Title </style><script>x</script>';
-  report.notes.push({file: '/packs/harbourline/data/trading.csv', line: 3, message: XSS});
+  report.notes.push({file: '/packs/harbourline/data/trading.csv', line: 3, series: XSS, note: {code: 'outOfOrder', values: {line: '3'}}});
   return report;
 }
 
@@ -69,7 +69,7 @@ describe('renderHtml', () => {
 
   test('a series without adjustment, forecast or cycle gets a note, not empty charts', () => {
     const section = html.slice(html.indexOf('id="series-series-2"'), html.indexOf('id="series-series-3"'));
-    expect(section).toContain('seasonal adjustment needs at least three full years');
+    expect(section).toContain('Not seasonally adjusted: this needs at least two full years of data (25 months), and the series has 14 observed months.');
     expect(section).toContain('No forecast was made for this series.');
     expect(section).not.toContain('id="chart-series-2-irregular"');
     expect(section).not.toContain('id="chart-series-2-forecast"');

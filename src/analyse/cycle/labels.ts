@@ -1,33 +1,24 @@
-/**
- * Plain-words texts of the cycle engine, kept in one place (names of our own).
- */
+import {wordsFor} from '../../words/index.js';
+
+/** The four cycle phases: above or below the long-run trend, and the gap's direction. */
 export type Phase = 'rising-above' | 'falling-above' | 'falling-below' | 'rising-below';
 
+const english = wordsFor('en-GB');
+
+/**
+ * The phase labels results.json carries beside the phase code (`phaseLabel`), in English whatever the pack's
+ * language, from the words module's vocabulary; the report words the phase code itself.
+ */
 export const phaseLabels: Record<Phase, string> = {
-  'rising-above': 'above trend and rising',
-  'falling-above': 'above trend, easing',
-  'falling-below': 'below trend and falling',
-  'rising-below': 'below trend, recovering',
+  'rising-above': english.t('phase.rising-above'),
+  'falling-above': english.t('phase.falling-above'),
+  'falling-below': english.t('phase.falling-below'),
+  'rising-below': english.t('phase.rising-below'),
 };
 
-export const onTrendLabel = 'on trend, no cycle to speak of';
+export const onTrendLabel = english.t('phase.onTrend');
 
-export function endPointCaution(periods: number): string {
-  return (
-    `The trend over the latest ${periods} periods is provisional: a two-sided filter sees no data beyond the end, ` +
-    'so these values and the gap will be revised as new data arrive.'
-  );
-}
-
-export function filledNote(count: number): string {
-  const what = count === 1 ? 'value was' : 'values were';
-  return `${count} missing ${what} filled by straight-line interpolation before filtering.`;
-}
-
-export function untestedNote(reason: string): string {
-  return `Stationarity not tested: ${reason}.`;
-}
-
+/** The plain-words stationarity verdict results.json carries (`stationarity.summary`), in English. */
 export function stationaritySummary(level: boolean, differences: boolean, constantVariance: boolean): string {
   const mean = level
     ? 'stationary in mean'

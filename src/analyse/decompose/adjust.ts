@@ -1,4 +1,5 @@
 import type {AnalysisOptions} from '../../config/plan.js';
+import type {Note} from '../../words/index.js';
 import {easterRegressor, holidayRegressor, workingDayRegressor} from '../../time/calendar.js';
 import {daysFromCivil, periodStartDay, civilFromDays, seasonOf, type Frequency} from '../../time/period.js';
 import {fillGaps} from '../numeric/fillGaps.js';
@@ -24,7 +25,7 @@ export interface AdjustContext {
   residualSigma: number;
 }
 
-export type AdjustOutcome = {ok: true; adjustment: Adjustment} | {ok: false; reason: string};
+export type AdjustOutcome = {ok: true; adjustment: Adjustment} | {ok: false; reason: Note};
 
 type Model = 'additive' | 'multiplicative';
 
@@ -57,7 +58,7 @@ export function adjust(values: Float64Array, ctx: AdjustContext): AdjustOutcome 
   while (first < n && Number.isNaN(clean[first])) first++;
   let last = n - 1;
   while (last >= 0 && Number.isNaN(clean[last])) last--;
-  if (first > last) return {ok: false, reason: 'The series has no values to adjust.'};
+  if (first > last) return {ok: false, reason: {code: 'noValues', values: {}}};
   const span = clean.subarray(first, last + 1);
   const m = span.length;
   let observed = 0;
@@ -65,11 +66,7 @@ export function adjust(values: Float64Array, ctx: AdjustContext): AdjustOutcome 
   const method = frequency === 'weekly' ? 'fourier' : ctx.options.method;
   const minimum = frequency === 'weekly' ? MIN_WEEKS : method === 'stl' ? 2 * period + 1 : 2 * period;
   if (m < minimum || observed < 2 * period) {
-    const unit = {monthly: 'months', quarterly: 'quarters', weekly: 'weeks'}[frequency];
-    return {
-      ok: false,
-      reason: `Not seasonally adjusted: this needs at least two full years of data (${minimum} ${unit}), and the series has ${observed} observed ${unit}.`,
-    };
+    return {ok: false, reason: {code: 'tooShortToAdjust', values: {minimum, observed, frequency}}};
   }
   const missing = span.map((v) => (Number.isNaN(v) ? 1 : 0));
   const filledCount = missing.reduce((a, b) => a + b, 0);

@@ -1,3 +1,4 @@
+import type {Note} from '../../words/index.js';
 /** Result of the forecasting engine (`forecastSeries`). */
 export interface ForecastResult {
   /** Model name, e.g. `ETS(M,Ad,M)`, `Theta`, `Seasonal naive`, `Combination (ETS, Theta, Damped)`. */
@@ -13,7 +14,7 @@ export interface ForecastResult {
   /** Resolved options and chosen parameters. */
   options: Record<string, unknown>;
   /** Warnings such as fallbacks for short series. */
-  notes: string[];
+  notes: Note[];
   /**
    * Optional: intervals for running totals of the forecasts, `lower["80"][k]` bounding mean[0] + … + mean[k]
    * (ETS: simulated sample paths; Theta: closed form; combinations: members' bounds averaged). Used by the

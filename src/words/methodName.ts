@@ -1,0 +1,28 @@
+import type {Words} from './words.js';
+
+/**
+ * A forecast method's name for prose and compact tables: a combination is named by its members' families
+ * (`a combination of ETS, Theta and ARIMA`); any other name is kept as the method gives it (ETS(M,Ad,M),
+ * Theta, ARIMA(1,1,2) with drift: published names). The full name, with each member's settings, stays in
+ * results.json, the manifest and the workbook's methods sheet.
+ */
+export function shortMethod(w: Words, method: string): string {
+  const inner = /^Combination \((.*)\)$/.exec(method)?.[1];
+  if (inner === undefined) return method;
+  const members: string[] = [];
+  let depth = 0;
+  let start = 0;
+  for (let i = 0; i <= inner.length; i++) {
+    const c = inner[i];
+    if (c === '(') depth++;
+    else if (c === ')') depth--;
+    else if ((c === ',' && depth === 0) || i === inner.length) {
+      members.push(inner.slice(start, i).trim());
+      start = i + 1;
+    }
+  }
+  const family = (m: string) =>
+    m.startsWith('Damped') ? w.t('callout.dampedTrend') : (/^(ETS|Theta|ARIMA)\b/.exec(m)?.[1] ?? m);
+  const families = [...new Set(members.map(family))];
+  return w.t('callout.combination', {families: w.list(families, families.length)});
+}
