@@ -390,6 +390,15 @@ export const de: Catalog = {
   'note.ofSeries': '{series}: {text}',
   'note.noValuesToChart': 'Die Reihe hat keine Werte für eine Grafik.',
 
+  // Archive index page
+  'index.title': '{title}: archivierte Berichte',
+  'index.intro': 'Archivierte Berichte von {pack}, neueste zuerst: {count, plural, one {# Periode} other {# Perioden}}.',
+  'index.report': 'Bericht',
+  'index.pdf': 'PDF-Datei',
+  'index.results': 'Ergebnisse (JSON)',
+  'index.manifest': 'Manifest-Datei',
+  'index.yoy': 'Gegenüber Vorjahr',
+  'index.more': 'und {n} weitere Reihen.',
   // Export column headers (CSV and workbook) and sheet names
   'column.period': 'periode',
   'column.original': 'originalwert',

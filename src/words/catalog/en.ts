@@ -389,6 +389,15 @@ export const en = {
   'note.ofSeries': '{series}: {text}',
   'note.noValuesToChart': 'The series has no values to chart.',
 
+  // Archive index page
+  'index.title': '{title}: archived packs',
+  'index.intro': 'Archived packs of {pack}, newest first: {count, plural, one {# period} other {# periods}}.',
+  'index.report': 'Report',
+  'index.pdf': 'PDF',
+  'index.results': 'Results (JSON)',
+  'index.manifest': 'Manifest',
+  'index.yoy': 'Year on year',
+  'index.more': 'and {n} more series.',
   // Export column headers (CSV and workbook) and sheet names
   'column.period': 'period',
   'column.original': 'original',

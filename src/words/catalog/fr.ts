@@ -389,6 +389,15 @@ export const fr: Catalog = {
   'note.ofSeries': '{series} : {text}',
   'note.noValuesToChart': 'La série n’a aucune valeur à représenter.',
 
+  // Archive index page
+  'index.title': '{title} : rapports archivés',
+  'index.intro': 'Rapports archivés de {pack}, du plus récent au plus ancien : {count, plural, one {# période} other {# périodes}}.',
+  'index.report': 'Rapport',
+  'index.pdf': 'Fichier PDF',
+  'index.results': 'Résultats (JSON)',
+  'index.manifest': 'Manifeste',
+  'index.yoy': 'En glissement annuel',
+  'index.more': 'et {n} autres séries.',
   // Export column headers (CSV and workbook) and sheet names
   'column.period': 'periode',
   'column.original': 'valeur_brute',
