@@ -1,3 +1,4 @@
+import type {MessageKey} from './catalog/en.js';
 import type {Words} from './words.js';
 
 /**
@@ -8,7 +9,7 @@ import type {Words} from './words.js';
  */
 export function shortMethod(w: Words, method: string): string {
   const inner = /^Combination \((.*)\)$/.exec(method)?.[1];
-  if (inner === undefined) return method;
+  if (inner === undefined) return methodName(w, method);
   const members: string[] = [];
   let depth = 0;
   let start = 0;
@@ -22,7 +23,26 @@ export function shortMethod(w: Words, method: string): string {
     }
   }
   const family = (m: string) =>
-    m.startsWith('Damped') ? w.t('callout.dampedTrend') : (/^(ETS|Theta|ARIMA)\b/.exec(m)?.[1] ?? m);
+    m.startsWith('Damped') ? w.t('callout.dampedTrend') : (/^(ETS|Theta|ARIMA)\b/.exec(m)?.[1] ?? methodName(w, m));
   const families = [...new Set(members.map(family))];
   return w.t('callout.combination', {families: w.list(families, families.length)});
+}
+
+/**
+ * One method's name without the analysis' English qualifiers: `Theta on STL-adjusted data` → `Theta`,
+ * `ARIMA(1,1,2) with drift` → `ARIMA(1,1,2)`, `ETS (4 models, Akaike-weighted)` → `ETS`; the benchmarks and the
+ * constant forecast in words (`Seasonal naive` → `saisonal naiv`). Published names (ETS(M,Ad,M), Naive2) stay.
+ */
+export function methodName(w: Words, method: string): string {
+  const named: Record<string, MessageKey> = {
+    'Seasonal naive': 'benchmark.seasonalNaive',
+    Naive: 'benchmark.naive',
+    Constant: 'benchmark.constant',
+    Damped: 'callout.dampedTrend',
+  };
+  if (named[method]) return w.t(named[method]);
+  return method
+    .replace(/ on STL-adjusted data$/, '')
+    .replace(/ with (drift|mean)$/, '')
+    .replace(/^ETS \(\d+ models, Akaike-weighted\)$/, 'ETS');
 }

@@ -31,7 +31,7 @@ export function forecastChart(input: ForecastInput, ctx: ChartContext): TopLevel
   const t = (offset: number) => epoch(frequency, input.start + offset);
   const levels = [...f.levels].sort((a, b) => b - a);
   const shown = levels.length > 1 ? [levels[0], levels[levels.length - 1]] : levels;
-  const bandNames = shown.map((l) => `${l}% range`);
+  const bandNames = shown.map((l) => w.t('label.levelRange', {level: String(l)}));
   const bands = shown.flatMap((level, k) =>
     f.mean.map((_, h) => ({
       t: t(f.startOffset + h),

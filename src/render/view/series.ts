@@ -1,6 +1,6 @@
 import type {SeriesAnalysis} from '../../analyse/types.js';
 import type {Plan} from '../../config/plan.js';
-import {phaseWords, wordNote, type Words} from '../../words/index.js';
+import {methodName, phaseWords, shortMethod, wordNote, type Words} from '../../words/index.js';
 import type {ReportSeries} from '../types.js';
 import {seriesFigureRows} from './figures.js';
 import type {SeriesView} from './types.js';
@@ -52,7 +52,7 @@ function forecastTable(a: SeriesAnalysis, w: Words): SeriesView['forecast'] {
   const b = fc.backtest;
   const o = a.outturn;
   return {
-    caption: w.t('label.forecastCaption', {method: fc.method}),
+    caption: w.t('label.forecastCaption', {method: shortMethod(w, fc.method)}),
     innerLabel: w.t('label.levelRange', {level: inner}),
     outerLabel: w.t('label.levelRange', {level: outer}),
     rows: fc.mean.map((m, h) => ({
@@ -68,7 +68,7 @@ function forecastTable(a: SeriesAnalysis, w: Words): SeriesView['forecast'] {
           mase: w.number(b.mase, 2),
           smape: w.share(b.smape),
           better: b.mase < 1 ? 'yes' : 'no',
-          benchmarks: b.benchmarks.length === 0 ? 'none' : w.list(b.benchmarks.map((m) => w.t('forecast.benchmark', {method: m.method, mase: w.number(m.mase, 2)})), 9),
+          benchmarks: b.benchmarks.length === 0 ? 'none' : w.list(b.benchmarks.map((m) => w.t('forecast.benchmark', {method: methodName(w, m.method), mase: w.number(m.mase, 2)})), 9),
         })
       : null,
     outturn:
