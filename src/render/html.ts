@@ -31,7 +31,7 @@ export async function renderHtml(report: Report, drawn: ReadonlyMap<string, stri
   for (const slot of slots) {
     const {title, spec} = slot.chart;
     const description = typeof spec.description === 'string' ? spec.description : title;
-    const svg = drawn.get(chartKey(slot, view.lang, font)) ?? (await drawSlot(slot, view.lang, font));
+    const svg = drawn.get(chartKey(slot, view.locale, font)) ?? (await drawSlot(slot, view.locale, font));
     slot.svg = new Handlebars.SafeString(svg);
     slot.alt = `${title}. ${description}`;
   }

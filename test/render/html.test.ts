@@ -22,6 +22,15 @@ function hostile(): Report {
 }
 
 describe('renderHtml', () => {
+  test('a locale without words of its own keeps its numbers, speaks English and says so once', async () => {
+    const report = makeReport({count: 1, locale: 'nl-NL'});
+    const html = await renderHtml(report);
+    expect(html).toContain('<html lang="en">');
+    expect(html.split('its words are not yet available in the language of the locale nl-NL').length).toBe(2);
+    expect(html).toContain('At a glance');
+    expect(html).toMatch(/oktober 2026/);
+  });
+
   test('charts drawn ahead, series by series, give the same page as charts drawn by renderHtml itself', async () => {
     const report = makeReport({count: 2});
     const drawn = new Map<string, string>();

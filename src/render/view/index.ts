@@ -45,7 +45,9 @@ export function buildView(report: Report, logo: string | null): ViewModel {
   });
   const period = w.periodLong(plan.frequency, report.period);
   return {
-    lang: w.locale,
+    // The language of the words: English for a locale that has none of its own here.
+    lang: w.language.fallback ? 'en' : w.locale,
+    locale: w.locale,
     labels: templateLabels(w),
     cover: {
       title: plan.title,

@@ -113,7 +113,10 @@ export interface HistoryView {
 }
 
 export interface ViewModel {
+  /** Language of the words, for the page's `lang` attribute. */
   lang: string;
+  /** Locale of numbers and dates (charts follow it). */
+  locale: string;
   /** Every fixed label and heading the templates print, in the pack's language. */
   labels: Record<string, string>;
   cover: {
