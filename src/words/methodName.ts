@@ -5,9 +5,9 @@ import type {Words} from './words.js';
  * A forecast method's name for prose and compact tables: a combination is named by its members' families
  * (`a combination of ETS, Theta and ARIMA`); any other name is kept as the method gives it (ETS(M,Ad,M),
  * Theta, ARIMA(1,1,2) with drift: published names). The full name, with each member's settings, stays in
- * results.json, the manifest and the workbook's methods sheet.
+ * results.json, the manifest and the workbook's methods sheet. `compact` leaves out "a combination of" (tables).
  */
-export function shortMethod(w: Words, method: string): string {
+export function shortMethod(w: Words, method: string, compact = false): string {
   const inner = /^Combination \((.*)\)$/.exec(method)?.[1];
   if (inner === undefined) return methodName(w, method);
   const members: string[] = [];
@@ -25,7 +25,8 @@ export function shortMethod(w: Words, method: string): string {
   const family = (m: string) =>
     m.startsWith('Damped') ? w.t('callout.dampedTrend') : (/^(ETS|Theta|ARIMA)\b/.exec(m)?.[1] ?? methodName(w, m));
   const families = [...new Set(members.map(family))];
-  return w.t('callout.combination', {families: w.list(families, families.length)});
+  const list = w.list(families, families.length);
+  return compact ? list : w.t('callout.combination', {families: list});
 }
 
 /**

@@ -57,7 +57,7 @@ export function methodsRow(s: ReportSeries, w: Words): MethodsRow {
     window,
     calendar: calendar.length > 0 ? w.list(calendar, calendar.length) : adj ? w.t('label.none') : '–',
     outliers: adj ? w.number(adj.outliers.length, 0) : '–',
-    forecast: fc ? shortMethod(w, fc.method) : '–',
+    forecast: fc ? shortMethod(w, fc.method, true) : '–',
     mase: b ? w.number(b.mase, 2) : '–',
     cautions: notes.join('; ') || '–',
   };
