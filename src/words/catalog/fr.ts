@@ -75,7 +75,7 @@ export const fr: Catalog = {
   'label.preparedBy': 'Préparé par',
   'label.logo': 'Logo',
   'label.logoOf': 'Logo de {organisation}',
-  'label.seeChart': 'voir le graphique',
+  'label.seeChart': 'graphique',
   'label.series': 'Série',
   'label.latest': 'Dernier',
   'label.latestIn': 'Dernier ({period})',
