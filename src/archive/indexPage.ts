@@ -1,4 +1,4 @@
-import {frequencyOf} from '../render/results.js';
+import {frequencyOf} from '../results/index.js';
 import {parsePeriod} from '../time/period.js';
 import {wordsFor, type MessageKey, type Words} from '../words/index.js';
 import {escapeHtml} from './escapeHtml.js';

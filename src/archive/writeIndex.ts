@@ -1,7 +1,7 @@
 import {readdir, readFile, rename, rm, writeFile} from 'node:fs/promises';
 import {join} from 'node:path';
 import {headlinesFromResults, parseHeadlines, type Headlines} from './headlines.js';
-import {periodFolders} from './periodFolders.js';
+import {periodFolders} from '../results/index.js';
 import {renderIndex, type IndexEntry} from './indexPage.js';
 
 let counter = 0;

@@ -5,9 +5,9 @@ import path from 'node:path';
 import {fileURLToPath} from 'node:url';
 import {Command, CommanderError} from 'commander';
 import {loadPlan} from '../config/index.js';
-import type {OutputFormat, Plan} from '../config/plan.js';
+import type {OutputFormat} from '../config/plan.js';
 import {formatProblem, InputError} from '../errors.js';
-import type {PdfBrowser} from '../render/index.js';
+import {pdfSession} from '../render/pdfSession.js';
 import {build, check} from '../run.js';
 import {packageRoot, toolVersion} from '../version.js';
 import {initPack} from './init.js';
@@ -71,7 +71,7 @@ async function runBuild(given: string[], opts: BuildOptions, io: Io): Promise<nu
     if (packs.length === 0) return 0;
   }
   const allowDirs = opts.allowDir.map((d) => path.resolve(d));
-  const jobs: {packFile: string; plan: Plan; period: string | undefined}[] = [];
+  const jobs: {packFile: string; period: string | undefined}[] = [];
   const problems: InputError['problems'] = [];
   for (const packFile of packs) {
     try {
@@ -79,7 +79,7 @@ async function runBuild(given: string[], opts: BuildOptions, io: Io): Promise<nu
       const single = range ? undefined : opts.period;
       const plan = await loadPlan(packFile, {period: single, outDir: opts.out, formats: opts.formats, allowDirs});
       const periods = range ? expandPeriodRange(plan.frequency, opts.period ?? '') : [opts.period];
-      for (const period of periods) jobs.push({packFile, plan, period});
+      for (const period of periods) jobs.push({packFile, period});
     } catch (e) {
       if (!(e instanceof InputError)) return fail(e, io);
       problems.push(...e.problems);
@@ -88,20 +88,13 @@ async function runBuild(given: string[], opts: BuildOptions, io: Io): Promise<nu
   if (problems.length > 0) return fail(new InputError(problems), io);
 
   // One browser for the whole batch (per browser setting) instead of one launch per period.
-  const browsers = new Map<string | null, PdfBrowser | {missing: string}>();
-  const shareBrowser = jobs.length > 1;
+  const pdf = pdfSession();
   let built = 0;
   try {
     for (const job of jobs) {
-      let browser: PdfBrowser | {missing: string} | undefined;
-      if (shareBrowser && job.plan.formats.includes('pdf')) {
-        const open = async () => (await import('../render/index.js')).openBrowser(job.plan.browser);
-        browser = browsers.get(job.plan.browser) ?? (await open());
-        browsers.set(job.plan.browser, browser);
-      }
       const {packFile, period} = job;
       const {out: outDir, formats, force, jobs: threads} = opts;
-      const summary = await build({packFile, period, outDir, formats, force, jobs: threads, browser, allowDirs}, log);
+      const summary = await build({packFile, period, outDir, formats, force, jobs: threads, pdf, allowDirs}, log);
       io.stdout.write(`${summary.folder}\n`);
       built++;
     }
@@ -109,7 +102,7 @@ async function runBuild(given: string[], opts: BuildOptions, io: Io): Promise<nu
     log.close(); // a progress bar left by the failure goes before the message
     return fail(e, io, built);
   } finally {
-    for (const b of browsers.values()) if (!('missing' in b)) await b.close();
+    await pdf.close();
   }
   return 0;
 }

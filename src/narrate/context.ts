@@ -1,6 +1,6 @@
 import type {Plan, SeriesPlan} from '../config/plan.js';
 import type {SeriesAnalysis} from '../analyse/types.js';
-import type {History} from '../archive/types.js';
+import type {History} from '../results/index.js';
 import type {Callout} from './types.js';
 import type {Words} from '../words/index.js';
 

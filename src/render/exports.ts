@@ -2,10 +2,10 @@ import {stringify} from 'csv-stringify/sync';
 import type {SeriesAnalysis} from '../analyse/types.js';
 import {formatPeriod} from '../time/period.js';
 import type {Report} from './types.js';
-import {cell, headers, type Cell, type Column, type ColumnFormat, type Table} from './tables.js';
+import {cell, headers, type Cell, type Column, type ColumnFormat, type Table} from './table.js';
 import {wordsFor, type Words} from '../words/index.js';
 
-export {neutralise} from './tables.js';
+export {neutralise} from './table.js';
 
 /**
  * The numbers behind every table and chart of the report, as CSV files and one XLSX workbook.

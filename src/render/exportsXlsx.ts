@@ -1,6 +1,6 @@
 import ExcelJS from 'exceljs';
 import {civilFromDays, periodStartDay} from '../time/period.js';
-import {headers, type ColumnFormat, type Table} from './tables.js';
+import {headers, type ColumnFormat, type Table} from './table.js';
 import {methodsTable} from './methodsTable.js';
 import {wordsFor} from '../words/index.js';
 import type {Report} from './types.js';

@@ -1,5 +1,5 @@
 import type {Report} from './types.js';
-import {cell, type Cell, type Table} from './tables.js';
+import {cell, type Cell, type Table} from './table.js';
 import type {Words} from '../words/index.js';
 
 /**

@@ -2,7 +2,7 @@ import type {Plan, SeriesPlan} from '../config/plan.js';
 import type {InputFile, DataNote} from '../ingest/types.js';
 import type {SeriesAnalysis} from '../analyse/types.js';
 import type {Callout} from '../narrate/types.js';
-import type {History} from '../archive/types.js';
+import type {History} from '../results/index.js';
 
 /** Everything the render stage needs; plain data. */
 export interface Report {

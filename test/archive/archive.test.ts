@@ -4,13 +4,14 @@ import {mkdir, readdir, readFile, stat, writeFile} from 'node:fs/promises';
 import {join} from 'node:path';
 import {archive, type ArchiveArgs} from '../../src/archive/archive.js';
 import {InputError} from '../../src/errors.js';
-import {report} from './fixtures/report.js';
+import {digestOfReport, report} from './fixtures/report.js';
 import {listFiles, snapshot, tempDir, deadPid} from './helpers.js';
 import type {Report} from '../../src/render/types.js';
 
 function args(outDir: string, rep: Report, extra: Partial<ArchiveArgs> = {}): ArchiveArgs {
   return {
     report: rep,
+    digest: digestOfReport(rep),
     html: '<!DOCTYPE html><p>report</p>',
     pdf: Uint8Array.of(37, 80, 68, 70),
     exports: [
@@ -33,6 +34,7 @@ describe('archive', () => {
     const {folder, outputs} = await archive(args(out, oct()));
     expect(folder).toBe(join(out, 'harbourline-monthly', '2026-10'));
     expect(await listFiles(folder)).toEqual([
+      'digest.json',
       'exports/series.csv',
       'exports/tables.xlsx',
       'headlines.json',
@@ -109,7 +111,7 @@ describe('archive', () => {
     await archive(args(out, oct(), {force: true, html: '<p>second</p>', pdf: null, exports: []}));
     const folder = join(out, 'harbourline-monthly', '2026-10');
     expect(await readFile(join(folder, 'report.html'), 'utf8')).toBe('<p>second</p>');
-    expect(await listFiles(folder)).toEqual(['headlines.json', 'manifest.json', 'report.html', 'results.json']);
+    expect(await listFiles(folder)).toEqual(['digest.json', 'headlines.json', 'manifest.json', 'report.html', 'results.json']);
     expect(await readdir(join(out, 'harbourline-monthly'))).toEqual(['2026-10', 'index.html']);
   });
 

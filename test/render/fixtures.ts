@@ -1,12 +1,12 @@
-import type {AnalysisOptions, Plan, SeriesPlan} from '../../src/config/plan.js';
+import type {AnalysisOptions} from '../../src/config/plan.js';
 import type {SeriesAnalysis} from '../../src/analyse/types.js';
 import type {TurningPoint} from '../../src/analyse/cycle/types.js';
 import type {Callout} from '../../src/narrate/types.js';
-import type {History} from '../../src/archive/types.js';
+import type {History} from '../../src/results/index.js';
 import type {Report, ReportSeries} from '../../src/render/types.js';
 import {monthIndex, periodsPerYear, quarterIndex, type Frequency} from '../../src/time/period.js';
 import {mulberry32} from '../../src/analyse/numeric/mulberry32.js';
-import {analysisOptions, defaultBranding, defaultThresholds} from '../fixtures/planDefaults.js';
+import {analysisOptions, defaultBranding, planFixture, seriesPlanFixture} from '../fixtures/plans.js';
 import {source} from '../ingest/plan.js';
 
 /**
@@ -193,18 +193,14 @@ export function makeReport(opts: FixtureOptions = {}): Report {
   const labels = ['Net sales', 'Orders received', 'Headcount', 'Web visits', 'Returns'];
   const series: ReportSeries[] = Array.from({length: count}, (_, k) => {
     const id = `series-${k + 1}`;
-    const plan: SeriesPlan = {
+    const plan = seriesPlanFixture({
       id,
       label: k === 0 && opts.firstLabel !== undefined ? opts.firstLabel : `${labels[k % labels.length]}${k >= labels.length ? ` ${k + 1}` : ''}`,
       unit: k % 2 === 0 ? 'EUR k' : 'orders',
-      source: 'trading',
       column: k === 0 && opts.firstLabel !== undefined ? opts.firstLabel : `col_${k + 1}`,
-      kind: 'flow',
-      target: null,
-      hidden: false,
       analysis: {...options, forecast: {...options.forecast, horizon: 12}},
       line: 10 + k * 4,
-    };
+    });
     const analysis = opts.shortSecond && k === 1 ? shortAnalysis(id, frequency, end, k + 1) : seriesAnalysis(id, frequency, end, length, k + 1);
     const callouts: Callout[] = [
       {
@@ -230,8 +226,7 @@ export function makeReport(opts: FixtureOptions = {}): Report {
     ];
     return {plan, analysis, callouts, commentary: `${plan.label} in one paragraph.`};
   });
-  const plan: Plan = {
-    packFile: '/packs/harbourline/monthly-pack.yaml',
+  const plan = planFixture({
     id: 'monthly-pack',
     title: 'Harbourline Trading monthly review',
     subtitle: 'Sales, orders and staffing',
@@ -242,15 +237,11 @@ export function makeReport(opts: FixtureOptions = {}): Report {
     period: end,
     formats: ['html', 'pdf'],
     locale: opts.locale ?? 'en-GB',
-    fiscalYearStart: 1,
     branding: {...defaultBranding, footer: 'Harbourline Trading · internal'},
-    thresholds: {...defaultThresholds},
-    outDir: '/tmp/out',
-    browser: null,
     sources: [source('trading', '/packs/harbourline/data/trading.csv', {line: 5})],
     series: series.map((s) => s.plan),
     groups: count >= 3 ? [{id: 'sales', title: 'Sales and orders', series: ['series-1', 'series-2']}] : [],
-  };
+  });
   const history: History | null = opts.history
     ? {
         previousPeriod: '2026-09',

@@ -2,8 +2,9 @@ import type {AnalysisOptions} from '../../config/plan.js';
 import type {Note} from '../../words/index.js';
 import {periodsPerYear, type Frequency} from '../../time/period.js';
 import {rollingBacktest} from './backtest.js';
-import {runMethod, type MethodName, type MethodRun} from './methods.js';
+import {fitMethod, type MethodFit, type MethodName, type MethodRun} from './methods.js';
 import type {Forecast} from './model.js';
+import {constantValue} from '../numeric/constantValue.js';
 import {prepareSeries} from './prepareSeries.js';
 import type {ForecastResult} from './types.js';
 
@@ -44,11 +45,12 @@ export function forecastSeries(
   }
   const period = periodsPerYear[frequency];
   let method: MethodName = options.method === 'auto' ? AUTO_METHOD : options.method;
-  const constant = y.every((v) => v === y[0]);
+  const constant = constantValue(y) !== null;
   // Steps between the last observation and the first forecast period (trailing NaN are forecast too).
   const gap = values.length - (prepared.first + n);
   const h = horizon + gap;
   let run: MethodRun;
+  let fit: MethodFit | null = null;
   if (constant) {
     notes.push({code: 'forecastConstant', values: {}});
     const mean = new Float64Array(h).fill(y[0]);
@@ -57,7 +59,8 @@ export function forecastSeries(
   } else if (n < 4) {
     notes.push({code: 'forecastFewValues', values: {}});
     method = 'naive';
-    run = runMethod('naive', y, {period, h, levels});
+    fit = fitMethod('naive', y, {period});
+    run = fit.forecast({h, levels});
   } else {
     if (method === 'seasonal-naive' && n <= period) {
       notes.push({code: 'naiveForSeasonalNaive', values: {}});
@@ -67,11 +70,13 @@ export function forecastSeries(
     if (frequency === 'weekly' && (method === 'ets' || method === 'combination' || method === 'ets-theta-arima')) {
       notes.push({code: 'weeklyEts', values: {}});
     }
-    run = runMethod(method, y, {period, h, levels});
+    fit = fitMethod(method, y, {period});
+    run = fit.forecast({h, levels});
     if (!isFinitePath(run.forecast)) {
       notes.push({code: 'forecastNotFinite', values: {method: run.forecast.method}});
       method = 'naive';
-      run = runMethod('naive', y, {period, h, levels});
+      fit = fitMethod('naive', y, {period});
+      run = fit.forecast({h, levels});
     }
   }
   const forecast = run.forecast;
@@ -90,18 +95,9 @@ export function forecastSeries(
       }
     : undefined;
   const backtest =
-    constant || backtestOrigins < 1 || n < 5
+    fit === null || backtestOrigins < 1 || n < 5
       ? null
-      : rollingBacktest(y, {
-          method,
-          period,
-          horizon,
-          origins: backtestOrigins,
-          minTrain: 4,
-          offset: prepared.first,
-          etsModels: run.etsModels,
-          arimaOrder: run.arimaOrder,
-        });
+      : rollingBacktest(y, {fit, period, horizon, origins: backtestOrigins, minTrain: 4, offset: prepared.first});
   return {
     method: forecast.method,
     startOffset: values.length,

@@ -1,6 +1,6 @@
 import {describe, expect, it} from 'vitest';
 import {readFileSync} from 'node:fs';
-import {seasonalNaiveMae} from '../../src/archive/seasonalNaiveMae.js';
+import {seasonalNaiveMae} from '../../src/history/seasonalNaiveMae.js';
 
 type Ref = {values: number[]; lag: number; mae: number};
 const reference: {UKgas: Ref; AirPassengers: Ref} = JSON.parse(

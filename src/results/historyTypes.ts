@@ -38,7 +38,7 @@ export interface TrackingRow {
   /** actual − forecast. */
   error: number;
   /** Keyed by level, e.g. `{"80": true, "95": true}`. */
-  inside: Record<string, boolean>;
+  inside: Readonly<Record<string, boolean>>;
 }
 
 export interface TrackingSummary {

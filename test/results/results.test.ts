@@ -1,5 +1,5 @@
 import {describe, expect, it} from 'vitest';
-import {parseResults, resultsJson, toResults, RESULTS_SCHEMA} from '../../src/render/results.js';
+import {parseResults, resultsJson, toResults, RESULTS_SCHEMA} from '../../src/results/index.js';
 import {InputError} from '../../src/errors.js';
 import {report} from '../archive/fixtures/report.js';
 

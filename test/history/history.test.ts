@@ -1,16 +1,17 @@
 import {describe, expect, it} from 'vitest';
-import {mkdir, writeFile} from 'node:fs/promises';
+import {mkdir, rm, writeFile} from 'node:fs/promises';
 import {join} from 'node:path';
 import {archive} from '../../src/archive/archive.js';
-import {loadHistory} from '../../src/archive/history.js';
-import {toResults} from '../../src/render/results.js';
+import {loadHistory} from '../../src/history/history.js';
 import {InputError} from '../../src/errors.js';
-import {report} from './fixtures/report.js';
-import {tempDir} from './helpers.js';
+import {digestOfReport, report} from '../archive/fixtures/report.js';
+import {tempDir} from '../archive/helpers.js';
 
 async function archiveMonth(out: string, month: number): Promise<void> {
+  const rep = report(2026, month, [{id: 'net-sales'}]);
   await archive({
-    report: report(2026, month, [{id: 'net-sales'}]),
+    report: rep,
+    digest: digestOfReport(rep),
     html: null,
     pdf: null,
     exports: [],
@@ -27,9 +28,7 @@ describe('loadHistory', () => {
   it('is null when no earlier period is archived', async () => {
     const out = await tempDir();
     await archiveMonth(out, 11);
-    const current = () => {
-      throw new Error('not needed without an earlier period');
-    };
+    const current = digestOfReport(report(2026, 11, [{id: 'net-sales'}]));
     expect(await loadHistory(out, packId, '2026-11', 'monthly', current, 1)).toBeNull();
   });
 
@@ -37,8 +36,8 @@ describe('loadHistory', () => {
     const out = await tempDir();
     for (const month of [8, 9, 10, 11, 12]) await archiveMonth(out, month);
     await mkdir(join(out, packId, 'notes'));
-    const current = toResults(report(2026, 11, [{id: 'net-sales'}]));
-    const h = (await loadHistory(out, packId, '2026-11', 'monthly', () => current, 1))!;
+    const current = digestOfReport(report(2026, 11, [{id: 'net-sales'}]));
+    const h = (await loadHistory(out, packId, '2026-11', 'monthly', current, 1))!;
     // The fixture puts y = 100 + 0.5·t + seasonal with t counted from each pack's own start (48 months
     // back), so a pack ending at e forecasts period p as 100 + 0.5·(p − e + 47) + s(p) while the 2026-11
     // pack has 100 + 0.5·(p − 2026-11 + 47) + s(p): error = 0.5·(e − 2026-11).
@@ -67,20 +66,41 @@ describe('loadHistory', () => {
     expect((h.revisions[11].current as number) - (h.revisions[11].previous as number)).toBeCloseTo(-0.5, 9);
   });
 
-  it('names the file when an earlier results.json is unreadable', async () => {
+  it('reads a period archived before digests were kept from its results.json, with the same history', async () => {
+    const out = await tempDir();
+    for (const month of [8, 9, 10]) await archiveMonth(out, month);
+    const current = digestOfReport(report(2026, 11, [{id: 'net-sales'}]));
+    const fromDigests = await loadHistory(out, packId, '2026-11', 'monthly', current, 1);
+    for (const month of ['08', '09', '10']) await rm(join(out, packId, `2026-${month}`, 'digest.json'));
+    expect(await loadHistory(out, packId, '2026-11', 'monthly', current, 1)).toEqual(fromDigests);
+  });
+
+  it('names the file when an earlier digest.json is unreadable', async () => {
     const out = await tempDir();
     await archiveMonth(out, 9);
+    const file = join(out, packId, '2026-09', 'digest.json');
+    await writeFile(file, '{"schema": "ebbflow/digest/v1", "pack": {}}');
+    const current = digestOfReport(report(2026, 10, [{id: 'net-sales'}]));
+    const error = await loadHistory(out, packId, '2026-10', 'monthly', current, 1).catch((e: unknown) => e);
+    expect(error).toBeInstanceOf(InputError);
+    expect((error as Error).message.startsWith(`${file}: unreadable digest file: pack.id: `)).toBe(true);
+  });
+
+  it('names the file when an earlier results.json without a digest is unreadable', async () => {
+    const out = await tempDir();
+    await archiveMonth(out, 9);
+    await rm(join(out, packId, '2026-09', 'digest.json'));
     const file = join(out, packId, '2026-09', 'results.json');
     await writeFile(file, '{"schema": "ebbflow/results/v1", "pack": {}}');
-    const current = toResults(report(2026, 10, [{id: 'net-sales'}]));
-    const error = await loadHistory(out, packId, '2026-10', 'monthly', () => current, 1).catch((e: unknown) => e);
+    const current = digestOfReport(report(2026, 10, [{id: 'net-sales'}]));
+    const error = await loadHistory(out, packId, '2026-10', 'monthly', current, 1).catch((e: unknown) => e);
     expect(error).toBeInstanceOf(InputError);
     expect((error as Error).message.startsWith(`${file}: unreadable results file: pack.id: `)).toBe(true);
   });
 
   it('rejects a period label that does not match the pack frequency', async () => {
-    const current = toResults(report(2026, 10, [{id: 'net-sales'}]));
+    const current = digestOfReport(report(2026, 10, [{id: 'net-sales'}]));
     const out = await tempDir();
-    await expect(loadHistory(out, packId, '2026-Q3', 'monthly', () => current, 1)).rejects.toThrow(/invalid period: 2026-Q3/);
+    await expect(loadHistory(out, packId, '2026-Q3', 'monthly', current, 1)).rejects.toThrow(/invalid period: 2026-Q3/);
   });
 });

@@ -1,7 +1,7 @@
 import {describe, expect, it} from 'vitest';
-import {summariseTracking, trackForecasts} from '../../src/archive/tracking.js';
-import {buildHistory} from '../../src/archive/history.js';
-import {hand, quarters} from './results-like.js';
+import {summariseTracking, trackForecasts} from '../../src/history/tracking.js';
+import {buildHistory} from '../../src/history/history.js';
+import {hand, quarters} from './digests.js';
 
 // Current pack 2026-Q2: ten quarters 2024-Q1 … 2026-Q2.
 const current = hand('2026-Q2', 4, [{periods: quarters(10), original: [10, 12, 14, 11, 12, 14, 16, 13, 15, 17]}]);

@@ -1,8 +1,4 @@
-import type {ResultsV1, SeriesResults} from '../render/results.js';
-import type {RevisionRow} from './types.js';
-
-/** The parts of a results file the history functions read. */
-export type ResultsLike = Pick<ResultsV1, 'pack' | 'series'>;
+import type {DigestSeries, PeriodDigest, RevisionRow} from '../results/index.js';
 
 /** How many of the previous pack's latest periods are compared. */
 export const REVISION_WINDOW = 12;
@@ -30,7 +26,7 @@ export const MISSING = 'missing';
  *
  * Rows come in the current pack's series order, then by period, calls last. Pure; O(series × window).
  */
-export function revisions(previous: ResultsLike, current: ResultsLike, thresholdPct: number): RevisionRow[] {
+export function revisions(previous: PeriodDigest, current: PeriodDigest, thresholdPct: number): RevisionRow[] {
   const rows: RevisionRow[] = [];
   const before = new Map(previous.series.map((s) => [s.id, s]));
   for (const s of current.series) {
@@ -40,7 +36,7 @@ export function revisions(previous: ResultsLike, current: ResultsLike, threshold
   return rows;
 }
 
-function seriesRevisions(p: SeriesResults, s: SeriesResults, period: string, thresholdPct: number): RevisionRow[] {
+function seriesRevisions(p: DigestSeries, s: DigestSeries, period: string, thresholdPct: number): RevisionRow[] {
   const rows: RevisionRow[] = [];
   const position = new Map(s.periods.map((label, j) => [label, j]));
   for (let i = Math.max(0, p.periods.length - REVISION_WINDOW); i < p.periods.length; i++) {
@@ -52,18 +48,18 @@ function seriesRevisions(p: SeriesResults, s: SeriesResults, period: string, thr
       rows.push(numericRow(s.id, p.periods[i], 'data', 'original', a, b, thresholdPct));
       continue;
     }
-    const pa = p.decomposition?.adjusted[i] ?? null;
-    const ca = s.decomposition?.adjusted[j] ?? null;
+    const pa = p.adjusted?.[i] ?? null;
+    const ca = s.adjusted?.[j] ?? null;
     if (a !== null && pa !== null && ca !== null && Math.abs(ca - pa) > NOISE * Math.max(Math.abs(pa), Math.abs(ca))) {
       rows.push(numericRow(s.id, p.periods[i], 'estimate', 'adjusted', pa, ca, thresholdPct));
     }
   }
-  const calls: [RevisionRow['measure'], string | undefined, string | undefined][] = [
-    ['trend-direction', p.changes.trendDirection, s.changes.trendDirection],
-    ['cycle-phase', p.cycle?.phase, s.cycle?.phase],
+  const calls: [RevisionRow['measure'], string | null, string | null][] = [
+    ['trend-direction', p.trendDirection, s.trendDirection],
+    ['cycle-phase', p.phase, s.phase],
   ];
   for (const [measure, was, now] of calls) {
-    if (was !== undefined && now !== undefined && was !== now) {
+    if (was !== null && now !== null && was !== now) {
       rows.push({
         seriesId: s.id,
         period,

@@ -1,234 +1,40 @@
 import {dirname, relative, sep, isAbsolute} from 'node:path';
-import {wordDataNote, wordNote, wordsFor, type Words} from '../words/index.js';
-import {z} from 'zod';
-import type {Report, ReportSeries} from './types.js';
-import type {Callout} from '../narrate/types.js';
-import type {History} from '../archive/types.js';
+import type {Plan, SeriesPlan} from '../config/plan.js';
+import type {DataNote} from '../ingest/types.js';
+import type {SeriesAnalysis} from '../analyse/types.js';
 import {formatPeriod, periodsPerYear, type Frequency} from '../time/period.js';
-import {InputError} from '../errors.js';
+import {wordDataNote, wordNote, wordsFor, type Words} from '../words/index.js';
+import {RESULTS_SCHEMA, type ResultsV1, type SeriesResults} from './schema.js';
+import type {History} from './historyTypes.js';
+import {bands, num, nums} from './figures.js';
 
-/** Schema tag written into every results.json; bump it (v2) for any breaking change to the shape. */
-export const RESULTS_SCHEMA = 'ebbflow/results/v1';
+/** A ranked statement as results.json keeps it (the narrate stage's callouts have this shape). */
+export interface CalloutRecord {
+  id: string;
+  seriesId: string | null;
+  rule: string;
+  severity: 'info' | 'watch' | 'alert';
+  rank: number;
+  text: string;
+  figures: Record<string, number>;
+  chart: string | null;
+}
 
-/** A figure: NaN and ±Infinity are written as null, everything else at full precision. */
-const figure = z.number().nullable();
-/**
- * Long arrays are checked with one predicate rather than a schema per element: element-wise
- * checking made reading an archived pack about 40 times slower than JSON.parse (measured).
- */
-const figures = z.custom<(number | null)[]>(
-  (v) => Array.isArray(v) && v.every((x) => x === null || typeof x === 'number'),
-  {message: 'expected an array of numbers or null'},
-);
-const labels = z.custom<string[]>((v) => Array.isArray(v) && v.every((x) => typeof x === 'string'), {
-  message: 'expected an array of period labels',
-});
-const flags = z.custom<boolean[]>((v) => Array.isArray(v) && v.every((x) => typeof x === 'boolean'), {
-  message: 'expected an array of true/false',
-});
-const record = z.record(z.string(), z.unknown());
+/** One series of a pack as results.json records it. */
+export interface ResultsSeriesInput {
+  plan: SeriesPlan;
+  analysis: SeriesAnalysis;
+  callouts: readonly CalloutRecord[];
+}
 
-const calloutSchema = z.object({
-  id: z.string(),
-  seriesId: z.string().nullable(),
-  rule: z.string(),
-  severity: z.enum(['info', 'watch', 'alert']),
-  rank: z.number(),
-  text: z.string(),
-  figures: z.record(z.string(), figure),
-  chart: z.string().nullable(),
-});
-
-const decompositionSchema = z.object({
-  method: z.enum(['stl', 'classical']),
-  model: z.enum(['additive', 'multiplicative']),
-  modelReason: z.string(),
-  trend: figures,
-  seasonal: figures,
-  irregular: figures,
-  adjusted: figures,
-  calendar: z
-    .object({
-      effect: figures,
-      regressors: z.array(
-        z.object({
-          name: z.string(),
-          coefficient: figure,
-          standardError: figure,
-          tStatistic: figure,
-          pValue: figure,
-          significant: z.boolean(),
-          description: z.string(),
-        }),
-      ),
-    })
-    .nullable(),
-  filled: flags,
-  diagnostics: z.object({
-    varianceShares: z.object({trend: figure, seasonal: figure, irregular: figure}),
-    residualSeasonality: z.object({test: z.string(), statistic: figure, pValue: figure, detected: z.boolean()}),
-    seasonalStability: figure,
-    revision: z.object({meanAbsPp: figure, periodsTested: z.number()}).nullable(),
-  }),
-  options: record,
-});
-
-const testResult = z.object({statistic: figure, pValue: figure});
-
-const cycleSchema = z.object({
-  method: z.enum(['hp', 'bandpass']),
-  trend: figures,
-  gap: figures,
-  phase: z.enum(['rising-above', 'falling-above', 'falling-below', 'rising-below']),
-  phaseLabel: z.string(),
-  direction: z.enum(['rising', 'falling', 'flat']),
-  turningPoints: z.array(z.object({period: z.string(), type: z.enum(['peak', 'trough']), provisional: z.boolean()})),
-  periodsSinceTurn: z.number().nullable(),
-  amplitudeRatio: figure,
-  stationarity: z
-    .object({
-      test: z.string(),
-      level: testResult.extend({stationary: z.boolean()}),
-      differences: testResult.extend({stationary: z.boolean()}),
-      variance: testResult.extend({test: z.string(), constant: z.boolean()}),
-    })
-    .nullable(),
-  options: record,
-});
-
-const changesSchema = z.object({
-  yearOnYear: figure,
-  periodOnPeriodAdjusted: figure,
-  annualised: figure,
-  yearToDate: figure,
-  trend: figure,
-  trendAnnualised: figure,
-  trendDirection: z.enum(['rising', 'falling', 'flat']),
-  yearOnYearSeries: figures,
-});
-
-const forecastSchema = z.object({
-  method: z.string(),
-  periods: labels,
-  mean: figures,
-  levels: z.array(z.number()),
-  lower: z.record(z.string(), figures),
-  upper: z.record(z.string(), figures),
-  backtest: z
-    .object({
-      mase: figure,
-      smape: figure,
-      origins: z.number(),
-      horizon: z.number(),
-      benchmarks: z.array(z.object({method: z.string(), mase: figure, smape: figure})),
-      points: z.array(z.object({period: z.string(), forecast: figure})),
-    })
-    .nullable(),
-  notes: z.array(z.string()),
-  options: record,
-});
-
-const outturnSchema = z.object({
-  fiscalYear: z.string(),
-  actualToDate: figure,
-  periodsActual: z.number(),
-  forecastRemaining: figure,
-  periodsRemaining: z.number(),
-  total: figure,
-  level: z.number(),
-  lower: figure,
-  upper: figure,
-  target: figure,
-  gapPct: figure,
-});
-
-const seriesSchema = z.object({
-  id: z.string(),
-  label: z.string(),
-  unit: z.string().nullable(),
-  kind: z.enum(['flow', 'stock']),
-  hidden: z.boolean(),
-  target: z.string().nullable(),
-  periods: labels,
-  original: figures,
-  decomposition: decompositionSchema.nullable(),
-  notAdjustedReason: z.string().nullable(),
-  outliers: z.array(
-    z.object({period: z.string(), kind: z.enum(['additive', 'level-shift', 'temporary']), score: figure}),
-  ),
-  cycle: cycleSchema.nullable(),
-  changes: changesSchema,
-  forecast: forecastSchema.nullable(),
-  outturn: outturnSchema.nullable(),
-  callouts: z.array(calloutSchema),
-  notes: z.array(z.string()),
-  options: record,
-});
-
-const historySchema = z.object({
-  previousPeriod: z.string(),
-  revisions: z.array(
-    z.object({
-      seriesId: z.string(),
-      period: z.string(),
-      kind: z.enum(['data', 'estimate']),
-      measure: z.enum(['original', 'adjusted', 'trend-direction', 'cycle-phase']),
-      previous: z.union([z.number(), z.string()]),
-      current: z.union([z.number(), z.string()]),
-      revisionPct: figure,
-      large: z.boolean(),
-    }),
-  ),
-  tracking: z.array(
-    z.object({
-      seriesId: z.string(),
-      publishedIn: z.string(),
-      period: z.string(),
-      horizon: z.number(),
-      forecast: figure,
-      actual: figure,
-      error: figure,
-      inside: z.record(z.string(), z.boolean()),
-    }),
-  ),
-  trackingSummary: z.array(
-    z.object({
-      seriesId: z.string(),
-      count: z.number(),
-      mase: figure,
-      coverage: z.record(z.string(), figure),
-    }),
-  ),
-});
-
-/** The shape of results.json (`ebbflow/results/v1`), checked by {@link parseResults}. Unknown keys are ignored. */
-export const resultsSchema = z.object({
-  schema: z.literal(RESULTS_SCHEMA),
-  pack: z.object({
-    id: z.string(),
-    title: z.string(),
-    subtitle: z.string().nullable(),
-    organisation: z.string().nullable(),
-    /** Review period label, e.g. `2026-10`. */
-    period: z.string(),
-    /** Periods per year: 12, 4 or 52. */
-    frequency: z.union([z.literal(12), z.literal(4), z.literal(52)]),
-    locale: z.string(),
-    fiscalYearStart: z.number(),
-  }),
-  series: z.array(seriesSchema),
-  callouts: z.array(calloutSchema),
-  notes: z.array(z.object({file: z.string(), line: z.number().nullable(), message: z.string()})),
-  history: historySchema.nullable(),
-});
-
-/** Contents of results.json: every figure the report shows, NaN written as null. */
-export type ResultsV1 = z.infer<typeof resultsSchema>;
-export type SeriesResults = ResultsV1['series'][number];
-
-/** Frequency name for the `pack.frequency` number of a results file. */
-export function frequencyOf(periods: 12 | 4 | 52): Frequency {
-  return periods === 12 ? 'monthly' : periods === 4 ? 'quarterly' : 'weekly';
+/** Everything results.json is written from: plain data of the stages before render. */
+export interface ResultsInput {
+  plan: Plan;
+  periodLabel: string;
+  series: readonly ResultsSeriesInput[];
+  callouts: readonly CalloutRecord[];
+  notes: readonly DataNote[];
+  history: History | null;
 }
 
 /**
@@ -241,7 +47,7 @@ export function frequencyOf(periods: 12 | 4 | 52): Frequency {
  *
  * Complexity: O(total array length).
  */
-export function toResults(report: Report): ResultsV1 {
+export function toResults(report: ResultsInput): ResultsV1 {
   const {plan} = report;
   const f = plan.frequency;
   const words = wordsFor(plan.locale);
@@ -266,7 +72,7 @@ export function toResults(report: Report): ResultsV1 {
 }
 
 /** results.json text: 2-space indent, full precision, trailing newline. */
-export function resultsJson(report: Report): string {
+export function resultsJson(report: ResultsInput): string {
   return [...resultsJsonChunks(report)].join('');
 }
 
@@ -281,7 +87,7 @@ export function resultsJson(report: Report): string {
  *
  * Complexity: O(total array length); memory O(largest series).
  */
-export function* resultsJsonChunks(report: Report): Generator<string> {
+export function* resultsJsonChunks(report: ResultsInput): Generator<string> {
   // Everything but the series, in toResults' key order: schema and pack before them, the rest after.
   const {schema, pack, series: none, ...tail} = toResults({...report, series: []});
   const head = JSON.stringify({schema, pack}, null, 2);
@@ -300,33 +106,7 @@ export function* resultsJsonChunks(report: Report): Generator<string> {
   yield `  ],\n${after.slice(2)}\n`;
 }
 
-/**
- * Read and check a results.json written by this or an earlier version of ebbflow. Throws an
- * {@link InputError} naming `file` and the first offending field when the text is not JSON, has
- * another schema tag, or does not have the v1 shape.
- */
-export function parseResults(text: string, file = 'results.json'): ResultsV1 {
-  const problem = (message: string) => new InputError([{file, line: null, column: null, message}]);
-  let data: unknown;
-  try {
-    data = JSON.parse(text);
-  } catch (e) {
-    throw problem(`unreadable results file: ${(e as Error).message}`);
-  }
-  const tag = (data as {schema?: unknown} | null)?.schema;
-  if (tag !== RESULTS_SCHEMA) {
-    throw problem(`unreadable results file: schema is ${JSON.stringify(tag ?? null)}, expected "${RESULTS_SCHEMA}"`);
-  }
-  const parsed = resultsSchema.safeParse(data);
-  if (!parsed.success) {
-    const issue = parsed.error.issues[0];
-    const at = issue.path.map((p) => (typeof p === 'number' ? `[${p}]` : `.${String(p)}`)).join('');
-    throw problem(`unreadable results file: ${at.replace(/^\./, '') || '(top level)'}: ${issue.message}`);
-  }
-  return parsed.data;
-}
-
-function seriesResults(s: ReportSeries, f: Frequency, words: Words): SeriesResults {
+function seriesResults(s: ResultsSeriesInput, f: Frequency, words: Words): SeriesResults {
   const a = s.analysis;
   const label = (offset: number) => formatPeriod(f, a.start + offset);
   const adj = a.adjustment;
@@ -462,7 +242,7 @@ function seriesResults(s: ReportSeries, f: Frequency, words: Words): SeriesResul
 
 type SeriesCycle = NonNullable<SeriesResults['cycle']>;
 
-function callout(c: Callout): ResultsV1['callouts'][number] {
+function callout(c: CalloutRecord): ResultsV1['callouts'][number] {
   return {
     id: c.id,
     seriesId: c.seriesId,
@@ -497,7 +277,9 @@ function history(h: History): NonNullable<ResultsV1['history']> {
       forecast: num(t.forecast),
       actual: num(t.actual),
       error: num(t.error),
-      inside: plain(t.inside) as Record<string, boolean>,
+      // Shared frozen records of booleans keyed by level (see history/tracking.ts): already JSON-safe, and integer-like
+      // keys enumerate in ascending order, so copying each one would only cost memory.
+      inside: t.inside,
     })),
     trackingSummary: h.trackingSummary.map((t) => ({
       seriesId: t.seriesId,
@@ -506,21 +288,6 @@ function history(h: History): NonNullable<ResultsV1['history']> {
       coverage: plain(t.coverage) as Record<string, number | null>,
     })),
   };
-}
-
-function num(x: number): number | null {
-  return Number.isFinite(x) ? x : null;
-}
-
-function nums(xs: ArrayLike<number>): (number | null)[] {
-  return Array.from(xs, num);
-}
-
-/** Bands keyed by level, in ascending numeric order of the level. */
-function bands(b: Record<string, number[]>): Record<string, (number | null)[]> {
-  const out: Record<string, (number | null)[]> = {};
-  for (const key of Object.keys(b).sort((x, y) => Number(x) - Number(y) || (x < y ? -1 : 1))) out[key] = nums(b[key]);
-  return out;
 }
 
 /**

@@ -1,8 +1,7 @@
 import {describe, expect, it} from 'vitest';
-import {revisions} from '../../src/archive/revisions.js';
-import {toResults} from '../../src/render/results.js';
-import {report} from './fixtures/report.js';
-import {hand, quarters} from './results-like.js';
+import {revisions} from '../../src/history/revisions.js';
+import {digestOfReport, report} from '../archive/fixtures/report.js';
+import {hand, quarters} from './digests.js';
 
 const periods = quarters(9); // 2024-Q1 … 2026-Q1
 const original = [10, 12, 14, 11, 12, 14, 16, 13, 15];
@@ -74,8 +73,8 @@ describe('revisions', () => {
   });
 
   it('compares only the previous pack’s last 12 periods and series present in both', () => {
-    const prev = toResults(report(2026, 9, [{id: 'net-sales'}, {id: 'gone'}]));
-    const cur = toResults(report(2026, 9, [{id: 'net-sales'}, {id: 'new-line'}]));
+    const prev = digestOfReport(report(2026, 9, [{id: 'net-sales'}, {id: 'gone'}]));
+    const cur = digestOfReport(report(2026, 9, [{id: 'net-sales'}, {id: 'new-line'}]));
     const s = cur.series[0];
     s.original[0] = 1; // 2022-10: outside the last 12 periods of the previous pack
     s.original[40] = 1; // 2026-02: inside
