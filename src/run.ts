@@ -2,7 +2,9 @@ import {loadPlan, portablePlan, salvagePlan} from './config/index.js';
 import type {OutputFormat, Plan} from './config/plan.js';
 import {ingest} from './ingest/index.js';
 import type {Dataset} from './ingest/types.js';
+import {checkFormulas, deriveFormulas} from './derive/formulas/index.js';
 import {analyseAll, analysisThreads} from './analyse/index.js';
+import {combine, type Combined} from './combine/index.js';
 import type {SeriesAnalysis} from './analyse/types.js';
 import {digestOf, type History} from './results/index.js';
 import {loadHistory} from './history/index.js';
@@ -47,7 +49,8 @@ export interface BuildSummary {
 /**
  * One pack, one period, stage by stage:
  *
- *   pack.yaml ─► config ─► ingest ─► analyse ─► history ─► narrate ─► render ─► archive ─► out/<pack>/<period>/
+ *   pack.yaml ─► config ─► ingest ─► derive ─► analyse ─► combine ─► history ─► narrate ─► render ─► archive
+ *             ─► out/<pack>/<period>/
  *
  * Two things overlap the analysis: the browser starts (when a PDF is wanted) and each series' charts are drawn on
  * the main thread as soon as its analysis arrives (when HTML or PDF is wanted).
@@ -55,21 +58,23 @@ export interface BuildSummary {
 export async function build(request: BuildRequest, log: Logger): Promise<BuildSummary> {
   const {packFile, period, outDir, formats, allowDirs} = request;
   const loaded = await loadPlan(packFile, {period, outDir, formats, allowDirs});
-  const data = await ingest(loaded);
-  const plan: Plan = {...loaded, series: data.plans}; // `fromSource` entries expanded into the series found
+  const read = await ingest(loaded);
+  const {data, ratios} = deriveFormulas(loaded, read);
+  const plan: Plan = {...loaded, series: data.plans}; // `fromSource` entries expanded, formula kinds resolved
   const periodLabel = formatPeriod(plan.frequency, data.period);
   await refuseExisting(plan.outDir, plan.id, periodLabel, request.force);
-  log.info(`${plan.id} ${periodLabel}: ${data.series.length} series read`);
+  log.info(`${plan.id} ${periodLabel}: ${read.series.length} series read`);
   const session = request.pdf ?? pdfSession();
   try {
     if (plan.formats.includes('pdf')) session.warm(plan.browser);
     const charts = plan.formats.includes('html') || plan.formats.includes('pdf') ? chartPrefetch(plan) : null;
     const threads = analysisThreads(request.jobs, charts !== null);
-    const analyses = await analyseAll(plan, data, {threads, log, onResult: charts?.add});
+    const combined = combine(plan, data, await analyseAll(plan, data, {threads, log, onResult: charts?.add}), ratios);
+    const analyses = combined.analyses;
     const digest = digestOf(plan, periodLabel, analyses);
     const {revisionPct} = plan.thresholds;
     const history = await loadHistory(plan.outDir, plan.id, periodLabel, plan.frequency, digest, revisionPct);
-    const report = narrated(plan, data, analyses, history);
+    const report = narrated(plan, data, combined, history);
     const rendered = await render(report, {charts: (await charts?.drawn()) ?? new Map(), session});
     if (rendered.pdfSkipped) log.warn(rendered.pdfSkipped);
     const written = await archive({
@@ -109,6 +114,8 @@ export async function check(packFile: string, log: Logger, allowDirs: string[] =
   if (plan) {
     try {
       data = await ingest(plan);
+      const formulas = checkFormulas(plan, data.plans);
+      if (!formulas.ok) throw new InputError(formulas.problems);
     } catch (e) {
       if (!(e instanceof InputError)) throw e;
       const seen = new Set(problems.map(formatProblem));
@@ -122,12 +129,14 @@ export async function check(packFile: string, log: Logger, allowDirs: string[] =
 }
 
 /** The narrate stage: callouts for the pack and each series, gathered with everything render needs. */
-function narrated(plan: Plan, data: Dataset, analyses: SeriesAnalysis[], history: History | null): Report {
+function narrated(plan: Plan, data: Dataset, combined: Combined, history: History | null): Report {
+  const analyses = combined.analyses;
   const narration = narrate({
     plan,
     period: data.period,
     series: plan.series.map((s, i) => ({plan: s, analysis: analyses[i]})),
     history,
+    combined,
   });
   return {
     plan,
@@ -139,12 +148,14 @@ function narrated(plan: Plan, data: Dataset, analyses: SeriesAnalysis[], history
       analysis: analyses[i],
       callouts: narration.bySeries.get(s.id) ?? [],
       commentary: narration.paragraphs.get(s.id) ?? '',
+      combination: combined.series.get(s.id) ?? null,
     })),
     callouts: narration.pack,
     commentary: narration.opening,
     inputs: data.inputs,
-    notes: data.notes,
+    notes: [...data.notes, ...combined.notes],
     history,
+    groups: combined.groups,
   };
 }
 

@@ -6,7 +6,12 @@ import {runPool, type ResultListener} from './pool.js';
 import type {SeriesAnalysis, SeriesInput} from './types.js';
 
 export {analyseSeries};
+export {residualSeasonality} from './decompose/diagnostics.js';
+export {fiscalOutturn} from './forecast/index.js';
+export {maseScale} from './forecast/accuracy.js';
+export type {AdjustmentDiagnostics} from './decompose/index.js';
 export type {SeriesAnalysis, SeriesInput};
+export type {ForecastResult} from './types.js';
 
 /**
  * Analyse every series of a pack, in pack order. With `jobs` > 1 (and compiled code) the series are spread over a
@@ -28,7 +33,8 @@ export async function analyseAll(
       frequency: plan.frequency,
       start: series.start,
       values: series.values,
-      kind: sp.kind,
+      // A ratio is analysed as a level: never summed over periods, no working-day effect.
+      kind: sp.kind === 'ratio' ? 'stock' : sp.kind,
       fiscalYearStart: plan.fiscalYearStart,
       target: target ? {start: target.start, values: concat(target.values, target.ahead)} : null,
       options: sp.analysis,

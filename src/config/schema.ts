@@ -127,6 +127,7 @@ const brandingSection = z.strictObject({
 const thresholdsSection = z.strictObject({
   residualSigma: z.number().positive().nullish(),
   revisionPct: z.number().min(0).nullish(),
+  targetPct: z.number().min(0).nullish(),
 });
 
 const sourceEntry = z.strictObject({
@@ -141,14 +142,31 @@ const sourceEntry = z.strictObject({
   encoding: z.enum(['utf-8', 'windows-1252']).nullish(),
 });
 
+const seriesKind = z.enum(['flow', 'stock', 'ratio']);
+const better = z.enum(['higher', 'lower']);
+
 const seriesEntry = z.strictObject({
   id: slug,
   label: optionalText,
   unit: optionalText,
   source: text,
   column: optionalText,
-  kind: z.enum(['flow', 'stock']).nullish(),
+  kind: seriesKind.nullish(),
   target: optionalText,
+  better: better.nullish(),
+  hidden: z.boolean().nullish(),
+  ...analysisShape,
+});
+
+/** A derived series: `formula:` over other series' ids instead of `source:` (see src/derive/formulas/). */
+const formulaEntry = z.strictObject({
+  id: slug,
+  label: optionalText,
+  unit: optionalText,
+  formula: text,
+  kind: seriesKind.nullish(),
+  target: optionalText,
+  better: better.nullish(),
   hidden: z.boolean().nullish(),
   ...analysisShape,
 });
@@ -166,6 +184,9 @@ const groupEntry = z.strictObject({
   id: slug,
   title: text,
   series: z.array(text).min(1),
+  total: optionalText,
+  adjustTotal: z.enum(['direct', 'indirect']).nullish(),
+  reconcile: z.enum(['mint', 'ols', 'bottom-up', 'none']).nullish(),
 });
 
 export const packSchema = z.strictObject({
@@ -173,7 +194,7 @@ export const packSchema = z.strictObject({
   branding: brandingSection.nullish(),
   thresholds: thresholdsSection.nullish(),
   sources: z.array(sourceEntry).min(1),
-  series: z.array(z.union([seriesEntry, fromSourceEntry])).min(1),
+  series: z.array(z.union([seriesEntry, formulaEntry, fromSourceEntry])).min(1),
   groups: z.array(groupEntry).nullish(),
   defaults: z.strictObject(analysisShape).nullish(),
 });
@@ -181,6 +202,7 @@ export const packSchema = z.strictObject({
 /** A pack file as validated by the schema, before defaults and paths are resolved. */
 export type PackConfig = z.output<typeof packSchema>;
 export type SeriesEntry = z.output<typeof seriesEntry>;
+export type FormulaEntry = z.output<typeof formulaEntry>;
 export type FromSourceEntry = z.output<typeof fromSourceEntry>;
 /** The analysis blocks as written (every key optional). */
 export type AnalysisConfig = z.output<z.ZodObject<typeof analysisShape>>;

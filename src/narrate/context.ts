@@ -1,6 +1,7 @@
 import type {Plan, SeriesPlan} from '../config/plan.js';
 import type {SeriesAnalysis} from '../analyse/types.js';
 import type {History} from '../results/index.js';
+import type {GroupResult, SeriesCombination} from '../combine/index.js';
 import type {Callout} from './types.js';
 import type {Words} from '../words/index.js';
 
@@ -16,6 +17,10 @@ export interface RuleContext {
   words: Words;
   /** True when the series is a rate in percent (unit `%`): its changes are stated in percentage points. */
   isRate: boolean;
+  /** What the combine stage found for this series (variance against target, reconciliation), or null. */
+  combination: SeriesCombination | null;
+  /** Every group with a total (contributions of its parts), in pack order. */
+  groups: readonly GroupResult[];
 }
 
 /**

@@ -2,6 +2,7 @@ import type {Plan, SeriesPlan} from '../config/plan.js';
 import type {SeriesAnalysis} from '../analyse/types.js';
 import type {History} from '../results/index.js';
 import {periodsPerYear} from '../time/period.js';
+import type {GroupResult, SeriesCombination} from '../combine/index.js';
 import type {Callout} from './types.js';
 import type {RuleContext} from './context.js';
 import {wordsFor} from '../words/index.js';
@@ -20,6 +21,8 @@ export interface NarrateInput {
   period: number;
   series: {plan: SeriesPlan; analysis: SeriesAnalysis}[];
   history: History | null;
+  /** The combine stage's findings: per series id, and the groups with a total. Absent for a pack without them. */
+  combined?: {series: ReadonlyMap<string, SeriesCombination>; groups: readonly GroupResult[]};
 }
 
 /**
@@ -57,6 +60,8 @@ export function narrate(input: NarrateInput): Narration {
       history: input.history,
       words,
       isRate: series.unit === '%',
+      combination: input.combined?.series.get(series.id) ?? null,
+      groups: input.combined?.groups ?? [],
     };
     const ppy = periodsPerYear[analysis.frequency];
     const list: {callout: Callout; order: [number, number]}[] = [];

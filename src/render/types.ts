@@ -3,6 +3,7 @@ import type {InputFile, DataNote} from '../ingest/types.js';
 import type {SeriesAnalysis} from '../analyse/types.js';
 import type {Callout} from '../narrate/types.js';
 import type {History} from '../results/index.js';
+import type {GroupResult, ReconciledBacktest, SeriesCombination} from '../combine/index.js';
 
 /** Everything the render stage needs; plain data. */
 export interface Report {
@@ -20,6 +21,8 @@ export interface Report {
   notes: DataNote[];
   /** Comparison with earlier archived packs; null for the first pack of an archive. */
   history: History | null;
+  /** Groups with a total (contributions, direct against indirect adjustment, reconciled back-test), in pack order. */
+  groups: (GroupResult & {backtest: ReconciledBacktest | null})[];
 }
 
 export interface ReportSeries {
@@ -29,4 +32,6 @@ export interface ReportSeries {
   callouts: Callout[];
   /** The section's opening paragraph (empty for hidden series). */
   commentary: string;
+  /** Variance against target and forecast reconciliation (combine stage); null when the series has neither. */
+  combination: SeriesCombination | null;
 }

@@ -3,7 +3,7 @@ import type {Plan} from '../config/plan.js';
 import type {SeriesAnalysis} from '../analyse/types.js';
 import {InputError} from '../errors.js';
 import {formatPeriod, periodsPerYear} from '../time/period.js';
-import type {ResultsV1} from './schema.js';
+import type {Results} from './schema.js';
 import {bands, nums} from './figures.js';
 
 /** Schema tag of `digest.json`; bump it for any breaking change to the shape. */
@@ -84,7 +84,7 @@ export function digestOf(plan: Plan, periodLabel: string, analyses: readonly Ser
 }
 
 /** The digest of a results.json written before digests were kept (the same figures, read from the full file). */
-export function digestOfResults(results: ResultsV1): PeriodDigest {
+export function digestOfResults(results: Results): PeriodDigest {
   return {
     schema: DIGEST_SCHEMA,
     pack: {id: results.pack.id, period: results.pack.period, frequency: results.pack.frequency},

@@ -1,4 +1,4 @@
-export {RESULTS_SCHEMA, resultsSchema, frequencyOf, type ResultsV1, type SeriesResults} from './schema.js';
+export {RESULTS_SCHEMA, resultsSchema, frequencyOf, type Results, type SeriesResults} from './schema.js';
 export {toResults, resultsJson, resultsJsonChunks, type ResultsInput, type CalloutRecord} from './write.js';
 export {parseResults} from './read.js';
 export {digestOf, digestJson, DIGEST_SCHEMA, type PeriodDigest, type DigestSeries} from './digest.js';

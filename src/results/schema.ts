@@ -1,8 +1,12 @@
 import {z} from 'zod';
 import type {Frequency} from '../time/period.js';
+import {groupSchema, reconciliationSchema, versusTargetSchema} from './structure.js';
 
-/** Schema tag written into every results.json; bump it (v2) for any breaking change to the shape. */
-export const RESULTS_SCHEMA = 'ebbflow/results/v1';
+/**
+ * Schema tag written into every results.json; bump it for any breaking change to the shape. v2 added `groups[]`,
+ * and per series `better`, `versusTarget`, `forecast.baseMean` and `forecast.reconciliation`.
+ */
+export const RESULTS_SCHEMA = 'ebbflow/results/v2';
 
 /** A figure: NaN and ±Infinity are written as null, everything else at full precision. */
 const figure = z.number().nullable();
@@ -120,6 +124,9 @@ const forecastSchema = z.object({
     .nullable(),
   notes: z.array(z.string()),
   options: record,
+  /** The forecast mean before reconciliation, when `mean` is reconciled (v2); else null. */
+  baseMean: figures.nullable(),
+  reconciliation: reconciliationSchema.nullable(),
 });
 
 const outturnSchema = z.object({
@@ -140,9 +147,10 @@ const seriesSchema = z.object({
   id: z.string(),
   label: z.string(),
   unit: z.string().nullable(),
-  kind: z.enum(['flow', 'stock']),
+  kind: z.enum(['flow', 'stock', 'ratio']),
   hidden: z.boolean(),
   target: z.string().nullable(),
+  better: z.enum(['higher', 'lower']),
   periods: labels,
   original: figures,
   decomposition: decompositionSchema.nullable(),
@@ -154,6 +162,7 @@ const seriesSchema = z.object({
   changes: changesSchema,
   forecast: forecastSchema.nullable(),
   outturn: outturnSchema.nullable(),
+  versusTarget: versusTargetSchema,
   callouts: z.array(calloutSchema),
   notes: z.array(z.string()),
   options: record,
@@ -195,7 +204,7 @@ const historySchema = z.object({
   ),
 });
 
-/** The shape of results.json (`ebbflow/results/v1`), checked by {@link parseResults}. Unknown keys are ignored. */
+/** The shape of results.json (`ebbflow/results/v2`), checked by {@link parseResults}. Unknown keys are ignored. */
 export const resultsSchema = z.object({
   schema: z.literal(RESULTS_SCHEMA),
   pack: z.object({
@@ -211,14 +220,15 @@ export const resultsSchema = z.object({
     fiscalYearStart: z.number(),
   }),
   series: z.array(seriesSchema),
+  groups: z.array(groupSchema),
   callouts: z.array(calloutSchema),
   notes: z.array(z.object({file: z.string(), line: z.number().nullable(), message: z.string()})),
   history: historySchema.nullable(),
 });
 
 /** Contents of results.json: every figure the report shows, NaN written as null. */
-export type ResultsV1 = z.infer<typeof resultsSchema>;
-export type SeriesResults = ResultsV1['series'][number];
+export type Results = z.infer<typeof resultsSchema>;
+export type SeriesResults = Results['series'][number];
 
 /** Frequency name for the `pack.frequency` number of a results file. */
 export function frequencyOf(periods: 12 | 4 | 52): Frequency {

@@ -4,9 +4,11 @@ import type {DataNote} from '../ingest/types.js';
 import type {SeriesAnalysis} from '../analyse/types.js';
 import {formatPeriod, periodsPerYear, type Frequency} from '../time/period.js';
 import {wordDataNote, wordNote, wordsFor, type Words} from '../words/index.js';
-import {RESULTS_SCHEMA, type ResultsV1, type SeriesResults} from './schema.js';
+import {RESULTS_SCHEMA, type Results, type SeriesResults} from './schema.js';
 import type {History} from './historyTypes.js';
 import {bands, num, nums} from './figures.js';
+import type {GroupResult, ReconciledBacktest, SeriesCombination} from '../combine/index.js';
+import {groupResults, versusTargetResults} from './structure.js';
 
 /** A ranked statement as results.json keeps it (the narrate stage's callouts have this shape). */
 export interface CalloutRecord {
@@ -25,6 +27,8 @@ export interface ResultsSeriesInput {
   plan: SeriesPlan;
   analysis: SeriesAnalysis;
   callouts: readonly CalloutRecord[];
+  /** What the combine stage found for the series (target variance, reconciliation); absent when nothing. */
+  combination?: SeriesCombination | null;
 }
 
 /** Everything results.json is written from: plain data of the stages before render. */
@@ -35,10 +39,12 @@ export interface ResultsInput {
   callouts: readonly CalloutRecord[];
   notes: readonly DataNote[];
   history: History | null;
+  /** Groups with a total, from the combine stage (none when absent). */
+  groups?: readonly (GroupResult & {backtest: ReconciledBacktest | null})[];
 }
 
 /**
- * The results.json object of a report: the ARCHITECTURE.md `ebbflow/results/v1` contract.
+ * The results.json object of a report: the ARCHITECTURE.md `ebbflow/results/v2` contract.
  *
  * Periods are written as canonical labels (`2026-10`), never as indices; NaN and ±Infinity become
  * null; keys come out in a fixed order (the order built here, and sorted keys inside free-form
@@ -47,7 +53,7 @@ export interface ResultsInput {
  *
  * Complexity: O(total array length).
  */
-export function toResults(report: ResultsInput): ResultsV1 {
+export function toResults(report: ResultsInput): Results {
   const {plan} = report;
   const f = plan.frequency;
   const words = wordsFor(plan.locale);
@@ -65,6 +71,7 @@ export function toResults(report: ResultsInput): ResultsV1 {
       fiscalYearStart: plan.fiscalYearStart,
     },
     series: report.series.map((s) => seriesResults(s, f, words)),
+    groups: (report.groups ?? []).map(groupResults),
     callouts: report.callouts.map(callout),
     notes: report.notes.map((n) => ({file: portablePath(base, n.file), line: n.line, message: wordDataNote(words, n)})),
     history: report.history === null ? null : history(report.history),
@@ -118,6 +125,7 @@ function seriesResults(s: ResultsSeriesInput, f: Frequency, words: Words): Serie
     kind: s.plan.kind,
     hidden: s.plan.hidden,
     target: s.plan.target,
+    better: s.plan.better,
     periods: a.original.map((_, i) => label(i)),
     original: nums(a.original),
     decomposition:
@@ -232,8 +240,11 @@ function seriesResults(s: ResultsSeriesInput, f: Frequency, words: Words): Serie
                   },
             notes: a.forecast.notes.map((n) => wordNote(words, n)),
             options: plain(a.forecast.options) as Record<string, unknown>,
+            baseMean: s.combination?.baseMean ? nums(s.combination.baseMean) : null,
+            reconciliation: s.combination?.reconciliation ?? null,
           },
     outturn: a.outturn === null ? null : (plain(a.outturn) as SeriesResults['outturn']),
+    versusTarget: versusTargetResults(s.combination ?? undefined),
     callouts: s.callouts.map(callout),
     notes: a.notes.map((n) => wordNote(words, n)),
     options: plain(a.options) as Record<string, unknown>,
@@ -242,7 +253,7 @@ function seriesResults(s: ResultsSeriesInput, f: Frequency, words: Words): Serie
 
 type SeriesCycle = NonNullable<SeriesResults['cycle']>;
 
-function callout(c: CalloutRecord): ResultsV1['callouts'][number] {
+function callout(c: CalloutRecord): Results['callouts'][number] {
   return {
     id: c.id,
     seriesId: c.seriesId,
@@ -256,7 +267,7 @@ function callout(c: CalloutRecord): ResultsV1['callouts'][number] {
 }
 
 /** History in its declared key order; figures non-finite → null. */
-function history(h: History): NonNullable<ResultsV1['history']> {
+function history(h: History): NonNullable<Results['history']> {
   return {
     previousPeriod: h.previousPeriod,
     revisions: h.revisions.map((r) => ({

@@ -48,7 +48,7 @@ describe('archive', () => {
     const keys = ['schema', 'tool', 'resultsSchema', 'pack', 'plan', 'inputs', 'outputs', 'warnings'];
     expect(Object.keys(manifest)).toEqual(keys);
     expect(manifest.tool).toEqual({name: 'ebbflow', version: '0.1.0'});
-    expect(manifest.resultsSchema).toBe('ebbflow/results/v1');
+    expect(manifest.resultsSchema).toBe('ebbflow/results/v2');
     expect(manifest.pack.period).toBe('2026-10');
     expect(manifest.plan).toEqual({
       id: 'harbourline-monthly',

@@ -30,7 +30,7 @@ async function run(argv: string[], env: NodeJS.ProcessEnv = {}) {
 }
 
 const badInput = new InputError([
-  {file: 'pack.yaml', line: 12, column: 5, message: 'series[1].kind must be one of flow, stock'},
+  {file: 'pack.yaml', line: 12, column: 5, message: 'series[1].kind must be one of flow, stock, ratio'},
   {file: 'data/x.csv', line: 40, column: null, message: 'not a number: "n/a"'},
 ]);
 
@@ -156,7 +156,7 @@ describe('build', () => {
     const {code, stderr} = await run(['build', minimalPack, '--period', '2025-Q3..2025-Q4', '--formats', 'html']);
     expect(code).toBe(2);
     expect(stderr).toBe(
-      'pack.yaml:12:5: series[1].kind must be one of flow, stock\n' +
+      'pack.yaml:12:5: series[1].kind must be one of flow, stock, ratio\n' +
         'data/x.csv:40: not a number: "n/a"\n' +
         '2 problems; the 1 period folder built before were kept\n',
     );
@@ -184,7 +184,7 @@ describe('check', () => {
     const {code, stderr} = await run(['check', 'a.yaml', 'b.yaml']);
     expect(code).toBe(2);
     expect(stderr).toBe(
-      'pack.yaml:12:5: series[1].kind must be one of flow, stock\n' +
+      'pack.yaml:12:5: series[1].kind must be one of flow, stock, ratio\n' +
         'data/x.csv:40: not a number: "n/a"\n' +
         'b.yaml:3:1: pack.title is required\n' +
         '3 problems; nothing was written\n',

@@ -30,7 +30,17 @@ describe('a valid pack', async () => {
       fiscalYearStart: 4,
       browser: null,
     });
-    expect(plan.groups).toEqual([{id: 'money', title: 'Money', series: ['takings', 'staff']}]);
+    expect(plan.groups).toEqual([
+      {
+        id: 'money',
+        title: 'Money',
+        series: ['takings', 'staff'],
+        total: null,
+        adjustTotal: 'direct',
+        reconcile: 'mint',
+        line: 45,
+      },
+    ]);
   });
 
   test('resolves paths against the pack file', () => {

@@ -296,7 +296,7 @@ describe('a build killed part-way', () => {
       expect(original).not.toBe('absent');
 
       // While analysing: nothing of the archive has been touched yet.
-      expect(await buildAndKill('2026-10', true, {log: '10 series read'})).toBe('killed');
+      expect(await buildAndKill('2026-10', true, {log: ' series read'})).toBe('killed');
       expect(await completeOrAbsent(folder)).toBe(original);
 
       // While writing the temporary folder of a replacement: the old folder or, if the kill came late, the new one

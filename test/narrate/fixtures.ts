@@ -97,13 +97,20 @@ export function cycleOf(pattern: number[], n: number): number[] {
 import type {History} from '../../src/results/index.js';
 import type {Draft, Rule} from '../../src/narrate/context.js';
 import {wordsFor} from '../../src/words/index.js';
+import type {GroupResult, SeriesCombination} from '../../src/combine/index.js';
 import {analysisOptions, planFixture, seriesPlanFixture} from '../fixtures/plans.js';
 
 /** Run one rule on one series with the en-GB (or given) locale. */
 export function runRule(
   rule: Rule,
   analysis: SeriesAnalysis,
-  args: {series?: Partial<SeriesPlan>; plan?: Partial<Plan>; history?: History | null} = {},
+  args: {
+    series?: Partial<SeriesPlan>;
+    plan?: Partial<Plan>;
+    history?: History | null;
+    combination?: SeriesCombination | null;
+    groups?: GroupResult[];
+  } = {},
 ): Draft[] {
   const plan = makePlan(args.plan);
   const series = makeSeriesPlan(args.series);
@@ -115,5 +122,7 @@ export function runRule(
     history: args.history ?? null,
     words: wordsFor(plan.locale),
     isRate: series.unit === '%',
+    combination: args.combination ?? null,
+    groups: args.groups ?? [],
   });
 }

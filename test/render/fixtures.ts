@@ -148,9 +148,11 @@ export function seriesAnalysis(id: string, frequency: Frequency, end: number, le
           {method: 'Theta', mase: 0.81, smape: 4.2},
         ],
         points: Array.from({length: 6}, (_, k) => ({offset: length - 6 + k, forecast: original[length - 6 + k] * (1 + (rand() - 0.5) * 0.05)})),
+        paths: [],
       },
       options: {alpha: 0.31, beta: 0.02, gamma: 0.1, phi: 0.97},
       notes: [],
+      residuals: [],
     },
     outturn: {
       fiscalYear: 'FY2026',
@@ -224,7 +226,7 @@ export function makeReport(opts: FixtureOptions = {}): Report {
         chart: `chart-${id}-irregular`,
       },
     ];
-    return {plan, analysis, callouts, commentary: `${plan.label} in one paragraph.`};
+    return {plan, analysis, callouts, commentary: `${plan.label} in one paragraph.`, combination: null};
   });
   const plan = planFixture({
     id: 'monthly-pack',
@@ -240,7 +242,10 @@ export function makeReport(opts: FixtureOptions = {}): Report {
     branding: {...defaultBranding, footer: 'Harbourline Trading · internal'},
     sources: [source('trading', '/packs/harbourline/data/trading.csv', {line: 5})],
     series: series.map((s) => s.plan),
-    groups: count >= 3 ? [{id: 'sales', title: 'Sales and orders', series: ['series-1', 'series-2']}] : [],
+    groups:
+      count >= 3
+        ? [{id: 'sales', title: 'Sales and orders', series: ['series-1', 'series-2'], total: null, adjustTotal: 'direct', reconcile: 'mint', line: 1}]
+        : [],
   });
   const history: History | null = opts.history
     ? {
@@ -276,5 +281,6 @@ export function makeReport(opts: FixtureOptions = {}): Report {
     notes: [{file: '/packs/harbourline/data/trading.csv', line: 42, series: null, note: {code: 'outOfOrder', values: {line: '42'}}}],
     commentary: 'The pack in one paragraph.',
     history,
+    groups: [],
   };
 }

@@ -10,10 +10,13 @@ const sample = () =>
   ]);
 
 describe('toResults', () => {
-  it('uses the field names of the ebbflow/results/v1 contract (ARCHITECTURE.md)', () => {
+  it('uses the field names of the ebbflow/results/v2 contract (ARCHITECTURE.md)', () => {
     const r = toResults(sample());
-    expect(Object.keys(r)).toEqual(['schema', 'pack', 'series', 'callouts', 'notes', 'history']);
-    expect(r.schema).toBe('ebbflow/results/v1');
+    expect(Object.keys(r)).toEqual(['schema', 'pack', 'series', 'groups', 'callouts', 'notes', 'history']);
+    expect(r.schema).toBe('ebbflow/results/v2');
+    expect(r.groups).toEqual([]);
+    expect(r.series[0]).toMatchObject({better: 'higher', versusTarget: null});
+    expect(r.series[0].forecast).toMatchObject({baseMean: null, reconciliation: null});
     expect(r.pack).toMatchObject({title: 'Harbourline Goods: monthly review', period: '2026-10', frequency: 12});
     expect(r.pack.id).toBe('harbourline-monthly');
     expect(r.pack.locale).toBe('en-GB');
@@ -153,9 +156,29 @@ describe('parseResults', () => {
       /^out\/p\/2026-09\/results\.json: unreadable results file: series\[0\]\.original: /,
     );
     expect(() => parseResults('{"schema": "ebbflow/results/v9"}', 'x.json')).toThrow(
-      /x\.json: unreadable results file: schema is "ebbflow\/results\/v9", expected "ebbflow\/results\/v1"/,
+      /x\.json: unreadable results file: schema is "ebbflow\/results\/v9", expected "ebbflow\/results\/v2"/,
     );
     expect(() => parseResults('{not json', 'y.json')).toThrow(InputError);
     expect(() => parseResults('{not json', 'y.json')).toThrow(/^y\.json: unreadable results file: /);
+  });
+});
+
+describe('results v1', () => {
+  it('reads a v1 file as v2 with nothing reconciled, no groups and no target variances', () => {
+    const v2 = JSON.parse(resultsJson(sample()));
+    delete v2.groups;
+    for (const s of v2.series) {
+      delete s.better;
+      delete s.versusTarget;
+      if (s.forecast) {
+        delete s.forecast.baseMean;
+        delete s.forecast.reconciliation;
+      }
+    }
+    const read = parseResults(JSON.stringify({...v2, schema: 'ebbflow/results/v1'}));
+    expect(read.schema).toBe(RESULTS_SCHEMA);
+    expect(read.groups).toEqual([]);
+    expect(read.series[0]).toMatchObject({better: 'higher', versusTarget: null});
+    expect(read.series[0].forecast).toMatchObject({baseMean: null, reconciliation: null});
   });
 });

@@ -1,22 +1,21 @@
-import {wordsFor} from '../../words/index.js';
+import {en} from '../../words/catalog/en.js';
 
 /** The four cycle phases: above or below the long-run trend, and the gap's direction. */
 export type Phase = 'rising-above' | 'falling-above' | 'falling-below' | 'rising-below';
 
-const english = wordsFor('en-GB');
-
 /**
  * The phase labels results.json carries beside the phase code (`phaseLabel`), in English whatever the pack's
- * language, from the words module's vocabulary; the report words the phase code itself.
+ * language, from the words module's English catalogue (these messages take no arguments, so the catalogue text is
+ * the label; the analysis threads need not load the message formatter); the report words the phase code itself.
  */
 export const phaseLabels: Record<Phase, string> = {
-  'rising-above': english.t('phase.rising-above'),
-  'falling-above': english.t('phase.falling-above'),
-  'falling-below': english.t('phase.falling-below'),
-  'rising-below': english.t('phase.rising-below'),
+  'rising-above': en['phase.rising-above'],
+  'falling-above': en['phase.falling-above'],
+  'falling-below': en['phase.falling-below'],
+  'rising-below': en['phase.rising-below'],
 };
 
-export const onTrendLabel = english.t('phase.onTrend');
+export const onTrendLabel = en['phase.onTrend'];
 
 /** The plain-words stationarity verdict results.json carries (`stationarity.summary`), in English. */
 export function stationaritySummary(level: boolean, differences: boolean, constantVariance: boolean): string {

@@ -1,5 +1,6 @@
 import {reseasonalise} from './adjustedForecast.js';
-import {arimaRunningTotals, fitArima, forecastArima, type ArimaOrder} from './arima.js';
+import {arimaRunningTotals, fitArima, forecastArima, type ArimaFit, type ArimaOrder} from './arima.js';
+import {inSampleSeasonal} from './inSampleSeasonal.js';
 import {selectArima} from './arimaSelect.js';
 import type {Forecast} from './model.js';
 import type {SeasonalAdjustment} from './seasonalAdjustment.js';
@@ -22,7 +23,11 @@ export interface ArimaMember {
  * member shares (methods.ts). Null when the series is too short for any order.
  * Complexity: up to nine ARIMA fits (search) or one (refit). NaN policy: rejects NaN.
  */
-export function fitArimaMember(adjustment: SeasonalAdjustment, order?: ArimaOrder): ArimaMember | null {
+export function fitArimaMember(
+  values: Float64Array,
+  adjustment: SeasonalAdjustment,
+  order?: ArimaOrder,
+): ArimaMember | null {
   const fit = (order && fitArima(adjustment.adjusted, order)) || selectArima(adjustment.adjusted);
   if (!fit) return null;
   const {p, d, q} = fit.order;
@@ -39,6 +44,7 @@ export function fitArimaMember(adjustment: SeasonalAdjustment, order?: ArimaOrde
       const plain = forecastArima(fit, {h, levels});
       const label = adjustment.seasonal ? `${fit.method} on STL-adjusted data` : fit.method;
       const forecast = reseasonalise(plain, adjustment, label);
+      forecast.fitted = inSampleSeasonal(arimaFitted(adjustment.adjusted, fit), values, adjustment);
       if (adjustment.seasonal) {
         const factors = adjustment.kind === 'multiplicative' ? adjustment.ahead(h) : undefined;
         forecast.runningTotals = arimaRunningTotals(fit, forecast.mean, forecast.levels, factors);
@@ -47,4 +53,13 @@ export function fitArimaMember(adjustment: SeasonalAdjustment, order?: ArimaOrde
     },
     order: order ?? fit.order,
   };
+}
+
+/**
+ * In-sample one-step ARIMA forecasts of the series it was fitted to: yₜ − eₜ where the CSS recursion has a residual
+ * (from t = p on, of the differenced series when d = 1); NaN before.
+ */
+function arimaFitted(y: Float64Array, fit: ArimaFit): Float64Array {
+  const d = fit.order.d;
+  return Float64Array.from(y, (v, t) => (t - d >= fit.order.p ? v - fit.residuals[t - d] : NaN));
 }

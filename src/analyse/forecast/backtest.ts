@@ -6,7 +6,8 @@ import {fitMethod, type MethodFit} from './methods.js';
  * Rolling-origin back-test: refit the method on the first n − k, n − k + 1, …, n − 1 values and forecast up to
  * `horizon` periods from each origin (fewer at the last origins, where the data end); pool all errors into one
  * MASE (each origin scaled by its own in-sample seasonal-naive MAE) and one sMAPE. Benchmarks (seasonal naive,
- * Naive2) go through the same origins. The one-step forecasts from every origin are kept for the chart.
+ * Naive2) go through the same origins. The one-step forecasts from every origin are kept for the chart, and the
+ * main method's whole path from every origin for the back-test of reconciled forecasts.
  * The method is refitted from `fit`, its fit on the full series (method.ts): each origin keeps the model classes
  * chosen there — the ETS models kept, the ARIMA order — and re-estimates them (a few fits instead of up to
  * fifteen ETS models and nine ARIMA orders; common practice for back-testing automatic methods), from the usual
@@ -46,6 +47,7 @@ export function rollingBacktest(
   const benchmarks = ['Seasonal naive', 'Naive2'];
   const totals = Array.from({length: 1 + benchmarks.length}, () => ({scaled: 0, smape: 0, count: 0}));
   const points: {offset: number; forecast: number}[] = [];
+  const paths: {offset: number; mean: number[]}[] = [];
   let last = fit;
   for (let o = n - k; o < n; o++) {
     const train = values.subarray(0, o);
@@ -60,7 +62,10 @@ export function rollingBacktest(
       t.scaled += acc.MASE * steps;
       t.smape += acc.sMAPE * steps;
       t.count += steps;
-      if (j === 0) points.push({offset: offset + o, forecast: fc.mean[0]});
+      if (j === 0) {
+        points.push({offset: offset + o, forecast: fc.mean[0]});
+        paths.push({offset: offset + o, mean: Array.from(fc.mean)});
+      }
     });
   }
   const score = (j: number) => ({mase: totals[j].scaled / totals[j].count, smape: totals[j].smape / totals[j].count});
@@ -70,5 +75,6 @@ export function rollingBacktest(
     ...score(0),
     benchmarks: benchmarks.map((method, j) => ({method, ...score(j + 1)})),
     points,
+    paths,
   };
 }

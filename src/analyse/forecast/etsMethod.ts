@@ -1,4 +1,5 @@
 import {reseasonalise} from './adjustedForecast.js';
+import {inSampleSeasonal} from './inSampleSeasonal.js';
 import {akaikeWeights} from './akaikeWeights.js';
 import {fitEts, type EtsFit} from './etsFit.js';
 import {forecastEtsMixture, simulateEtsMixture} from './etsMixture.js';
@@ -81,19 +82,26 @@ export function fitEtsMethod(
   const starts = (warm: boolean): EtsStart[] =>
     kept.map((f) => (warm ? {spec: f.spec, params: f.params, initialStates: f.initialStates} : {spec: f.spec}));
   return {
-    forecast: (options) => ({forecast: forecastKept(kept, weights, sa, options), details}),
+    forecast: (options) => ({forecast: forecastKept(values, kept, weights, sa, options), details}),
     refit: (next, {warm}) => fitEtsMethod(next, period, {weighted, models: starts(warm)}),
   };
 }
 
 /** The weighted mixture's forecast (reseasonalised after a seasonal adjustment), with running totals if asked. */
 function forecastKept(
+  values: Float64Array,
   kept: EtsFit[],
   weights: Float64Array,
   sa: SeasonalAdjustment | null,
   {h, levels, runningTotals = true}: MethodForecastOptions,
 ): Forecast {
   const mixture = forecastEtsMixture(kept, weights, {h, levels});
+  // In-sample one-step forecasts of the mixture (forecast reconciliation estimates its error covariance from them).
+  const fitted = new Float64Array(kept[0].fitted.length);
+  kept.forEach((f, k) => {
+    for (let t = 0; t < fitted.length; t++) fitted[t] += weights[k] * f.fitted[t];
+  });
+  mixture.fitted = fitted;
   if (!sa) {
     if (runningTotals) {
       const paths = simulateEtsMixture(kept, weights, {h});
@@ -103,6 +111,7 @@ function forecastKept(
   }
   const method = sa.seasonal ? `${mixture.method} on seasonally adjusted data` : mixture.method;
   const forecast = reseasonalise(mixture, sa, method);
+  forecast.fitted = inSampleSeasonal(fitted, values, sa);
   if (runningTotals) {
     const paths = simulateEtsMixture(kept, weights, {h});
     const factors = sa.ahead(h);

@@ -117,8 +117,20 @@ export function forecastSeries(
       ...run.details,
     },
     notes,
+    residuals: forecast.fitted ? inSampleErrors(values, forecast.fitted, prepared.first) : [],
     ...(totals ? {runningTotals: totals} : {}),
   };
+}
+
+/**
+ * yₜ − ŷₜ|ₜ₋₁ on the series' own positions: the fit covers values[first …]; NaN where the value is missing (it was
+ * filled for fitting) or the model has no fitted value.
+ */
+function inSampleErrors(values: Float64Array, fitted: Float64Array, first: number): number[] {
+  return Array.from(values, (v, i) => {
+    const t = i - first;
+    return t >= 0 && t < fitted.length ? v - fitted[t] : NaN;
+  });
 }
 
 function isFinitePath(f: Forecast): boolean {

@@ -126,7 +126,7 @@ function thetaFit(values: Float64Array, period: number): MethodFit {
 
 /** `arima`: the member on robust-STL-adjusted data, the naive method when no order fits; refits keep the order. */
 function arimaFit(values: Float64Array, period: number, order?: ArimaOrder): MethodFit {
-  const member = fitArimaMember(stlSeasonalAdjustment(values, period), order);
+  const member = fitArimaMember(values, stlSeasonalAdjustment(values, period), order);
   return {
     forecast: (options) =>
       member
@@ -152,7 +152,7 @@ function combinationFit(
 ): MethodFit {
   const adjustment = stlSeasonalAdjustment(values, period);
   const theta = fitTheta(values, {period, adjust: () => adjustment});
-  const arima: ArimaMember | null = name === 'ets-theta-arima' ? fitArimaMember(adjustment, order) : null;
+  const arima: ArimaMember | null = name === 'ets-theta-arima' ? fitArimaMember(values, adjustment, order) : null;
   return {
     forecast: (options) => {
       const {h, levels} = options;

@@ -7,14 +7,14 @@ export interface Placed {
   group: number | null;
 }
 
-/** The visible series in report order: groups first, in plan order; then every series not in a group. */
+/** The visible series in report order: groups first, in plan order (a group's total before its parts); then the rest. */
 export function orderSeries(report: Report): Placed[] {
   const visible = report.series.filter((s) => !s.plan.hidden);
   const byId = new Map(visible.map((s) => [s.plan.id, s]));
   const placed = new Set<string>();
   const out: Placed[] = [];
   report.plan.groups.forEach((group, index) => {
-    for (const id of group.series) {
+    for (const id of group.total === null ? group.series : [group.total, ...group.series]) {
       const entry = byId.get(id);
       if (!entry || placed.has(id)) continue;
       placed.add(id);

@@ -262,6 +262,10 @@ export const de: Catalog = {
   'callout.forecastCheck':
     'Der Bericht für {publishedIn} prognostizierte {forecast} für {label} für {period}; der Istwert lag bei {actual} ({error}), {inside, select, yes {innerhalb} other {außerhalb}} des {level}-%-Intervalls.',
 
+  'callout.drivers':
+    '{label} für {period}: {rose, select, yes {Anstieg} other {Rückgang}} um {change} gegenüber Vorjahr, getragen von {driver}, {points}{against, select, none {} subtracted {; {againstLabel} kostete {againstPoints}} other {; {againstLabel} brachte {againstPoints}}}.',
+  'callout.versusTarget':
+    '{label} {span, select, period {für {period}} other {im Geschäftsjahr bis heute}}: {actual}, {percent} {above, select, yes {über} other {unter}} dem Planwert von {target} ({favourable, select, yes {günstig} other {ungünstig}}).{calendar, select, none {} other { Der Kalender (Arbeitstage und Ostern) erklärt davon {calendar}.}}',
   'para.headline':
     '{label} für {period}: {value}{change, select, none {} other {, {change} gegenüber Vorjahr}}',
   'para.headlineMissing': 'Für {label} liegt noch kein Wert für {period} vor',
@@ -307,6 +311,8 @@ export const de: Catalog = {
   'open.outlook':
     'Für {period} zeigen die Prognosen einen Anstieg in {rising, plural, =0 {keiner Reihe} one {# Reihe} other {# Reihen}} und einen Rückgang in {falling, plural, =0 {keiner} other {#}}.',
 
+  'rule.drivers': 'Wachstumsbeiträge',
+  'rule.versus-target': 'Abweichung vom Planwert',
   'rule.year-on-year': 'Veränderung gegenüber Vorjahr',
   'rule.adjusted-change': 'saisonbereinigte Veränderung',
   'rule.trend': 'Trend-Konjunktur-Komponente',
@@ -391,6 +397,12 @@ export const de: Catalog = {
     'Daten enden mit {last}: {frequency, select, monthly {{n, plural, one {# Monat} other {# Monate}}} quarterly {{n, plural, one {# Quartal} other {# Quartale}}} other {{n, plural, one {# Woche} other {# Wochen}}}} bis zum Berichtszeitraum {period} fehlen',
   'note.inferredPeriod': 'Berichtszeitraum {period}: Das Paket legt keinen fest, daher gilt die letzte Periode mit Daten',
   'note.ofSeries': '{series}: {text}',
+  'note.partsGap':
+    'Gruppe {group}: Die Teile ergeben in {periods, plural, one {# Periode} other {# Perioden}} nicht {total}; die größte Abweichung beträgt {gap} ({percent} %) für {period}',
+  'note.mintFallback': 'Gruppe {group}: Die Kovarianz der Einschrittfehler ist unbrauchbar ({reason}); Prognosen per OLS statt MinT abgestimmt',
+  'note.notReconciled':
+    'Gruppe {group}: Prognosen nicht abgestimmt ({why, select, noForecast {{series} hat keine Prognose} other {die Prognosen sind nicht endlich}})',
+  'note.divisionByZero': 'Division durch null in {n, plural, one {Periode} other {den Perioden}} {list}{more, plural, =0 {} other { und # weiteren}}; als fehlend belassen',
   'note.noValuesToChart': 'Die Reihe hat keine Werte für eine Grafik.',
 
   // Archive index page

@@ -262,6 +262,10 @@ export const en = {
   'callout.forecastCheck':
     'The {publishedIn} pack forecast {forecast} of {label} for {period}; the actual came in at {actual} ({error}), {inside, select, yes {inside} other {outside}} the {level}% range.',
 
+  'callout.drivers':
+    '{label} {rose, select, yes {rose} other {fell}} {change} on a year earlier in {period}, driven by {driver}, {points}{against, select, none {} subtracted {; {againstLabel} subtracted {againstPoints}} other {; {againstLabel} added {againstPoints}}}.',
+  'callout.versusTarget':
+    '{label} came to {actual} {span, select, period {in {period}} other {over the fiscal year to date}}, {percent} {above, select, yes {above} other {below}} the target of {target} ({favourable, select, yes {favourable} other {unfavourable}}).{calendar, select, none {} other { The calendar (working days and Easter) accounts for {calendar} of it.}}',
   // Commentary: one paragraph per series (name once, then "the series")
   'para.headline':
     '{label} {stock, select, yes {stood at} other {came to}} {value} in {period}{change, select, none {} other {, {change} on a year earlier}}',
@@ -305,6 +309,8 @@ export const en = {
   'open.outlook':
     'For {period}, the forecasts point to a rise in {rising, plural, one {# series} other {# series}} and a fall in {falling, plural, =0 {none} other {#}}.',
 
+  'rule.drivers': 'contributions',
+  'rule.versus-target': 'variance against target',
   'rule.year-on-year': 'year-on-year change',
   'rule.adjusted-change': 'adjusted change',
   'rule.trend': 'trend-cycle',
@@ -390,6 +396,12 @@ export const en = {
     'data end at {last}: the {frequency, select, monthly {{n, plural, one {# month} other {# months}}} quarterly {{n, plural, one {# quarter} other {# quarters}}} other {{n, plural, one {# week} other {# weeks}}}} up to the review period {period} are missing',
   'note.inferredPeriod': 'review period {period}: the pack sets none, so the last period with data is used',
   'note.ofSeries': '{series}: {text}',
+  'note.partsGap':
+    'group {group}: the parts do not add up to {total} in {periods, plural, one {# period} other {# periods}}; the largest gap is {gap} ({percent}%) in {period}',
+  'note.mintFallback': 'group {group}: the one-step error covariance is unusable ({reason}); forecasts reconciled by OLS instead of MinT',
+  'note.notReconciled':
+    'group {group}: forecasts not reconciled ({why, select, noForecast {{series} has no forecast} other {the forecasts are not finite}})',
+  'note.divisionByZero': 'division by zero in {n, plural, one {period} other {periods}} {list}{more, plural, =0 {} other { and # more}}; left missing',
   'note.noValuesToChart': 'The series has no values to chart.',
 
   // Archive index page

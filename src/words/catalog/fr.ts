@@ -263,6 +263,10 @@ export const fr: Catalog = {
   'callout.forecastCheck':
     'Le rapport de {publishedIn} prévoyait {forecast} pour {label} pour {period} ; le réalisé est de {actual} ({error}), {inside, select, yes {dans} other {hors de}} l’intervalle à {level} %.',
 
+  'callout.drivers':
+    '{label} pour {period} : {rose, select, yes {hausse} other {baisse}} de {change} en glissement annuel, portée par {driver}, {points}{against, select, none {} subtracted { ; {againstLabel} a retranché {againstPoints}} other { ; {againstLabel} a ajouté {againstPoints}}}.',
+  'callout.versusTarget':
+    '{label} {span, select, period {pour {period}} other {sur l’exercice à date}} : {actual}, {percent} {above, select, yes {au-dessus} other {au-dessous}} de l’objectif de {target} ({favourable, select, yes {favorable} other {défavorable}}).{calendar, select, none {} other { Le calendrier (jours ouvrés et Pâques) en explique {calendar}.}}',
   'para.headline': '{label} pour {period} : {value}{change, select, none {} other {, {change} en glissement annuel}}',
   'para.headlineMissing': 'Pas encore de valeur de {label} pour {period}',
   'para.unusualYoy': ', un mouvement inhabituellement fort pour la série',
@@ -306,6 +310,8 @@ export const fr: Catalog = {
   'open.outlook':
     'Pour {period}, les prévisions annoncent une hausse pour {rising, plural, =0 {aucune série} one {# série} other {# séries}} et une baisse pour {falling, plural, =0 {aucune} other {#}}.',
 
+  'rule.drivers': 'contributions à l’évolution',
+  'rule.versus-target': 'écart à l’objectif',
   'rule.year-on-year': 'évolution en glissement annuel',
   'rule.adjusted-change': 'évolution CVS',
   'rule.trend': 'tendance-cycle',
@@ -390,6 +396,12 @@ export const fr: Catalog = {
     'les données s’arrêtent à {last} : {frequency, select, monthly {{n, plural, one {# mois manque} other {# mois manquent}}} quarterly {{n, plural, one {# trimestre manque} other {# trimestres manquent}}} other {{n, plural, one {# semaine manque} other {# semaines manquent}}}} jusqu’à la période sous revue {period}',
   'note.inferredPeriod': 'période sous revue {period} : le dossier n’en fixe pas, la dernière période avec des données est retenue',
   'note.ofSeries': '{series} : {text}',
+  'note.partsGap':
+    'groupe {group} : les parties ne font pas {total} sur {periods, plural, one {# période} other {# périodes}} ; le plus grand écart est de {gap} ({percent} %) pour {period}',
+  'note.mintFallback': 'groupe {group} : la covariance des erreurs à un pas est inutilisable ({reason}) ; prévisions réconciliées par MCO au lieu de MinT',
+  'note.notReconciled':
+    'groupe {group} : prévisions non réconciliées ({why, select, noForecast {{series} n’a pas de prévision} other {les prévisions ne sont pas finies}})',
+  'note.divisionByZero': 'division par zéro pour {n, plural, one {la période} other {les périodes}} {list}{more, plural, =0 {} other { et # autres}} ; laissé manquant',
   'note.noValuesToChart': 'La série n’a aucune valeur à représenter.',
 
   // Archive index page
