@@ -99,7 +99,7 @@ export function narrate(input: NarrateInput): Narration {
   for (const {plan: series, analysis} of visible) {
     paragraphs.set(series.id, seriesParagraph({series, analysis, callouts: bySeries.get(series.id) ?? [], words}));
   }
-  const opening = packParagraph({series: visible, callouts: pack, period: input.period, words});
+  const opening = packParagraph({series: visible, callouts: pack, period: input.period, words, groups: input.combined?.groups ?? []});
   return {pack, bySeries, opening, paragraphs};
 }
 

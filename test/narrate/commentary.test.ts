@@ -4,6 +4,7 @@ import type {SeriesPlan} from '../../src/config/plan.js';
 import {seriesParagraph} from '../../src/narrate/commentary/seriesParagraph.js';
 import {packParagraph} from '../../src/narrate/commentary/packParagraph.js';
 import type {Callout} from '../../src/narrate/types.js';
+import type {GroupResult} from '../../src/combine/index.js';
 import {wordsFor} from '../../src/words/index.js';
 import {makeAdjustment, makeAnalysis, makeChanges, makeSeriesPlan, OCT_2026} from './fixtures.js';
 
@@ -212,6 +213,29 @@ describe('pack paragraph', () => {
         'One figure calls for attention: Shop footfall (unusual value). ' +
         'For November 2026, the forecasts point to a rise in 1 series and a fall in 1.',
     );
+  });
+
+  it('names the part that drove a group’s total, in each language', () => {
+    const regions: GroupResult = {
+      id: 'regions',
+      title: 'Regions',
+      total: 'net-sales',
+      parts: ['footfall'],
+      adjustTotal: 'direct',
+      reconcile: 'mint',
+      partsGap: null,
+      contributions: {
+        yearOnYear: {period: '2026-10', total: 8.5, parts: {footfall: 6.2}},
+        periodOnPeriodAdjusted: {period: '2026-10', total: 0, parts: {footfall: 0}},
+        history: [],
+      },
+      indirect: null,
+    };
+    const sentence = (locale: string) =>
+      packParagraph({series, callouts: [alert], period: OCT_2026, words: wordsFor(locale), groups: [regions]}).split(/(?<=\.) /)[1];
+    expect(sentence('en-GB')).toBe('Net sales rose 8.5% on a year earlier, driven most by Shop footfall (+6.2 pp).');
+    expect(sentence('de-DE')).toBe('Net sales: Anstieg um 8,5\u00a0% gegenüber Vorjahr, vor allem getragen von Shop footfall (+6,2 Pp.).');
+    expect(sentence('fr-FR')).toBe('Net sales : hausse de 8,5\u00a0% en glissement annuel, portée surtout par Shop footfall (+6,2 pt).');
   });
 
   it('says the same in German and French, and that nothing calls for an alert', () => {

@@ -1,10 +1,14 @@
 import type {SeriesPlan} from '../../config/plan.js';
 import type {SeriesAnalysis} from '../../analyse/types.js';
 import type {MessageKey, Words} from '../../words/index.js';
+import type {GroupResult} from '../../combine/index.js';
 import type {Callout} from '../types.js';
+import {mainDrivers} from '../callouts/drivers.js';
 
 /** A gap to target within this many percent reads "in line with" it (as in the outturn callout). */
 const IN_LINE_PCT = 0.5;
+/** At most this many sentences. */
+const MAX_SENTENCES = 6;
 /** Alerts named in the surprises sentence. */
 const NAMED_ALERTS = 2;
 
@@ -16,16 +20,19 @@ export interface PackParagraphInput {
   /** Review period index. */
   period: number;
   words: Words;
+  /** Groups with a total, whose contributions name the main drivers (combine stage); empty without them. */
+  groups?: readonly GroupResult[];
 }
 
 /**
  * The opening paragraph of the summary page, four to six sentences on the review period as a whole, by fixed
- * rules: how many series stand above their level a year earlier and which grew most and least; how many
+ * rules: how many series stand above their level a year earlier and which grew most and least; for each group
+ * with a total, the part that drove it most (its contribution in points); how many
  * trend-cycles rise, fall or stay flat; each series with a target against it at the fiscal year's end; the alerts
  * among the ranked callouts (the largest surprises), or that there are none; and how many next-period forecasts
  * point up or down. Pure and deterministic; ties go to the series first in the pack.
  */
-export function packParagraph({series, callouts, period, words: w}: PackParagraphInput): string {
+export function packParagraph({series, callouts, period, words: w, groups = []}: PackParagraphInput): string {
   if (series.length === 0) return '';
   const frequency = series[0].analysis.frequency;
   const sentences: string[] = [];
@@ -45,6 +52,22 @@ export function packParagraph({series, callouts, period, words: w}: PackParagrap
         bestChange: w.percent(best.analysis.changes.yearOnYear),
         worst: worst.plan.label,
         worstChange: w.percent(worst.analysis.changes.yearOnYear),
+      }),
+    );
+  }
+
+  const labelOf = new Map(series.map((s) => [s.plan.id, s.plan.label]));
+  for (const g of groups) {
+    const {total, parts} = g.contributions.yearOnYear;
+    const found = Number.isFinite(total) ? mainDrivers(total, parts) : null;
+    if (found === null || !labelOf.has(g.total)) continue;
+    sentences.push(
+      w.t('open.drivers', {
+        label: labelOf.get(g.total)!,
+        rose: total >= 0 ? 'yes' : 'no',
+        change: w.share(Math.abs(total)),
+        driver: labelOf.get(found.driver.id) ?? found.driver.id,
+        points: w.points(found.driver.points),
       }),
     );
   }
@@ -88,5 +111,5 @@ export function packParagraph({series, callouts, period, words: w}: PackParagrap
       }),
     );
   }
-  return sentences.join(' ');
+  return sentences.slice(0, MAX_SENTENCES).join(' ');
 }

@@ -299,6 +299,7 @@ export const de: Catalog = {
 
   'open.yoy':
     'Für {period} {up, plural, =0 {lag keine} one {lag #} other {lagen #}} von {n, plural, one {# Reihe} other {# Reihen}} über dem Vorjahr{best, select, none {} other {; am stärksten wuchs {best} ({bestChange}), am schwächsten {worst} ({worstChange})}}.',
+  'open.drivers': '{label}: {rose, select, yes {Anstieg} other {Rückgang}} um {change} gegenüber Vorjahr, vor allem getragen von {driver} ({points}).',
   'open.trend':
     'Die Trend-Konjunktur-Komponente steigt in {rising, plural, =0 {keiner Reihe} one {# Reihe} other {# Reihen}}, fällt in {falling, plural, =0 {keiner} other {#}} und verläuft seitwärts in {flat, plural, =0 {keiner} other {#}}.',
   'open.target': 'Nach aktueller Prognose {list}.',

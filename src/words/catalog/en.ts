@@ -298,6 +298,7 @@ export const en = {
   // Commentary: the opening paragraph of the pack
   'open.yoy':
     'In {period}, {up, plural, =0 {none} other {#}} of {n, plural, one {the # series} other {the # series}} stood above their level a year earlier{best, select, none {} other {; {best} grew most ({bestChange}) and {worst} least ({worstChange})}}.',
+  'open.drivers': '{label} {rose, select, yes {rose} other {fell}} {change} on a year earlier, driven most by {driver} ({points}).',
   'open.trend':
     'The trend-cycle is rising in {rising, plural, one {# series} other {# series}}, falling in {falling, plural, =0 {none} one {#} other {#}} and flat in {flat, plural, =0 {none} one {#} other {#}}.',
   'open.target': 'On current forecasts, {list}.',

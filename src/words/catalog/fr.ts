@@ -298,6 +298,7 @@ export const fr: Catalog = {
 
   'open.yoy':
     'Pour {period}, {up, plural, =0 {aucune des {n, plural, one {# série} other {# séries}} ne dépassait son} one {# des {n, plural, one {# série} other {# séries}} dépassait son} other {# des {n, plural, one {# série} other {# séries}} dépassaient leur}} niveau d’un an plus tôt{best, select, none {} other { ; {best} a le plus progressé ({bestChange}) et {worst} le moins ({worstChange})}}.',
+  'open.drivers': '{label} : {rose, select, yes {hausse} other {baisse}} de {change} en glissement annuel, portée surtout par {driver} ({points}).',
   'open.trend':
     'La tendance-cycle est en hausse pour {rising, plural, =0 {aucune série} one {# série} other {# séries}}, en baisse pour {falling, plural, =0 {aucune} other {#}} et stable pour {flat, plural, =0 {aucune} other {#}}.',
   'open.target': 'Selon les prévisions actuelles, {list}.',
