@@ -16,30 +16,31 @@ export interface Series {
    */
   ahead: Float64Array;
   sourceId: string;
-  /** Absolute path of the CSV it came from. */
+  /** Absolute path of the CSV or workbook it came from; the pack file for a query source. */
   file: string;
   notes: DataNote[];
 }
 
 /**
- * Something worth telling the reader about the data (not fatal), as a coded note the words module words in the
- * pack's language; `series` is the id of the series it is about, or null for the whole file or pack.
+ * Something worth telling the reader about the data (not fatal): either a coded note that the words module words in
+ * the pack's language (`note`, with `series` the id of the series it is about, or null), or a sentence of the reading
+ * stages (`message`, English; the notes of ingest and derive that are not coded yet).
  */
-export interface DataNote {
-  file: string;
-  line: number | null;
-  series: string | null;
-  note: Note;
-}
+export type DataNote = {file: string; line: number | null} & (
+  | {series: string | null; note: Note; message?: undefined}
+  | {message: string; series?: undefined; note?: undefined}
+);
 
-/** An input file as read, for the manifest and the data-notes page. */
+/** An input file (or query) as read, for the manifest and the data-notes page. */
 export interface InputFile {
-  /** Absolute path. */
+  /** Absolute path; for a query, `<source id> (<engine> query)`. */
   file: string;
   sha256: string;
   bytes: number;
   /** Data rows read (header excluded). */
   rows: number;
+  /** Query sources: the engine and the query text as written in the pack (the hash is of the rows it returned). */
+  query?: {engine: 'duckdb' | 'postgres'; text: string};
 }
 
 /** Everything ingest produced for one pack. */

@@ -19,8 +19,12 @@ export function wordNote(words: Words, note: Note): string {
   return words.t(`note.${note.code}` as MessageKey, note.values);
 }
 
-/** A data note in words, led by the id of its series when it is about one (`net-sales: 3 missing months: …`). */
-export function wordDataNote(words: Words, note: {series: string | null; note: Note}): string {
+/**
+ * A data note in words, led by the id of its series when it is about one (`net-sales: 3 missing months: …`); a note
+ * that came as a sentence is given as it is.
+ */
+export function wordDataNote(words: Words, note: {series?: string | null; note?: Note; message?: string}): string {
+  if (note.note === undefined) return note.message ?? '';
   const text = wordNote(words, note.note);
-  return note.series === null ? text : words.t('note.ofSeries', {series: note.series, text});
+  return note.series == null ? text : words.t('note.ofSeries', {series: note.series, text});
 }

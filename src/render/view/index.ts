@@ -77,7 +77,7 @@ export function buildView(report: Report, logo: string | null): ViewModel {
     notes: report.notes.map((n) => {
       const file = relative(dirname(plan.packFile), n.file) || n.file;
       // The reader knows a series by its label, not by the id the pack file gives it.
-      const note = {...n, series: n.series === null ? null : (labels.get(n.series) ?? n.series)};
+      const note = n.series == null ? n : {...n, series: labels.get(n.series) ?? n.series};
       return {where: n.line != null ? w.t('label.lineOf', {file, line: String(n.line)}) : file, message: wordDataNote(w, note)};
     }),
     builtWith: w.t('label.builtWith', {version: report.toolVersion, period}),
