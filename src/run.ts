@@ -18,6 +18,7 @@ import {chartPrefetch} from './render/chartPrefetch.js';
 import type {Report} from './render/types.js';
 import {archive, refuseExisting} from './archive/index.js';
 import {formatPeriod} from './time/period.js';
+import {wordNote, wordsFor} from './words/index.js';
 import {toolVersion} from './version.js';
 import {InputError, formatProblem, type Problem} from './errors.js';
 import type {Logger} from './log.js';
@@ -86,7 +87,7 @@ export async function build(request: BuildRequest, log: Logger): Promise<BuildSu
       outDir: plan.outDir,
       force: request.force,
       plan: portablePlan(plan),
-      warnings: runWarnings(analyses),
+      warnings: runWarnings(plan, analyses),
     });
     log.info(`${plan.id} ${periodLabel}: written to ${written.folder}`);
     const {folder, outputs} = written;
@@ -147,9 +148,11 @@ function narrated(plan: Plan, data: Dataset, combined: Combined, history: Histor
       plan: s,
       analysis: analyses[i],
       callouts: narration.bySeries.get(s.id) ?? [],
+      commentary: narration.paragraphs.get(s.id) ?? '',
       combination: combined.series.get(s.id) ?? null,
     })),
     callouts: narration.pack,
+    commentary: narration.opening,
     inputs: data.inputs,
     notes: [...data.notes, ...combined.notes],
     history,
@@ -157,10 +160,11 @@ function narrated(plan: Plan, data: Dataset, combined: Combined, history: Histor
   };
 }
 
-/** What the manifest lists as the run's warnings: each series' notes, prefixed with its id. */
-function runWarnings(analyses: SeriesAnalysis[]): string[] {
+/** What the manifest lists as the run's warnings: each series' notes in the pack's language, prefixed with its id. */
+function runWarnings(plan: Plan, analyses: SeriesAnalysis[]): string[] {
+  const words = wordsFor(plan.locale);
   return analyses.flatMap((a) =>
-    [a.notAdjustedReason ?? [], a.notes, a.forecast?.notes ?? []].flat().map((note) => `${a.id}: ${note}`),
+    [a.notAdjustedReason ?? [], a.notes, a.forecast?.notes ?? []].flat().map((note) => `${a.id}: ${wordNote(words, note)}`),
   );
 }
 

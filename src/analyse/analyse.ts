@@ -1,4 +1,5 @@
 import {periodsPerYear} from '../time/period.js';
+import type {Note} from '../words/index.js';
 import {adjustSeries} from './decompose/index.js';
 import {analyseCycle} from './cycle/index.js';
 import {fiscalOutturn, forecastSeries} from './forecast/index.js';
@@ -26,18 +27,18 @@ const MAX_MAGNITUDE = 1e15;
  */
 export function analyseSeries(input: SeriesInput): SeriesAnalysis {
   const {id, frequency, start, kind, options} = input;
-  const notes: string[] = [];
+  const notes: Note[] = [];
   const values = finiteOrMissing(input.values, notes);
   const range = magnitudeProblem(values);
   const usable = range === null;
   if (range) notes.push(range);
   const constant = usable ? constantValue(values, 2) : null;
   if (constant !== null) {
-    notes.push(`The series is constant at ${constant}: there is no seasonal pattern, trend or cycle to estimate.`);
+    notes.push({code: 'constant', values: {value: String(constant)}});
   }
 
   const adjusted = usable
-    ? guarded(notes, 'seasonal adjustment', () =>
+    ? guarded(notes, 'adjustment', () =>
         adjustSeries(values, {
           frequency,
           start,
@@ -50,12 +51,16 @@ export function analyseSeries(input: SeriesInput): SeriesAnalysis {
       )
     : null;
   const adjustment = adjusted?.ok ? adjusted.adjustment : null;
-  const notAdjustedReason = adjusted?.ok ? null : adjusted ? adjusted.reason : (range ?? 'The seasonal adjustment failed.');
+  const notAdjustedReason: Note | null = adjusted?.ok
+    ? null
+    : adjusted
+      ? adjusted.reason
+      : (range ?? {code: 'adjustmentFailed', values: {}});
   const sa = adjustment ? Float64Array.from(adjustment.adjusted) : Float64Array.from(values);
   const irregular = adjustment ? Float64Array.from(adjustment.irregular) : undefined;
 
   const cycled = usable
-    ? guarded(notes, 'trend and cycle', () => analyseCycle(sa, {frequency, options: options.cycle, irregular}))
+    ? guarded(notes, 'cycle', () => analyseCycle(sa, {frequency, options: options.cycle, irregular}))
     : null;
   if (cycled && !cycled.ok) notes.push(cycled.reason);
   const cycle = cycled?.ok ? cycled.cycle : null;
@@ -72,11 +77,11 @@ export function analyseSeries(input: SeriesInput): SeriesAnalysis {
   });
 
   const enough = hasData(values, periodsPerYear[frequency] > 12 ? 4 : 2);
-  if (usable && !enough) notes.push('Too few values to forecast.');
+  if (usable && !enough) notes.push({code: 'tooFewToForecast', values: {}});
   const forecast =
     usable && enough ? guarded(notes, 'forecast', () => forecastSeries(values, {frequency, options: options.forecast})) : null;
   const outturn = forecast
-    ? guarded(notes, 'fiscal-year outturn', () =>
+    ? guarded(notes, 'outturn', () =>
         fiscalOutturn({values, start, frequency, fiscalYearStart: input.fiscalYearStart, kind, forecast, target: input.target}),
       )
     : null;
@@ -99,17 +104,17 @@ export function analyseSeries(input: SeriesInput): SeriesAnalysis {
 }
 
 /** Run one engine; if it throws, say so in the notes and go on without its result. */
-function guarded<T>(notes: string[], what: string, run: () => T): T | null {
+function guarded<T>(notes: Note[], what: 'adjustment' | 'cycle' | 'forecast' | 'outturn', run: () => T): T | null {
   try {
     return run();
   } catch (e) {
-    notes.push(`The ${what} could not be computed for this series (${e instanceof Error ? e.message : String(e)}).`);
+    notes.push({code: 'failed', values: {what, error: e instanceof Error ? e.message : String(e)}});
     return null;
   }
 }
 
 /** ±Infinity becomes missing, with a note; the input is not changed. */
-function finiteOrMissing(values: Float64Array, notes: string[]): Float64Array {
+function finiteOrMissing(values: Float64Array, notes: Note[]): Float64Array {
   let infinite = 0;
   const out = Float64Array.from(values, (v) => {
     if (v === Infinity || v === -Infinity) {
@@ -119,20 +124,16 @@ function finiteOrMissing(values: Float64Array, notes: string[]): Float64Array {
     return v;
   });
   if (infinite > 0) {
-    notes.push(
-      infinite === 1
-        ? '1 value was not a finite number and is treated as missing.'
-        : `${infinite} values were not finite numbers and are treated as missing.`,
-    );
+    notes.push({code: 'infinite', values: {count: infinite}});
   }
   return out;
 }
 
-function magnitudeProblem(values: Float64Array): string | null {
+function magnitudeProblem(values: Float64Array): Note | null {
   let largest = 0;
   for (const v of values) if (Math.abs(v) > largest) largest = Math.abs(v);
   return largest > MAX_MAGNITUDE
-    ? `Values reach ${largest.toExponential(2)}, beyond the ±1e15 the analysis handles reliably; rescale the series (for example to thousands or millions) to analyse it.`
+    ? {code: 'magnitude', values: {largest: largest.toExponential(2)}}
     : null;
 }
 

@@ -1,3 +1,4 @@
+import type {Note} from '../words/index.js';
 import type {AnalysisOptions} from '../config/plan.js';
 import type {Frequency} from '../time/period.js';
 import type {Adjustment} from './decompose/types.js';
@@ -54,12 +55,12 @@ export interface SeriesAnalysis {
   original: number[];
   /** Null with `notAdjustedReason` when the series is too short or unsuitable. */
   adjustment: Adjustment | null;
-  notAdjustedReason: string | null;
+  notAdjustedReason: Note | null;
   changes: Changes;
   cycle: CycleResult | null;
   forecast: ForecastResult | null;
   outturn: Outturn | null;
   /** Warnings about this series not held elsewhere (`notAdjustedReason` and `forecast.notes` hold their own). */
-  notes: string[];
+  notes: Note[];
   options: AnalysisOptions;
 }

@@ -79,7 +79,8 @@ export function combine(
       notes.push({
         file: plan.packFile,
         line: g.line,
-        message: msg.partsGap(g.id, g.total, period, gap, percent, periods),
+        series: null,
+        note: msg.partsGap(g.id, g.total, period, gap, percent, periods),
       });
     }
     if (g.adjustTotal === 'indirect')
@@ -92,8 +93,8 @@ export function combine(
   const backtests = new Map<string, ReconciledBacktest | null>();
   for (const h of hierarchies(plan.groups)) {
     const {result, notes: said} = reconcileHierarchy(h, current, frequency);
-    for (const message of said)
-      notes.push({file: plan.packFile, line: plan.groups.find((g) => g.id === h.id)!.line, message});
+    for (const note of said)
+      notes.push({file: plan.packFile, line: plan.groups.find((g) => g.id === h.id)!.line, series: null, note});
     for (const g of withTotal) if (h.series.includes(g.total)) backtests.set(g.id, result?.backtest ?? null);
     if (result === null) continue;
     for (const [id, forecast] of result.forecasts) {

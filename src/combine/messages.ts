@@ -1,5 +1,8 @@
+import type {Note} from '../words/index.js';
+
 /**
- * Every note text of the combine stage, one function each (notes for the data-notes page and the manifest).
+ * Every note of the combine stage, one function each, as coded notes (worded in the pack's language by
+ * src/words for the data-notes page, results.json and the manifest).
  */
 
 export const partsGap = (
@@ -9,14 +12,15 @@ export const partsGap = (
   gap: number,
   percent: number,
   periods: number,
-): string =>
-  `group ${group}: the parts do not add up to ${total} in ${periods} ${periods === 1 ? 'period' : 'periods'}; the largest gap is ${formatNumber(gap)} (${formatNumber(percent)}%) in ${period}`;
+): Note => ({code: 'partsGap', values: {group, total, period, gap: formatNumber(gap), percent: formatNumber(percent), periods}});
 
-export const mintFallback = (group: string, reason: string): string =>
-  `group ${group}: the one-step error covariance is unusable (${reason}); forecasts reconciled by OLS instead of MinT`;
+export const mintFallback = (group: string, reason: string): Note => ({code: 'mintFallback', values: {group, reason}});
 
-export const notReconciled = (group: string, reason: string): string =>
-  `group ${group}: forecasts not reconciled (${reason})`;
+/** `why`: `noForecast` (of series `series`) or `notFinite`. */
+export const notReconciled = (group: string, why: 'noForecast' | 'notFinite', series = ''): Note => ({
+  code: 'notReconciled',
+  values: {group, why, series},
+});
 
 function formatNumber(x: number): string {
   return Number(x.toPrecision(4)).toString();

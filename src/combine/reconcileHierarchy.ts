@@ -1,3 +1,4 @@
+import type {Note} from '../words/index.js';
 import {maseScale, type ForecastResult, type SeriesAnalysis} from '../analyse/index.js';
 import {periodsPerYear, type Frequency} from '../time/period.js';
 import type {Hierarchy} from './hierarchies.js';
@@ -11,7 +12,7 @@ export interface ReconciledHierarchy {
   forecasts: Map<string, ForecastResult>;
   method: 'mint' | 'ols' | 'bottom-up';
   backtest: ReconciledBacktest | null;
-  notes: string[];
+  notes: Note[];
 }
 
 /**
@@ -29,15 +30,15 @@ export function reconcileHierarchy(
   hierarchy: Hierarchy,
   analyses: ReadonlyMap<string, SeriesAnalysis>,
   frequency: Frequency,
-): {result: ReconciledHierarchy | null; notes: string[]} {
+): {result: ReconciledHierarchy | null; notes: Note[]} {
   if (hierarchy.method === 'none') return {result: null, notes: []};
   const members = hierarchy.series.map((id) => analyses.get(id)!);
   const missing = members.find((a) => a.forecast === null);
-  if (missing) return {result: null, notes: [msg.notReconciled(hierarchy.id, `${missing.id} has no forecast`)]};
+  if (missing) return {result: null, notes: [msg.notReconciled(hierarchy.id, 'noForecast', missing.id)]};
   const forecasts = members.map((a) => a.forecast!);
   const n = members.length;
   const h = Math.min(...forecasts.map((f) => f.mean.length));
-  const notes: string[] = [];
+  const notes: Note[] = [];
   let method: 'mint' | 'ols' | 'bottom-up' = hierarchy.method;
   let w: Float64Array | undefined;
   if (method === 'mint') {
@@ -51,7 +52,7 @@ export function reconcileHierarchy(
   const base = Float64Array.from({length: n * h}, (_, k) => forecasts[Math.floor(k / h)].mean[k % h]);
   const reconciled = reconcileForecasts(base, {...options, h});
   if (reconciled === null)
-    return {result: null, notes: [...notes, msg.notReconciled(hierarchy.id, 'the forecasts are not finite')]};
+    return {result: null, notes: [...notes, msg.notReconciled(hierarchy.id, 'notFinite')]};
   const out = new Map<string, ForecastResult>();
   members.forEach((a, i) => {
     const f = a.forecast!;

@@ -1,3 +1,4 @@
+import type {Note} from '../words/index.js';
 import type {SeriesPlan} from '../config/plan.js';
 import type {Frequency} from '../time/period.js';
 
@@ -20,12 +21,15 @@ export interface Series {
   notes: DataNote[];
 }
 
-/** Something worth telling the reader about the data (not fatal). */
-export interface DataNote {
-  file: string;
-  line: number | null;
-  message: string;
-}
+/**
+ * Something worth telling the reader about the data (not fatal): either a coded note that the words module words in
+ * the pack's language (`note`, with `series` the id of the series it is about, or null), or a sentence of the reading
+ * stages (`message`, English; the notes of ingest and derive that are not coded yet).
+ */
+export type DataNote = {file: string; line: number | null} & (
+  | {series: string | null; note: Note; message?: undefined}
+  | {message: string; series?: undefined; note?: undefined}
+);
 
 /** An input file (or query) as read, for the manifest and the data-notes page. */
 export interface InputFile {

@@ -3,7 +3,7 @@ import type {SeriesAnalysis} from '../analyse/types.js';
 import type {History} from '../results/index.js';
 import type {GroupResult, SeriesCombination} from '../combine/index.js';
 import type {Callout} from './types.js';
-import type {NarrateFormat} from './format.js';
+import type {Words} from '../words/index.js';
 
 /** What a callout rule sees: one visible series with its analysis, the pack, and the archive history. */
 export interface RuleContext {
@@ -13,7 +13,8 @@ export interface RuleContext {
   series: SeriesPlan;
   analysis: SeriesAnalysis;
   history: History | null;
-  fmt: NarrateFormat;
+  /** Words and numbers in the pack's language and locale. */
+  words: Words;
   /** True when the series is a rate in percent (unit `%`): its changes are stated in percentage points. */
   isRate: boolean;
   /** What the combine stage found for this series (variance against target, reconciliation), or null. */
@@ -42,16 +43,4 @@ export interface Rule {
   /** Rule name, e.g. `year-on-year`; becomes `Callout.rule` and part of the id. */
   name: string;
   run(ctx: RuleContext): Draft[];
-}
-
-/** Chart anchor ids in the HTML report: `chart-<series>-<part>`. */
-export type ChartPart = 'overview' | 'seasonal' | 'yoy' | 'irregular' | 'forecast' | 'cycle';
-
-export function chartId(seriesId: string, part: ChartPart): string {
-  return `chart-${seriesId}-${part}`;
-}
-
-/** Anchor id of a group's contributions chart: `chart-group-<group>-contributions`. */
-export function groupChartId(groupId: string): string {
-  return `chart-group-${groupId}-contributions`;
 }

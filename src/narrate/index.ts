@@ -1,2 +1,2 @@
-export {narrate, type NarrateInput} from './narrate.js';
+export {narrate, type NarrateInput, type Narration} from './narrate.js';
 export type {Callout} from './types.js';

@@ -5,9 +5,11 @@ import {periodsPerYear} from '../time/period.js';
 import type {GroupResult, SeriesCombination} from '../combine/index.js';
 import type {Callout} from './types.js';
 import type {RuleContext} from './context.js';
-import {narrateFormat} from './format.js';
+import {wordsFor} from '../words/index.js';
 import {rankOf} from './rank.js';
 import {rules} from './rules.js';
+import {seriesParagraph} from './commentary/seriesParagraph.js';
+import {packParagraph} from './commentary/packParagraph.js';
 
 /** Headline callouts in the pack-level list, and at most this many from any one series. */
 export const PACK_CALLOUTS = 10;
@@ -24,7 +26,7 @@ export interface NarrateInput {
 }
 
 /**
- * Analyses → ranked callouts.
+ * Analyses → ranked callouts and the commentary (a paragraph per series, one for the pack).
  *
  * Every rule (rules.ts) runs on every visible series; hidden series (targets) get none. Each series' list is
  * sorted by rank (rank.ts), ties broken by series order in the pack, then rule order, then id, so the output
@@ -33,8 +35,19 @@ export interface NarrateInput {
  *
  * Pure: no I/O, no clock. Complexity: O(total callouts · log) plus the rules' own work.
  */
-export function narrate(input: NarrateInput): {pack: Callout[]; bySeries: Map<string, Callout[]>} {
-  const fmt = narrateFormat(input.plan.locale);
+export interface Narration {
+  /** The pack's headline callouts, ranked. */
+  pack: Callout[];
+  /** Each visible series' callouts, ranked. */
+  bySeries: Map<string, Callout[]>;
+  /** The summary's opening paragraph. */
+  opening: string;
+  /** Each visible series' opening paragraph. */
+  paragraphs: Map<string, string>;
+}
+
+export function narrate(input: NarrateInput): Narration {
+  const words = wordsFor(input.plan.locale);
   const bySeries = new Map<string, Callout[]>();
   const all: {callout: Callout; order: [number, number]}[] = [];
   input.series.forEach(({plan: series, analysis}, seriesOrder) => {
@@ -45,7 +58,7 @@ export function narrate(input: NarrateInput): {pack: Callout[]; bySeries: Map<st
       series,
       analysis,
       history: input.history,
-      fmt,
+      words,
       isRate: series.unit === '%',
       combination: input.combined?.series.get(series.id) ?? null,
       groups: input.combined?.groups ?? [],
@@ -81,7 +94,13 @@ export function narrate(input: NarrateInput): {pack: Callout[]; bySeries: Map<st
     perSeries.set(callout.seriesId ?? '', used + 1);
     pack.push(callout);
   }
-  return {pack, bySeries};
+  const paragraphs = new Map<string, string>();
+  const visible = input.series.filter((s) => !s.plan.hidden);
+  for (const {plan: series, analysis} of visible) {
+    paragraphs.set(series.id, seriesParagraph({series, analysis, callouts: bySeries.get(series.id) ?? [], words}));
+  }
+  const opening = packParagraph({series: visible, callouts: pack, period: input.period, words, groups: input.combined?.groups ?? []});
+  return {pack, bySeries, opening, paragraphs};
 }
 
 function compare(

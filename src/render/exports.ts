@@ -2,8 +2,10 @@ import {stringify} from 'csv-stringify/sync';
 import type {SeriesAnalysis} from '../analyse/types.js';
 import {formatPeriod} from '../time/period.js';
 import type {Report} from './types.js';
-import type {Cell, Column, ColumnFormat, Table} from './table.js';
+import {cell, headers, type Cell, type Column, type ColumnFormat, type Table} from './table.js';
+import {wordsFor, type Words} from '../words/index.js';
 
+export {neutralise} from './table.js';
 
 /**
  * The numbers behind every table and chart of the report, as CSV files and one XLSX workbook.
@@ -18,37 +20,17 @@ import type {Cell, Column, ColumnFormat, Table} from './table.js';
  * text, so `-1.5` stays a number and is not quoted. Missing values (NaN) are empty cells.
  *
  * CSV: RFC 4180 quoting, CRLF line ends, UTF-8 with a byte-order mark (spreadsheet programs need it to read UTF-8).
- * XLSX: see {@link writeXlsx}; deterministic bytes for the same report.
+ * XLSX: `exportsXlsx.ts` writes the same tables (and a methods sheet) as one workbook; the two files share only
+ * `tables.ts`. Column headers are worded in the pack's language (see {@link headers}).
  */
-export function exportTables(report: Report): {
-  csv: {name: string; content: string}[];
-  xlsx: () => Promise<Uint8Array>;
-} {
+export function exportTables(report: Report): {csv: {name: string; content: string}[]; tables: Table[]} {
   const tables = buildTables(report);
-  return {
-    csv: tables.map((t) => ({name: `${t.name}.csv`, content: toCsv(t)})),
-    // The workbook library is loaded only when a workbook is asked for (it adds about 0.4 s to start-up).
-    xlsx: async () => (await import('./exportsXlsx.js')).writeXlsx(tables, report),
-  };
+  const w = wordsFor(report.plan.locale);
+  return {csv: tables.map((t) => ({name: `${t.name}.csv`, content: toCsv(t, w)})), tables};
 }
 
-/** Triggers of formula evaluation in spreadsheet programs, as the first non-blank character of a cell. */
-const FORMULA_START = /^[\s\u0000]*[=+\-@\t\r\n\u0000\uFF1D\uFF0B\uFF0D\uFF20]/;
-
-/** A text cell made inert for spreadsheets: a leading `'` when it could start a formula (see exportTables). */
-export function neutralise(text: string): string {
-  return FORMULA_START.test(text) ? `'${text}` : text;
-}
-
-/** Non-finite numbers become empty cells; text is neutralised. */
-export function cell(value: string | number | null | undefined): Cell {
-  if (value === null || value === undefined) return null;
-  if (typeof value === 'number') return Number.isFinite(value) ? value : null;
-  return neutralise(value);
-}
-
-export function toCsv(table: Table): string {
-  return stringify([table.columns.map((c) => c.header), ...table.rows], {
+export function toCsv(table: Table, w: Words): string {
+  return stringify([headers(table, w), ...table.rows], {
     bom: true,
     escape_formulas: true,
     record_delimiter: '\r\n',
@@ -103,6 +85,7 @@ function seriesTable(id: string, a: SeriesAnalysis): Table {
 }
 
 function forecastTable(report: Report): Table {
+  const w = wordsFor(report.plan.locale);
   const levels = [...new Set(report.series.flatMap((s) => s.analysis.forecast?.levels ?? []))].sort((x, y) => x - y);
   const rows: Cell[][] = [];
   for (const s of report.series) {
@@ -116,7 +99,7 @@ function forecastTable(report: Report): Table {
   }
   return {
     name: 'forecasts',
-    sheet: 'Forecasts',
+    sheet: w.t('sheet.forecasts'),
     columns: [
       text('series'),
       text('period'),
@@ -129,6 +112,7 @@ function forecastTable(report: Report): Table {
 }
 
 function summaryTable(report: Report): Table {
+  const w = wordsFor(report.plan.locale);
   const rows = report.series
     .filter((s) => !s.plan.hidden)
     .map(({plan: p, analysis: a}) => {
@@ -164,7 +148,7 @@ function summaryTable(report: Report): Table {
     });
   return {
     name: 'summary',
-    sheet: 'Summary',
+    sheet: w.t('sheet.summary'),
     columns: [
       text('series'),
       text('label'),
@@ -196,6 +180,7 @@ function summaryTable(report: Report): Table {
 }
 
 function backtestTable(report: Report): Table {
+  const w = wordsFor(report.plan.locale);
   const rows: Cell[][] = [];
   for (const s of report.series) {
     const f = s.analysis.forecast;
@@ -215,7 +200,7 @@ function backtestTable(report: Report): Table {
   }
   return {
     name: 'backtest',
-    sheet: 'Back-test',
+    sheet: w.t('sheet.backtest'),
     columns: [
       text('series'),
       text('method'),
@@ -230,6 +215,7 @@ function backtestTable(report: Report): Table {
 }
 
 function calloutTable(report: Report): Table {
+  const w = wordsFor(report.plan.locale);
   const inPack = new Map(report.callouts.map((c, i) => [c.id, i + 1]));
   const rows = report.series.flatMap((s) =>
     s.callouts.map((c) => [
@@ -245,7 +231,7 @@ function calloutTable(report: Report): Table {
   );
   return {
     name: 'callouts',
-    sheet: 'Callouts',
+    sheet: w.t('sheet.callouts'),
     columns: [
       {header: 'summary_position', format: 'integer'},
       text('series'),
@@ -261,6 +247,7 @@ function calloutTable(report: Report): Table {
 }
 
 function revisionTable(report: Report): Table {
+  const w = wordsFor(report.plan.locale);
   const rows = (report.history?.revisions ?? []).map((r) => [
     cell(r.seriesId),
     cell(r.period),
@@ -273,7 +260,7 @@ function revisionTable(report: Report): Table {
   ]);
   return {
     name: 'revisions',
-    sheet: 'Revisions',
+    sheet: w.t('sheet.revisions'),
     columns: [
       text('series'),
       text('period'),
@@ -289,6 +276,7 @@ function revisionTable(report: Report): Table {
 }
 
 function trackingTable(report: Report): Table {
+  const w = wordsFor(report.plan.locale);
   const tracking = report.history?.tracking ?? [];
   const levels = [...new Set(tracking.flatMap((r) => Object.keys(r.inside).map(Number)))].sort((x, y) => x - y);
   const rows = tracking.map((r) => [
@@ -303,7 +291,7 @@ function trackingTable(report: Report): Table {
   ]);
   return {
     name: 'tracking',
-    sheet: 'Tracking',
+    sheet: w.t('sheet.tracking'),
     columns: [
       text('series'),
       text('published_in'),

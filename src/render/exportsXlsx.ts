@@ -1,6 +1,8 @@
 import ExcelJS from 'exceljs';
 import {civilFromDays, periodStartDay} from '../time/period.js';
-import type {ColumnFormat, Table} from './table.js';
+import {headers, type ColumnFormat, type Table} from './table.js';
+import {methodsTable} from './methodsTable.js';
+import {wordsFor} from '../words/index.js';
 import type {Report} from './types.js';
 
 /** Display formats; the cells keep full precision. Percent columns already hold percent (5.2 = 5.2%). */
@@ -13,7 +15,8 @@ const NUMBER_FORMATS: Record<ColumnFormat, string | undefined> = {
 };
 
 /**
- * The tables as one XLSX workbook: one sheet per table, a bold frozen header row, number formats per column.
+ * The tables as one XLSX workbook: one sheet per table and a last "methods" sheet with every resolved setting
+ * ({@link methodsTable}); a bold frozen header row in the pack's language, number formats per column.
  *
  * Deterministic: the workbook's created/modified dates and every zip entry's timestamp are set to the day
  * after the review period ends (the same date the PDF carries), never the clock, so the same report gives
@@ -28,12 +31,15 @@ export async function writeXlsx(tables: Table[], report: Report): Promise<Uint8A
   wb.title = report.plan.title;
   wb.created = date;
   wb.modified = date;
-  const names = sheetNames(tables.map((t) => t.sheet));
-  tables.forEach((table, i) => {
+  const w = wordsFor(report.plan.locale);
+  const sheets = [...tables, methodsTable(report, w)];
+  const names = sheetNames(sheets.map((t) => t.sheet));
+  sheets.forEach((table, i) => {
     const ws = wb.addWorksheet(names[i], {views: [{state: 'frozen', ySplit: 1}]});
-    ws.columns = table.columns.map((c) => ({
-      header: c.header,
-      width: Math.min(60, Math.max(10, c.header.length + 2)),
+    const titles = headers(table, w);
+    ws.columns = table.columns.map((c, k) => ({
+      header: titles[k],
+      width: Math.min(60, Math.max(10, titles[k].length + 2)),
       style: NUMBER_FORMATS[c.format] ? {numFmt: NUMBER_FORMATS[c.format]} : {},
     }));
     ws.getRow(1).font = {bold: true};

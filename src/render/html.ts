@@ -6,8 +6,8 @@ import {packageRoot} from '../version.js';
 import type {Report} from './types.js';
 import type {SeriesAnalysis} from '../analyse/types.js';
 import type {Plan, SeriesPlan} from '../config/plan.js';
-import {formatter} from './format.js';
-import {buildView, pageGeometry, seriesFigureSlots, type FigureSlot} from './view.js';
+import {wordsFor} from '../words/index.js';
+import {buildView, pageGeometry, seriesFigureSlots, type FigureSlot} from './view/index.js';
 import {specToSvg} from './svg.js';
 import {themeFor, type Theme} from './theme.js';
 
@@ -31,7 +31,7 @@ export async function renderHtml(report: Report, drawn: ReadonlyMap<string, stri
   for (const slot of slots) {
     const {title, spec} = slot.chart;
     const description = typeof spec.description === 'string' ? spec.description : title;
-    const svg = drawn.get(chartKey(slot, view.lang, font)) ?? (await drawSlot(slot, view.lang, font));
+    const svg = drawn.get(chartKey(slot, view.locale, font)) ?? (await drawSlot(slot, view.locale, font));
     slot.svg = new Handlebars.SafeString(svg);
     slot.alt = `${title}. ${description}`;
   }
@@ -55,7 +55,7 @@ export async function drawSeriesCharts(
   into: Map<string, string>,
 ): Promise<void> {
   if (series.hidden) return;
-  const lang = formatter(plan.locale).locale;
+  const lang = wordsFor(plan.locale).locale;
   for (const slot of seriesFigureSlots(plan, series, analysis)) {
     into.set(chartKey(slot, lang, plan.branding.font), await drawSlot(slot, lang, plan.branding.font));
     // Drawing settles in promise callbacks only; a turn of the event loop between charts lets the analysis

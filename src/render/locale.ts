@@ -1,3 +1,5 @@
+import {resolveLocale} from '../words/index.js';
+
 /**
  * d3 number and time format definitions for vega, built from `Intl` for a BCP 47 locale, so chart axes
  * use the same decimal mark, grouping and month names as the report's tables.
@@ -31,15 +33,6 @@ export interface VegaLocale {
 
 const cache = new Map<string, VegaLocale>();
 
-/** The locale tag we will actually use: `tag` when Intl supports it, else `en-GB`. */
-export function resolveLocale(tag: string): string {
-  try {
-    return Intl.NumberFormat.supportedLocalesOf([tag]).length > 0 ? tag : 'en-GB';
-  } catch {
-    return 'en-GB';
-  }
-}
-
 /** Number and time definitions for vega's View `locale` option. */
 export function vegaLocale(tag: string): VegaLocale {
   const locale = resolveLocale(tag);
@@ -60,7 +53,7 @@ export function vegaLocale(tag: string): VegaLocale {
     number: {
       decimal: part('decimal', '.'),
       thousands: part('group', ','),
-      grouping: [3],
+      grouping: grouping(locale),
       currency: ['', ''],
       minus: part('minusSign', '-'),
     },
@@ -77,4 +70,16 @@ export function vegaLocale(tag: string): VegaLocale {
   };
   cache.set(locale, result);
   return result;
+}
+
+/**
+ * d3's digit grouping for a locale, read from how `Intl` groups 1234567890: the sizes of the groups from the
+ * right, the last repeating (`[3]` for en-GB and de-DE; `[3, 2]` for en-IN's 1,23,45,67,890).
+ */
+export function grouping(locale: string): number[] {
+  const parts = new Intl.NumberFormat(locale, {useGrouping: true}).formatToParts(1234567890);
+  const sizes = parts.filter((p) => p.type === 'integer').map((p) => p.value.length).reverse();
+  if (sizes.length < 2) return [3];
+  const groups = sizes.slice(0, -1);
+  return groups.length > 1 && groups[1] !== groups[0] ? [groups[0], groups[1]] : [groups[0]];
 }

@@ -2,6 +2,8 @@ import {accessSync, constants} from 'node:fs';
 import puppeteer, {type Browser} from 'puppeteer-core';
 import {escapeXml} from './svg.js';
 import {addOutline, type OutlineEntry} from './pdfOutline.js';
+import {parsePeriod} from '../time/period.js';
+import {wordsFor} from '../words/index.js';
 
 /**
  * HTML → PDF with headless Chromium through puppeteer-core, safe and byte-reproducible.
@@ -141,27 +143,27 @@ function header(opts: PdfOptions): string {
   );
 }
 
+/** `Page 2 of 9` in the pack's language, with Chromium's page-number placeholders in place of the numbers. */
+function pageOf(locale: string): string {
+  const text = escapeXml(wordsFor(locale).t('label.page', {page: '\u0001', pages: '\u0002'}));
+  return text.replace('\u0001', '<span class="pageNumber"></span>').replace('\u0002', '<span class="totalPages"></span>');
+}
+
 function footer(opts: PdfOptions): string {
   return (
     `<div style="font-family:'${family(opts.font)}',sans-serif;font-size:7.5px;color:#5b6168;width:100%;margin:0 16mm;display:flex;justify-content:space-between;">` +
     `<span>${escapeXml(opts.footer ?? '')}</span>` +
-    `<span>Page <span class="pageNumber"></span> of <span class="totalPages"></span></span></div>`
+    `<span>${pageOf(opts.locale ?? 'en-GB')}</span></div>`
   );
 }
 
-/** `2026-10` → `October 2026` in the locale; quarter and week labels are returned as `Q3 2026`, `W41 2026`. */
+/** A canonical period label in words for the running header: `2026-10` → `October 2026` (words module). */
 export function periodWords(label: string, locale: string): string {
-  let m = label.match(/^(\d{4})-(\d{2})$/);
-  if (m) {
-    const when = Date.UTC(Number(m[1]), Number(m[2]) - 1, 1);
-    try {
-      return new Intl.DateTimeFormat(locale, {month: 'long', year: 'numeric', timeZone: 'UTC'}).format(when);
-    } catch {
-      return new Intl.DateTimeFormat('en-GB', {month: 'long', year: 'numeric', timeZone: 'UTC'}).format(when);
-    }
+  const w = wordsFor(locale);
+  for (const frequency of ['monthly', 'quarterly', 'weekly'] as const) {
+    const index = parsePeriod(frequency, label);
+    if (index !== undefined) return w.periodLong(frequency, index);
   }
-  if ((m = label.match(/^(\d{4})-Q([1-4])$/))) return `Q${m[2]} ${m[1]}`;
-  if ((m = label.match(/^(\d{4})-W(\d{2})$/))) return `W${Number(m[2])} ${m[1]}`;
   return label;
 }
 

@@ -15,6 +15,8 @@ export interface Report {
   series: ReportSeries[];
   /** Pack-level callouts, ranked (the summary's headline callouts come first). */
   callouts: Callout[];
+  /** The summary's opening paragraph, in the pack's language. */
+  commentary: string;
   inputs: InputFile[];
   notes: DataNote[];
   /** Comparison with earlier archived packs; null for the first pack of an archive. */
@@ -28,6 +30,8 @@ export interface ReportSeries {
   analysis: SeriesAnalysis;
   /** This series' callouts, ranked. */
   callouts: Callout[];
+  /** The section's opening paragraph (empty for hidden series). */
+  commentary: string;
   /** Variance against target and forecast reconciliation (combine stage); null when the series has neither. */
   combination: SeriesCombination | null;
 }

@@ -3,6 +3,7 @@ import type {Plan, SeriesPlan} from '../config/plan.js';
 import type {DataNote} from '../ingest/types.js';
 import type {SeriesAnalysis} from '../analyse/types.js';
 import {formatPeriod, periodsPerYear, type Frequency} from '../time/period.js';
+import {wordDataNote, wordNote, wordsFor, type Words} from '../words/index.js';
 import {RESULTS_SCHEMA, type Results, type SeriesResults} from './schema.js';
 import type {History} from './historyTypes.js';
 import {bands, num, nums} from './figures.js';
@@ -55,6 +56,7 @@ export interface ResultsInput {
 export function toResults(report: ResultsInput): Results {
   const {plan} = report;
   const f = plan.frequency;
+  const words = wordsFor(plan.locale);
   const base = dirname(plan.packFile);
   return {
     schema: RESULTS_SCHEMA,
@@ -68,10 +70,10 @@ export function toResults(report: ResultsInput): Results {
       locale: plan.locale,
       fiscalYearStart: plan.fiscalYearStart,
     },
-    series: report.series.map((s) => seriesResults(s, f)),
+    series: report.series.map((s) => seriesResults(s, f, words)),
     groups: (report.groups ?? []).map(groupResults),
     callouts: report.callouts.map(callout),
-    notes: report.notes.map((n) => ({file: portablePath(base, n.file), line: n.line, message: n.message})),
+    notes: report.notes.map((n) => ({file: portablePath(base, n.file), line: n.line, message: wordDataNote(words, n)})),
     history: report.history === null ? null : history(report.history),
   };
 }
@@ -98,19 +100,20 @@ export function* resultsJsonChunks(report: ResultsInput): Generator<string> {
   const head = JSON.stringify({schema, pack}, null, 2);
   const after = JSON.stringify(tail, null, 2);
   const f = report.plan.frequency;
+  const words = wordsFor(report.plan.locale);
   if (report.series.length === 0) {
     yield `${head.slice(0, -2)},\n  "series": ${JSON.stringify(none)},\n${after.slice(2)}\n`;
     return;
   }
   yield `${head.slice(0, -2)},\n  "series": [\n`;
   for (let i = 0; i < report.series.length; i++) {
-    const text = JSON.stringify(seriesResults(report.series[i], f), null, 2).replace(/\n/g, '\n    ');
+    const text = JSON.stringify(seriesResults(report.series[i], f, words), null, 2).replace(/\n/g, '\n    ');
     yield `    ${text}${i < report.series.length - 1 ? ',' : ''}\n`;
   }
   yield `  ],\n${after.slice(2)}\n`;
 }
 
-function seriesResults(s: ResultsSeriesInput, f: Frequency): SeriesResults {
+function seriesResults(s: ResultsSeriesInput, f: Frequency, words: Words): SeriesResults {
   const a = s.analysis;
   const label = (offset: number) => formatPeriod(f, a.start + offset);
   const adj = a.adjustment;
@@ -175,7 +178,7 @@ function seriesResults(s: ResultsSeriesInput, f: Frequency): SeriesResults {
             },
             options: plain(adj.options) as Record<string, unknown>,
           },
-    notAdjustedReason: a.notAdjustedReason,
+    notAdjustedReason: a.notAdjustedReason === null ? null : wordNote(words, a.notAdjustedReason),
     outliers: (adj?.outliers ?? []).map((o) => ({period: label(o.index), kind: o.kind, score: num(o.score)})),
     cycle:
       a.cycle === null
@@ -235,7 +238,7 @@ function seriesResults(s: ResultsSeriesInput, f: Frequency): SeriesResults {
                       forecast: num(p.forecast),
                     })),
                   },
-            notes: [...a.forecast.notes],
+            notes: a.forecast.notes.map((n) => wordNote(words, n)),
             options: plain(a.forecast.options) as Record<string, unknown>,
             baseMean: s.combination?.baseMean ? nums(s.combination.baseMean) : null,
             reconciliation: s.combination?.reconciliation ?? null,
@@ -243,7 +246,7 @@ function seriesResults(s: ResultsSeriesInput, f: Frequency): SeriesResults {
     outturn: a.outturn === null ? null : (plain(a.outturn) as SeriesResults['outturn']),
     versusTarget: versusTargetResults(s.combination ?? undefined),
     callouts: s.callouts.map(callout),
-    notes: [...a.notes],
+    notes: a.notes.map((n) => wordNote(words, n)),
     options: plain(a.options) as Record<string, unknown>,
   };
 }

@@ -12,7 +12,7 @@ const src = fileURLToPath(new URL('../../src/', import.meta.url));
 
 /** The stages in pipeline order; files outside a stage folder are shared utilities (rank 0) or the top (last). */
 const ORDER = ['config', 'ingest', 'derive', 'analyse', 'combine', 'results', 'history', 'narrate', 'render', 'archive'];
-const SHARED = ['time', 'errors.ts', 'log.ts', 'version.ts'];
+const SHARED = ['time', 'words', 'errors.ts', 'log.ts', 'version.ts'];
 const TOP = ['run.ts', 'cli', 'index.ts'];
 
 function stageOf(file: string): {name: string; rank: number} {

@@ -28,7 +28,7 @@ describe('index.html', () => {
     expect(html).toContain('&lt;img src=x onerror=alert(1)&gt;');
     expect(html).toContain('<h1>Pack &quot;&lt;img src=x onerror=alert(1)&gt;&quot; &amp; co</h1>');
     expect(html).not.toContain('Budget');
-    const order = ['Nov 2026', 'Oct 2026', 'Sep 2026'].map((h) => html.indexOf(`<h2>${h} `));
+    const order = ['November 2026', 'October 2026', 'September 2026'].map((h) => html.indexOf(`<h2>${h} `));
     expect(order.every((i, k) => i > 0 && (k === 0 || i > order[k - 1]))).toBe(true);
     expect(html).toContain('<a href="2026-11/report.html">Report</a>');
     expect(html).toContain('<a href="2026-11/results.json">Results (JSON)</a>');
@@ -39,16 +39,16 @@ describe('index.html', () => {
     await writeIndex(out, 'harbourline-monthly');
     const again = await readFile(join(out, 'harbourline-monthly', 'index.html'), 'utf8');
     expect(again).toContain('results.json missing or unreadable');
-    expect(again.indexOf('Sep 2026')).toBeLessThan(again.indexOf('>2026-08<'));
+    expect(again.indexOf('September 2026')).toBeLessThan(again.indexOf('>2026-08<'));
     expect(again).not.toContain('drafts');
   });
 
   it('shows the review-period value with its unit and the year-on-year change in the pack locale', () => {
     const r = headlinesOf(report(2026, 10, [{id: 'net-sales', label: 'Net sales'}], {locale: 'de-DE'}));
     // Latest value of the fixture: 100 + 0.5·47 + 10·sin(2π·(2026·12 + 9)/12) = 123.5 + 10·sin(1.5π) = 113.5
-    // → "114" (whole numbers from 100 up); year-on-year 6.1 → "+6,1%" in German.
+    // → "113,5" (the one rounding rule: one decimal from 10 up to 1 000); year-on-year 6.1 → "+6,1 %" in German.
     const html = renderIndex('harbourline-monthly', [{folder: '2026-10', results: r, files: ['results.json']}]);
-    expect(html).toContain('<tr><th scope="row">Net sales</th><td>114 EUR k</td><td>+6,1%</td></tr>');
+    expect(html).toContain('<tr><th scope="row">Net sales</th><td>113,5 EUR k</td><td>+6,1\u00a0%</td></tr>');
     expect(html).toContain('<html lang="de-DE">');
   });
 

@@ -5,7 +5,7 @@ import {performance} from 'node:perf_hooks';
 import {main} from '../../src/cli/main.js';
 import {mulberry32} from '../../src/analyse/numeric/mulberry32.js';
 import {makeReport} from '../render/fixtures.js';
-import {buildView} from '../../src/render/view.js';
+import {buildView} from '../../src/render/view/index.js';
 import {specToSvg} from '../../src/render/svg.js';
 import {openBrowser, renderHtml} from '../../src/render/index.js';
 
@@ -23,7 +23,7 @@ export async function run(): Promise<void> {
   const byKind = new Map<string, number[]>();
   for (const slot of slots) {
     const start = performance.now();
-    await specToSvg(slot.chart.spec, {locale: view.lang, font: 'Liberation Sans', idPrefix: slot.chart.id, title: 't', description: 'd'});
+    await specToSvg(slot.chart.spec, {locale: view.locale, font: 'Liberation Sans', idPrefix: slot.chart.id, title: 't', description: 'd'});
     const kind = slot.chart.id.slice(slot.chart.id.lastIndexOf('-') + 1);
     byKind.set(kind, [...(byKind.get(kind) ?? []), performance.now() - start]);
   }

@@ -1,5 +1,6 @@
 import {readFileSync} from 'node:fs';
 import {describe, expect, it} from 'vitest';
+import {wordDataNote, wordsFor} from '../../src/words/index.js';
 import {analyseSeries} from '../../src/analyse/index.js';
 import {combine} from '../../src/combine/index.js';
 import type {GroupPlan, SeriesPlan} from '../../src/config/plan.js';
@@ -121,7 +122,7 @@ describe('combine on ldeaths = mdeaths + fdeaths', () => {
       percent: (100 * 40) / ref.ldeaths[30],
       periods: 2,
     });
-    expect(c.notes.map((n) => `${n.line}: ${n.message}`)).toEqual([
+    expect(c.notes.map((n) => `${n.line}: ${wordDataNote(wordsFor('en-GB'), n)}`)).toEqual([
       `30: group sex: the parts do not add up to ldeaths in 2 periods; the largest gap is 40 (${Number(((100 * 40) / ref.ldeaths[30]).toPrecision(4))}%) in 1976-07`,
     ]);
   });

@@ -46,13 +46,14 @@ describe('demo pack, end to end', () => {
     expect(s.periods.length).toBe(s.original.length);
   });
 
-  it('the PDF has the title, callout sentences from results.json, and several pages', () => {
+  it('the PDF has the title, a headline callout from results.json, and several pages', () => {
     const title = results.pack.title as string;
     expect(pdfText).toContain(title);
     const pages = Number(execFileSync('pdfinfo', [join(folder, 'report.pdf')], {encoding: 'utf8'}).match(/Pages:\s+(\d+)/)![1]);
     expect(pages).toBeGreaterThan(1);
     const flat = pdfText.replace(/\s+/g, ' ');
-    const callout = results.series[0].callouts[0].text as string;
+    // The headline callouts are printed on the summary page (a series section prints only its alerts and watches).
+    const callout = results.callouts[0].text as string;
     // The first words of the callout survive line wrapping in the PDF text.
     expect(flat).toContain(callout.split(' ').slice(0, 5).join(' '));
   });
@@ -80,13 +81,9 @@ describe('demo pack, end to end', () => {
     expect(html).not.toMatch(/<script/i);
   });
 
-  it('lists the averaged ETS models with their Akaike weights in the methods appendix', () => {
+  it('keeps the averaged ETS models and their weights in results.json, not in the report', () => {
     const models = results.series[0].forecast.options.ets.models as {model: string; weight: number}[];
     expect(models.reduce((a, m) => a + m.weight, 0)).toBeCloseTo(1, 12);
-    const html = readFileSync(join(folder, 'report.html'), 'utf8');
-    if (models.length > 1) {
-      const line = models.map((m) => `${m.model} ${Math.round(m.weight * 100)}%`).join(', ');
-      expect(html).toContain(line);
-    }
+    expect(pdfText).not.toMatch(/\b[A-Za-z][A-Za-z0-9]* = \S/);
   });
 });

@@ -96,7 +96,7 @@ export function cycleOf(pattern: number[], n: number): number[] {
 
 import type {History} from '../../src/results/index.js';
 import type {Draft, Rule} from '../../src/narrate/context.js';
-import {narrateFormat} from '../../src/narrate/format.js';
+import {wordsFor} from '../../src/words/index.js';
 import type {GroupResult, SeriesCombination} from '../../src/combine/index.js';
 import {analysisOptions, planFixture, seriesPlanFixture} from '../fixtures/plans.js';
 
@@ -120,7 +120,7 @@ export function runRule(
     series,
     analysis,
     history: args.history ?? null,
-    fmt: narrateFormat(plan.locale),
+    words: wordsFor(plan.locale),
     isRate: series.unit === '%',
     combination: args.combination ?? null,
     groups: args.groups ?? [],

@@ -9,12 +9,13 @@ import {trackingChart} from '../../src/render/charts/tracking.js';
 import {sparkline} from '../../src/render/charts/sparkline.js';
 import {baseConfig, epoch, type ChartContext} from '../../src/render/charts/common.js';
 import {themeFor} from '../../src/render/theme.js';
+import {wordsFor} from '../../src/words/index.js';
 import {monthIndex, quarterIndex} from '../../src/time/period.js';
 import type {ForecastResult} from '../../src/analyse/forecast/types.js';
 
 const theme = themeFor('#1d6f64', 'Liberation Sans');
 const months = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'];
-const ctx: ChartContext = {frequency: 'monthly', theme, width: 300, height: 100, unit: 'EUR k', seasonNames: months};
+const ctx: ChartContext = {frequency: 'monthly', theme, width: 300, height: 100, unit: 'EUR k', seasonNames: months, words: wordsFor('en-GB')};
 const jan2024 = monthIndex(2024, 1);
 const t = (i: number) => Date.UTC(2024, i, 1);
 const layers = (spec: object) => (spec as {layer: {data?: {values: unknown[]}}[]}).layer;

@@ -2,6 +2,7 @@ import {afterEach, describe, expect, it, vi} from 'vitest';
 import ExcelJS from 'exceljs';
 import {parse} from 'csv-parse/sync';
 import {buildTables, exportTables, neutralise} from '../../src/render/exports.js';
+import {writeXlsx} from '../../src/render/exportsXlsx.js';
 import {sheetNames} from '../../src/render/exportsXlsx.js';
 import type {Report} from '../../src/render/types.js';
 import type {History} from '../../src/results/index.js';
@@ -149,6 +150,11 @@ describe('exportTables: CSV', () => {
   });
 });
 
+/** The workbook as the build writes it. */
+function workbook(r: ReturnType<typeof report>): Promise<Uint8Array> {
+  return writeXlsx(exportTables(r).tables, r);
+}
+
 describe('exportTables: XLSX', () => {
   async function load(bytes: Uint8Array) {
     const wb = new ExcelJS.Workbook();
@@ -157,8 +163,8 @@ describe('exportTables: XLSX', () => {
   }
 
   it('neutralises user text, keeps numbers numeric and freezes the header', async () => {
-    const wb = await load(await exportTables(report(history)).xlsx());
-    expect(wb.worksheets.map((w) => w.name)).toEqual(['Summary', 'net-sales', 'Forecasts', 'Back-test', 'Callouts', 'Revisions', 'Tracking']);
+    const wb = await load(await workbook(report(history)));
+    expect(wb.worksheets.map((w) => w.name)).toEqual(['Summary', 'net-sales', 'Forecasts', 'Back-test', 'Callouts', 'Revisions', 'Tracking', 'methods']);
     const summary = wb.getWorksheet('Summary')!;
     expect(summary.getCell('B2').value).toBe(`'${EVIL}`);
     expect(summary.getCell('B2').type).toBe(ExcelJS.ValueType.String);
@@ -176,12 +182,35 @@ describe('exportTables: XLSX', () => {
     expect(formulas).toBe(0);
   });
 
+  it('holds every resolved setting on the methods sheet, as dotted paths', async () => {
+    const wb = await load(await workbook(report()));
+    const sheet = wb.getWorksheet('methods')!;
+    expect(sheet.getRow(1).values).toEqual([undefined, 'series', 'part', 'setting', 'value']);
+    const rows: unknown[][] = [];
+    sheet.eachRow((row, n) => {
+      if (n > 1) rows.push((row.values as unknown[]).slice(1));
+    });
+    expect(rows.length).toBeGreaterThan(0);
+    expect(rows.every((r) => r[0] === 'net-sales')).toBe(true);
+    expect(rows.map((r) => r[2]).join(' ')).not.toMatch(/ = /);
+  });
+
+  it('words headers and sheet names in the pack’s language, leaving the numbers as they are', async () => {
+    const r = report();
+    r.plan = {...r.plan, locale: 'de-DE'};
+    const csv = exportTables(r).csv.find((c) => c.name === 'summary.csv')!.content;
+    expect(csv.split('\r\n')[0]).toContain('vorjahresveraenderung_pct');
+    const wb = await load(await workbook(r));
+    expect(wb.worksheets.map((w) => w.name)).toContain('Übersicht');
+    expect(wb.worksheets.map((w) => w.name)).toContain('Methoden');
+  });
+
   it('gives the same bytes whatever the clock says, dated by the review period', async () => {
     vi.useFakeTimers({toFake: ['Date']});
     vi.setSystemTime(new Date('2030-01-01T10:00:00Z'));
-    const a = await exportTables(report()).xlsx();
+    const a = await workbook(report());
     vi.setSystemTime(new Date('2031-06-15T17:33:21Z'));
-    const b = await exportTables(report()).xlsx();
+    const b = await workbook(report());
     vi.useRealTimers();
     expect(Buffer.from(a).equals(Buffer.from(b))).toBe(true);
     const wb = await load(a);

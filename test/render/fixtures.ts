@@ -167,7 +167,7 @@ export function seriesAnalysis(id: string, frequency: Frequency, end: number, le
       target: 11400,
       gapPct: 1.75,
     },
-    notes: ['One value was missing (Apr 2021) and was filled for estimation.'],
+    notes: [{code: 'infinite', values: {count: 1}}],
     options,
   };
 }
@@ -177,12 +177,12 @@ function shortAnalysis(id: string, frequency: Frequency, end: number, seed: numb
   return {
     ...full,
     adjustment: null,
-    notAdjustedReason: 'The series has 14 observations; seasonal adjustment needs at least three full years.',
+    notAdjustedReason: {code: 'tooShortToAdjust', values: {minimum: 25, observed: 14, frequency}},
     cycle: null,
     forecast: null,
     outturn: null,
     changes: {...full.changes, periodOnPeriodAdjusted: NaN, periodOnPeriodAnnualised: NaN, trend: NaN, trendAnnualised: NaN, trendDirection: 'flat'},
-    notes: ['Short series: 14 observations.'],
+    notes: [{code: 'tooFewToForecast', values: {}}],
   };
 }
 
@@ -226,7 +226,7 @@ export function makeReport(opts: FixtureOptions = {}): Report {
         chart: `chart-${id}-irregular`,
       },
     ];
-    return {plan, analysis, callouts, combination: null};
+    return {plan, analysis, callouts, commentary: `${plan.label} in one paragraph.`, combination: null};
   });
   const plan = planFixture({
     id: 'monthly-pack',
@@ -278,7 +278,8 @@ export function makeReport(opts: FixtureOptions = {}): Report {
     series,
     callouts: series.flatMap((s) => s.callouts).sort((a, b) => b.rank - a.rank).slice(0, 5),
     inputs: [{file: '/packs/harbourline/data/trading.csv', sha256: 'ab'.repeat(32), bytes: 12345, rows: 96}],
-    notes: [{file: '/packs/harbourline/data/trading.csv', line: 42, message: 'Blank value for col_1 in Apr 2021.'}],
+    notes: [{file: '/packs/harbourline/data/trading.csv', line: 42, series: null, note: {code: 'outOfOrder', values: {line: '42'}}}],
+    commentary: 'The pack in one paragraph.',
     history,
     groups: [],
   };

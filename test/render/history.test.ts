@@ -1,6 +1,6 @@
 import {describe, expect, test} from 'vitest';
 import {renderHtml} from '../../src/render/index.js';
-import {buildView} from '../../src/render/view.js';
+import {buildView} from '../../src/render/view/index.js';
 import type {Report} from '../../src/render/types.js';
 import type {RevisionRow, TrackingRow} from '../../src/results/index.js';
 import {makeReport} from './fixtures.js';
@@ -68,7 +68,7 @@ describe('history view', () => {
 
   test('cycle-phase codes are shown in plain words, trend directions as they are', () => {
     const h = buildView(backfilled(0), null).history!;
-    expect(h.revisions.find((r) => r.measure === 'Cycle phase')).toMatchObject({previous: 'above trend and rising', current: 'above trend, easing'});
+    expect(h.revisions.find((r) => r.measure === 'Cycle phase')).toMatchObject({previous: 'above trend and rising', current: 'above trend and easing'});
     expect(h.revisions.find((r) => r.measure === 'Trend direction')).toMatchObject({previous: 'flat', current: 'rising'});
   });
 
@@ -106,7 +106,7 @@ describe('history section in the HTML', () => {
     const section = html.slice(html.indexOf('<section class="history"'), html.indexOf('</section>', html.indexOf('<section class="history"')));
     expect(section).toContain('120 smaller revisions (each under 1%) are not listed; all of them are in exports/revisions.csv.');
     expect(section).toContain('All 6 checked forecasts are in exports/tracking.csv.');
-    expect(section).toContain('above trend, easing');
+    expect(section).toContain('above trend and easing');
     expect(section).not.toContain('falling-above');
     expect(section).not.toMatch(/777,001|999,001|888,001|9\.99/);
     expect(section).not.toContain('No earlier forecast can be checked yet.');

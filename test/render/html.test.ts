@@ -4,7 +4,7 @@ import {tmpdir} from 'node:os';
 import {join} from 'node:path';
 import Handlebars from 'handlebars';
 import {renderHtml} from '../../src/render/index.js';
-import {buildView} from '../../src/render/view.js';
+import {buildView} from '../../src/render/view/index.js';
 import {drawSeriesCharts, inlineLogo} from '../../src/render/html.js';
 import {makeReport} from './fixtures.js';
 import type {Report} from '../../src/render/types.js';
@@ -17,11 +17,20 @@ function hostile(): Report {
   report.series[1].plan.label = FORMULA;
   report.series[0].callouts[0].text = `Rose <script>alert(1)</script> & "quoted"`;
   report.plan.title = 'Title </style><script>x</script>';
-  report.notes.push({file: '/packs/harbourline/data/trading.csv', line: 3, message: XSS});
+  report.notes.push({file: '/packs/harbourline/data/trading.csv', line: 3, series: XSS, note: {code: 'outOfOrder', values: {line: '3'}}});
   return report;
 }
 
 describe('renderHtml', () => {
+  test('a locale without words of its own keeps its numbers, speaks English and says so once', async () => {
+    const report = makeReport({count: 1, locale: 'nl-NL'});
+    const html = await renderHtml(report);
+    expect(html).toContain('<html lang="en">');
+    expect(html.split('its words are not yet available in the language of the locale nl-NL').length).toBe(2);
+    expect(html).toContain('At a glance');
+    expect(html).toMatch(/oktober 2026/);
+  });
+
   test('charts drawn ahead, series by series, give the same page as charts drawn by renderHtml itself', async () => {
     const report = makeReport({count: 2});
     const drawn = new Map<string, string>();
@@ -69,7 +78,7 @@ describe('renderHtml', () => {
 
   test('a series without adjustment, forecast or cycle gets a note, not empty charts', () => {
     const section = html.slice(html.indexOf('id="series-series-2"'), html.indexOf('id="series-series-3"'));
-    expect(section).toContain('seasonal adjustment needs at least three full years');
+    expect(section).toContain('Not seasonally adjusted: this needs at least two full years of data (25 months), and the series has 14 observed months.');
     expect(section).toContain('No forecast was made for this series.');
     expect(section).not.toContain('id="chart-series-2-irregular"');
     expect(section).not.toContain('id="chart-series-2-forecast"');

@@ -6,7 +6,7 @@ import {join} from 'node:path';
 import puppeteer, {type Browser} from 'puppeteer-core';
 import {renderHtml} from '../../src/render/index.js';
 import {LAUNCH_ARGS, findBrowser, fixDates, openBrowser, periodWords, printPdf, stableNodeIds, type PdfOptions, type PrintRecord} from '../../src/render/pdf.js';
-import {reportOutline} from '../../src/render/view.js';
+import {reportOutline} from '../../src/render/view/index.js';
 import {makeReport} from './fixtures.js';
 
 const chromium = findBrowser(null);
@@ -101,9 +101,7 @@ describe.skipIf(chromium === null)('PDF with Chromium', () => {
     }));
     const titles = items.map((i) => i.title);
     const series = ['Net sales', 'Orders received'];
-    expect(titles).toEqual(['At a glance', ...series, 'Methods and cautions', ...series, 'Data notes']);
-    // Nested under the methods: poppler prints the children in an <outline> of their own after their parent.
-    expect(xml).toMatch(/Methods and cautions<\/item>\s*<outline>\s*<item page="\d+">Net sales<\/item>/);
+    expect(titles).toEqual(['At a glance', ...series, 'Methods and cautions', 'Data notes']);
     // Each bookmark's page holds its heading.
     for (const {page, title} of items) {
       const text = run('pdftotext', ['-f', String(page), '-l', String(page), file, '-']);
@@ -128,7 +126,7 @@ describe.skipIf(chromium === null)('PDF with Chromium', () => {
     writeFileSync(taggedFile, first);
     expect(run('pdfinfo', [taggedFile])).toMatch(/Tagged:\s+yes/);
     const xml = run('pdftohtml', ['-xml', '-i', '-q', '-stdout', taggedFile]);
-    expect(xml.match(/<item page="\d+">/g)).toHaveLength(7);
+    expect(xml.match(/<item page="\d+">/g)).toHaveLength(5);
     expect(Buffer.from(await printPdf(browser, html, tagged)).equals(Buffer.from(first))).toBe(true);
   });
 

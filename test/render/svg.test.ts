@@ -2,16 +2,17 @@ import {describe, expect, test} from 'vitest';
 import {specToSvg} from '../../src/render/svg.js';
 import {overviewChart} from '../../src/render/charts/overview.js';
 import {themeFor} from '../../src/render/theme.js';
+import {wordsFor} from '../../src/words/index.js';
 import {vegaLocale} from '../../src/render/locale.js';
 import {measureText} from '../../src/render/textMetrics.js';
 import {monthIndex} from '../../src/time/period.js';
 import type {ChartContext} from '../../src/render/charts/common.js';
 import type {TopLevelSpec} from 'vega-lite';
-import {buildView} from '../../src/render/view.js';
+import {buildView} from '../../src/render/view/index.js';
 import {makeReport} from './fixtures.js';
 
 const theme = themeFor('#1d6f64', 'Liberation Sans');
-const ctx: ChartContext = {frequency: 'monthly', theme, width: 320, height: 120, unit: null, seasonNames: []};
+const ctx: ChartContext = {frequency: 'monthly', theme, width: 320, height: 120, unit: null, seasonNames: [], words: wordsFor('en-GB')};
 // Three months starting January 2024, so the axis shows month names.
 const spec = overviewChart({start: monthIndex(2024, 1), original: [5, 7, 6], adjusted: null, trend: null, description: 'd'}, ctx);
 const options = {locale: 'en-GB', font: 'Liberation Sans', idPrefix: 'chart-x', title: 'Title <b>', description: 'Desc & more'};

@@ -8,12 +8,13 @@ import {forecastChart} from '../../src/render/charts/forecast.js';
 import {cycleChart} from '../../src/render/charts/cycle.js';
 import {trackingChart} from '../../src/render/charts/tracking.js';
 import {themeFor} from '../../src/render/theme.js';
+import {wordsFor} from '../../src/words/index.js';
 import {monthIndex} from '../../src/time/period.js';
 import type {ChartContext} from '../../src/render/charts/common.js';
 import type {ForecastResult} from '../../src/analyse/forecast/types.js';
 
 const theme = themeFor('#1d6f64', 'Liberation Sans');
-const ctx: ChartContext = {frequency: 'monthly', theme, width: 320, height: 120, unit: null, seasonNames: []};
+const ctx: ChartContext = {frequency: 'monthly', theme, width: 320, height: 120, unit: null, seasonNames: [], words: wordsFor('en-GB')};
 // Every series starts in September 2019: UTC midnight of 1 September is still 31 August in New York.
 const start = monthIndex(2019, 9);
 const ramp = (n: number, f: (i: number) => number) => Array.from({length: n}, (_, i) => f(i));

@@ -90,7 +90,7 @@ describe('toResults', () => {
     expect(text.startsWith(`{\n  "schema": "${RESULTS_SCHEMA}",\n  "pack": {\n    "id"`)).toBe(true);
     expect(text.endsWith('}\n')).toBe(true);
     expect(toResults(sample()).notes).toEqual([
-      {file: 'data/trading.csv', line: 7, message: 'blank cell read as missing'},
+      {file: 'data/trading.csv', line: 7, message: 'rows are not in date order (first at line 7); they were sorted'},
     ]);
   });
 });

@@ -6,7 +6,8 @@ import {amplitudeRatio} from './amplitude.js';
 import {christianoFitzgerald} from './christianoFitzgerald.js';
 import {gapPercent} from './gap.js';
 import {hodrickPrescott} from './hodrickPrescott.js';
-import {endPointCaution, filledNote, onTrendLabel, phaseLabels, untestedNote} from './labels.js';
+import {onTrendLabel, phaseLabels} from './labels.js';
+import type {Note} from '../../words/index.js';
 import {defaultHpLambda} from './lambda.js';
 import {oneSidedHodrickPrescott} from './oneSidedHodrickPrescott.js';
 import {gapPhase} from './phase.js';
@@ -37,13 +38,13 @@ const BAND_YEARS = {low: 1.5, high: 8};
 export function analyseCycle(
   values: Float64Array,
   ctx: {frequency: Frequency; options: AnalysisOptions['cycle']; irregular?: Float64Array},
-): {ok: true; cycle: CycleResult} | {ok: false; reason: string} {
+): {ok: true; cycle: CycleResult} | {ok: false; reason: Note} {
   const {frequency, options, irregular} = ctx;
   const n = values.length;
-  if (n < 3) return {ok: false, reason: 'cycle needs at least three values'};
+  if (n < 3) return {ok: false, reason: {code: 'cycleTooShort', values: {}}};
   const filled = fillGaps(values);
   if (filled.values.some((v) => !Number.isFinite(v))) {
-    return {ok: false, reason: 'cycle needs observed, finite values'};
+    return {ok: false, reason: {code: 'cycleNotFinite', values: {}}};
   }
   const x = filled.values;
   const perYear = periodsPerYear[frequency];
@@ -61,8 +62,8 @@ export function analyseCycle(
   const {turns, rule} = turningPoints(gap, frequency);
   const last = turns[turns.length - 1];
   const tests = stationarity(x, irregular);
-  const notes = filled.filled > 0 ? [filledNote(filled.filled)] : [];
-  if (!tests.ok) notes.push(untestedNote(tests.reason));
+  const notes: Note[] = filled.filled > 0 ? [{code: 'cycleFilled', values: {count: filled.filled}}] : [];
+  if (!tests.ok) notes.push({code: 'untested', values: {reason: tests.reason}});
   const realTimeStart = n - Math.min(n, frequency === 'quarterly' ? 8 : perYear);
   let realTime: CycleResult['realTime'];
   if (options.method === 'hp') {
@@ -100,7 +101,7 @@ export function analyseCycle(
       turningPointBasis: 'gap',
       gapScale: scale,
       realTime,
-      caution: endPointCaution(n - realTimeStart),
+      caution: {code: 'endPoint', values: {count: n - realTimeStart}},
       notes,
     },
   };

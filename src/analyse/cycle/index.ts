@@ -1,3 +1,3 @@
 export {analyseCycle} from './analyseCycle.js';
-export {phaseLabels} from './labels.js';
+export {phaseLabels, onTrendLabel} from './labels.js';
 export type {CycleResult, Stationarity, TurningPoint} from './types.js';

@@ -1,33 +1,23 @@
-/**
- * Plain-words texts of the cycle engine, kept in one place (names of our own).
- */
+import {en} from '../../words/catalog/en.js';
+
+/** The four cycle phases: above or below the long-run trend, and the gap's direction. */
 export type Phase = 'rising-above' | 'falling-above' | 'falling-below' | 'rising-below';
 
+/**
+ * The phase labels results.json carries beside the phase code (`phaseLabel`), in English whatever the pack's
+ * language, from the words module's English catalogue (these messages take no arguments, so the catalogue text is
+ * the label; the analysis threads need not load the message formatter); the report words the phase code itself.
+ */
 export const phaseLabels: Record<Phase, string> = {
-  'rising-above': 'above trend and rising',
-  'falling-above': 'above trend, easing',
-  'falling-below': 'below trend and falling',
-  'rising-below': 'below trend, recovering',
+  'rising-above': en['phase.rising-above'],
+  'falling-above': en['phase.falling-above'],
+  'falling-below': en['phase.falling-below'],
+  'rising-below': en['phase.rising-below'],
 };
 
-export const onTrendLabel = 'on trend, no cycle to speak of';
+export const onTrendLabel = en['phase.onTrend'];
 
-export function endPointCaution(periods: number): string {
-  return (
-    `The trend over the latest ${periods} periods is provisional: a two-sided filter sees no data beyond the end, ` +
-    'so these values and the gap will be revised as new data arrive.'
-  );
-}
-
-export function filledNote(count: number): string {
-  const what = count === 1 ? 'value was' : 'values were';
-  return `${count} missing ${what} filled by straight-line interpolation before filtering.`;
-}
-
-export function untestedNote(reason: string): string {
-  return `Stationarity not tested: ${reason}.`;
-}
-
+/** The plain-words stationarity verdict results.json carries (`stationarity.summary`), in English. */
 export function stationaritySummary(level: boolean, differences: boolean, constantVariance: boolean): string {
   const mean = level
     ? 'stationary in mean'

@@ -1,3 +1,4 @@
+import type {Note} from '../../words/index.js';
 /** Result of the trend/cycle engine (`analyseCycle`). Arrays are aligned with the input values. */
 export interface CycleResult {
   method: 'hp' | 'bandpass';
@@ -23,9 +24,9 @@ export interface CycleResult {
   /** One-sided (real-time) trend for the latest periods: trend[i] belongs to index start + i (HP only). */
   realTime?: {start: number; trend: number[]; gap: number[]};
   /** End-point caution in plain words: the latest trend values are provisional. */
-  caution?: string;
+  caution?: Note;
   /** What was done to the data (e.g. gaps filled), plain sentences. */
-  notes?: string[];
+  notes?: Note[];
 }
 
 export interface TurningPoint {

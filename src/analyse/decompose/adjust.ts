@@ -1,4 +1,5 @@
 import type {AnalysisOptions} from '../../config/plan.js';
+import type {Note} from '../../words/index.js';
 import {easterRegressor, holidayRegressor, workingDayRegressor} from '../../time/calendar.js';
 import {daysFromCivil, periodStartDay, civilFromDays, seasonOf, type Frequency} from '../../time/period.js';
 import {fillGaps} from '../numeric/fillGaps.js';
@@ -25,7 +26,7 @@ export interface AdjustContext {
   residualSigma: number;
 }
 
-export type AdjustOutcome = {ok: true; adjustment: Adjustment} | {ok: false; reason: string};
+export type AdjustOutcome = {ok: true; adjustment: Adjustment} | {ok: false; reason: Note};
 
 type Model = 'additive' | 'multiplicative';
 
@@ -49,13 +50,13 @@ const REVISION_ENDS: Record<Frequency, number> = {monthly: 12, quarterly: 8, wee
  * Seasonally adjust one series: the engine behind `adjustSeries` (see index.ts for the pipeline it follows), as
  * named steps: observed span and length check → model → (constant: nothing to remove) → fill gaps → calendar
  * rounds and final decomposition → components → outliers → diagnostics → the result with its resolved options.
- * Never throws for data reasons: poor data gives `{ok: false, reason}` with one plain sentence.
+ * Never throws for data reasons: poor data gives `{ok: false, reason}` with a coded note (src/words/notes.ts).
  */
 export function adjust(values: Float64Array, ctx: AdjustContext): AdjustOutcome {
   const {frequency} = ctx;
   const period = PERIOD[frequency];
   const observed = observedSpan(values);
-  if (observed === null) return {ok: false, reason: 'The series has no values to adjust.'};
+  if (observed === null) return {ok: false, reason: {code: 'noValues', values: {}}};
   const {first, last, span} = observed;
   const method = frequency === 'weekly' ? 'fourier' : ctx.options.method;
   const minimum = frequency === 'weekly' ? MIN_WEEKS : method === 'stl' ? 2 * period + 1 : 2 * period;
@@ -177,12 +178,11 @@ function observedSpan(values: Float64Array): {first: number; last: number; span:
 }
 
 /** The plain sentence when the span is shorter than `minimum` or has fewer than two years observed, else null. */
-function tooShort(span: Float64Array, minimum: number, period: number, frequency: Frequency): string | null {
+function tooShort(span: Float64Array, minimum: number, period: number, frequency: Frequency): Note | null {
   let observed = 0;
   for (const v of span) if (!Number.isNaN(v)) observed++;
   if (span.length >= minimum && observed >= 2 * period) return null;
-  const unit = {monthly: 'months', quarterly: 'quarters', weekly: 'weeks'}[frequency];
-  return `Not seasonally adjusted: this needs at least two full years of data (${minimum} ${unit}), and the series has ${observed} observed ${unit}.`;
+  return {code: 'tooShortToAdjust', values: {minimum, observed, frequency}};
 }
 
 /** Gaps: straight lines first, then (FILL_ROUNDS times) the fitted trend and seasonal at the missing points. */

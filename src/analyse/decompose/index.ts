@@ -31,6 +31,6 @@ export function adjustSeries(values: Float64Array, ctx: AdjustContext): AdjustOu
   try {
     return adjust(values, ctx);
   } catch (error) {
-    return {ok: false, reason: `Not seasonally adjusted: ${(error as Error).message}.`};
+    return {ok: false, reason: {code: 'notAdjustable', values: {error: (error as Error).message}}};
   }
 }

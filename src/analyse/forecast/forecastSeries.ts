@@ -1,4 +1,5 @@
 import type {AnalysisOptions} from '../../config/plan.js';
+import type {Note} from '../../words/index.js';
 import {periodsPerYear, type Frequency} from '../../time/period.js';
 import {rollingBacktest} from './backtest.js';
 import {fitMethod, type MethodFit, type MethodName, type MethodRun} from './methods.js';
@@ -29,7 +30,7 @@ export function forecastSeries(
   values: Float64Array,
   {frequency, options}: {frequency: Frequency; options: AnalysisOptions['forecast']},
 ): ForecastResult {
-  const notes: string[] = [];
+  const notes: Note[] = [];
   const {horizon, levels: requestedLevels, backtestOrigins} = options;
   const levels = [...requestedLevels].sort((a, b) => a - b);
   const prepared = prepareSeries(values);
@@ -37,14 +38,10 @@ export function forecastSeries(
   const n = y.length;
   if (n === 0) throw new RangeError('forecast needs at least one value');
   if (prepared.filled > 0) {
-    notes.push(
-      prepared.filled === 1
-        ? 'Filled 1 missing value by linear interpolation before forecasting.'
-        : `Filled ${prepared.filled} missing values by linear interpolation before forecasting.`,
-    );
+    notes.push({code: 'forecastFilled', values: {count: prepared.filled}});
   }
   if (prepared.first + n < values.length) {
-    notes.push('Forecast starts after the last period, beyond the last observed value.');
+    notes.push({code: 'forecastAfterEnd', values: {}});
   }
   const period = periodsPerYear[frequency];
   let method: MethodName = options.method === 'auto' ? AUTO_METHOD : options.method;
@@ -55,31 +52,28 @@ export function forecastSeries(
   let run: MethodRun;
   let fit: MethodFit | null = null;
   if (constant) {
-    notes.push('The series is constant; the forecast repeats the constant.');
+    notes.push({code: 'forecastConstant', values: {}});
     const mean = new Float64Array(h).fill(y[0]);
     const bounds = new Map(levels.map((l) => [l, Float64Array.from(mean)]));
     run = {forecast: {method: 'Constant', mean, levels, lower: bounds, upper: new Map(bounds)}, details: {}};
   } else if (n < 4) {
-    notes.push('Fewer than four values: the naive method (last value repeated) is used.');
+    notes.push({code: 'forecastFewValues', values: {}});
     method = 'naive';
     fit = fitMethod('naive', y, {period});
     run = fit.forecast({h, levels});
   } else {
     if (method === 'seasonal-naive' && n <= period) {
-      notes.push('Less than one full year: the naive method replaces the seasonal naive method.');
+      notes.push({code: 'naiveForSeasonalNaive', values: {}});
     } else if (n < 2 * period && method !== 'seasonal-naive') {
-      notes.push('Fewer than two full years of data: seasonal models are not used.');
+      notes.push({code: 'noSeasonalModels', values: {}});
     }
     if (frequency === 'weekly' && (method === 'ets' || method === 'combination' || method === 'ets-theta-arima')) {
-      notes.push(
-        'Weekly data: ETS forecasts the seasonally adjusted series (classical decomposition over 52 weeks) ' +
-          'and the seasonal pattern is added back.',
-      );
+      notes.push({code: 'weeklyEts', values: {}});
     }
     fit = fitMethod(method, y, {period});
     run = fit.forecast({h, levels});
     if (!isFinitePath(run.forecast)) {
-      notes.push(`The ${run.forecast.method} forecast was not finite; the naive method is used instead.`);
+      notes.push({code: 'forecastNotFinite', values: {method: run.forecast.method}});
       method = 'naive';
       fit = fitMethod('naive', y, {period});
       run = fit.forecast({h, levels});

@@ -1,3 +1,4 @@
+import type {Note} from '../../words/index.js';
 /** Result of the forecasting engine (`forecastSeries`). */
 export interface ForecastResult {
   /** Model name, e.g. `ETS(M,Ad,M)`, `Theta`, `Seasonal naive`, `Combination (ETS, Theta, Damped)`. */
@@ -13,7 +14,7 @@ export interface ForecastResult {
   /** Resolved options and chosen parameters. */
   options: Record<string, unknown>;
   /** Warnings such as fallbacks for short series. */
-  notes: string[];
+  notes: Note[];
   /**
    * In-sample one-step forecast errors yₜ − ŷₜ|ₜ₋₁ of the chosen method, aligned with the series' values (NaN where
    * the method gives none, e.g. before its first fitted value or at missing values); empty when the method defines

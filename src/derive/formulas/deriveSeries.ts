@@ -56,7 +56,7 @@ export function deriveSeries(
     const notes: DataNote[] = [];
     if (divisionByZero.length > 0) {
       const periods = divisionByZero.map((i) => formatPeriod(frequency, start + i));
-      notes.push({file: packFile, line: entry.line, message: msg.divisionByZero(entry.id, periods)});
+      notes.push({file: packFile, line: entry.line, series: entry.id, note: msg.divisionByZero(periods)});
     }
     let first = 0;
     while (first < period - start && Number.isNaN(values[first])) first++;

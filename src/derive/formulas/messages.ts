@@ -1,3 +1,4 @@
+import type {Note} from '../../words/index.js';
 /**
  * Every problem and note text about formulas, one function each. Problems say what is wrong and how to fix it;
  * the pack file and line travel beside the text (see errors.ts).
@@ -22,5 +23,8 @@ export const ratioWithoutDivision = (id: string): string =>
 export const ratioWithoutFormula = (id: string): string =>
   `series ${id} has kind ratio, which needs a formula (numerator / denominator) so that year-to-date figures are ratios of sums`;
 
-export const divisionByZero = (id: string, periods: string[]): string =>
-  `${id}: division by zero in ${periods.length === 1 ? 'period' : 'periods'} ${periods.slice(0, 6).join(', ')}${periods.length > 6 ? ` and ${periods.length - 6} more` : ''}; left missing`;
+/** A data note (coded; worded in the pack's language by src/words), led by the series id when worded. */
+export const divisionByZero = (periods: string[]): Note => ({
+  code: 'divisionByZero',
+  values: {n: periods.length, list: periods.slice(0, 6).join(', '), more: Math.max(0, periods.length - 6)},
+});

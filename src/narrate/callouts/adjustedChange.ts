@@ -1,7 +1,7 @@
-import {chartId, type Rule} from '../context.js';
+import type {Rule} from '../context.js';
+import {chartAnchor} from '../chartAnchor.js';
 import {robustZ} from '../robustZ.js';
 import {severityFromZ} from '../severity.js';
-import * as say from '../wording.js';
 
 /**
  * Latest seasonally adjusted period-on-period move (percent, or percentage points for rates), with the
@@ -10,7 +10,7 @@ import * as say from '../wording.js';
  */
 export const adjustedChangeRule: Rule = {
   name: 'adjusted-change',
-  run({analysis: a, series: s, fmt, isRate}) {
+  run({analysis: a, series: s, words: w, isRate}) {
     if (!a.adjustment) return [];
     const sa = a.adjustment.adjusted;
     const last = a.end - a.start;
@@ -27,15 +27,15 @@ export const adjustedChangeRule: Rule = {
       {
         key: null,
         severity,
-        text: say.adjustedChange({
-          fmt,
+        text: w.t(Math.abs(change) < 0.05 ? 'callout.adjustedSteady' : 'callout.adjustedMove', {
           label: s.label,
-          change,
-          isRate,
-          period: fmt.period(a.frequency, a.end),
-          previous: fmt.period(a.frequency, a.end - 1),
-          annualised,
-          unusual: severity !== 'info',
+          up: change > 0 ? 'yes' : 'no',
+          size: w.magnitude(change, isRate),
+          period: w.periodLong(a.frequency, a.end),
+          previous: w.periodLong(a.frequency, a.end - 1),
+          annualised:
+            annualised !== null && Number.isFinite(annualised) ? w.t('callout.annualised', {value: w.percent(annualised)}) : '',
+          unusual: severity !== 'info' ? 'yes' : 'no',
         }),
         figures: {
           adjusted: sa[last],
@@ -44,7 +44,7 @@ export const adjustedChangeRule: Rule = {
           ...(annualised !== null && Number.isFinite(annualised) ? {annualised} : {}),
           ...(Number.isFinite(z) ? {z} : {}),
         },
-        chart: chartId(s.id, 'overview'),
+        chart: chartAnchor(s.id, 'overview'),
         magnitude: Number.isFinite(z) ? Math.abs(z) : 0,
         periodsAgo: 0,
       },

@@ -2,8 +2,8 @@ import {civilFromDays} from '../../time/period.js';
 import {easterRegressor} from '../../time/calendar.js';
 import {easterSunday} from '../../time/easter.js';
 import type {Adjustment} from '../../analyse/types.js';
-import {chartId, type Draft, type Rule, type RuleContext} from '../context.js';
-import * as say from '../wording.js';
+import type {Draft, Rule, RuleContext} from '../context.js';
+import {chartAnchor} from '../chartAnchor.js';
 
 /**
  * Calendar effects that the adjustment found significant, one plain sentence each:
@@ -30,18 +30,23 @@ export const calendarRule: Rule = {
   },
 };
 
-function workingDays({analysis: a, series: s, fmt, isRate}: RuleContext, adj: Adjustment): Draft[] {
+function workingDays({analysis: a, series: s, words: w, isRate}: RuleContext, adj: Adjustment): Draft[] {
   const effect = adj.calendar!.effect[a.end - a.start];
   const size = adj.model === 'multiplicative' ? (effect - 1) * 100 : effect;
   if (!Number.isFinite(size) || Math.abs(size) < 0.05) return [];
-  const sizeText = adj.model === 'multiplicative' ? fmt.size(size) : fmt.value(Math.abs(size), isRate ? null : s.unit);
+  const sizeText = adj.model === 'multiplicative' ? w.share(size) : w.value(Math.abs(size), isRate ? null : s.unit);
   return [
     {
       key: 'working-days',
       severity: 'info',
-      text: say.workingDays({label: s.label, period: fmt.period(a.frequency, a.end), up: size > 0, size: sizeText}),
+      text: w.t('callout.workingDays', {
+        label: s.label,
+        period: w.periodLong(a.frequency, a.end),
+        up: size > 0 ? 'yes' : 'no',
+        size: sizeText,
+      }),
       figures: {effect: size},
-      chart: chartId(s.id, 'seasonal'),
+      chart: chartAnchor(s.id, 'seasonal'),
       magnitude: 0.5,
       periodsAgo: 0,
     },
@@ -49,7 +54,7 @@ function workingDays({analysis: a, series: s, fmt, isRate}: RuleContext, adj: Ad
 }
 
 function easterEffect(
-  {analysis: a, series: s, fmt, isRate}: RuleContext,
+  {analysis: a, series: s, words: w, isRate}: RuleContext,
   model: Adjustment['model'],
   coefficient: number,
 ): Draft[] {
@@ -65,22 +70,24 @@ function easterEffect(
   const march = effect(xMarch);
   const april = effect(xApril);
   if (Math.abs(march) < 0.05 && Math.abs(april) < 0.05) return [];
-  const signed = (x: number) => (model === 'multiplicative' ? fmt.percent(x) : fmt.signed(x, isRate ? '%' : s.unit));
+  const signed = (x: number) => (model === 'multiplicative' ? w.percent(x) : w.signed(x, isRate ? '%' : s.unit));
   const {month, day} = civilFromDays(easterSunday(year));
   return [
     {
       key: 'easter',
       severity: 'info',
-      text: say.easter({
+      text: w.t('callout.easter', {
         label: s.label,
-        year,
-        date: fmt.dayMonth(year, month, day),
-        earlier: xMarch > 0,
-        first: {period: fmt.period(a.frequency, marchOf(year)), change: signed(march)},
-        second: {period: fmt.period(a.frequency, marchOf(year) + 1), change: signed(april)},
+        year: String(year),
+        date: w.dayMonth(year, month, day),
+        earlier: xMarch > 0 ? 'yes' : 'no',
+        firstPeriod: w.periodLong(a.frequency, marchOf(year)),
+        firstChange: signed(march),
+        secondPeriod: w.periodLong(a.frequency, marchOf(year) + 1),
+        secondChange: signed(april),
       }),
       figures: {year, regressorMarch: xMarch, marchEffect: march, aprilEffect: april},
-      chart: chartId(s.id, 'seasonal'),
+      chart: chartAnchor(s.id, 'seasonal'),
       magnitude: 0.5,
       periodsAgo: a.end - (marchOf(year) + 1),
     },

@@ -1,7 +1,7 @@
 import type {CycleResult} from '../../analyse/types.js';
-import {chartId, type Rule} from '../context.js';
+import type {Rule} from '../context.js';
+import {chartAnchor} from '../chartAnchor.js';
 import {robustZ} from '../robustZ.js';
-import * as say from '../wording.js';
 
 type Phase = CycleResult['phase'];
 
@@ -14,7 +14,7 @@ type Phase = CycleResult['phase'];
  */
 export const cyclePhaseRule: Rule = {
   name: 'cycle-phase',
-  run({analysis: a, series: s, fmt}) {
+  run({analysis: a, series: s, words: w}) {
     const c = a.cycle;
     if (!c) return [];
     const last = a.end - a.start;
@@ -22,7 +22,7 @@ export const cyclePhaseRule: Rule = {
     if (!Number.isFinite(gap)) return [];
     const z = robustZ(c.gap.slice(0, last), gap);
     const magnitude = Number.isFinite(z) ? Math.abs(z) : 0;
-    const chart = chartId(s.id, 'cycle');
+    const chart = chartAnchor(s.id, 'cycle');
     const current = phaseAt(c.gap, last);
     const previous = phaseAt(c.gap, last - 1);
     if (current === c.phase && previous !== null && previous !== current) {
@@ -30,12 +30,12 @@ export const cyclePhaseRule: Rule = {
         {
           key: null,
           severity: crossed(previous, current) ? 'watch' : 'info',
-          text: say.cyclePhaseChange({
+          text: w.t('callout.cyclePhaseChange', {
             label: s.label,
-            from: say.phaseWords(previous),
-            to: say.phaseWords(current),
-            period: fmt.period(a.frequency, a.end),
-            gap: fmt.percent(gap),
+            from: w.t(`phase.${previous}`),
+            to: w.t(`phase.${current}`),
+            period: w.periodLong(a.frequency, a.end),
+            gap: w.percent(gap),
           }),
           figures: {gap},
           chart,
@@ -48,7 +48,7 @@ export const cyclePhaseRule: Rule = {
       {
         key: null,
         severity: 'info',
-        text: say.cyclePhase({label: s.label, phase: say.phaseWords(c.phase), gap: fmt.percent(gap)}),
+        text: w.t('callout.cyclePhase', {label: s.label, phase: w.t(`phase.${c.phase}`), gap: w.percent(gap)}),
         figures: {gap},
         chart,
         magnitude: Math.min(magnitude, 2),

@@ -1,5 +1,6 @@
-import {chartId, type Draft, type Rule} from '../context.js';
-import * as say from '../wording.js';
+import type {Draft, Rule} from '../context.js';
+import {chartAnchor} from '../chartAnchor.js';
+import {wordNote} from '../../words/index.js';
 
 /** Share of missing values from which gaps are watch rather than info: 5% (common practice). */
 export const WATCH_GAP_SHARE = 0.05;
@@ -10,9 +11,9 @@ export const WATCH_GAP_SHARE = 0.05;
  */
 export const dataQualityRule: Rule = {
   name: 'data',
-  run({analysis: a, series: s, fmt}) {
+  run({analysis: a, series: s, words: w}) {
     const out: Draft[] = [];
-    const chart = chartId(s.id, 'overview');
+    const chart = chartAnchor(s.id, 'overview');
     const last = a.end - a.start;
     const missing: number[] = [];
     a.original.forEach((v, i) => {
@@ -23,11 +24,11 @@ export const dataQualityRule: Rule = {
       out.push({
         key: 'gaps',
         severity: missing.length >= WATCH_GAP_SHARE * a.original.length ? 'watch' : 'info',
-        text: say.gaps({
+        text: w.t('callout.gaps', {
           label: s.label,
           count: missing.length,
-          periods: say.list(missing.map((i) => fmt.period(a.frequency, a.start + i))),
-          filled,
+          periods: w.list(missing.map((i) => w.periodLong(a.frequency, a.start + i))),
+          filled: filled === 0 ? 'none' : filled === missing.length ? 'all' : w.t('callout.gapsFilled', {n: filled}),
         }),
         figures: {missing: missing.length, filled},
         chart,
@@ -39,7 +40,7 @@ export const dataQualityRule: Rule = {
       out.push({
         key: 'latest-missing',
         severity: 'alert',
-        text: say.latestMissing({label: s.label, period: fmt.period(a.frequency, a.end)}),
+        text: w.t('callout.latestMissing', {label: s.label, period: w.periodLong(a.frequency, a.end)}),
         figures: {},
         chart,
         magnitude: 5,
@@ -50,7 +51,7 @@ export const dataQualityRule: Rule = {
       out.push({
         key: 'not-adjusted',
         severity: 'watch',
-        text: say.notAdjusted({label: s.label, reason: a.notAdjustedReason}),
+        text: w.t('callout.notAdjusted', {label: s.label, reason: sentence(wordNote(w, a.notAdjustedReason))}),
         figures: {},
         chart,
         magnitude: 1,
@@ -63,7 +64,7 @@ export const dataQualityRule: Rule = {
         out.push({
           key: `note-${i + 1}`,
           severity: 'info',
-          text: say.seriesNote({label: s.label, note}),
+          text: w.t('callout.seriesNote', {label: s.label, note: sentence(wordNote(w, note))}),
           figures: {},
           chart,
           magnitude: 0,
@@ -73,3 +74,9 @@ export const dataQualityRule: Rule = {
     return out;
   },
 };
+
+/** A note as a sentence: ending with a full stop. */
+function sentence(text: string): string {
+  const t = text.trim();
+  return /[.!?]$/.test(t) ? t : `${t}.`;
+}

@@ -1,5 +1,5 @@
-import {groupChartId, type Rule} from '../context.js';
-import * as say from '../wording.js';
+import type {Rule} from '../context.js';
+import {groupChartAnchor} from '../chartAnchor.js';
 
 /** Contributions smaller than this many percentage points are not named as drivers (common practice: 0.05). */
 export const MIN_DRIVER_POINTS = 0.05;
@@ -11,7 +11,7 @@ export const MIN_DRIVER_POINTS = 0.05;
  */
 export const driversRule: Rule = {
   name: 'drivers',
-  run({series: s, groups, plan, fmt, analysis: a}) {
+  run({series: s, groups, plan, words: w, analysis: a}) {
     const labels = new Map(plan.series.map((p) => [p.id, p.label]));
     return groups
       .filter((g) => g.total === s.id)
@@ -25,20 +25,19 @@ export const driversRule: Rule = {
           {
             key: g.id,
             severity: 'info' as const,
-            text: say.drivers({
+            text: w.t('callout.drivers', {
               label: s.label,
-              change: fmt.size(Math.abs(total)),
-              rose: total >= 0,
-              period: fmt.period(a.frequency, a.end),
-              driver: {label: labels.get(driver.id) ?? driver.id, points: fmt.points(driver.points)},
-              against: against && {
-                label: labels.get(against.id) ?? against.id,
-                points: fmt.size(Math.abs(against.points)),
-                subtracted: against.points < 0,
-              },
+              change: w.share(Math.abs(total)),
+              rose: total >= 0 ? 'yes' : 'no',
+              period: w.periodLong(a.frequency, a.end),
+              driver: labels.get(driver.id) ?? driver.id,
+              points: w.points(driver.points),
+              against: against === null ? 'none' : against.points < 0 ? 'subtracted' : 'added',
+              againstLabel: against === null ? '' : (labels.get(against.id) ?? against.id),
+              againstPoints: against === null ? '' : w.points(Math.abs(against.points)).replace(/^\+/, ''),
             }),
             figures: {total, [driver.id]: driver.points, ...(against ? {[against.id]: against.points} : {})},
-            chart: groupChartId(g.id),
+            chart: groupChartAnchor(g.id),
             magnitude: Math.min(10, Math.abs(total) / 2),
             periodsAgo: 0,
           },

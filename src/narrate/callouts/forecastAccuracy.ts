@@ -1,5 +1,5 @@
-import {chartId, type Rule} from '../context.js';
-import * as say from '../wording.js';
+import type {Rule} from '../context.js';
+import {chartAnchor} from '../chartAnchor.js';
 
 /** MASE at or above which the warning is an alert: half as bad again as the benchmark (our threshold). */
 export const ALERT_MASE = 1.5;
@@ -11,20 +11,16 @@ export const ALERT_MASE = 1.5;
  */
 export const forecastAccuracyRule: Rule = {
   name: 'forecast-accuracy',
-  run({analysis: a, series: s, fmt}) {
+  run({analysis: a, series: s, words: w}) {
     const b = a.forecast?.backtest;
     if (!b || !Number.isFinite(b.mase) || b.mase <= 1) return [];
     return [
       {
         key: null,
         severity: b.mase >= ALERT_MASE ? 'alert' : 'watch',
-        text: say.backtestWarning({
-          label: s.label,
-          origins: say.count(b.origins, 'forecast origin'),
-          mase: fmt.number(b.mase, 2),
-        }),
+        text: w.t('callout.backtestWarning', {label: s.label, origins: b.origins, mase: w.number(b.mase, 2)}),
         figures: {mase: b.mase, smape: b.smape, origins: b.origins},
-        chart: chartId(s.id, 'forecast'),
+        chart: chartAnchor(s.id, 'forecast'),
         magnitude: 2 * b.mase,
         periodsAgo: 0,
       },

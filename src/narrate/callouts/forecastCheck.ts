@@ -1,6 +1,6 @@
 import {formatPeriod, parsePeriod} from '../../time/period.js';
-import {chartId, type Rule} from '../context.js';
-import * as say from '../wording.js';
+import type {Rule} from '../context.js';
+import {chartAnchor} from '../chartAnchor.js';
 
 /**
  * How the most recent published forecast for the review period fared: the shortest-horizon forecast made in
@@ -9,7 +9,7 @@ import * as say from '../wording.js';
  */
 export const forecastCheckRule: Rule = {
   name: 'forecast-check',
-  run({history, series: s, analysis: a, fmt, isRate}) {
+  run({history, series: s, analysis: a, words: w, isRate}) {
     if (!history) return [];
     const label = formatPeriod(a.frequency, a.end);
     const rows = history.tracking
@@ -29,15 +29,15 @@ export const forecastCheckRule: Rule = {
       {
         key: null,
         severity: inside ? 'info' : 'watch',
-        text: say.forecastCheck({
+        text: w.t('callout.forecastCheck', {
           label: s.label,
-          period: fmt.period(a.frequency, a.end),
-          publishedIn: published === undefined ? row.publishedIn : fmt.period(a.frequency, published),
-          forecast: fmt.value(row.forecast, s.unit),
-          actual: fmt.value(row.actual, s.unit),
-          error: say.change(fmt, error, isRate),
-          inside,
-          level,
+          period: w.periodLong(a.frequency, a.end),
+          publishedIn: published === undefined ? row.publishedIn : w.periodLong(a.frequency, published),
+          forecast: w.value(row.forecast, s.unit),
+          actual: w.value(row.actual, s.unit),
+          error: w.change(error, isRate),
+          inside: inside ? 'yes' : 'no',
+          level: String(level),
         }),
         figures: {
           forecast: row.forecast,
@@ -46,7 +46,7 @@ export const forecastCheckRule: Rule = {
           errorChange: error,
           horizon: row.horizon,
         },
-        chart: chartId(s.id, 'forecast'),
+        chart: chartAnchor(s.id, 'forecast'),
         magnitude: inside ? 0.5 : 2,
         periodsAgo: 0,
       },

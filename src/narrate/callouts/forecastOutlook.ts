@@ -1,6 +1,7 @@
 import type {ForecastResult} from '../../analyse/types.js';
-import {chartId, type Rule} from '../context.js';
-import * as say from '../wording.js';
+import type {Rule} from '../context.js';
+import {shortMethod} from '../../words/index.js';
+import {chartAnchor} from '../chartAnchor.js';
 
 /** The interval level quoted in sentences: 80% when computed (common practice for planning), else the first. */
 export function quotedLevel(f: Pick<ForecastResult, 'levels'>): number | null {
@@ -11,7 +12,7 @@ export function quotedLevel(f: Pick<ForecastResult, 'levels'>): number | null {
 /** Forecast for the next period and for the end of the horizon, each with its prediction range. Info. */
 export const forecastOutlookRule: Rule = {
   name: 'forecast-outlook',
-  run({analysis: a, series: s, fmt}) {
+  run({analysis: a, series: s, words: w}) {
     const f = a.forecast;
     if (!f || f.mean.length === 0) return [];
     const level = quotedLevel(f);
@@ -24,9 +25,9 @@ export const forecastOutlookRule: Rule = {
       high: f.upper[key]?.[i] ?? NaN,
     });
     const words = (p: ReturnType<typeof at>) => ({
-      period: fmt.period(a.frequency, p.index),
-      mean: fmt.value(p.mean, s.unit),
-      range: fmt.range(p.low, p.high, s.unit),
+      period: w.periodLong(a.frequency, p.index),
+      mean: w.value(p.mean, s.unit),
+      range: w.range(p.low, p.high, s.unit),
     });
     const next = at(0);
     if (!Number.isFinite(next.mean)) return [];
@@ -36,12 +37,12 @@ export const forecastOutlookRule: Rule = {
       {
         key: null,
         severity: 'info',
-        text: say.forecastOutlook({
+        text: w.t('callout.forecastOutlook', {
           label: s.label,
-          level,
-          next: words(next),
-          last: last ? {...words(last), ahead: say.periods(a.frequency, h)} : null,
-          method: f.method,
+          level: String(level),
+          ...words(next),
+          tail: last ? w.t('callout.forecastTail', {...words(last), level: String(level), ahead: w.periods(a.frequency, h)}) : '',
+          method: shortMethod(w, f.method),
         }),
         figures: {
           level,
@@ -50,7 +51,7 @@ export const forecastOutlookRule: Rule = {
           nextUpper: next.high,
           ...(last ? {horizon: h, last: last.mean, lastLower: last.low, lastUpper: last.high} : {}),
         },
-        chart: chartId(s.id, 'forecast'),
+        chart: chartAnchor(s.id, 'forecast'),
         magnitude: 0.5,
         periodsAgo: 0,
       },

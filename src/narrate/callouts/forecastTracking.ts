@@ -1,5 +1,5 @@
-import {chartId, type Rule} from '../context.js';
-import * as say from '../wording.js';
+import type {Rule} from '../context.js';
+import {chartAnchor} from '../chartAnchor.js';
 
 /** Records from this many checked forecasts on are judged (fewer say too little); our threshold. */
 export const MIN_TRACKED = 6;
@@ -13,7 +13,7 @@ export const COVERAGE_SHORTFALL = 0.2;
  */
 export const forecastTrackingRule: Rule = {
   name: 'forecast-tracking',
-  run({history, series: s, fmt}) {
+  run({history, series: s, words: w}) {
     const t = history?.trackingSummary.find((x) => x.seriesId === s.id);
     if (!t || t.count === 0) return [];
     const levels = Object.keys(t.coverage)
@@ -29,16 +29,16 @@ export const forecastTrackingRule: Rule = {
       {
         key: null,
         severity: poor ? 'watch' : 'info',
-        text: say.trackingRecord({
+        text: w.t('callout.trackingRecord', {
           label: s.label,
-          checked: say.count(t.count, 'forecast') + ' checked',
-          inside,
-          level,
-          share: fmt.size(coverage * 100, 0),
-          mase: t.mase === null ? null : fmt.number(t.mase, 2),
+          count: t.count,
+          inside: w.number(inside, 0),
+          level: String(level),
+          share: w.share(coverage * 100, 0),
+          mase: t.mase === null ? 'none' : w.number(t.mase, 2),
         }),
         figures: {count: t.count, coverage, level, ...(t.mase === null ? {} : {mase: t.mase})},
-        chart: chartId(s.id, 'forecast'),
+        chart: chartAnchor(s.id, 'forecast'),
         magnitude: poor ? 2 : 0.5,
         periodsAgo: 0,
       },

@@ -1,6 +1,6 @@
 import {formatPeriod, periodsPerYear} from '../../time/period.js';
-import {chartId, type Rule} from '../context.js';
-import * as say from '../wording.js';
+import type {Rule} from '../context.js';
+import {chartAnchor} from '../chartAnchor.js';
 
 /** Outliers in the last quarter of a year (3 months, 1 quarter, 13 weeks) count as current: alert. */
 const CURRENT_FRACTION = 0.25;
@@ -15,7 +15,7 @@ const CURRENT_FRACTION = 0.25;
  */
 export const largeResidualRule: Rule = {
   name: 'large-residual',
-  run({analysis: a, series: s, plan, fmt, isRate}) {
+  run({analysis: a, series: s, plan, words: w, isRate}) {
     const adj = a.adjustment;
     if (!adj) return [];
     const last = a.end - a.start;
@@ -32,22 +32,22 @@ export const largeResidualRule: Rule = {
           o.kind === 'level-shift' || !Number.isFinite(size)
             ? null
             : adj.model === 'multiplicative'
-              ? fmt.percent(size)
-              : fmt.signed(size, isRate ? '%' : s.unit);
+              ? w.percent(size)
+              : w.signed(size, isRate ? '%' : s.unit);
         const severe = ago < current || Math.abs(o.score) >= 2 * plan.thresholds.residualSigma;
         return {
           key: formatPeriod(a.frequency, a.start + o.index),
           severity: severe ? ('alert' as const) : ('watch' as const),
-          text: say.largeResidual({
+          text: w.t(o.kind === 'level-shift' ? 'callout.levelShift' : 'callout.residual', {
             label: s.label,
-            period: fmt.period(a.frequency, a.start + o.index),
+            period: w.periodLong(a.frequency, a.start + o.index),
             kind: o.kind,
-            up: o.score > 0,
-            sigmas: fmt.number(Math.abs(o.score), 1),
-            size: sizeText,
+            up: o.score > 0 ? 'yes' : 'no',
+            sigmas: w.number(Math.abs(o.score), 1),
+            size: sizeText ?? 'none',
           }),
           figures: {index: o.index, score: o.score, ...(Number.isFinite(size) ? {size} : {})},
-          chart: chartId(s.id, 'irregular'),
+          chart: chartAnchor(s.id, 'irregular'),
           magnitude: Math.abs(o.score),
           periodsAgo: ago,
         };

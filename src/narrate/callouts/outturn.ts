@@ -1,5 +1,6 @@
-import {chartId, type Rule} from '../context.js';
-import * as say from '../wording.js';
+import type {Rule} from '../context.js';
+import type {Words} from '../../words/index.js';
+import {chartAnchor} from '../chartAnchor.js';
 
 /** Outturn gap to target at or below which the callout is watch (−2%) or alert (−5%); common practice. */
 export const WATCH_GAP_PCT = -2;
@@ -12,7 +13,7 @@ export const ALERT_GAP_PCT = -5;
  */
 export const outturnRule: Rule = {
   name: 'outturn',
-  run({analysis: a, series: s, fmt}) {
+  run({analysis: a, series: s, words: w}) {
     const o = a.outturn;
     if (!o || !Number.isFinite(o.total)) return [];
     const gap = o.target !== null && o.gapPct !== null && Number.isFinite(o.gapPct) ? o.gapPct : null;
@@ -28,16 +29,16 @@ export const outturnRule: Rule = {
       {
         key: null,
         severity,
-        text: say.outturn({
+        text: outturnText(w, {
           label: s.label,
           stock: s.kind === 'stock',
-          fiscalYear: o.fiscalYear,
-          total: fmt.value(o.total, s.unit),
-          level: o.level,
-          range: fmt.range(o.lower, o.upper, s.unit),
-          actual: say.periods(a.frequency, o.periodsActual),
-          forecast: say.periods(a.frequency, o.periodsRemaining),
-          target: gap === null ? null : {value: fmt.value(o.target!, s.unit), gap, gapText: fmt.size(gap)},
+          year: o.fiscalYear,
+          total: w.value(o.total, s.unit),
+          level: String(o.level),
+          range: w.range(o.lower, o.upper, s.unit),
+          actual: w.periods(a.frequency, o.periodsActual),
+          forecast: w.periods(a.frequency, o.periodsRemaining),
+          target: gap === null ? null : {value: w.value(o.target!, s.unit), gap},
         }),
         figures: {
           total: o.total,
@@ -48,10 +49,33 @@ export const outturnRule: Rule = {
           forecastRemaining: o.forecastRemaining,
           ...(gap === null ? {} : {target: o.target!, gapPct: gap}),
         },
-        chart: chartId(s.id, 'forecast'),
+        chart: chartAnchor(s.id, 'forecast'),
         magnitude: gap === null ? 0.5 : Math.abs(gap) / 2,
         periodsAgo: 0,
       },
     ];
   },
 };
+
+/** The outturn sentence; "in line with" the target within half a percent of it. */
+function outturnText(
+  w: Words,
+  a: {
+    label: string;
+    stock: boolean;
+    year: string;
+    total: string;
+    level: string;
+    range: string;
+    actual: string;
+    forecast: string;
+    target: {value: string; gap: number} | null;
+  },
+): string {
+  const {target, stock, ...values} = a;
+  const base = w.t(stock ? 'callout.outturnStock' : 'callout.outturnFlow', values);
+  if (!target) return w.t('callout.outturnEnd', {base});
+  if (Math.abs(target.gap) < 0.5) return w.t('callout.outturnInLine', {base, target: target.value});
+  const above = target.gap > 0 ? 'yes' : 'no';
+  return w.t('callout.outturnGap', {base, gap: w.share(target.gap), above, target: target.value});
+}

@@ -1,8 +1,8 @@
 import {FLAT_TREND_PERCENT, FLAT_TREND_POINTS, trendSign} from '../../analyse/trendSign.js';
 import {periodsPerYear} from '../../time/period.js';
-import {chartId, type Rule} from '../context.js';
+import type {Rule} from '../context.js';
+import {chartAnchor} from '../chartAnchor.js';
 import {robustZ} from '../robustZ.js';
-import * as say from '../wording.js';
 
 
 /**
@@ -15,7 +15,7 @@ import * as say from '../wording.js';
  */
 export const trendRule: Rule = {
   name: 'trend',
-  run({analysis: a, series: s, fmt, isRate}) {
+  run({analysis: a, series: s, words: w, isRate}) {
     const trend = a.adjustment?.trend ?? a.cycle?.trend;
     if (!trend) return [];
     const last = a.end - a.start;
@@ -26,8 +26,8 @@ export const trendRule: Rule = {
     const trendChange = steps[last];
     if (!Number.isFinite(trendChange)) return [];
     const sign = (x: number) => trendSign(x, flat);
-    const per = say.periodName(a.frequency);
-    const chart = chartId(s.id, 'overview');
+    const per = w.t('per.period', {frequency: a.frequency});
+    const chart = chartAnchor(s.id, 'overview');
     const z = robustZ(steps.slice(1, last), trendChange);
     const base = {figures: {trendChange}, chart, periodsAgo: 0};
 
@@ -45,11 +45,11 @@ export const trendRule: Rule = {
           ...base,
           key: null,
           severity: 'watch',
-          text: say.trendTurn({
+          text: w.t('callout.trendTurn', {
             label: s.label,
-            up: current > 0,
-            turnedIn: fmt.period(a.frequency, a.start + j + 1),
-            before: say.periods(a.frequency, before),
+            up: current > 0 ? 'yes' : 'no',
+            period: w.periodLong(a.frequency, a.start + j + 1),
+            before: w.periods(a.frequency, before),
           }),
           figures: {trendChange, periodsSinceTurn: since, periodsBefore: before},
           magnitude: Math.min(10, before / recent),
@@ -66,13 +66,13 @@ export const trendRule: Rule = {
           ...base,
           key: null,
           severity: 'info',
-          text: say.trendBlip({
-            fmt,
+          text: w.t('callout.trendBlip', {
             label: s.label,
-            period: fmt.period(a.frequency, a.end),
-            change,
-            trendChange,
-            isRate,
+            up: change > 0 ? 'yes' : 'no',
+            period: w.periodLong(a.frequency, a.end),
+            change: w.change(change, isRate),
+            trendUp: trendChange > 0 ? 'yes' : 'no',
+            trendChange: w.change(trendChange, isRate),
             per,
           }),
           figures: {trendChange, change},
@@ -86,14 +86,12 @@ export const trendRule: Rule = {
         ...base,
         key: null,
         severity: 'info',
-        text: say.trendSteady({
-          fmt,
+        text: w.t('callout.trendSteady', {
           label: s.label,
-          direction: current > 0 ? 'rising' : current < 0 ? 'falling' : 'flat',
-          change: trendChange,
-          isRate,
-          per,
-          annualised,
+          direction: w.t(current > 0 ? 'direction.rising' : current < 0 ? 'direction.falling' : 'direction.flat'),
+          rate: w.t('callout.trendRate', {change: w.change(trendChange, isRate), per}),
+          annualised:
+            annualised !== null && Number.isFinite(annualised) ? w.t('callout.annualised', {value: w.percent(annualised)}) : '',
         }),
         figures: {trendChange, ...(annualised !== null && Number.isFinite(annualised) ? {annualised} : {})},
         magnitude: Number.isFinite(z) ? Math.min(Math.abs(z), 2) : 0,

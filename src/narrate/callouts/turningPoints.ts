@@ -1,6 +1,6 @@
 import {formatPeriod, periodsPerYear} from '../../time/period.js';
-import {chartId, type Rule} from '../context.js';
-import * as say from '../wording.js';
+import type {Rule} from '../context.js';
+import {chartAnchor} from '../chartAnchor.js';
 
 /**
  * Cyclical turning points dated within the last two years, one callout each. Provisional points (near the
@@ -8,7 +8,7 @@ import * as say from '../wording.js';
  */
 export const turningPointsRule: Rule = {
   name: 'turning-point',
-  run({analysis: a, series: s, fmt}) {
+  run({analysis: a, series: s, words: w}) {
     if (!a.cycle) return [];
     const last = a.end - a.start;
     const window = 2 * periodsPerYear[a.frequency];
@@ -20,15 +20,15 @@ export const turningPointsRule: Rule = {
         return {
           key: `${tp.type}-${formatPeriod(a.frequency, period)}`,
           severity: tp.provisional ? ('watch' as const) : ('info' as const),
-          text: say.turningPoint({
+          text: w.t('callout.turningPoint', {
             label: s.label,
-            type: tp.type,
-            period: fmt.period(a.frequency, period),
-            ago: say.periods(a.frequency, ago),
-            provisional: tp.provisional,
+            type: w.t(`turn.${tp.type}`),
+            period: w.periodLong(a.frequency, period),
+            ago: w.periods(a.frequency, ago),
+            provisional: tp.provisional ? 'yes' : 'no',
           }),
           figures: {index: tp.index, periodsAgo: ago, gap: a.cycle!.gap[tp.index]},
-          chart: chartId(s.id, 'cycle'),
+          chart: chartAnchor(s.id, 'cycle'),
           magnitude: tp.provisional ? 2 : 1,
           periodsAgo: ago,
         };

@@ -1,5 +1,5 @@
-import {chartId, type Rule} from '../context.js';
-import * as say from '../wording.js';
+import type {Rule} from '../context.js';
+import {chartAnchor} from '../chartAnchor.js';
 
 /** An unfavourable variance this many times the pack's `thresholds.targetPct` is an alert (common practice: 2.5). */
 export const ALERT_MULTIPLE = 2.5;
@@ -12,7 +12,7 @@ export const ALERT_MULTIPLE = 2.5;
  */
 export const versusTargetRule: Rule = {
   name: 'versus-target',
-  run({series: s, combination, plan, fmt, analysis: a}) {
+  run({series: s, combination, plan, words: w, analysis: a}) {
     const v = combination?.versusTarget;
     if (!v) return [];
     const threshold = plan.thresholds.targetPct;
@@ -26,15 +26,16 @@ export const versusTargetRule: Rule = {
         {
           key: span === 'period' ? 'period' : 'year-to-date',
           severity,
-          text: say.versusTarget({
+          text: w.t('callout.versusTarget', {
             label: s.label,
-            span: span === 'period' ? fmt.period(a.frequency, a.end) : null,
-            actual: fmt.value(x.actual, s.unit),
-            target: fmt.value(x.target, s.unit),
-            percent: fmt.size(x.percent),
-            above: x.difference > 0,
-            favourable: x.favourable,
-            calendar: calendar === null ? null : fmt.signed(calendar, s.unit),
+            span: span === 'period' ? 'period' : 'yearToDate',
+            period: w.periodLong(a.frequency, a.end),
+            actual: w.value(x.actual, s.unit),
+            target: w.value(x.target, s.unit),
+            percent: w.share(x.percent),
+            above: x.difference > 0 ? 'yes' : 'no',
+            favourable: x.favourable ? 'yes' : 'no',
+            calendar: calendar === null ? 'none' : w.signed(calendar, s.unit),
           }),
           figures: {
             actual: x.actual,
@@ -43,7 +44,7 @@ export const versusTargetRule: Rule = {
             percent: x.percent,
             calendarPart: x.calendarPart,
           },
-          chart: chartId(s.id, 'overview'),
+          chart: chartAnchor(s.id, 'overview'),
           magnitude: Math.min(10, Math.abs(x.percent) / threshold),
           periodsAgo: 0,
         },

@@ -1,8 +1,8 @@
 import {yearAgo} from '../../time/period.js';
-import {chartId, type Rule} from '../context.js';
+import type {Rule} from '../context.js';
+import {chartAnchor} from '../chartAnchor.js';
 import {robustZ} from '../robustZ.js';
 import {severityFromZ} from '../severity.js';
-import * as say from '../wording.js';
 
 /**
  * Latest year-on-year move: the review period's original value against the same period a year earlier,
@@ -11,7 +11,7 @@ import * as say from '../wording.js';
  */
 export const yearOnYearRule: Rule = {
   name: 'year-on-year',
-  run({analysis: a, series: s, fmt, isRate}) {
+  run({analysis: a, series: s, words: w, isRate}) {
     const last = a.end - a.start;
     const lag = a.end - yearAgo(a.frequency, a.end);
     const value = a.original[last];
@@ -29,17 +29,17 @@ export const yearOnYearRule: Rule = {
       {
         key: null,
         severity,
-        text: say.yearOnYear({
+        text: w.t('callout.yearOnYear', {
           label: s.label,
-          stock: s.kind === 'stock' || isRate,
-          value: fmt.value(value, s.unit),
-          period: fmt.period(a.frequency, a.end),
-          change: say.change(fmt, change, isRate),
-          yearAgo: fmt.period(a.frequency, a.end - lag),
-          unusual: severity !== 'info',
+          stock: s.kind === 'stock' || isRate ? 'yes' : 'no',
+          value: w.value(value, s.unit),
+          period: w.periodLong(a.frequency, a.end),
+          change: w.change(change, isRate),
+          yearAgo: w.periodLong(a.frequency, a.end - lag),
+          unusual: severity !== 'info' ? 'yes' : 'no',
         }),
         figures: {value, previous, change, ...(Number.isFinite(z) ? {z} : {})},
-        chart: chartId(s.id, 'yoy'),
+        chart: chartAnchor(s.id, 'yoy'),
         magnitude: Number.isFinite(z) ? Math.abs(z) : 0,
         periodsAgo: 0,
       },

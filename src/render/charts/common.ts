@@ -5,6 +5,7 @@ import type {Field} from 'vega-lite/types_unstable/channeldef.js';
 import type {Frequency} from '../../time/period.js';
 import {periodStartDay, periodsPerYear} from '../../time/period.js';
 import type {Theme} from '../theme.js';
+import type {Words} from '../../words/index.js';
 
 /**
  * Shared pieces of every chart spec: sizes, the theme's axis and legend styles, UTC time axes and the
@@ -21,6 +22,8 @@ export interface ChartContext {
   unit: string | null;
   /** Season names for the seasonal-pattern axis (Jan…Dec, Q1…Q4). */
   seasonNames: string[];
+  /** Legend and axis words in the pack's language. */
+  words: Words;
 }
 
 export const SCHEMA = 'https://vega.github.io/schema/vega-lite/v6.json';

@@ -1,6 +1,8 @@
 import type {TopLevelSpec} from 'vega-lite';
 import type {TurningPoint} from '../../analyse/cycle/types.js';
 import {epoch, finite, frame, round, timeX, type ChartContext, utcTime, when, zeroRule} from './common.js';
+import {hasFinite, type SeriesChart} from './seriesChart.js';
+import {phaseWords} from '../../words/index.js';
 
 /** Deviation from long-run trend (percent) with dated turning points and the current phase. */
 export interface CycleInput {
@@ -10,8 +12,6 @@ export interface CycleInput {
   description: string;
 }
 
-export const TURN_KEYS = ['Peak', 'Trough', 'Provisional peak', 'Provisional trough'] as const;
-
 const TURN_SHAPES = ['triangle-down', 'triangle-up', 'triangle-down', 'triangle-up'];
 
 /**
@@ -20,7 +20,8 @@ const TURN_SHAPES = ['triangle-down', 'triangle-up', 'triangle-down', 'triangle-
  * marked (the caption names the current phase). O(n).
  */
 export function cycleChart(input: CycleInput, ctx: ChartContext): TopLevelSpec {
-  const {theme, frequency} = ctx;
+  const {theme, frequency, words: w} = ctx;
+  const TURN_KEYS = [w.t('legend.peak'), w.t('legend.trough'), w.t('legend.provisionalPeak'), w.t('legend.provisionalTrough')];
   const t = (i: number) => epoch(frequency, input.start + i);
   const values = input.gap.map((g, i) => ({t: t(i), v: round(finite(g))}));
   const turns = input.turningPoints
@@ -45,7 +46,7 @@ export function cycleChart(input: CycleInput, ctx: ChartContext): TopLevelSpec {
         mark: {type: 'area', color: theme.tint, opacity: 0.9},
         encoding: {
           x: timeX(frequency, input.gap.length),
-          y: {field: 'v', type: 'quantitative', title: '% from long-run trend', axis: {format: ',~r'}},
+          y: {field: 'v', type: 'quantitative', title: w.t('axis.cycle'), axis: {format: ',~r'}},
           y2: {datum: 0},
         },
       },
@@ -79,3 +80,21 @@ export function cycleChart(input: CycleInput, ctx: ChartContext): TopLevelSpec {
     ],
   };
 }
+
+/** Registry entry: the gap to the long-run trend with its turning points. */
+export const cycleEntry: SeriesChart = {
+  name: 'cycle',
+  row: 3,
+  shows: ({analysis: a}) => a.cycle !== null && hasFinite(a.cycle.gap),
+  build({series: s, analysis: a, words: w}, ctx) {
+    const cy = a.cycle!;
+    const phase = phaseWords(w, cy);
+    const description = w.t('describe.cycle', {name: s.label, n: cy.turningPoints.length, phase});
+    const provisional = cy.turningPoints.some((p) => p.provisional) ? ` ${w.t('chart.provisionalNote')}` : '';
+    return {
+      caption: w.t('chart.cycle'),
+      spec: cycleChart({start: a.start, gap: cy.gap, turningPoints: cy.turningPoints, description}, ctx),
+      note: `${w.t('chart.cycleNote', {phase})}${provisional}`,
+    };
+  },
+};

@@ -1,5 +1,7 @@
 import type {TopLevelSpec} from 'vega-lite';
 import type {ForecastResult} from '../../analyse/forecast/types.js';
+import {hasFinite, type SeriesChart} from './seriesChart.js';
+import {shortMethod} from '../../words/index.js';
 import {periodsPerYear} from '../../time/period.js';
 import {when, VALUE_FORMAT, epoch, finite, round, timeX, utcTime, type ChartContext, frame} from './common.js';
 
@@ -13,8 +15,6 @@ export interface ForecastInput {
   description: string;
 }
 
-export const FORECAST_KEYS = ['Actual', 'Forecast', 'Back-test (one step ahead)'] as const;
-
 /**
  * Forecast chart: the widest and narrowest interval as stacked shaded bands (outer band lighter), the
  * central forecast as a dashed accent line joined to the last actual, recent actuals as a solid dark line,
@@ -22,7 +22,8 @@ export const FORECAST_KEYS = ['Actual', 'Forecast', 'Back-test (one step ahead)'
  * outer and inner one are drawn). O(n + h).
  */
 export function forecastChart(input: ForecastInput, ctx: ChartContext): TopLevelSpec {
-  const {theme, frequency} = ctx;
+  const {theme, frequency, words: w} = ctx;
+  const FORECAST_KEYS = [w.t('legend.actual'), w.t('legend.forecast'), w.t('legend.backtest')];
   const f = input.forecast;
   const n = input.original.length;
   const recent = input.recent ?? (frequency === 'weekly' ? 2 : 3) * periodsPerYear[frequency];
@@ -30,7 +31,7 @@ export function forecastChart(input: ForecastInput, ctx: ChartContext): TopLevel
   const t = (offset: number) => epoch(frequency, input.start + offset);
   const levels = [...f.levels].sort((a, b) => b - a);
   const shown = levels.length > 1 ? [levels[0], levels[levels.length - 1]] : levels;
-  const bandNames = shown.map((l) => `${l}% range`);
+  const bandNames = shown.map((l) => w.t('label.levelRange', {level: String(l)}));
   const bands = shown.flatMap((level, k) =>
     f.mean.map((_, h) => ({
       t: t(f.startOffset + h),
@@ -93,3 +94,26 @@ export function forecastChart(input: ForecastInput, ctx: ChartContext): TopLevel
     ],
   };
 }
+
+/** Registry entry: the forecast with its ranges, when the forecast has a finite value. */
+export const forecastEntry: SeriesChart = {
+  name: 'forecast',
+  row: 4,
+  shows: ({analysis: a}) => a.forecast !== null && hasFinite(a.forecast.mean),
+  build({series: s, analysis: a, words: w}, ctx) {
+    const fc = a.forecast!;
+    const levels = [...fc.levels].sort((x, y) => x - y);
+    const description = w.t('describe.forecast', {
+      name: s.label,
+      n: String(fc.mean.length),
+      method: shortMethod(w, fc.method),
+      first: w.number(fc.mean[0]),
+      period: w.period(a.frequency, a.start + fc.startOffset),
+    });
+    return {
+      caption: w.t('chart.forecast', {levels: w.list(levels.map((l) => w.share(l, 0)))}),
+      spec: forecastChart({start: a.start, original: a.original, forecast: fc, description}, ctx),
+      note: null,
+    };
+  },
+};

@@ -1,6 +1,7 @@
 import type {TopLevelSpec} from 'vega-lite';
 import type {Outlier} from '../../analyse/decompose/types.js';
 import {epoch, finite, frame, round, timeX, type ChartContext, utcTime, when, zeroRule} from './common.js';
+import {hasFinite, type SeriesChart} from './seriesChart.js';
 
 /** Irregular component with the flagged points. */
 export interface IrregularInput {
@@ -13,19 +14,18 @@ export interface IrregularInput {
   description: string;
 }
 
-export const OUTLIER_KINDS: Record<Outlier['kind'], string> = {
-  additive: 'One-off',
-  'level-shift': 'Level shift',
-  temporary: 'Temporary change',
-};
-
 /**
  * The irregular as thin stems from zero (percent for multiplicative factors, the unit for additive ones),
  * with flagged points drawn as larger shapes (one shape per kind) in the contrast colour and labelled with
  * their period. O(n).
  */
 export function irregularChart(input: IrregularInput, ctx: ChartContext): TopLevelSpec {
-  const {theme, frequency} = ctx;
+  const {theme, frequency, words: w} = ctx;
+  const OUTLIER_KINDS: Record<Outlier['kind'], string> = {
+    additive: w.t('legend.additive'),
+    'level-shift': w.t('legend.level-shift'),
+    temporary: w.t('legend.temporary'),
+  };
   const scale = (v: number | null) => (v === null ? null : round(input.model === 'multiplicative' ? (v - 1) * 100 : v));
   const values = input.irregular.map((value, i) => ({t: epoch(frequency, input.start + i), v: scale(finite(value))}));
   const flagged = input.outliers
@@ -52,7 +52,7 @@ export function irregularChart(input: IrregularInput, ctx: ChartContext): TopLev
             field: 'v',
             type: 'quantitative',
             scale: {padding: 14},
-            title: input.model === 'multiplicative' ? '% irregular' : ctx.unit,
+            title: input.model === 'multiplicative' ? w.t('axis.irregular') : ctx.unit,
           },
           y2: {datum: 0},
         },
@@ -86,3 +86,22 @@ export function irregularChart(input: IrregularInput, ctx: ChartContext): TopLev
     ],
   };
 }
+
+/** Registry entry: the irregular of an adjusted series with its flagged values, beside the cycle chart. */
+export const irregularEntry: SeriesChart = {
+  name: 'irregular',
+  row: 3,
+  shows: ({analysis: a}) => a.adjustment !== null && hasFinite(a.adjustment.irregular),
+  build({series: s, analysis: a, words: w}, ctx) {
+    const adj = a.adjustment!;
+    const labels: Record<number, string> = {};
+    for (const o of adj.outliers) labels[o.index] = w.period(a.frequency, a.start + o.index);
+    const flagged = adj.outliers.map((o) => w.t('describe.flagged', {period: labels[o.index], kind: w.t(`outlier.${o.kind}`)}));
+    const description = w.t('describe.irregular', {name: s.label, n: flagged.length, list: flagged.join(', ')});
+    return {
+      caption: w.t(adj.outliers.length > 0 ? 'chart.irregularFlagged' : 'chart.irregular'),
+      spec: irregularChart({start: a.start, irregular: adj.irregular, model: adj.model, outliers: adj.outliers, labels, description}, ctx),
+      note: null,
+    };
+  },
+};

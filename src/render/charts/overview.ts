@@ -1,5 +1,6 @@
 import type {TopLevelSpec} from 'vega-lite';
 import {VALUE_FORMAT, epoch, finite, round, timeX, type ChartContext, frame} from './common.js';
+import {hasFinite, type SeriesChart} from './seriesChart.js';
 
 /** Original values with, when available, the seasonally adjusted series and the trend-cycle. */
 export interface OverviewInput {
@@ -10,15 +11,14 @@ export interface OverviewInput {
   description: string;
 }
 
-export const OVERVIEW_SERIES = ['Original', 'Seasonally adjusted', 'Trend-cycle'] as const;
-
 /**
  * Line chart of the level of a series: original in light neutral (thin), seasonally adjusted in the accent
  * (medium) and trend-cycle in the deep accent (thick), so the three read apart in greyscale by width and
  * lightness. Missing values break the lines. O(n).
  */
 export function overviewChart(input: OverviewInput, ctx: ChartContext): TopLevelSpec {
-  const {theme} = ctx;
+  const {theme, words: w} = ctx;
+  const OVERVIEW_SERIES = [w.t('term.original'), w.t('term.adjusted'), w.t('term.trendCycle')];
   const layers: [string, number[] | null][] = [
     [OVERVIEW_SERIES[0], input.original],
     [OVERVIEW_SERIES[1], input.adjusted],
@@ -51,3 +51,29 @@ export function overviewChart(input: OverviewInput, ctx: ChartContext): TopLevel
     },
   };
 }
+
+/** Registry entry: the first row of every series with a value to draw. */
+export const overviewEntry: SeriesChart = {
+  name: 'overview',
+  row: 1,
+  shows: ({analysis: a}) => hasFinite(a.original),
+  build({series: s, analysis: a, words: w}, ctx) {
+    const adj = a.adjustment;
+    const description = w.t('describe.overview', {
+      name: s.unit ? `${s.label} (${s.unit})` : s.label,
+      from: w.period(a.frequency, a.start),
+      to: w.period(a.frequency, a.end),
+      adjusted: adj ? 'yes' : 'no',
+      latest: w.number(a.original[a.original.length - 1]),
+      period: w.period(a.frequency, a.end),
+    });
+    return {
+      caption: w.t(adj ? 'chart.overview' : 'chart.overviewOriginal'),
+      spec: overviewChart(
+        {start: a.start, original: a.original, adjusted: adj?.adjusted ?? null, trend: adj?.trend ?? null, description},
+        ctx,
+      ),
+      note: null,
+    };
+  },
+};

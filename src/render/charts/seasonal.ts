@@ -1,5 +1,6 @@
 import type {TopLevelSpec} from 'vega-lite';
 import {periodsPerYear, seasonOf, yearOf} from '../../time/period.js';
+import {hasFinite, type SeriesChart} from './seriesChart.js';
 import type {Theme} from '../theme.js';
 import {ramp} from '../theme.js';
 import {SCHEMA, baseConfig, finite, round, type ChartContext} from './common.js';
@@ -54,7 +55,7 @@ export function seasonalChart(input: SeasonalInput, ctx: ChartContext): TopLevel
       y: {
         field: 'v',
         type: 'quantitative',
-        title: input.model === 'multiplicative' ? '% vs normal' : ctx.unit,
+        title: input.model === 'multiplicative' ? ctx.words.t('axis.vsNormal') : ctx.unit,
         axis: {format: ',~r'},
       },
       color: {field: 'year', type: 'ordinal', scale: {domain: years, range: ramp(ctx.theme, years.length)}},
@@ -66,3 +67,19 @@ export function seasonalChart(input: SeasonalInput, ctx: ChartContext): TopLevel
 function legendRight(theme: Theme) {
   return {orient: 'right' as const, direction: 'vertical' as const, labelColor: theme.ink, offset: 8};
 }
+
+/** Registry entry: the seasonal pattern of an adjusted series, beside the year-on-year chart. */
+export const seasonalEntry: SeriesChart = {
+  name: 'seasonal',
+  row: 2,
+  shows: ({analysis: a}) => a.adjustment !== null && hasFinite(a.adjustment.seasonal),
+  build({series: s, analysis: a, words: w}, ctx) {
+    const adj = a.adjustment!;
+    const description = w.t('describe.seasonal', {name: s.label, frequency: a.frequency});
+    return {
+      caption: w.t(adj.model === 'multiplicative' ? 'chart.seasonalPercent' : 'chart.seasonal'),
+      spec: seasonalChart({start: a.start, seasonal: adj.seasonal, model: adj.model, description}, ctx),
+      note: null,
+    };
+  },
+};

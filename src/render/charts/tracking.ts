@@ -27,9 +27,9 @@ const FEW_PERIODS = 6;
  * actual fell inside the published inner band and hollow when outside. O(n).
  */
 export function trackingChart(input: TrackingInput, ctx: ChartContext): TopLevelSpec {
-  const {theme, frequency} = ctx;
-  const inside = `Inside ${input.level}% range`;
-  const outside = `Outside ${input.level}% range`;
+  const {theme, frequency, words: w} = ctx;
+  const inside = w.t('legend.insideRange', {level: String(input.level)});
+  const outside = w.t('legend.outsideRange', {level: String(input.level)});
   const values = input.points
     .filter((p) => Number.isFinite(p.errorPct))
     .map((p) => ({t: epoch(frequency, p.period), v: round(p.errorPct), s: p.series, k: p.inside ? inside : outside}));
@@ -48,7 +48,7 @@ export function trackingChart(input: TrackingInput, ctx: ChartContext): TopLevel
         encoding: {
           // Padding keeps points at the first and last period from being cut by the plot edge.
           x: {...x, scale: {...x.scale, padding: 12}, axis: {...x.axis, ...few}},
-          y: {field: 'v', type: 'quantitative', title: 'Actual vs forecast, %', axis: {format: ',~r'}},
+          y: {field: 'v', type: 'quantitative', title: w.t('axis.tracking'), axis: {format: ',~r'}},
           fill: {field: 'k', type: 'nominal', scale: {domain: [inside, outside], range: [theme.accent, 'white']}},
           shape: {field: 'k', type: 'nominal', scale: {domain: [inside, outside], range: ['circle', 'diamond']}},
         },

@@ -23,14 +23,14 @@ describe('analyseCycle', () => {
     expect(cycle.gap[last]).toBeCloseTo((100 * (gdp[last] - cycle.trend[last])) / cycle.trend[last], 12);
     // 2009Q3: GDP far below trend after the 2008–09 recession, and rising from 2009Q2.
     expect(cycle.phase).toBe('rising-below');
-    expect(cycle.phaseLabel).toBe('below trend, recovering');
+    expect(cycle.phaseLabel).toBe('below trend and recovering');
     expect(cycle.turningPointBasis).toBe('gap');
     expect(cycle.turningPoints.at(-1)).toEqual({index: last - 1, type: 'trough', provisional: true});
     expect(cycle.periodsSinceTurn).toBe(1);
     expect(cycle.stationarity?.level.stationary).toBe(false);
     expect(cycle.realTime?.start).toBe(gdp.length - 8);
     expect(cycle.realTime?.trend.at(-1)).toBeCloseTo(cycle.trend[last], 6);
-    expect(cycle.caution).toMatch(/provisional/);
+    expect(cycle.caution).toEqual({code: 'endPoint', values: {count: expect.any(Number)}});
   });
 
   it('fills missing values for filtering, notes it and keeps the gap missing there', () => {
@@ -42,7 +42,7 @@ describe('analyseCycle', () => {
     if (!r.ok) return;
     expect(r.cycle.gap[50]).toBeNaN();
     expect(Number.isFinite(r.cycle.trend[50])).toBe(true);
-    expect(r.cycle.notes).toEqual(['2 missing values were filled by straight-line interpolation before filtering.']);
+    expect(r.cycle.notes).toEqual([{code: 'cycleFilled', values: {count: 2}}]);
   });
 
   it('uses the Christiano-Fitzgerald band 18–96 months for monthly band-pass and trend = series − cycle', () => {
@@ -57,12 +57,12 @@ describe('analyseCycle', () => {
   });
 
   it('gives a stated reason for empty, all-missing and too-short series', () => {
-    const tooShort = {ok: false, reason: 'cycle needs at least three values'};
+    const tooShort = {ok: false, reason: {code: 'cycleTooShort', values: {}}};
     expect(analyseCycle(new Float64Array(0), quarterlyHp)).toEqual(tooShort);
     expect(analyseCycle(Float64Array.of(1, 2), quarterlyHp)).toEqual(tooShort);
     expect(analyseCycle(Float64Array.of(NaN, NaN, NaN, NaN), quarterlyHp)).toEqual({
       ok: false,
-      reason: 'cycle needs observed, finite values',
+      reason: {code: 'cycleNotFinite', values: {}},
     });
   });
 
@@ -91,7 +91,7 @@ describe('analyseCycle', () => {
             options: {method: method as 'hp', lambda: null},
           });
           if (r.ok) expect(r.cycle.trend.length).toBe(xs.length);
-          else expect(r.reason).toMatch(/^cycle needs/);
+          else expect(r.reason.code).toMatch(/^cycle(TooShort|NotFinite)$/);
         },
       ),
       {numRuns: 200},
@@ -103,7 +103,7 @@ describe('analyseCycle', () => {
     const wave = Float64Array.from({length: 260}, (_, t) => 100 + 5 * Math.sin((2 * Math.PI * t) / 120) + 0.05 * t);
     const x = wave.map((v, t) => v + Math.sin(t * 1.3));
     const r = analyseCycle(x, {frequency: 'weekly', options: {method: 'hp', lambda: null}});
-    if (!r.ok) throw new Error(r.reason);
+    if (!r.ok) throw new Error(r.reason.code);
     expect(r.cycle.options.lambda).toBe(1600 * 13 ** 4);
     // Crests of the wave at weeks 30 and 150, troughs at 90 and 210; the HP gap moves them by a few weeks.
     const dated = r.cycle.turningPoints.map((t) => t.index);
@@ -114,7 +114,7 @@ describe('analyseCycle', () => {
 
   it('honours an explicit λ', () => {
     const r = analyseCycle(gdp, {...quarterlyHp, options: {method: 'hp', lambda: 100}});
-    if (!r.ok) throw new Error(r.reason);
+    if (!r.ok) throw new Error(r.reason.code);
     expect(r.cycle.trend[100]).toBeCloseTo(hodrickPrescott(gdp, {lambda: 100})[100], 9);
   });
 });

@@ -33,7 +33,7 @@ describe('cycle-phase rule', () => {
     const gap = [-1, -0.5, 0, 0.5, 1, 2, 1.8];
     const [d] = runRule(cyclePhaseRule, makeAnalysis(gap, {cycle: cycleOf(gap, {phase: 'falling-above'})}));
     expect(d.text).toBe(
-      'For Net sales, the cycle moved from above trend and rising to above trend but falling in October 2026; the gap to the long-run trend is +1.8%.',
+      'For Net sales, the cycle moved from above trend and rising to above trend and easing in October 2026; the gap to the long-run trend is +1.8%.',
     );
     expect(d.severity).toBe('info'); // a change of direction only
   });
@@ -42,7 +42,7 @@ describe('cycle-phase rule', () => {
     const gap = [1, 0.8, 0.6, 0.4, 0.2, 0.1, -0.3];
     const [d] = runRule(cyclePhaseRule, makeAnalysis(gap, {cycle: cycleOf(gap, {phase: 'falling-below'})}));
     expect(d.text).toBe(
-      'For Net sales, the cycle moved from above trend but falling to below trend and falling in October 2026; the gap to the long-run trend is -0.3%.',
+      'For Net sales, the cycle moved from above trend and easing to below trend and falling in October 2026; the gap to the long-run trend is -0.3%.',
     );
     expect(d.severity).toBe('watch');
   });

@@ -2,7 +2,6 @@ import {describe, expect, it} from 'vitest';
 import type {ForecastResult, Outturn} from '../../../src/analyse/types.js';
 import {forecastOutlookRule} from '../../../src/narrate/callouts/forecastOutlook.js';
 import {outturnRule} from '../../../src/narrate/callouts/outturn.js';
-import {shortMethod} from '../../../src/narrate/wording.js';
 import {forecastAccuracyRule} from '../../../src/narrate/callouts/forecastAccuracy.js';
 import {makeAnalysis, runRule} from '../fixtures.js';
 
@@ -58,18 +57,6 @@ describe('forecast-outlook rule', () => {
     expect(d.text).toBe(
       'The forecast for Net sales is 2,100 EUR k for November 2026 (95% range 1,800 to 2,400 EUR k); model: ETS(M,Ad,M).',
     );
-  });
-});
-
-describe('shortMethod', () => {
-  it('names a combination by its members\' families and leaves a single model alone', () => {
-    expect(
-      shortMethod(
-        'Combination (ETS (7 models, Akaike-weighted), Theta on STL-adjusted data, ARIMA(2,1,2) with drift on STL-adjusted data)',
-      ),
-    ).toBe('a combination of ETS, Theta and ARIMA');
-    expect(shortMethod('Combination (ETS(M,Ad,M), Theta, Damped)')).toBe('a combination of ETS, Theta and damped trend');
-    expect(shortMethod('ETS(M,Ad,M)')).toBe('ETS(M,Ad,M)');
   });
 });
 

@@ -50,7 +50,7 @@ describe('revision rule', () => {
     expect(drafts.map((d) => [d.severity, d.text])).toEqual([
       ['watch', 'The seasonally adjusted figure of Net sales for September 2026 was revised up by 1.8% since the September 2026 pack, from 1,950 to 1,985 EUR k.'],
       ['alert', 'The reported value of Net sales for August 2026 was revised down by 3.5% since the September 2026 pack, from 2,000 to 1,930 EUR k.'],
-      ['watch', 'Since the September 2026 pack, the cycle phase of Net sales for September 2026 changed from above trend and rising to above trend but falling.'],
+      ['watch', 'Since the September 2026 pack, the cycle phase of Net sales for September 2026 changed from above trend and rising to above trend and easing.'],
     ]);
   });
 

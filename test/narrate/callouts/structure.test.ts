@@ -36,7 +36,7 @@ describe('drivers', () => {
       groups: [group({north: 3.1, web: -0.8, south: 0.4}, 2.7)],
     });
     expect(drafts.map((d) => d.text)).toEqual([
-      'Net sales rose 2.7% on a year earlier in October 2026, driven by the North, +3.1 pp; Web subtracted 0.8%.',
+      'Net sales rose 2.7% on a year earlier in October 2026, driven by the North, +3.1 pp; Web subtracted 0.8 pp.',
     ]);
     expect(drafts[0].chart).toBe('chart-group-regions-contributions');
   });
@@ -68,7 +68,7 @@ describe('versus target', () => {
     expect(drafts.map((d) => [d.severity, d.text])).toEqual([
       [
         'watch',
-        'Payroll costs came to 512 EUR k in October 2026, 3.0% above the target of 497 EUR k (unfavourable). The calendar (working days and Easter) accounts for +4.00 EUR k of it.',
+        'Payroll costs came to 512.0 EUR k in October 2026, 3.0% above the target of 497.0 EUR k (unfavourable). The calendar (working days and Easter) accounts for +4.00 EUR k of it.',
       ],
     ]);
   });
@@ -82,7 +82,7 @@ describe('versus target', () => {
       ['year-to-date', 'info'],
     ]);
     expect(drafts[1].text).toBe(
-      'Net sales came to 110 EUR k over the fiscal year to date, 10.0% above the target of 100 EUR k (favourable).',
+      'Net sales came to 110.0 EUR k over the fiscal year to date, 10.0% above the target of 100.0 EUR k (favourable).',
     );
   });
 });

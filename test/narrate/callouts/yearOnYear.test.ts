@@ -43,7 +43,7 @@ describe('year-on-year rule', () => {
 
   it('follows the pack locale (de-DE)', () => {
     const [d] = runRule(yearOnYearRule, sales([3, 4, 5, 6, 7]), {plan: {locale: 'de-DE'}});
-    expect(d.text).toBe('Net sales came to 2.025 EUR k in Oktober 2026, +5,2\u00a0% on Oktober 2025.');
+    expect(d.text).toBe('Net sales für Oktober 2026: 2.025 EUR k, +5,2\u00a0% gegenüber Oktober 2025.');
   });
 
   it('says nothing when either value is missing', () => {
