@@ -36,7 +36,7 @@ export interface BuildSummary {
   period: string;
   folder: string;
   outputs: string[];
-  /** Why the PDF was not written, or null. */
+  /** Why the PDF was not written, or null. Not logged here: the caller says it once for a batch. */
   pdfSkipped: string | null;
 }
 
@@ -95,7 +95,6 @@ export async function build(request: BuildRequest, log: Logger): Promise<BuildSu
         const outline = (await import('./render/view.js')).reportOutline(report);
         pdf = await browser.pdf(html, {...pdfOptions(plan, data.period, periodLabel), outline});
       }
-      if (pdfSkipped) log.warn(pdfSkipped);
     }
   } finally {
     const launched = await ownBrowser;
@@ -119,6 +118,7 @@ export async function build(request: BuildRequest, log: Logger): Promise<BuildSu
     warnings: report.series.map((s) => s.analysis).flatMap((a) =>
       [a.notAdjustedReason ?? [], a.notes, a.forecast?.notes ?? []].flat().map((note) => `${a.id}: ${note}`),
     ),
+    log,
   });
   log.info(`${plan.id} ${periodLabel}: written to ${written.folder}`);
   return {packId: plan.id, period: periodLabel, folder: written.folder, outputs: written.outputs, pdfSkipped};
