@@ -46,12 +46,14 @@ export interface BuildSummary {
  *   pack.yaml ─► loadPlan ─► ingest ─► analyse ─► narrate ─► render ─► archive ─► out/<pack>/<period>/
  */
 export async function build(request: BuildRequest, log: Logger): Promise<BuildSummary> {
+  log.stage?.('config');
   const loaded = await loadPlan(request.packFile, {
     period: request.period,
     outDir: request.outDir,
     formats: request.formats,
     allowDirs: request.allowDirs,
   });
+  log.stage?.('ingest');
   const data = await ingest(loaded);
   // The plan as used: `fromSource` entries expanded into the series ingest found.
   const plan: Plan = {...loaded, series: data.plans};
@@ -79,19 +81,23 @@ export async function build(request: BuildRequest, log: Logger): Promise<BuildSu
         .catch(() => undefined);
     };
     const onResult = wantCharts ? drawAhead : undefined;
+    log.stage?.('analyse');
     const analyses = await analyseAll(plan, data, {jobs: request.jobs, log, onResult, drawing: wantCharts});
     await drawing;
+    log.stage?.('history');
     const draft = () => toResults(assemble(plan, data, analyses, null));
     const {revisionPct} = plan.thresholds;
     const history = await loadHistory(plan.outDir, plan.id, periodLabel, plan.frequency, draft, revisionPct);
     report = assemble(plan, data, analyses, history);
     // The chart and browser libraries load only for packs that draw (about a second of start-up).
     const draw = async () => (await import('./render/html.js')).renderHtml(report, drawn);
+    log.stage?.('render');
     html = plan.formats.includes('html') || wantPdf ? await draw() : null;
     if (wantPdf && html) {
       const browser = request.browser ?? unwrap((await ownBrowser)!);
       if ('missing' in browser) pdfSkipped = browser.missing;
       else {
+        log.stage?.('pdf');
         const outline = (await import('./render/view.js')).reportOutline(report);
         pdf = await browser.pdf(html, {...pdfOptions(plan, data.period, periodLabel), outline});
       }
@@ -100,6 +106,7 @@ export async function build(request: BuildRequest, log: Logger): Promise<BuildSu
     const launched = await ownBrowser;
     if (launched && 'value' in launched && !('missing' in launched.value)) await launched.value.close();
   }
+  log.stage?.('exports');
   const exports: {name: string; content: string | Uint8Array}[] = [];
   if (plan.formats.includes('csv') || plan.formats.includes('xlsx')) {
     const tables = exportTables(report);
@@ -107,6 +114,7 @@ export async function build(request: BuildRequest, log: Logger): Promise<BuildSu
     if (plan.formats.includes('xlsx')) exports.push({name: 'tables.xlsx', content: await tables.xlsx()});
   }
 
+  log.stage?.('archive');
   const written = await archive({
     report,
     html: plan.formats.includes('html') ? html : null,

@@ -33,7 +33,10 @@ export function fontFile(family: string, bold: boolean): string {
   const pattern = `${family.replace(/[:\\-]/g, '\\$&')}${bold ? ':bold' : ''}`;
   let path: string;
   try {
-    path = execFileSync('fc-match', ['-f', '%{file}', pattern], {encoding: 'utf8', stdio: ['ignore', 'pipe', 'ignore']});
+    path = execFileSync('fc-match', ['-f', '%{file}', pattern], {
+      encoding: 'utf8',
+      stdio: ['ignore', 'pipe', 'ignore'],
+    });
   } catch (e) {
     if ((e as NodeJS.ErrnoException).code === 'ENOENT') throw new Error(noFontconfig(family));
     throw e;
