@@ -42,7 +42,9 @@ describe('pack folder lock', () => {
     const infos: string[] = [];
     const waiting = lockPackDir(dir, {info: (m) => infos.push(m), warn: () => undefined});
     expect(await settledWithin(waiting, 600)).toBe(false);
-    expect(infos).toEqual([`waiting for process 1 on ${foreign().host}, which is writing this pack's archive (lock ${path})`]);
+    expect(infos).toEqual([
+      `waiting for process 1 on ${foreign().host}, which is writing this pack's archive (lock ${path})`,
+    ]);
     const old = new Date(Date.now() - STALE_MS - 1000);
     await utimes(path, old, old);
     expect(await settledWithin(waiting, 2000)).toBe(true);

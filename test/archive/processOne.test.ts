@@ -32,7 +32,15 @@ interface Run {
 /** Build the pack as process 1 (old: json only; new: json and csv), killed when it pauses at `pauseAt`. */
 function buildAsProcessOne(work: string, version: 'old' | 'new', pauseAt = 0): Promise<Run> {
   const formats = version === 'old' ? 'json' : 'json,csv';
-  const args = [...UNSHARE, process.execPath, '--import', preload, cli, 'build', join(work, 'pack', 'quarterly-minimal.yaml')];
+  const args = [
+    ...UNSHARE,
+    process.execPath,
+    '--import',
+    preload,
+    cli,
+    'build',
+    join(work, 'pack', 'quarterly-minimal.yaml'),
+  ];
   args.push('--out', join(work, 'out'), '--formats', formats, '--jobs', '1', '--force');
   const env = {...process.env, TZ: 'UTC', FS_STEPS_UNDER: join(work, 'out'), FS_STEPS_PAUSE_AT: String(pauseAt)};
   return new Promise((resolve, reject) => {
@@ -66,7 +74,11 @@ async function periodState(folder: string): Promise<'absent' | 'old' | 'new'> {
   const present = (await listFiles(folder)).filter((f) => f !== 'manifest.json');
   expect(present).toEqual(listed);
   for (const o of manifest.outputs as {path: string; sha256: string}[]) {
-    expect(createHash('sha256').update(await readFile(join(folder, o.path))).digest('hex')).toBe(o.sha256);
+    expect(
+      createHash('sha256')
+        .update(await readFile(join(folder, o.path)))
+        .digest('hex'),
+    ).toBe(o.sha256);
   }
   const version = present.some((f) => f.startsWith('exports/')) ? 'new' : 'old';
   expect(manifest.plan.formats).toEqual(version === 'old' ? ['json'] : ['json', 'csv']);
@@ -104,7 +116,9 @@ describe.skipIf(!canUnshare)('archive crash safety with the command line as proc
       await cp(template, traced, {recursive: true});
       const trace = await buildAsProcessOne(traced, 'new');
       expect(trace.code, trace.stderr).toBe(0);
-      expect(trace.steps.some((s) => /^rename quarterly-minimal\/2025-Q1 quarterly-minimal\/\.2025-Q1\.old-/.test(s))).toBe(true);
+      expect(
+        trace.steps.some((s) => /^rename quarterly-minimal\/2025-Q1 quarterly-minimal\/\.2025-Q1\.old-/.test(s)),
+      ).toBe(true);
       expect(trace.steps.some((s) => /^open quarterly-minimal\/\.lock$/.test(s))).toBe(true);
       const steps = trace.steps.map((_, i) => i + 1);
 

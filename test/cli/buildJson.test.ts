@@ -29,6 +29,10 @@ test('build --json lists every file written with its size and SHA-256', async ()
   expect(onDisk).toContain('exports/summary.csv');
   for (const f of period.files as {path: string; bytes: number; sha256: string}[]) {
     const bytes = await readFile(path.join(period.folder, f.path));
-    expect([f.path, bytes.length, createHash('sha256').update(bytes).digest('hex')]).toEqual([f.path, f.bytes, f.sha256]);
+    expect([f.path, bytes.length, createHash('sha256').update(bytes).digest('hex')]).toEqual([
+      f.path,
+      f.bytes,
+      f.sha256,
+    ]);
   }
 });
