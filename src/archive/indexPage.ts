@@ -1,6 +1,8 @@
+import {readFileSync} from 'node:fs';
+import {join} from 'node:path';
 import {frequencyOf} from '../render/results.js';
 import {parsePeriod, periodLabel} from '../time/period.js';
-import {escapeHtml} from './escapeHtml.js';
+import {packageRoot} from '../version.js';
 import type {Headlines} from './headlines.js';
 import {unreadableResults} from './messages.js';
 
@@ -25,85 +27,80 @@ const LINKS: [file: string, text: string][] = [
   ['manifest.json', 'Manifest'],
 ];
 
-const STYLE = `body{font-family:"Liberation Sans",Arial,sans-serif;margin:2rem auto;max-width:60rem;padding:0 1rem}
-body{color:#1f2a2e}
-h1{font-size:1.6rem;margin-bottom:.2rem}h2{font-size:1.15rem;margin:1.6rem 0 .3rem;border-bottom:1px solid #c9d3d6}
-.muted{color:#5b6a70;font-weight:normal;font-size:.9rem}.links a{margin-right:1rem}
-table{border-collapse:collapse;width:100%;margin-top:.4rem}th,td{padding:.25rem .5rem;border-bottom:1px solid #e4eaec}
-th{text-align:left;font-weight:600}td,th.num{text-align:right}td{font-variant-numeric:tabular-nums}`;
+/** The index page's view model: plain JSON, every text already formatted. */
+interface IndexView {
+  lang: string;
+  title: string;
+  packId: string;
+  count: string;
+  periods: {
+    folder: string;
+    heading: string;
+    links: {href: string; text: string}[];
+    /** Null when the period's figures could not be read (`unreadable` is shown instead). */
+    rows: {label: string; latest: string; yearOnYear: string}[] | null;
+    more: string | null;
+    unreadable: string;
+  }[];
+}
+
+let compiled: HandlebarsTemplateDelegate<IndexView> | null = null;
 
 /**
  * The archive's index.html: every archived period of one pack, newest first, with links to its files
  * and headline figures (each visible series' value in the review period and its year-on-year change, for the
- * first 50 visible series). Self-contained (inline CSS, no script, no external resource); every text from
- * a pack or a folder name is escaped; no clock values, so the same archive gives the same bytes.
+ * first 50 visible series). Drawn from `templates/index.hbs` by handlebars, as the report is (its own
+ * environment, strict, no helpers), so every text from a pack or a folder name is escaped. Self-contained (inline
+ * CSS, no script, no external resource); no clock values, so the same archive gives the same bytes.
+ * Handlebars loads on first use, so commands that write no index (`check`) do not pay for it.
  *
  * Complexity: O(periods × series).
  */
-export function renderIndex(packId: string, entries: IndexEntry[]): string {
-  const sorted = [...entries].sort((a, b) => (a.folder < b.folder ? 1 : a.folder > b.folder ? -1 : 0));
-  const newest = sorted.find((e) => e.results !== null)?.results ?? null;
-  const title = newest?.pack.title ?? packId;
-  const lang = newest?.pack.locale ?? 'en';
-  const sections = sorted.map((e) => section(e)).join('\n');
-  const count = `${sorted.length} period${sorted.length === 1 ? '' : 's'}`;
-  return `<!DOCTYPE html>
-<html lang="${escapeHtml(lang)}">
-<head>
-<meta charset="utf-8">
-<meta name="viewport" content="width=device-width, initial-scale=1">
-<title>${escapeHtml(title)}: archived packs</title>
-<style>${STYLE}</style>
-</head>
-<body>
-<h1>${escapeHtml(title)}</h1>
-<p class="muted">Archived packs of <code>${escapeHtml(packId)}</code>, newest first: ${count}.</p>
-${sections}
-</body>
-</html>
-`;
+export async function renderIndex(packId: string, entries: IndexEntry[]): Promise<string> {
+  if (compiled === null) {
+    const {default: Handlebars} = await import('handlebars');
+    const source = readFileSync(join(packageRoot(), 'templates', 'index.hbs'), 'utf8');
+    compiled = Handlebars.create().compile<IndexView>(source, {strict: true, knownHelpersOnly: true});
+  }
+  return compiled(indexView(packId, entries));
 }
 
-function section(entry: IndexEntry): string {
+function indexView(packId: string, entries: IndexEntry[]): IndexView {
+  const sorted = [...entries].sort((a, b) => (a.folder < b.folder ? 1 : a.folder > b.folder ? -1 : 0));
+  const newest = sorted.find((e) => e.results !== null)?.results ?? null;
+  return {
+    lang: newest?.pack.locale ?? 'en',
+    title: newest?.pack.title ?? packId,
+    packId,
+    count: `${sorted.length} period${sorted.length === 1 ? '' : 's'}`,
+    periods: sorted.map(periodView),
+  };
+}
+
+function periodView(entry: IndexEntry): IndexView['periods'][number] {
   const r = entry.results;
   const index = r === null ? undefined : parsePeriod(frequencyOf(r.pack.frequency), entry.folder);
   const heading = r !== null && index !== undefined ? periodLabel(frequencyOf(r.pack.frequency), index) : entry.folder;
   const href = encodeURIComponent(entry.folder);
-  const links = LINKS.filter(([file]) => entry.files.includes(file))
-    .map(([file, text]) => `<a href="${escapeHtml(`${href}/${file}`)}">${text}</a>`)
-    .join('');
-  const body = r === null ? `<p class="muted">${escapeHtml(unreadableResults())}</p>` : table(r);
-  return `<section id="period-${escapeHtml(entry.folder)}">
-<h2>${escapeHtml(heading)} <span class="muted">${escapeHtml(entry.folder)}</span></h2>
-<p class="links">${links}</p>
-${body}
-</section>`;
-}
-
-function table(r: Headlines): string {
+  const links = LINKS.filter(([file]) => entry.files.includes(file)).map(([file, text]) => ({
+    href: `${href}/${file}`,
+    text,
+  }));
+  const base = {folder: entry.folder, heading, links, unreadable: unreadableResults()};
+  if (r === null) return {...base, rows: null, more: null};
   const locale = safeLocale(r.pack.locale);
   const visible = r.series.filter((s) => !s.hidden);
-  const rows = visible
-    .slice(0, MAX_ROWS)
-    .map((s) => {
-      const unit = s.unit === null ? '' : ` ${s.unit}`;
-      const cells = [value(s.latest, locale) + (s.latest === null ? '' : unit), percent(s.yearOnYear, locale)];
-      const tds = cells.map((c) => `<td>${escapeHtml(c)}</td>`).join('');
-      return `<tr><th scope="row">${escapeHtml(s.label)}</th>${tds}</tr>`;
-    })
-    .join('\n');
-  return `<table>
-<thead><tr><th>Series</th><th class="num">Latest</th><th class="num">Year on year</th></tr></thead>
-<tbody>
-${rows}
-</tbody>
-</table>${more(visible.length - MAX_ROWS, locale)}`;
+  const rows = visible.slice(0, MAX_ROWS).map((s) => ({
+    label: s.label,
+    latest: value(s.latest, locale) + (s.latest === null || s.unit === null ? '' : ` ${s.unit}`),
+    yearOnYear: percent(s.yearOnYear, locale),
+  }));
+  return {...base, rows, more: more(visible.length - MAX_ROWS, locale)};
 }
 
-function more(count: number, locale: string): string {
-  if (count <= 0) return '';
-  const n = new Intl.NumberFormat(locale).format(count);
-  return `\n<p class="muted">and ${n} more series.</p>`;
+function more(count: number, locale: string): string | null {
+  if (count <= 0) return null;
+  return `and ${new Intl.NumberFormat(locale).format(count)} more series.`;
 }
 
 /** Whole numbers from 100 up, else up to two decimals; a dash when missing. */

@@ -24,7 +24,7 @@ export async function writeIndex(outDir: string, packId: string): Promise<string
   const target = join(packDir, 'index.html');
   const tmp = join(packDir, `.index.html.tmp-${randomBytes(8).toString('hex')}`);
   try {
-    await writeFileDurable(tmp, renderIndex(packId, entries));
+    await writeFileDurable(tmp, await renderIndex(packId, entries));
     await rename(tmp, target);
     await syncFolder(packDir);
   } finally {
