@@ -16,7 +16,7 @@ export interface WrittenFile {
 export interface BuiltPeriod {
   pack: string;
   period: string;
-  /** The period folder (as built: relative to the current directory when `--out` was relative). */
+  /** The period folder, an absolute path. */
   folder: string;
   /** Every file in the folder, sorted by path: the manifest's outputs and manifest.json itself. */
   files: WrittenFile[];

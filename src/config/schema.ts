@@ -156,7 +156,7 @@ export const forecastSchema = z
       .nullish()
       .meta(
         doc(
-          'Forecast method; auto chooses among the ETS models and benchmarks by their back-test.',
+          'Forecast method; auto is a weighted mean of ETS, Theta and ARIMA forecasts (the most accurate mix measured on M3).',
           da.forecast.method,
         ),
       ),
@@ -247,7 +247,10 @@ const packSection = z.strictObject({
     ),
   ),
   outDir: optionalText.meta(
-    doc('Folder that holds <pack id>/<period>/; --out wins. Relative to the current directory.', d.pack.outDir),
+    doc(
+      'Folder that holds <pack id>/<period>/, relative to the pack file; --out wins. Default: out in the current directory.',
+      d.pack.outDir,
+    ),
   ),
 });
 
