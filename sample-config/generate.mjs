@@ -23,7 +23,12 @@
 //   Easter: the 10 days before Easter Sunday lift sales by 5% of a month's sales, split between March and April
 //     by how many of those days fall in each month (Easter dates by the Gregorian computus).
 //   Gaps: footfall is blank for 2019-08, 2023-02 and 2023-03 (door counter fault).
-//   Budget: sales_budget runs to 2027-03 (the end of fiscal year 2026/27; the fiscal year starts in April).
+//   Budget: sales_budget runs to 2027-03 (the end of fiscal year 2026/27; the fiscal year starts in April), and so
+//     do payroll_budget and marketing_budget (cost lines: below budget is favourable).
+//   Structure: net sales are the sum of three shop regions (North, Lakes, Coast), each rounded to 0.1, and the web
+//     store (the rest of net sales, also in tenths), so the parts add up exactly; cost of goods sold (cogs) gives a gross margin near 46%, falling by
+//     about a point in the 2023-11 flash sale; transactions give the average basket (net sales / transactions).
+//     These use a second seeded generator, so every other series keeps its values.
 import {mkdirSync, writeFileSync} from 'node:fs';
 import {dirname, join} from 'node:path';
 import {fileURLToPath} from 'node:url';
@@ -128,6 +133,8 @@ const RAW_SEASON = [0.74, 0.78, 0.96, 1.06, 1.14, 1.17, 1.13, 1.04, 0.93, 0.88, 
 const SEASON = RAW_SEASON.map((s) => (s * 12) / RAW_SEASON.reduce((a, b) => a + b, 0));
 
 const rng = mulberry32(20261031);
+// The breakdown of net sales and the cost lines' budgets draw from their own generator (see the header).
+const split = mulberry32(20261101);
 const round = (x, digits) => {
   const f = 10 ** digits;
   return Math.round(x * f) / f;
@@ -157,8 +164,16 @@ for (let t = START; t <= BUDGET_END; t++) {
   const fyStart = m >= 4 ? mi(y, 4) : mi(y - 1, 4);
   const plannedYears = (fyStart - START) / 12 + 0.5;
   const budget = 1480 * Math.pow(1.035, plannedYears) * (t >= SHOP_OPENING ? 1.07 : 1) * 1.04 * season;
+  // Cost budgets: planned 3.5% (payroll) and 4% (marketing) a year, with the planned shape of the year.
+  const payrollBudget = 405 * Math.pow(1.035, plannedYears) * (1 + 0.06 * (season - 1)) * (t >= SHOP_OPENING ? 1.08 : 1) * (m === 12 ? 1.05 : 1);
+  const marketingBudget = 95 * Math.pow(1.04, plannedYears) * (1 + 0.6 * (season - 1));
+  const budgets = {
+    sales_budget: round(budget, 1),
+    payroll_budget: round(payrollBudget, 1),
+    marketing_budget: round(marketingBudget, 1),
+  };
   if (t > END) {
-    trading.push({month: label, sales_budget: round(budget, 1)});
+    trading.push({month: label, ...budgets});
     continue;
   }
 
@@ -216,17 +231,35 @@ for (let t = START; t <= BUDGET_END; t++) {
     (t === mi(2025, 6) ? 1.08 / 1.4 : 1) *
     noise(0.02);
 
+  // Net sales by region and channel: the web store's share grows from 12% to about 20%; the shops split
+  // 45 / 33 / 22 between North, Lakes and Coast (Lakes gains the new shop of 2021-04), each with its own noise.
+  const webShare = 0.12 + 0.009 * years;
+  const shopShares = [0.45, 0.33 * (shop ? 1.2 : 1), 0.22].map((s) => s * (1 + 0.02 * normal(split)));
+  const shopTotal = shopShares.reduce((a, b) => a + b, 0);
+  const [north, lakes, coast] = shopShares.map((s) => round((netSales * (1 - webShare) * s) / shopTotal, 1));
+  // Web sales are what the shops leave of net sales (in tenths, so the parts add up exactly to what is written).
+  const sales = round(netSales, 1);
+  const webSales = Math.round(sales * 10 - north * 10 - lakes * 10 - coast * 10) / 10;
+  const margin = 0.46 - 0.004 * Math.sin((2 * Math.PI * (m - 1)) / 12) - (t === mi(2023, 11) ? 0.012 : 0);
+  const cogs = round(sales * (1 - margin * (1 + 0.01 * normal(split))), 1);
+
   const gap = t === mi(2019, 8) || t === mi(2023, 2) || t === mi(2023, 3);
   trading.push({
     month: label,
-    net_sales: round(netSales, 1),
+    net_sales: sales,
+    sales_north: north,
+    sales_lakes: lakes,
+    sales_coast: coast,
+    web_sales: webSales,
+    cogs,
+    transactions: Math.round((sales * 1000) / basket),
     footfall: gap ? '' : Math.round(footfall),
     avg_basket: round(basket, 2),
     returns_rate: round(returnsRate, 2),
     payroll: round(payroll, 1),
     inventory: round(inventory, 1),
     marketing: round(marketing, 1),
-    sales_budget: round(budget, 1),
+    ...budgets,
   });
   const when = `${MONTHS[m - 1]} ${y}`;
   web.push([when, 'Web sessions', Math.round(webSessions)]);

@@ -2,16 +2,21 @@ import {loadPlan, portablePlan, salvagePlan} from './config/index.js';
 import type {OutputFormat, Plan} from './config/plan.js';
 import {ingest} from './ingest/index.js';
 import type {Dataset} from './ingest/types.js';
-import {analyseAll} from './analyse/index.js';
-import {narrate} from './narrate/index.js';
-import type {PdfBrowser} from './render/index.js';
-import {exportTables} from './render/exports.js';
-import {toResults} from './render/results.js';
-import {archive, loadHistory, refuseExisting} from './archive/index.js';
-import type {Report} from './render/types.js';
+import {checkFormulas, deriveFormulas} from './derive/formulas/index.js';
+import {analyseAll, analysisThreads} from './analyse/index.js';
+import {combine, type Combined} from './combine/index.js';
 import type {SeriesAnalysis} from './analyse/types.js';
-import type {History} from './archive/types.js';
-import {formatPeriod, periodStartDay, civilFromDays} from './time/period.js';
+import {digestOf, type History} from './results/index.js';
+import {loadHistory} from './history/index.js';
+import {narrate} from './narrate/index.js';
+// The render modules are imported one by one: these three are light, and load the chart, browser and workbook
+// libraries only for packs that ask for HTML, PDF or XLSX (a JSON-only build starts about a second sooner).
+import {render} from './render/render.js';
+import {pdfSession, type PdfSession} from './render/pdfSession.js';
+import {chartPrefetch} from './render/chartPrefetch.js';
+import type {Report} from './render/types.js';
+import {archive, refuseExisting} from './archive/index.js';
+import {formatPeriod} from './time/period.js';
 import {toolVersion} from './version.js';
 import {InputError, formatProblem, type Problem} from './errors.js';
 import type {Logger} from './log.js';
@@ -23,12 +28,12 @@ export interface BuildRequest {
   outDir?: string;
   formats?: OutputFormat[];
   force: boolean;
-  /** Worker threads for the analyse stage. */
+  /** Threads at once for the analysis (the main thread counts as one while it draws charts). */
   jobs: number;
   /** Folders outside the pack's own that its files may come from (`--allow-dir`). */
   allowDirs?: string[];
-  /** A browser already open (batch builds reuse one); otherwise one is opened and closed here. */
-  browser?: PdfBrowser | {missing: string} | null;
+  /** The browsers of a batch (see {@link pdfSession}); without one, the build opens and closes its own. */
+  pdf?: PdfSession;
 }
 
 export interface BuildSummary {
@@ -41,95 +46,63 @@ export interface BuildSummary {
 }
 
 /**
- * One pack, one period:
+ * One pack, one period, stage by stage:
  *
- *   pack.yaml ─► loadPlan ─► ingest ─► analyse ─► narrate ─► render ─► archive ─► out/<pack>/<period>/
+ *   pack.yaml ─► config ─► ingest ─► derive ─► analyse ─► combine ─► history ─► narrate ─► render ─► archive
+ *             ─► out/<pack>/<period>/
+ *
+ * Two things overlap the analysis: the browser starts (when a PDF is wanted) and each series' charts are drawn on
+ * the main thread as soon as its analysis arrives (when HTML or PDF is wanted).
  */
 export async function build(request: BuildRequest, log: Logger): Promise<BuildSummary> {
+  const {packFile, period, outDir, formats, allowDirs} = request;
   log.stage?.('config');
-  const loaded = await loadPlan(request.packFile, {
-    period: request.period,
-    outDir: request.outDir,
-    formats: request.formats,
-    allowDirs: request.allowDirs,
-  });
+  const loaded = await loadPlan(packFile, {period, outDir, formats, allowDirs});
   log.stage?.('ingest');
-  const data = await ingest(loaded);
-  // The plan as used: `fromSource` entries expanded into the series ingest found.
-  const plan: Plan = {...loaded, series: data.plans};
+  const read = await ingest(loaded);
+  log.stage?.('derive');
+  const {data, ratios} = deriveFormulas(loaded, read);
+  const plan: Plan = {...loaded, series: data.plans}; // `fromSource` entries expanded, formula kinds resolved
   const periodLabel = formatPeriod(plan.frequency, data.period);
   await refuseExisting(plan.outDir, plan.id, periodLabel, request.force);
-  log.info(`${plan.id} ${periodLabel}: ${data.series.length} series read`);
-  const wantPdf = plan.formats.includes('pdf');
-  // A browser of our own starts now, while the series are analysed, and is closed whatever happens next.
-  // Settled at once into a value or an error, so a failed launch cannot go unhandled while the analysis runs.
-  const launch = async () => (await import('./render/pdf.js')).openBrowser(plan.browser);
-  const ownBrowser = wantPdf && !request.browser ? settle(launch()) : null;
-  let html: string | null;
-  let report: Report;
-  let pdf: Uint8Array | null = null;
-  let pdfSkipped: string | null = null;
+  log.info(`${plan.id} ${periodLabel}: ${read.series.length} series read`);
+  const session = request.pdf ?? pdfSession();
   try {
-    // Charts of each series are drawn as soon as its analysis arrives, while the pool works on the others.
-    const wantCharts = plan.formats.includes('html') || wantPdf;
-    const drawn = new Map<string, string>();
-    let drawing: Promise<void> = Promise.resolve();
-    const drawAhead = (index: number, analysis: SeriesAnalysis) => {
-      drawing = drawing
-        .then(async () => (await import('./render/html.js')).drawSeriesCharts(plan, plan.series[index], analysis, drawn))
-        // A chart that fails here is drawn again by renderHtml, which reports the failure in its place.
-        .catch(() => undefined);
-    };
-    const onResult = wantCharts ? drawAhead : undefined;
+    if (plan.formats.includes('pdf')) session.warm(plan.browser);
+    const charts = plan.formats.includes('html') || plan.formats.includes('pdf') ? chartPrefetch(plan) : null;
+    const threads = analysisThreads(request.jobs, charts !== null);
     log.stage?.('analyse');
-    const analyses = await analyseAll(plan, data, {jobs: request.jobs, log, onResult, drawing: wantCharts});
-    await drawing;
+    const separate = await analyseAll(plan, data, {threads, log, onResult: charts?.add});
+    log.stage?.('combine');
+    const combined = combine(plan, data, separate, ratios);
+    const analyses = combined.analyses;
     log.stage?.('history');
-    const draft = () => toResults(assemble(plan, data, analyses, null));
+    const digest = digestOf(plan, periodLabel, analyses);
     const {revisionPct} = plan.thresholds;
-    const history = await loadHistory(plan.outDir, plan.id, periodLabel, plan.frequency, draft, revisionPct);
-    report = assemble(plan, data, analyses, history);
-    // The chart and browser libraries load only for packs that draw (about a second of start-up).
-    const draw = async () => (await import('./render/html.js')).renderHtml(report, drawn);
+    const history = await loadHistory(plan.outDir, plan.id, periodLabel, plan.frequency, digest, revisionPct);
+    log.stage?.('narrate');
+    const report = narrated(plan, data, combined, history);
     log.stage?.('render');
-    html = plan.formats.includes('html') || wantPdf ? await draw() : null;
-    if (wantPdf && html) {
-      const browser = request.browser ?? unwrap((await ownBrowser)!);
-      if ('missing' in browser) pdfSkipped = browser.missing;
-      else {
-        log.stage?.('pdf');
-        const outline = (await import('./render/view.js')).reportOutline(report);
-        pdf = await browser.pdf(html, {...pdfOptions(plan, data.period, periodLabel), outline});
-      }
-    }
+    const rendered = await render(report, {charts: (await charts?.drawn()) ?? new Map(), session});
+    log.stage?.('archive');
+    const written = await archive({
+      report,
+      html: rendered.html,
+      pdf: rendered.pdf,
+      exports: rendered.exports,
+      digest,
+      outDir: plan.outDir,
+      force: request.force,
+      plan: portablePlan(plan),
+      warnings: runWarnings(analyses),
+      log,
+    });
+    log.info(`${plan.id} ${periodLabel}: written to ${written.folder}`);
+    const {folder, outputs} = written;
+    return {packId: plan.id, period: periodLabel, folder, outputs, pdfSkipped: rendered.pdfSkipped};
   } finally {
-    const launched = await ownBrowser;
-    if (launched && 'value' in launched && !('missing' in launched.value)) await launched.value.close();
+    if (!request.pdf) await session.close();
   }
-  log.stage?.('exports');
-  const exports: {name: string; content: string | Uint8Array}[] = [];
-  if (plan.formats.includes('csv') || plan.formats.includes('xlsx')) {
-    const tables = exportTables(report);
-    if (plan.formats.includes('csv')) exports.push(...tables.csv);
-    if (plan.formats.includes('xlsx')) exports.push({name: 'tables.xlsx', content: await tables.xlsx()});
-  }
-
-  log.stage?.('archive');
-  const written = await archive({
-    report,
-    html: plan.formats.includes('html') ? html : null,
-    pdf,
-    exports,
-    outDir: plan.outDir,
-    force: request.force,
-    plan: portablePlan(plan),
-    warnings: report.series.map((s) => s.analysis).flatMap((a) =>
-      [a.notAdjustedReason ?? [], a.notes, a.forecast?.notes ?? []].flat().map((note) => `${a.id}: ${note}`),
-    ),
-    log,
-  });
-  log.info(`${plan.id} ${periodLabel}: written to ${written.folder}`);
-  return {packId: plan.id, period: periodLabel, folder: written.folder, outputs: written.outputs, pdfSkipped};
 }
 
 /**
@@ -150,6 +123,8 @@ export async function check(packFile: string, log: Logger, allowDirs: string[] =
   if (plan) {
     try {
       data = await ingest(plan);
+      const formulas = checkFormulas(plan, data.plans);
+      if (!formulas.ok) throw new InputError(formulas.problems);
     } catch (e) {
       if (!(e instanceof InputError)) throw e;
       const seen = new Set(problems.map(formatProblem));
@@ -162,54 +137,40 @@ export async function check(packFile: string, log: Logger, allowDirs: string[] =
   }
 }
 
-type Settled<T> = {value: T} | {error: unknown};
-
-function settle<T>(promise: Promise<T>): Promise<Settled<T>> {
-  return promise.then(
-    (value) => ({value}),
-    (error: unknown) => ({error}),
-  );
-}
-
-function unwrap<T>(settled: Settled<T>): T {
-  if ('error' in settled) throw settled.error;
-  return settled.value;
-}
-
-function assemble(plan: Plan, data: Dataset, analyses: SeriesAnalysis[], history: History | null): Report {
+/** The narrate stage: callouts for the pack and each series, gathered with everything render needs. */
+function narrated(plan: Plan, data: Dataset, combined: Combined, history: History | null): Report {
+  const analyses = combined.analyses;
   const narration = narrate({
     plan,
     period: data.period,
     series: plan.series.map((s, i) => ({plan: s, analysis: analyses[i]})),
     history,
+    combined,
   });
   return {
     plan,
     period: data.period,
     periodLabel: formatPeriod(plan.frequency, data.period),
     toolVersion,
-    series: plan.series.map((s, i) => ({plan: s, analysis: analyses[i], callouts: narration.bySeries.get(s.id) ?? []})),
+    series: plan.series.map((s, i) => ({
+      plan: s,
+      analysis: analyses[i],
+      callouts: narration.bySeries.get(s.id) ?? [],
+      combination: combined.series.get(s.id) ?? null,
+    })),
     callouts: narration.pack,
     inputs: data.inputs,
-    notes: data.notes,
+    notes: [...data.notes, ...combined.notes],
     history,
+    groups: combined.groups,
   };
 }
 
-/** PDF dates come from the review period (the day after it ends), never from the clock. */
-function pdfOptions(plan: Plan, period: number, periodLabel: string) {
-  const {year, month, day} = civilFromDays(periodStartDay(plan.frequency, period + 1));
-  return {
-    title: plan.title,
-    periodLabel,
-    paper: plan.branding.paper,
-    orientation: plan.branding.orientation,
-    font: plan.branding.font,
-    footer: plan.branding.footer,
-    locale: plan.locale,
-    tagged: plan.branding.taggedPdf,
-    date: `${year}${String(month).padStart(2, '0')}${String(day).padStart(2, '0')}`,
-  };
+/** What the manifest lists as the run's warnings: each series' notes, prefixed with its id. */
+function runWarnings(analyses: SeriesAnalysis[]): string[] {
+  return analyses.flatMap((a) =>
+    [a.notAdjustedReason ?? [], a.notes, a.forecast?.notes ?? []].flat().map((note) => `${a.id}: ${note}`),
+  );
 }
 
 export {InputError};

@@ -3,6 +3,7 @@ import {adjustSeries} from './decompose/index.js';
 import {analyseCycle} from './cycle/index.js';
 import {fiscalOutturn, forecastSeries} from './forecast/index.js';
 import {computeChanges} from './changes.js';
+import {constantValue} from './numeric/constantValue.js';
 import type {SeriesAnalysis, SeriesInput} from './types.js';
 
 /**
@@ -30,7 +31,7 @@ export function analyseSeries(input: SeriesInput): SeriesAnalysis {
   const range = magnitudeProblem(values);
   const usable = range === null;
   if (range) notes.push(range);
-  const constant = usable ? constantValue(values) : null;
+  const constant = usable ? constantValue(values, 2) : null;
   if (constant !== null) {
     notes.push(`The series is constant at ${constant}: there is no seasonal pattern, trend or cycle to estimate.`);
   }
@@ -133,19 +134,6 @@ function magnitudeProblem(values: Float64Array): string | null {
   return largest > MAX_MAGNITUDE
     ? `Values reach ${largest.toExponential(2)}, beyond the ±1e15 the analysis handles reliably; rescale the series (for example to thousands or millions) to analyse it.`
     : null;
-}
-
-/** The single value of a series whose known values are all equal (at least two of them), else null. */
-function constantValue(values: Float64Array): number | null {
-  let first = NaN;
-  let count = 0;
-  for (const v of values) {
-    if (Number.isNaN(v)) continue;
-    if (count > 0 && v !== first) return null;
-    first = v;
-    count++;
-  }
-  return count >= 2 ? first : null;
 }
 
 function hasData(values: Float64Array, minimum: number): boolean {

@@ -1,9 +1,7 @@
 import {type Frequency, periodsPerYear, yearAgo} from '../time/period.js';
 import {fiscalYearOf} from '../time/fiscal.js';
+import {trendSign} from './trendSign.js';
 import type {Changes} from './types.js';
-
-/** Average change per period below which the trend counts as flat: 0.05% (common practice for monthly packs). */
-const FLAT_PER_PERIOD = 0.0005;
 
 /**
  * Latest-period changes: year-on-year (original), period-on-period (seasonally adjusted, and annualised),
@@ -80,12 +78,12 @@ function aggregate(values: Float64Array, from: number, span: number, kind: 'flow
   return kind === 'flow' ? sum : sum / (span + 1);
 }
 
-/** Direction of the trend-cycle over its last three periods (average change beyond ±0.05% per period). */
+/** Direction of the trend-cycle over its last three periods: the average change per period by {@link trendSign}. */
 function direction(trend: Float64Array): 'rising' | 'falling' | 'flat' {
   const n = trend.length;
   if (n < 4) return 'flat';
   const r = ratio(trend[n - 4], trend[n - 1]);
   if (!Number.isFinite(r)) return 'flat';
-  const perPeriod = r ** (1 / 3) - 1;
-  return perPeriod > FLAT_PER_PERIOD ? 'rising' : perPeriod < -FLAT_PER_PERIOD ? 'falling' : 'flat';
+  const sign = trendSign((r ** (1 / 3) - 1) * 100);
+  return sign > 0 ? 'rising' : sign < 0 ? 'falling' : 'flat';
 }

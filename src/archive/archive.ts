@@ -2,7 +2,8 @@ import {createHash, randomBytes} from 'node:crypto';
 import {mkdir, open, rename, rm} from 'node:fs/promises';
 import {join} from 'node:path';
 import type {Report} from '../render/types.js';
-import {resultsJsonChunks} from '../render/results.js';
+import {digestJson, resultsJsonChunks, type PeriodDigest} from '../results/index.js';
+import {REVISION_WINDOW} from '../history/index.js';
 import {InputError} from '../errors.js';
 import type {Logger} from '../log.js';
 import {headlinesJson} from './headlines.js';
@@ -30,6 +31,8 @@ export interface ArchiveArgs {
   plan: unknown;
   /** Warnings of the run, copied into the manifest. */
   warnings: string[];
+  /** What later periods compare with this one (revisions, forecast tracking), kept as `digest.json`. */
+  digest: PeriodDigest;
   /** Told when the run waits for another run's lock on the pack folder. Default: none. */
   log?: Logger;
   /**
@@ -41,7 +44,7 @@ export interface ArchiveArgs {
 
 /**
  * Write one period's folder `<outDir>/<pack-id>/<period>/` (report.html, report.pdf, results.json,
- * headlines.json, exports/, manifest.json), then regenerate the pack's index.html.
+ * headlines.json, digest.json, exports/, manifest.json), then regenerate the pack's index.html.
  *
  * Crash safety: everything is written into a hidden sibling `.<period>.tmp-<token>` and renamed into
  * place in one step, so the period folder is always either absent, the previous complete folder, or
@@ -74,6 +77,7 @@ export async function archive(args: ArchiveArgs): Promise<{folder: string; outpu
   if (args.pdf !== null) files.push({path: 'report.pdf', content: args.pdf});
   const reportFiles = files.length;
   files.push({path: 'headlines.json', content: headlinesJson(report)});
+  files.push({path: 'digest.json', content: digestJson(args.digest, REVISION_WINDOW)});
   for (const e of [...args.exports].sort((a, b) => (a.name < b.name ? -1 : a.name > b.name ? 1 : 0))) {
     files.push({path: `exports/${e.name}`, content: e.content});
   }
@@ -121,7 +125,7 @@ export async function archive(args: ArchiveArgs): Promise<{folder: string; outpu
     await lock.release();
   }
   await step('done');
-  // Listed in the order report files, results.json, headlines, exports, manifest.
+  // Listed in the order report files, results.json, headlines, digest, exports, manifest.
   const paths = files.map((f) => f.path);
   paths.splice(reportFiles, 0, 'results.json');
   return {folder, outputs: paths.map((p) => join(folder, p))};

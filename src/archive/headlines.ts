@@ -1,5 +1,5 @@
 import {z} from 'zod';
-import {RESULTS_SCHEMA} from '../render/results.js';
+import {RESULTS_SCHEMA} from '../results/index.js';
 import type {Report} from '../render/types.js';
 import {periodsPerYear} from '../time/period.js';
 

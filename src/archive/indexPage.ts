@@ -1,6 +1,6 @@
 import {readFileSync} from 'node:fs';
 import {join} from 'node:path';
-import {frequencyOf} from '../render/results.js';
+import {frequencyOf} from '../results/index.js';
 import {parsePeriod, periodLabel} from '../time/period.js';
 import {packageRoot} from '../version.js';
 import type {Headlines} from './headlines.js';

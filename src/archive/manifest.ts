@@ -1,7 +1,7 @@
 import {dirname, isAbsolute, relative, sep} from 'node:path';
 import type {Report} from '../render/types.js';
 import type {Frequency} from '../time/period.js';
-import {RESULTS_SCHEMA} from '../render/results.js';
+import {RESULTS_SCHEMA} from '../results/index.js';
 import {byteLength, sha256} from './hash.js';
 
 export const MANIFEST_SCHEMA = 'ebbflow/manifest/v1';

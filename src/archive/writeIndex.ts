@@ -2,7 +2,7 @@ import {randomBytes} from 'node:crypto';
 import {readdir, readFile, rename, rm} from 'node:fs/promises';
 import {join} from 'node:path';
 import {headlinesFromResults, parseHeadlines, type Headlines} from './headlines.js';
-import {periodFolders} from './periodFolders.js';
+import {periodFolders} from '../results/index.js';
 import {renderIndex, type IndexEntry} from './indexPage.js';
 import {syncFolder, writeFileDurable} from './durable.js';
 

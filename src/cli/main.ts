@@ -5,9 +5,9 @@ import path from 'node:path';
 import {fileURLToPath} from 'node:url';
 import {Command, CommanderError, Option} from 'commander';
 import {loadPlan, packJsonSchema} from '../config/index.js';
-import type {OutputFormat, Plan} from '../config/plan.js';
+import type {OutputFormat} from '../config/plan.js';
 import {formatProblem, InputError, type Problem} from '../errors.js';
-import type {PdfBrowser} from '../render/index.js';
+import {pdfSession} from '../render/pdfSession.js';
 import {build, check} from '../run.js';
 import {packageRoot, toolVersion} from '../version.js';
 import {initPack} from './init.js';
@@ -107,7 +107,7 @@ async function runBuild(given: string[], opts: BuildOptions, io: Io): Promise<nu
     if (packs.length === 0) return done(null);
   }
   const allowDirs = opts.allowDir.map((d) => path.resolve(d));
-  const jobs: {packFile: string; plan: Plan; period: string | undefined}[] = [];
+  const jobs: {packFile: string; period: string | undefined}[] = [];
   const problems: Problem[] = [];
   for (const packFile of packs) {
     try {
@@ -115,7 +115,7 @@ async function runBuild(given: string[], opts: BuildOptions, io: Io): Promise<nu
       const single = range ? undefined : opts.period;
       const plan = await loadPlan(packFile, {period: single, outDir: opts.out, formats: opts.formats, allowDirs});
       const periods = range ? expandPeriodRange(plan.frequency, opts.period ?? '') : [opts.period];
-      for (const period of periods) jobs.push({packFile, plan, period});
+      for (const period of periods) jobs.push({packFile, period});
     } catch (e) {
       if (!(e instanceof InputError)) return done(fail(e, io, opts.json));
       problems.push(...e.problems);
@@ -124,22 +124,15 @@ async function runBuild(given: string[], opts: BuildOptions, io: Io): Promise<nu
   if (problems.length > 0) return done(fail(new InputError(problems), io, opts.json));
 
   // One browser for the whole batch (per browser setting) instead of one launch per period.
-  const browsers = new Map<string | null, PdfBrowser | {missing: string}>();
-  const shareBrowser = jobs.length > 1;
+  const pdf = pdfSession();
   // A missing browser is said once for the batch, not once per period.
   const said = new Set<string>();
-  let count = 0;
+  let finished = 0;
   try {
     for (const job of jobs) {
-      let browser: PdfBrowser | {missing: string} | undefined;
-      if (shareBrowser && job.plan.formats.includes('pdf')) {
-        const open = async () => (await import('../render/index.js')).openBrowser(job.plan.browser);
-        browser = browsers.get(job.plan.browser) ?? (await open());
-        browsers.set(job.plan.browser, browser);
-      }
       const {packFile, period} = job;
       const {out: outDir, formats, force, jobs: threads} = opts;
-      const summary = await build({packFile, period, outDir, formats, force, jobs: threads, browser, allowDirs}, log);
+      const summary = await build({packFile, period, outDir, formats, force, jobs: threads, pdf, allowDirs}, log);
       if (summary.pdfSkipped && !said.has(summary.pdfSkipped)) {
         said.add(summary.pdfSkipped);
         log.warn(summary.pdfSkipped);
@@ -147,13 +140,13 @@ async function runBuild(given: string[], opts: BuildOptions, io: Io): Promise<nu
       log.finish(`${summary.packId} ${summary.period}`);
       if (opts.json) built.push(await builtPeriod(summary));
       else if (!opts.quiet) io.stdout.write(`${summary.folder}\n`);
-      count++;
+      finished++;
     }
   } catch (e) {
     log.close(); // a progress bar left by the failure goes before the message
-    return done(fail(e, io, opts.json, count));
+    return done(fail(e, io, opts.json, finished));
   } finally {
-    for (const b of browsers.values()) if (!('missing' in b)) await b.close();
+    await pdf.close();
   }
   return done(null);
 }

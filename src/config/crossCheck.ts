@@ -10,6 +10,7 @@ import {
   templateProblems,
 } from './fileAccess.js';
 import type {PathProblem} from './issues.js';
+import {structureCheck} from './structureCheck.js';
 import {hint} from './suggest.js';
 
 /** How a review period is written for each frequency, for messages. */
@@ -152,6 +153,8 @@ export async function crossCheck(
           );
       });
     });
+
+  out.push(...structureCheck(raw, hasFromSource ? null : new Set(seriesIndex.keys())));
 
   const pack = record(root.pack);
   const frequency = pack.frequency;

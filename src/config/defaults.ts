@@ -50,6 +50,8 @@ export const defaultConfig = {
     residualSigma: 3,
     /** Default: 1 percent. */
     revisionPct: 1,
+    /** Default: 2 percent. */
+    targetPct: 2,
   } satisfies Thresholds as Thresholds,
   source: {
     /** Default: `wide` (one column per series). */
@@ -72,7 +74,15 @@ export const defaultConfig = {
     target: null,
     /** Default: false. */
     hidden: false,
-  } as {kind: 'flow' | 'stock'; unit: string | null; target: string | null; hidden: boolean},
+    /** Default: `higher`. */
+    better: 'higher',
+  } as {kind: 'flow'; unit: string | null; target: string | null; hidden: boolean; better: 'higher' | 'lower'},
+  group: {
+    /** Default: `direct`. */
+    adjustTotal: 'direct',
+    /** Default: `mint`. */
+    reconcile: 'mint',
+  } as {adjustTotal: 'direct' | 'indirect'; reconcile: 'mint' | 'ols' | 'bottom-up' | 'none'},
   analysis: {
     decomposition: {
       /** Default: `stl`. */

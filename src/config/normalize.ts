@@ -79,6 +79,8 @@ export function normalize(cfg: PackConfig, ctx: NormalizeContext): Plan {
     const common = {
       unit: entry.unit ?? defaultConfig.series.unit,
       kind: entry.kind ?? defaultConfig.series.kind,
+      better: ('better' in entry ? entry.better : null) ?? defaultConfig.series.better,
+      formula: null,
       hidden: entry.hidden ?? defaultConfig.series.hidden,
       analysis: analysisFor(entry),
       line: ctx.lineOf(['series', i]),
@@ -89,6 +91,16 @@ export function normalize(cfg: PackConfig, ctx: NormalizeContext): Plan {
         template: {...common, source: entry.fromSource, target: null},
         position: series.length,
         line: common.line,
+      });
+    } else if ('formula' in entry) {
+      series.push({
+        ...common,
+        id: entry.id,
+        label: entry.label ?? entry.id,
+        source: '',
+        column: '',
+        formula: {text: entry.formula, line: ctx.lineOf(['series', i, 'formula']), kindGiven: entry.kind != null},
+        target: entry.target ?? defaultConfig.series.target,
       });
     } else {
       series.push({
@@ -133,7 +145,15 @@ export function normalize(cfg: PackConfig, ctx: NormalizeContext): Plan {
     browser: browser !== null && /[\\/]/.test(browser) ? path.resolve(packDir, browser) : browser,
     sources,
     series,
-    groups: (cfg.groups ?? []).map((g) => ({id: g.id, title: g.title, series: [...g.series]})),
+    groups: (cfg.groups ?? []).map((g, i) => ({
+      id: g.id,
+      title: g.title,
+      series: [...g.series],
+      total: g.total ?? null,
+      adjustTotal: g.adjustTotal ?? defaultConfig.group.adjustTotal,
+      reconcile: g.reconcile ?? defaultConfig.group.reconcile,
+      line: ctx.lineOf(['groups', i]),
+    })),
     fromSource,
   };
 }

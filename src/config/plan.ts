@@ -74,6 +74,8 @@ export interface Thresholds {
   residualSigma: number;
   /** Callout when an adjusted figure is revised by more than this many percent. Default: 1. */
   revisionPct: number;
+  /** Callout when a series is further than this many percent from its target. Default: 2. */
+  targetPct: number;
 }
 
 export interface SourcePlan {
@@ -99,23 +101,49 @@ export interface SeriesPlan {
   label: string;
   /** Unit shown after values, e.g. `EUR k`, `orders`. */
   unit: string | null;
+  /** Source id; the empty string for a derived series (`formula` set). */
   source: string;
-  /** Wide layout: column name; long layout: key value. */
+  /** Wide layout: column name; long layout: key value; the empty string for a derived series. */
   column: string;
-  /** `flow` (sums over a period: sales, orders) or `stock` (a level at a date: headcount, inventory). */
-  kind: 'flow' | 'stock';
+  /**
+   * `flow` (sums over a period: sales, orders), `stock` (a level at a date: headcount, inventory) or `ratio` (a
+   * formula numerator / denominator, never summed over periods: its year-to-date figure is the ratio of sums).
+   * Default: `flow`; for a formula whose top operation is a division, `ratio` (resolved by derive).
+   */
+  kind: 'flow' | 'stock' | 'ratio';
+  /** A derived series' formula over other series' ids, or null for a series read from a source. */
+  formula: FormulaPlan | null;
   /** Id of another series holding the target/budget for this one, or null. */
   target: string | null;
+  /** Which way a variance against the target is favourable. Default: `higher` (costs: `lower`). */
+  better: 'higher' | 'lower';
   /** Hidden series are read (e.g. as targets) but get no section of their own. */
   hidden: boolean;
   analysis: AnalysisOptions;
   line: number;
 }
 
+/** A derived series' formula as written. */
+export interface FormulaPlan {
+  text: string;
+  /** Pack-file line of `formula:`. */
+  line: number;
+  /** Whether the pack sets `kind:`; if not, derive makes a formula whose top operation is a division a ratio. */
+  kindGiven: boolean;
+}
+
 export interface GroupPlan {
   id: string;
   title: string;
+  /** The group's series; with a `total`, its parts. */
   series: string[];
+  /** The series the parts add up to, or null for a plain report section. */
+  total: string | null;
+  /** How the total is seasonally adjusted: its own adjustment, or the sum of its adjusted parts. Default: `direct`. */
+  adjustTotal: 'direct' | 'indirect';
+  /** How forecasts of the total and parts are made to add up. Default: `mint`. */
+  reconcile: 'mint' | 'ols' | 'bottom-up' | 'none';
+  line: number;
 }
 
 /** Per-series analysis options after merging `defaults` with the series' own keys. */

@@ -288,6 +288,16 @@ const thresholdsSection = z.strictObject({
     .min(0)
     .nullish()
     .meta(doc('A revision larger than this percentage gets a callout.', d.thresholds.revisionPct)),
+  targetPct: z
+    .number()
+    .min(0)
+    .nullish()
+    .meta(
+      doc(
+        'A series further than this percentage from its target (period or fiscal year to date) gets a callout.',
+        d.thresholds.targetPct,
+      ),
+    ),
 });
 
 const sourceEntry = z.strictObject({
@@ -311,10 +321,15 @@ const sourceEntry = z.strictObject({
 });
 
 const seriesUnit = optionalText.meta(doc('Unit shown beside the figures, e.g. EUR k.', d.series.unit));
-const seriesKind = z
-  .enum(['flow', 'stock'])
-  .nullish()
-  .meta(doc('flow: sums over a period (sales, orders); stock: a level (headcount, inventory).', d.series.kind));
+const seriesKind = z.enum(['flow', 'stock', 'ratio']);
+const seriesKindDoc = doc(
+  'flow: sums over a period (sales, orders); stock: a level (headcount, inventory); ratio: a formula numerator / ' +
+    'denominator. Default: flow, or ratio for a formula whose top operation is a division.',
+);
+const better = z.enum(['higher', 'lower']);
+const betterDoc = doc('Which side of the target is favourable (lower for costs); needs a target.', d.series.better);
+const seriesLabel = optionalText.meta(doc('Name shown in the report. Default: the id.'));
+const seriesTarget = optionalText.meta(doc("Id of another series holding this one's target or budget.", d.series.target));
 const seriesHidden = z
   .boolean()
   .nullish()
@@ -322,12 +337,31 @@ const seriesHidden = z
 
 const seriesEntry = z.strictObject({
   id: slug.meta(doc('Unique id of the series (lowercase letters, digits, hyphens). Required.')),
-  label: optionalText.meta(doc('Name shown in the report. Default: the id.')),
+  label: seriesLabel,
   unit: seriesUnit,
-  source: text.meta(doc('Id of the source the series is read from. Required.')),
+  source: text.meta(doc('Id of the source the series is read from. Required (or formula instead).')),
   column: optionalText.meta(doc('Column (wide) or key (long) of the series in its source. Default: the id.')),
-  kind: seriesKind,
-  target: optionalText.meta(doc("Id of another series holding this one's target or budget.", d.series.target)),
+  kind: seriesKind.nullish().meta(seriesKindDoc),
+  target: seriesTarget,
+  better: better.nullish().meta(betterDoc),
+  hidden: seriesHidden,
+  ...analysisShape,
+});
+
+/** A derived series: `formula:` over other series' ids instead of `source:` (see src/derive/formulas/). */
+const formulaEntry = z.strictObject({
+  id: slug.meta(doc('Unique id of the series (lowercase letters, digits, hyphens). Required.')),
+  label: seriesLabel,
+  unit: seriesUnit,
+  formula: text.meta(
+    doc(
+      "Instead of source: other series' ids with + - * /, brackets, numbers and sum(a, b, …); a minus between two " +
+        'ids has spaces around it (net-sales - cogs). Required.',
+    ),
+  ),
+  kind: seriesKind.nullish().meta(seriesKindDoc),
+  target: seriesTarget,
+  better: better.nullish().meta(betterDoc),
   hidden: seriesHidden,
   ...analysisShape,
 });
@@ -336,7 +370,10 @@ const seriesEntry = z.strictObject({
 const fromSourceEntry = z.strictObject({
   fromSource: text.meta(doc('Id of a long source: every key in it becomes a series with these settings. Required.')),
   unit: seriesUnit,
-  kind: seriesKind,
+  kind: z
+    .enum(['flow', 'stock'])
+    .nullish()
+    .meta(doc('flow: sums over a period (sales, orders); stock: a level (headcount, inventory).', d.series.kind)),
   hidden: seriesHidden,
   ...analysisShape,
 });
@@ -345,6 +382,20 @@ const groupEntry = z.strictObject({
   id: slug.meta(doc('Unique id of the group. Required.')),
   title: text.meta(doc('Heading of the report section. Required.')),
   series: z.array(text).min(1).meta(doc('Ids of the series in the section, in order. Required.')),
+  total: optionalText.meta(doc('Id of a series that the group\'s series add up to.', null)),
+  adjustTotal: z
+    .enum(['direct', 'indirect'])
+    .nullish()
+    .meta(
+      doc(
+        "direct: the total's own seasonal adjustment; indirect: the sum of its adjusted parts. Needs total.",
+        d.group.adjustTotal,
+      ),
+    ),
+  reconcile: z
+    .enum(['mint', 'ols', 'bottom-up', 'none'])
+    .nullish()
+    .meta(doc('How the forecasts of a hierarchy are made to add up; one method per hierarchy.', d.group.reconcile)),
 });
 
 export const packSchema = z
@@ -354,11 +405,12 @@ export const packSchema = z
     thresholds: thresholdsSection.nullish().meta(doc('When figures are flagged in callouts.')),
     sources: z.array(sourceEntry).min(1).meta(doc('Data files the series are read from. Required.')),
     series: z
-      .array(z.union([seriesEntry, fromSourceEntry]))
+      .array(z.union([seriesEntry, formulaEntry, fromSourceEntry]))
       .min(1)
       .meta(
         doc(
-          'Series to analyse: each from a source column or key, or {fromSource: ID} for every key of a long source. Required.',
+          'Series to analyse: each from a source column or key, a formula over other series, or {fromSource: ID} ' +
+            'for every key of a long source. Required.',
         ),
       ),
     groups: z.array(groupEntry).nullish().meta(doc('Report sections, each a titled list of series.')),
@@ -372,6 +424,7 @@ export const packSchema = z
 /** A pack file as validated by the schema, before defaults and paths are resolved. */
 export type PackConfig = z.output<typeof packSchema>;
 export type SeriesEntry = z.output<typeof seriesEntry>;
+export type FormulaEntry = z.output<typeof formulaEntry>;
 export type FromSourceEntry = z.output<typeof fromSourceEntry>;
 /** The analysis blocks as written (every key optional). */
 export type AnalysisConfig = z.output<z.ZodObject<typeof analysisShape>>;

@@ -38,6 +38,8 @@ export async function ingest(plan: Plan): Promise<Dataset> {
 
   const found: {plan: SeriesPlan; data: SourceData; store: PeriodStore; range: {first: number; last: number}}[] = [];
   for (const s of plans) {
+    // Derived series (formulas) are made from the others by derive.
+    if (s.formula !== null) continue;
     const data = reads.get(s.source);
     if (data === undefined) {
       problems.add(plan.packFile, s.line, null, msg.unknownSource(s.id, s.source));

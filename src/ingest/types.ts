@@ -41,13 +41,13 @@ export interface InputFile {
 export interface Dataset {
   /** Review period index: the pack's period, or the last period with data in any series. */
   period: number;
-  /** Every series the pack names (visible and hidden), in pack order. */
+  /** Every series the pack reads from a source (visible and hidden), in pack order; derive adds the formulas. */
   series: Series[];
   inputs: InputFile[];
   notes: DataNote[];
   /**
-   * The plan of each series, index-aligned with `series`: the pack's own series and those expanded from
-   * `fromSource` entries (id = slug of the key, label = column = key), in pack order. Always set by `ingest`.
+   * The plan of each series: the pack's own series and those expanded from `fromSource` entries (id = slug of
+   * the key, label = column = key), in pack order, derived series (formulas) included. Always set by `ingest`.
    */
   plans: SeriesPlan[];
 }

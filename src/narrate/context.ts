@@ -1,6 +1,7 @@
 import type {Plan, SeriesPlan} from '../config/plan.js';
 import type {SeriesAnalysis} from '../analyse/types.js';
-import type {History} from '../archive/types.js';
+import type {History} from '../results/index.js';
+import type {GroupResult, SeriesCombination} from '../combine/index.js';
 import type {Callout} from './types.js';
 import type {NarrateFormat} from './format.js';
 
@@ -15,6 +16,10 @@ export interface RuleContext {
   fmt: NarrateFormat;
   /** True when the series is a rate in percent (unit `%`): its changes are stated in percentage points. */
   isRate: boolean;
+  /** What the combine stage found for this series (variance against target, reconciliation), or null. */
+  combination: SeriesCombination | null;
+  /** Every group with a total (contributions of its parts), in pack order. */
+  groups: readonly GroupResult[];
 }
 
 /**
@@ -44,4 +49,9 @@ export type ChartPart = 'overview' | 'seasonal' | 'yoy' | 'irregular' | 'forecas
 
 export function chartId(seriesId: string, part: ChartPart): string {
   return `chart-${seriesId}-${part}`;
+}
+
+/** Anchor id of a group's contributions chart: `chart-group-<group>-contributions`. */
+export function groupChartId(groupId: string): string {
+  return `chart-group-${groupId}-contributions`;
 }

@@ -1,7 +1,8 @@
 import type {Plan, SeriesPlan} from '../config/plan.js';
 import type {SeriesAnalysis} from '../analyse/types.js';
-import type {History} from '../archive/types.js';
+import type {History} from '../results/index.js';
 import {periodsPerYear} from '../time/period.js';
+import type {GroupResult, SeriesCombination} from '../combine/index.js';
 import type {Callout} from './types.js';
 import type {RuleContext} from './context.js';
 import {narrateFormat} from './format.js';
@@ -18,6 +19,8 @@ export interface NarrateInput {
   period: number;
   series: {plan: SeriesPlan; analysis: SeriesAnalysis}[];
   history: History | null;
+  /** The combine stage's findings: per series id, and the groups with a total. Absent for a pack without them. */
+  combined?: {series: ReadonlyMap<string, SeriesCombination>; groups: readonly GroupResult[]};
 }
 
 /**
@@ -44,6 +47,8 @@ export function narrate(input: NarrateInput): {pack: Callout[]; bySeries: Map<st
       history: input.history,
       fmt,
       isRate: series.unit === '%',
+      combination: input.combined?.series.get(series.id) ?? null,
+      groups: input.combined?.groups ?? [],
     };
     const ppy = periodsPerYear[analysis.frequency];
     const list: {callout: Callout; order: [number, number]}[] = [];

@@ -13,6 +13,8 @@ import {dataQualityRule} from './callouts/dataQuality.js';
 import {revisionsRule} from './callouts/revisions.js';
 import {forecastTrackingRule} from './callouts/forecastTracking.js';
 import {forecastCheckRule} from './callouts/forecastCheck.js';
+import {driversRule} from './callouts/drivers.js';
+import {versusTargetRule} from './callouts/versusTarget.js';
 
 /** Every callout rule, in the fixed order that breaks ranking ties. Adding a callout: one file, one line here. */
 export const rules: readonly Rule[] = [
@@ -30,4 +32,6 @@ export const rules: readonly Rule[] = [
   revisionsRule,
   forecastTrackingRule,
   forecastCheckRule,
+  driversRule,
+  versusTargetRule,
 ];

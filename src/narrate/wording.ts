@@ -329,3 +329,38 @@ function sentence(text: string): string {
   const t = text.trim();
   return /[.!?]$/.test(t) ? t : `${t}.`;
 }
+
+/** "Net sales rose 4.2% on a year earlier in October 2026, driven by Shop sales, +3.1 points; Web subtracted 0.8." */
+export function drivers(a: {
+  label: string;
+  /** Unsigned size of the total's year-on-year change, and its direction. */
+  change: string;
+  rose: boolean;
+  period: string;
+  driver: {label: string; points: string};
+  against: {label: string; points: string; subtracted: boolean} | null;
+}): string {
+  const other = a.against
+    ? `; ${a.against.label} ${a.against.subtracted ? 'subtracted' : 'added'} ${a.against.points}`
+    : '';
+  return `${a.label} ${a.rose ? 'rose' : 'fell'} ${a.change} on a year earlier in ${a.period}, driven by ${a.driver.label}, ${a.driver.points}${other}.`;
+}
+
+/** "Payroll costs came to 512 EUR k in October 2026, 3.1% above the target of 497 EUR k (unfavourable)." */
+export function versusTarget(a: {
+  label: string;
+  /** The period's name, or null for the fiscal year to date. */
+  span: string | null;
+  actual: string;
+  target: string;
+  percent: string;
+  above: boolean;
+  favourable: boolean;
+  calendar: string | null;
+}): string {
+  const when = a.span === null ? 'over the fiscal year to date' : `in ${a.span}`;
+  const side = `${a.percent} ${a.above ? 'above' : 'below'} the target of ${a.target}`;
+  const calendar =
+    a.calendar === null ? '' : ` The calendar (working days and Easter) accounts for ${a.calendar} of it.`;
+  return `${a.label} came to ${a.actual} ${when}, ${side} (${a.favourable ? 'favourable' : 'unfavourable'}).${calendar}`;
+}

@@ -1,6 +1,6 @@
 import ExcelJS from 'exceljs';
 import {civilFromDays, periodStartDay} from '../time/period.js';
-import type {ColumnFormat, Table} from './exports.js';
+import type {ColumnFormat, Table} from './table.js';
 import type {Report} from './types.js';
 
 /** Display formats; the cells keep full precision. Percent columns already hold percent (5.2 = 5.2%). */

@@ -2,7 +2,8 @@ import type {Plan, SeriesPlan} from '../config/plan.js';
 import type {InputFile, DataNote} from '../ingest/types.js';
 import type {SeriesAnalysis} from '../analyse/types.js';
 import type {Callout} from '../narrate/types.js';
-import type {History} from '../archive/types.js';
+import type {History} from '../results/index.js';
+import type {GroupResult, ReconciledBacktest, SeriesCombination} from '../combine/index.js';
 
 /** Everything the render stage needs; plain data. */
 export interface Report {
@@ -18,6 +19,8 @@ export interface Report {
   notes: DataNote[];
   /** Comparison with earlier archived packs; null for the first pack of an archive. */
   history: History | null;
+  /** Groups with a total (contributions, direct against indirect adjustment, reconciled back-test), in pack order. */
+  groups: (GroupResult & {backtest: ReconciledBacktest | null})[];
 }
 
 export interface ReportSeries {
@@ -25,4 +28,6 @@ export interface ReportSeries {
   analysis: SeriesAnalysis;
   /** This series' callouts, ranked. */
   callouts: Callout[];
+  /** Variance against target and forecast reconciliation (combine stage); null when the series has neither. */
+  combination: SeriesCombination | null;
 }

@@ -236,7 +236,8 @@ export function seriesFigureSlots(plan: Plan, series: SeriesPlan, analysis: Seri
   const f = formatter(plan.locale);
   const theme = themeFor(plan.branding.accent, plan.branding.font);
   const geometry = pageGeometry(plan.branding.paper, plan.branding.orientation);
-  return seriesView({plan: series, analysis, callouts: []}, null, f, theme, geometry, plan.frequency).rows.flat();
+  return seriesView({plan: series, analysis, callouts: [], combination: null}, null, f, theme, geometry, plan.frequency)
+    .rows.flat();
 }
 
 interface Placed {
@@ -246,13 +247,13 @@ interface Placed {
   group: number | null;
 }
 
-/** Groups first, in plan order; then every visible series not in a group, each on its own. */
+/** Groups first, in plan order (a group's total before its parts); then every visible series not in a group. */
 function orderSeries(report: Report, visible: ReportSeries[]): Placed[] {
   const byId = new Map(visible.map((s) => [s.plan.id, s]));
   const placed = new Set<string>();
   const out: Placed[] = [];
   report.plan.groups.forEach((group, index) => {
-    for (const id of group.series) {
+    for (const id of group.total === null ? group.series : [group.total, ...group.series]) {
       const entry = byId.get(id);
       if (!entry || placed.has(id)) continue;
       placed.add(id);

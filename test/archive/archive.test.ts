@@ -4,13 +4,14 @@ import {mkdir, readdir, readFile, stat, writeFile} from 'node:fs/promises';
 import {join} from 'node:path';
 import {archive, type ArchiveArgs} from '../../src/archive/archive.js';
 import {InputError} from '../../src/errors.js';
-import {report} from './fixtures/report.js';
+import {digestOfReport, report} from './fixtures/report.js';
 import {listFiles, snapshot, tempDir, deadPid} from './helpers.js';
 import type {Report} from '../../src/render/types.js';
 
 function args(outDir: string, rep: Report, extra: Partial<ArchiveArgs> = {}): ArchiveArgs {
   return {
     report: rep,
+    digest: digestOfReport(rep),
     html: '<!DOCTYPE html><p>report</p>',
     pdf: Uint8Array.of(37, 80, 68, 70),
     exports: [
@@ -33,6 +34,7 @@ describe('archive', () => {
     const {folder, outputs} = await archive(args(out, oct()));
     expect(folder).toBe(join(out, 'harbourline-monthly', '2026-10'));
     expect(await listFiles(folder)).toEqual([
+      'digest.json',
       'exports/series.csv',
       'exports/tables.xlsx',
       'headlines.json',
@@ -46,7 +48,7 @@ describe('archive', () => {
     const keys = ['schema', 'tool', 'resultsSchema', 'pack', 'plan', 'inputs', 'outputs', 'warnings'];
     expect(Object.keys(manifest)).toEqual(keys);
     expect(manifest.tool).toEqual({name: 'ebbflow', version: '0.1.0'});
-    expect(manifest.resultsSchema).toBe('ebbflow/results/v1');
+    expect(manifest.resultsSchema).toBe('ebbflow/results/v2');
     expect(manifest.pack.period).toBe('2026-10');
     expect(manifest.plan).toEqual({
       id: 'harbourline-monthly',
@@ -109,7 +111,7 @@ describe('archive', () => {
     await archive(args(out, oct(), {force: true, html: '<p>second</p>', pdf: null, exports: []}));
     const folder = join(out, 'harbourline-monthly', '2026-10');
     expect(await readFile(join(folder, 'report.html'), 'utf8')).toBe('<p>second</p>');
-    expect(await listFiles(folder)).toEqual(['headlines.json', 'manifest.json', 'report.html', 'results.json']);
+    expect(await listFiles(folder)).toEqual(['digest.json', 'headlines.json', 'manifest.json', 'report.html', 'results.json']);
     expect(await readdir(join(out, 'harbourline-monthly'))).toEqual(['2026-10', 'index.html']);
   });
 

@@ -5,8 +5,8 @@ import {archive} from '../../src/archive/archive.js';
 import {writeIndex} from '../../src/archive/writeIndex.js';
 import {renderIndex} from '../../src/archive/indexPage.js';
 import {headlinesFromResults, headlinesJson, headlinesOf} from '../../src/archive/headlines.js';
-import {resultsJson} from '../../src/render/results.js';
-import {report} from './fixtures/report.js';
+import {resultsJson} from '../../src/results/index.js';
+import {digestOfReport, report} from './fixtures/report.js';
 import {tempDir} from './helpers.js';
 
 const evil = '<img src=x onerror=alert(1)>';
@@ -19,7 +19,7 @@ describe('index.html', () => {
         title: `Pack "${evil}" & co`,
       });
       const html = '<p>r</p>';
-      await archive({report: rep, html, pdf: null, exports: [], outDir: out, force: false, plan: null, warnings: []});
+      await archive({report: rep, digest: digestOfReport(rep), html, pdf: null, exports: [], outDir: out, force: false, plan: null, warnings: []});
     }
     await mkdir(join(out, 'harbourline-monthly', '2026-08'));
     const html = await readFile(join(out, 'harbourline-monthly', 'index.html'), 'utf8');
@@ -62,7 +62,7 @@ describe('index.html', () => {
   it('reads headlines.json, not results.json, and gives the same figures as results.json would', async () => {
     const out = await tempDir();
     const rep = report(2026, 10, [{id: 'net-sales', label: 'Net sales'}]);
-    await archive({report: rep, html: null, pdf: null, exports: [], outDir: out, force: false, plan: null, warnings: []});
+    await archive({report: rep, digest: digestOfReport(rep), html: null, pdf: null, exports: [], outDir: out, force: false, plan: null, warnings: []});
     const dir = join(out, 'harbourline-monthly', '2026-10');
     expect(await readFile(join(dir, 'headlines.json'), 'utf8')).toBe(headlinesJson(rep));
     expect(headlinesFromResults(resultsJson(rep))).toEqual(headlinesOf(rep));
@@ -77,7 +77,7 @@ describe('index.html', () => {
   it('falls back to results.json for a folder archived before headlines.json existed', async () => {
     const out = await tempDir();
     const rep = report(2026, 10, [{id: 'net-sales', label: 'Net sales'}]);
-    await archive({report: rep, html: null, pdf: null, exports: [], outDir: out, force: false, plan: null, warnings: []});
+    await archive({report: rep, digest: digestOfReport(rep), html: null, pdf: null, exports: [], outDir: out, force: false, plan: null, warnings: []});
     const before = await readFile(join(out, 'harbourline-monthly', 'index.html'), 'utf8');
     await rm(join(out, 'harbourline-monthly', '2026-10', 'headlines.json'));
     await writeIndex(out, 'harbourline-monthly');

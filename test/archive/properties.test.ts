@@ -1,11 +1,11 @@
 /** Invariants of results.json and the history functions, checked on random inputs (fast-check). */
 import {describe, expect, it} from 'vitest';
 import fc from 'fast-check';
-import {parseResults, resultsJson} from '../../src/render/results.js';
-import {revisions} from '../../src/archive/revisions.js';
-import {summariseTracking, trackForecasts} from '../../src/archive/tracking.js';
+import {parseResults, resultsJson} from '../../src/results/index.js';
+import {revisions} from '../../src/history/revisions.js';
+import {summariseTracking, trackForecasts} from '../../src/history/tracking.js';
 import {report} from './fixtures/report.js';
-import {hand, quarters} from './results-like.js';
+import {hand, quarters} from '../history/digests.js';
 
 const value = fc.oneof(
   fc.double(),

@@ -7,9 +7,9 @@
 import {mkdtemp, rm} from 'node:fs/promises';
 import {tmpdir} from 'node:os';
 import {join} from 'node:path';
-import {archive, loadHistory, writeIndex} from '../../src/archive/index.js';
-import {toResults} from '../../src/render/results.js';
-import {report} from '../archive/fixtures/report.js';
+import {archive, writeIndex} from '../../src/archive/index.js';
+import {loadHistory} from '../../src/history/index.js';
+import {digestOfReport, report} from '../archive/fixtures/report.js';
 
 const PERIODS = 12;
 const SERIES = 20;
@@ -46,6 +46,7 @@ export async function run(): Promise<void> {
         const t0 = start();
         await archive({
           report: rep,
+          digest: digestOfReport(rep),
           html,
           pdf,
           exports: [{name: 'series.csv', content: 'period,value\n'.repeat(2_000)}],
@@ -59,9 +60,9 @@ export async function run(): Promise<void> {
       const t1 = start();
       await writeIndex(out, 'harbourline-monthly');
       indexMs.push(t1());
-      const current = toResults(report(2027, 1, specs));
+      const current = digestOfReport(report(2027, 1, specs));
       const t2 = start();
-      await loadHistory(out, 'harbourline-monthly', '2027-01', 'monthly', () => current, 1);
+      await loadHistory(out, 'harbourline-monthly', '2027-01', 'monthly', current, 1);
       historyMs.push(t2());
     } finally {
       await rm(out, {recursive: true, force: true});

@@ -5,7 +5,8 @@
  * per series beside the published figures.
  *
  * Data: ../shared/benchmarks/m3/m3-{monthly,quarterly}.csv relative to the repository root (Makridakis & Hibon 2000,
- * converted from the R package Mcomp 2.9; see its README). Prints a note and exits 0 when absent.
+ * converted from the R package Mcomp 2.9; see its README), or the folder in EBBFLOW_M3_DIR (a worktree elsewhere).
+ * Prints a note and exits 0 when absent.
  * Work is split over worker threads (one per core, at most 2). With Rscript present, forecast::ets is timed on a
  * subset of monthly series in the same run, after ours on the same subset in the main thread (each alone, series
  * after series), and the time ratio printed.
@@ -140,7 +141,7 @@ function timeR(series: M3Series[]): number | null {
 
 async function main(): Promise<void> {
   const root = resolve(dirname(fileURLToPath(import.meta.url)), '../../..');
-  const dataDir = resolve(root, '../shared/benchmarks/m3');
+  const dataDir = process.env.EBBFLOW_M3_DIR ?? resolve(root, '../shared/benchmarks/m3');
   const files = ['m3-monthly.csv', 'm3-quarterly.csv'].map((f) => join(dataDir, f));
   if (!files.every(existsSync)) {
     console.log(`M3 data not found under ${dataDir}; nothing to benchmark.`);

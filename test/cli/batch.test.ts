@@ -5,9 +5,9 @@ import {fileURLToPath} from 'node:url';
 import {beforeAll, beforeEach, describe, expect, test, vi} from 'vitest';
 
 // The pipeline and the browser are replaced: these tests are about how the command line splits and runs a batch.
-const pipeline = vi.hoisted(() => ({build: vi.fn(), check: vi.fn(), openBrowser: vi.fn(), close: vi.fn()}));
+const pipeline = vi.hoisted(() => ({build: vi.fn(), check: vi.fn(), close: vi.fn(), session: {} as object}));
 vi.mock('../../src/run.js', () => ({build: pipeline.build, check: pipeline.check}));
-vi.mock('../../src/render/index.js', () => ({openBrowser: pipeline.openBrowser}));
+vi.mock('../../src/render/pdfSession.js', () => ({pdfSession: () => pipeline.session}));
 
 const {main} = await import('../../src/cli/main.js');
 
@@ -42,19 +42,16 @@ beforeEach(() => {
     const id = path.basename(req.packFile, '.yaml');
     return {packId: id, period: req.period ?? '2026-Q1', folder: `/out/${id}/${req.period ?? '2026-Q1'}`, outputs: []};
   });
-  pipeline.openBrowser.mockResolvedValue({pdf: vi.fn(), close: pipeline.close});
+  pipeline.session = {warm: vi.fn(), print: vi.fn(), close: pipeline.close};
 });
 
 describe('many packs', () => {
-  test('are built in the order given, all with one browser, closed once at the end', async () => {
+  test('are built in the order given, all with one browser session, closed once at the end', async () => {
     const {code, stdout} = await run(['build', ...names.map(pack), '--formats', 'html,pdf']);
     expect(code).toBe(0);
     expect(builtPacks()).toEqual(names);
     expect(stdout.split('\n').filter(Boolean)).toHaveLength(5);
-    expect(pipeline.openBrowser).toHaveBeenCalledTimes(1);
-    const browser = pipeline.build.mock.calls[0][0].browser;
-    expect(browser).toBeDefined();
-    for (const c of pipeline.build.mock.calls) expect(c[0].browser).toBe(browser);
+    for (const c of pipeline.build.mock.calls) expect(c[0].pdf).toBe(pipeline.session);
     expect(pipeline.close).toHaveBeenCalledTimes(1);
   });
 
@@ -66,14 +63,6 @@ describe('many packs', () => {
     expect(stderr).toBe('ebbflow: out of disk space\n');
     expect(pipeline.build).toHaveBeenCalledTimes(2);
     expect(pipeline.close).toHaveBeenCalledTimes(1);
-  });
-
-  test('without a browser every pack is still built (the PDF is skipped per pack)', async () => {
-    pipeline.openBrowser.mockResolvedValue({missing: 'no browser found'});
-    expect((await run(['build', ...names.map(pack), '--formats', 'pdf'])).code).toBe(0);
-    expect(pipeline.openBrowser).toHaveBeenCalledTimes(1);
-    for (const c of pipeline.build.mock.calls) expect(c[0].browser).toEqual({missing: 'no browser found'});
-    expect(pipeline.close).not.toHaveBeenCalled();
   });
 });
 

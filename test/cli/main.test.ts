@@ -9,9 +9,9 @@ import {loadPlan} from '../../src/config/index.js';
 import {InputError} from '../../src/errors.js';
 
 // The pipeline and the browser are replaced: these tests are about the command line only.
-const pipeline = vi.hoisted(() => ({build: vi.fn(), check: vi.fn(), openBrowser: vi.fn(), close: vi.fn()}));
+const pipeline = vi.hoisted(() => ({build: vi.fn(), check: vi.fn(), close: vi.fn(), session: {} as object}));
 vi.mock('../../src/run.js', () => ({build: pipeline.build, check: pipeline.check}));
-vi.mock('../../src/render/index.js', () => ({openBrowser: pipeline.openBrowser}));
+vi.mock('../../src/render/pdfSession.js', () => ({pdfSession: () => pipeline.session}));
 
 const {main} = await import('../../src/cli/main.js');
 
@@ -32,7 +32,7 @@ async function run(argv: string[], env: NodeJS.ProcessEnv = {}) {
 }
 
 const badInput = new InputError([
-  {file: 'pack.yaml', line: 12, column: 5, message: 'series[1].kind must be one of flow, stock'},
+  {file: 'pack.yaml', line: 12, column: 5, message: 'series[1].kind must be one of flow, stock, ratio'},
   {file: 'data/x.csv', line: 40, column: null, message: 'not a number: "n/a"'},
 ]);
 
@@ -46,7 +46,7 @@ beforeEach(() => {
     pdfSkipped: null,
   }));
   pipeline.check.mockResolvedValue(undefined);
-  pipeline.openBrowser.mockResolvedValue({pdf: vi.fn(), close: pipeline.close});
+  pipeline.session = {warm: vi.fn(), print: vi.fn(), close: pipeline.close};
 });
 
 describe('help and version', () => {
@@ -106,27 +106,18 @@ describe('build', () => {
       formats: ['html', 'json'],
       force: true,
       jobs: 3,
-      browser: undefined,
+      pdf: pipeline.session,
       allowDirs: [],
     });
-    expect(pipeline.openBrowser).not.toHaveBeenCalled();
   });
 
-  test('a period range builds each period in order, sharing one browser', async () => {
+  test('a period range builds each period in order, sharing one browser session', async () => {
     const {code, stdout} = await run(['build', minimalPack, '--period', '2025-Q3..2026-Q1']);
     expect(code).toBe(0);
     expect(pipeline.build.mock.calls.map((c) => c[0].period)).toEqual(['2025-Q3', '2025-Q4', '2026-Q1']);
     expect(stdout).toBe('/out/p/2025-Q3\n/out/p/2025-Q4\n/out/p/2026-Q1\n');
-    expect(pipeline.openBrowser).toHaveBeenCalledTimes(1);
     expect(pipeline.close).toHaveBeenCalledTimes(1);
-    const browser = pipeline.build.mock.calls[0][0].browser;
-    for (const c of pipeline.build.mock.calls) expect(c[0].browser).toBe(browser);
-  });
-
-  test('no browser is opened when the formats leave out pdf', async () => {
-    await run(['build', minimalPack, validPack, '--formats', 'json']);
-    expect(pipeline.build).toHaveBeenCalledTimes(2);
-    expect(pipeline.openBrowser).not.toHaveBeenCalled();
+    for (const c of pipeline.build.mock.calls) expect(c[0].pdf).toBe(pipeline.session);
   });
 
   test('a bad range is bad input', async () => {
@@ -169,7 +160,7 @@ describe('build', () => {
     const {code, stderr} = await run(['build', minimalPack, '--period', '2025-Q3..2025-Q4', '--formats', 'html']);
     expect(code).toBe(2);
     expect(stderr).toBe(
-      'pack.yaml:12:5: series[1].kind must be one of flow, stock\n' +
+      'pack.yaml:12:5: series[1].kind must be one of flow, stock, ratio\n' +
         'data/x.csv:40: not a number: "n/a"\n' +
         '2 problems; the 1 period folder built before were kept\n',
     );
@@ -197,7 +188,7 @@ describe('check', () => {
     const {code, stderr} = await run(['check', 'a.yaml', 'b.yaml']);
     expect(code).toBe(2);
     expect(stderr).toBe(
-      'pack.yaml:12:5: series[1].kind must be one of flow, stock\n' +
+      'pack.yaml:12:5: series[1].kind must be one of flow, stock, ratio\n' +
         'data/x.csv:40: not a number: "n/a"\n' +
         'b.yaml:3:1: pack.title is required\n' +
         '3 problems; nothing was written\n',

@@ -80,6 +80,7 @@ describe('the packed package', () => {
     const built = spawnSync(bin, [...args, '--json'], {encoding: 'utf8', env});
     expect(built.status, built.stderr).toBe(0);
     expect(JSON.parse(built.stdout).built[0].files.map((f: {path: string}) => f.path)).toEqual([
+      'digest.json',
       'headlines.json',
       'manifest.json',
       'results.json',

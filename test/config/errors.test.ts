@@ -67,7 +67,7 @@ describe('schema problems point at the key', () => {
   test('a value outside an enum', async () => {
     const yaml = `${head}${longKeys}${okSeries}\n  - id: orders\n    source: trading\n    kind: stok`;
     expect(await problems(yaml)).toEqual([
-      '17:5: series[1].kind must be one of flow, stock',
+      '17:5: series[1].kind must be one of flow, stock, ratio',
     ]);
   });
 
@@ -265,7 +265,7 @@ series:
       expect.stringMatching(/^7:5: sources\[0\]\.file not found: data\/missing\.csv/),
       '8:5: sources[0] has an unknown key layot; did you mean layout?',
       '11:5: series[0].source names no source: nowhere',
-      '12:5: series[0].kind must be one of flow, stock',
+      '12:5: series[0].kind must be one of flow, stock, ratio',
     ]);
   });
 });

@@ -4,7 +4,7 @@ import {describe, expect, test} from 'vitest';
 import {defaultConfig, loadPlan} from '../../src/config/index.js';
 import type {AnalysisOptions} from '../../src/config/plan.js';
 import {monthIndex, quarterIndex} from '../../src/time/period.js';
-import {analysisOptions} from '../fixtures/planDefaults.js';
+import {analysisOptions} from '../fixtures/plans.js';
 
 const fixtures = fileURLToPath(new URL('../fixtures/config/', import.meta.url));
 const validPack = path.join(fixtures, 'valid', 'pack.yaml');
@@ -30,7 +30,17 @@ describe('a valid pack', async () => {
       fiscalYearStart: 4,
       browser: null,
     });
-    expect(plan.groups).toEqual([{id: 'money', title: 'Money', series: ['takings', 'staff']}]);
+    expect(plan.groups).toEqual([
+      {
+        id: 'money',
+        title: 'Money',
+        series: ['takings', 'staff'],
+        total: null,
+        adjustTotal: 'direct',
+        reconcile: 'mint',
+        line: 45,
+      },
+    ]);
   });
 
   test('resolves paths against the pack file', () => {

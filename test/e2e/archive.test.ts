@@ -224,8 +224,15 @@ describe('archive through the CLI', () => {
       expect(run.code).toBe(0);
 
       const r = await readJson(join(packDir, '2026-10', 'results.json'));
-      const data = r.history.revisions.filter((x: any) => x.kind === 'data');
-      expect(data).toHaveLength(1);
+      // The corrected value, and the formula series computed from it (gross-margin = 100 · (net-sales − cogs) /
+      // net-sales, avg-basket = 1000 · net-sales / transactions), revised in the same period.
+      const revised = r.history.revisions.filter((x: any) => x.kind === 'data');
+      expect(revised.map((x: any) => `${x.seriesId} ${x.period}`).sort()).toEqual([
+        'avg-basket 2026-03',
+        'gross-margin 2026-03',
+        'net-sales 2026-03',
+      ]);
+      const data = revised.filter((x: any) => x.seriesId === 'net-sales');
       expect(data[0]).toMatchObject({
         seriesId: 'net-sales',
         period: '2026-03',
@@ -298,7 +305,7 @@ describe('a build killed part-way', () => {
       expect(original).not.toBe('absent');
 
       // While analysing: nothing of the archive has been touched yet.
-      expect(await buildAndKill('2026-10', true, {log: '10 series read'})).toBe('killed');
+      expect(await buildAndKill('2026-10', true, {log: ' series read'})).toBe('killed');
       expect(await completeOrAbsent(folder)).toBe(original);
 
       // While writing the temporary folder of a replacement: the old folder or, if the kill came late, the new one

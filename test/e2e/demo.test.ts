@@ -32,7 +32,7 @@ describe('demo pack, end to end', () => {
   });
 
   it('results.json follows the contract field names', () => {
-    expect(results.schema).toBe('ebbflow/results/v1');
+    expect(results.schema).toBe('ebbflow/results/v2');
     expect(results.pack).toMatchObject({period: '2026-10', frequency: 12});
     expect(results.series.length).toBeGreaterThanOrEqual(8);
     const s = results.series[0];
@@ -61,8 +61,11 @@ describe('demo pack, end to end', () => {
     const pdf = join(folder, 'report.pdf');
     const xml = execFileSync('pdftohtml', ['-xml', '-i', '-q', '-stdout', pdf], {encoding: 'utf8'});
     const outline = xml.slice(xml.indexOf('<outline>'));
-    // sample-config/monthly-pack.yaml: group "Trading" holds net-sales, footfall, avg-basket, returns-rate.
-    expect(outline).toMatch(/<item page="\d+">Trading<\/item>\s*<outline>\s*<item page="\d+">Net sales<\/item>/);
+    // sample-config/monthly-pack.yaml: group "Sales by channel" has net-sales as its total, shop and web sales as
+    // its parts; a group's total comes before its parts.
+    expect(outline).toMatch(
+      /<item page="\d+">Sales by channel<\/item>\s*<outline>\s*<item page="\d+">Net sales<\/item>\s*<item page="\d+">Shop sales<\/item>/,
+    );
     for (const title of ['At a glance', 'Web store', 'Costs and stock', 'Methods and cautions', 'Data notes']) {
       expect(outline).toContain(`>${title}</item>`);
     }

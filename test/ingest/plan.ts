@@ -2,7 +2,7 @@ import {dirname, join} from 'node:path';
 import {fileURLToPath} from 'node:url';
 import type {AnalysisOptions, FromSourcePlan, Plan, SeriesPlan, SourcePlan} from '../../src/config/plan.js';
 import type {Frequency} from '../../src/time/period.js';
-import {analysisOptions, defaultBranding, defaultThresholds} from '../fixtures/planDefaults.js';
+import {analysisOptions, planFixture, seriesPlanFixture} from '../fixtures/plans.js';
 
 export const FIXTURES = join(dirname(fileURLToPath(import.meta.url)), '..', 'fixtures', 'ingest');
 
@@ -26,19 +26,7 @@ export function source(id: string, file: string, more: Partial<SourcePlan> = {})
 }
 
 export function series(id: string, sourceId: string, more: Partial<SeriesPlan> = {}): SeriesPlan {
-  return {
-    id,
-    label: id,
-    unit: null,
-    source: sourceId,
-    column: id,
-    kind: 'flow',
-    target: null,
-    hidden: false,
-    analysis,
-    line: 10,
-    ...more,
-  };
+  return seriesPlanFixture({id, source: sourceId, analysis, ...more});
 }
 
 export function fromSource(sourceId: string, position: number): FromSourcePlan {
@@ -47,26 +35,5 @@ export function fromSource(sourceId: string, position: number): FromSourcePlan {
 }
 
 export function plan(frequency: Frequency, sources: SourcePlan[], list: SeriesPlan[], more: Partial<Plan> = {}): Plan {
-  return {
-    packFile: join(FIXTURES, 'pack.yaml'),
-    id: 'test',
-    title: 'Test',
-    subtitle: null,
-    organisation: null,
-    preparedBy: null,
-    confidentiality: null,
-    frequency,
-    period: null,
-    formats: ['json'],
-    locale: 'en-GB',
-    fiscalYearStart: 1,
-    branding: {...defaultBranding},
-    thresholds: {...defaultThresholds},
-    outDir: '/tmp/out',
-    browser: null,
-    sources,
-    series: list,
-    groups: [],
-    ...more,
-  };
+  return planFixture({packFile: join(FIXTURES, 'pack.yaml'), id: 'test', title: 'Test', frequency, sources, series: list, ...more});
 }

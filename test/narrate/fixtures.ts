@@ -8,44 +8,28 @@ export const OCT_2026 = monthIndex(2026, 10);
 export const options: AnalysisOptions = analysisOptions({decomposition: {model: 'multiplicative'}});
 
 export function makePlan(over: Partial<Plan> = {}): Plan {
-  return {
+  return planFixture({
     packFile: '/packs/demo.yaml',
     id: 'demo',
     title: 'Demo',
-    subtitle: null,
-    organisation: null,
-    preparedBy: null,
-    confidentiality: null,
-    frequency: 'monthly',
     period: OCT_2026,
     formats: ['html'],
-    locale: 'en-GB',
     fiscalYearStart: 4,
-    branding: {...defaultBranding},
-    thresholds: {...defaultThresholds},
     outDir: '/out',
-    browser: null,
-    sources: [],
-    series: [],
-    groups: [],
     ...over,
-  };
+  });
 }
 
 export function makeSeriesPlan(over: Partial<SeriesPlan> = {}): SeriesPlan {
-  return {
+  return seriesPlanFixture({
     id: 'net-sales',
     label: 'Net sales',
     unit: 'EUR k',
-    source: 'trading',
     column: 'net_sales',
-    kind: 'flow',
-    target: null,
-    hidden: false,
     analysis: options,
     line: 1,
     ...over,
-  };
+  });
 }
 
 export function makeChanges(over: Partial<Changes> = {}): Changes {
@@ -110,16 +94,23 @@ export function cycleOf(pattern: number[], n: number): number[] {
   return Array.from({length: n}, (_, i) => pattern[i % pattern.length]);
 }
 
-import type {History} from '../../src/archive/types.js';
+import type {History} from '../../src/results/index.js';
 import type {Draft, Rule} from '../../src/narrate/context.js';
 import {narrateFormat} from '../../src/narrate/format.js';
-import {analysisOptions, defaultBranding, defaultThresholds} from '../fixtures/planDefaults.js';
+import type {GroupResult, SeriesCombination} from '../../src/combine/index.js';
+import {analysisOptions, planFixture, seriesPlanFixture} from '../fixtures/plans.js';
 
 /** Run one rule on one series with the en-GB (or given) locale. */
 export function runRule(
   rule: Rule,
   analysis: SeriesAnalysis,
-  args: {series?: Partial<SeriesPlan>; plan?: Partial<Plan>; history?: History | null} = {},
+  args: {
+    series?: Partial<SeriesPlan>;
+    plan?: Partial<Plan>;
+    history?: History | null;
+    combination?: SeriesCombination | null;
+    groups?: GroupResult[];
+  } = {},
 ): Draft[] {
   const plan = makePlan(args.plan);
   const series = makeSeriesPlan(args.series);
@@ -131,5 +122,7 @@ export function runRule(
     history: args.history ?? null,
     fmt: narrateFormat(plan.locale),
     isRate: series.unit === '%',
+    combination: args.combination ?? null,
+    groups: args.groups ?? [],
   });
 }

@@ -4,7 +4,7 @@ import {parse} from 'csv-parse/sync';
 import {buildTables, exportTables, neutralise} from '../../src/render/exports.js';
 import {sheetNames} from '../../src/render/exportsXlsx.js';
 import type {Report} from '../../src/render/types.js';
-import type {History} from '../../src/archive/types.js';
+import type {History} from '../../src/results/index.js';
 import {makeAdjustment, makeAnalysis, makeChanges, makePlan, makeSeriesPlan, OCT_2026} from '../narrate/fixtures.js';
 
 const EVIL = '=HYPERLINK("http://x","y")';

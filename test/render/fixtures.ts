@@ -1,12 +1,12 @@
-import type {AnalysisOptions, Plan, SeriesPlan} from '../../src/config/plan.js';
+import type {AnalysisOptions} from '../../src/config/plan.js';
 import type {SeriesAnalysis} from '../../src/analyse/types.js';
 import type {TurningPoint} from '../../src/analyse/cycle/types.js';
 import type {Callout} from '../../src/narrate/types.js';
-import type {History} from '../../src/archive/types.js';
+import type {History} from '../../src/results/index.js';
 import type {Report, ReportSeries} from '../../src/render/types.js';
 import {monthIndex, periodsPerYear, quarterIndex, type Frequency} from '../../src/time/period.js';
 import {mulberry32} from '../../src/analyse/numeric/mulberry32.js';
-import {analysisOptions, defaultBranding, defaultThresholds} from '../fixtures/planDefaults.js';
+import {analysisOptions, defaultBranding, planFixture, seriesPlanFixture} from '../fixtures/plans.js';
 import {source} from '../ingest/plan.js';
 
 /**
@@ -148,9 +148,11 @@ export function seriesAnalysis(id: string, frequency: Frequency, end: number, le
           {method: 'Theta', mase: 0.81, smape: 4.2},
         ],
         points: Array.from({length: 6}, (_, k) => ({offset: length - 6 + k, forecast: original[length - 6 + k] * (1 + (rand() - 0.5) * 0.05)})),
+        paths: [],
       },
       options: {alpha: 0.31, beta: 0.02, gamma: 0.1, phi: 0.97},
       notes: [],
+      residuals: [],
     },
     outturn: {
       fiscalYear: 'FY2026',
@@ -193,18 +195,14 @@ export function makeReport(opts: FixtureOptions = {}): Report {
   const labels = ['Net sales', 'Orders received', 'Headcount', 'Web visits', 'Returns'];
   const series: ReportSeries[] = Array.from({length: count}, (_, k) => {
     const id = `series-${k + 1}`;
-    const plan: SeriesPlan = {
+    const plan = seriesPlanFixture({
       id,
       label: k === 0 && opts.firstLabel !== undefined ? opts.firstLabel : `${labels[k % labels.length]}${k >= labels.length ? ` ${k + 1}` : ''}`,
       unit: k % 2 === 0 ? 'EUR k' : 'orders',
-      source: 'trading',
       column: k === 0 && opts.firstLabel !== undefined ? opts.firstLabel : `col_${k + 1}`,
-      kind: 'flow',
-      target: null,
-      hidden: false,
       analysis: {...options, forecast: {...options.forecast, horizon: 12}},
       line: 10 + k * 4,
-    };
+    });
     const analysis = opts.shortSecond && k === 1 ? shortAnalysis(id, frequency, end, k + 1) : seriesAnalysis(id, frequency, end, length, k + 1);
     const callouts: Callout[] = [
       {
@@ -228,10 +226,9 @@ export function makeReport(opts: FixtureOptions = {}): Report {
         chart: `chart-${id}-irregular`,
       },
     ];
-    return {plan, analysis, callouts};
+    return {plan, analysis, callouts, combination: null};
   });
-  const plan: Plan = {
-    packFile: '/packs/harbourline/monthly-pack.yaml',
+  const plan = planFixture({
     id: 'monthly-pack',
     title: 'Harbourline Trading monthly review',
     subtitle: 'Sales, orders and staffing',
@@ -242,15 +239,14 @@ export function makeReport(opts: FixtureOptions = {}): Report {
     period: end,
     formats: ['html', 'pdf'],
     locale: opts.locale ?? 'en-GB',
-    fiscalYearStart: 1,
     branding: {...defaultBranding, footer: 'Harbourline Trading · internal'},
-    thresholds: {...defaultThresholds},
-    outDir: '/tmp/out',
-    browser: null,
     sources: [source('trading', '/packs/harbourline/data/trading.csv', {line: 5})],
     series: series.map((s) => s.plan),
-    groups: count >= 3 ? [{id: 'sales', title: 'Sales and orders', series: ['series-1', 'series-2']}] : [],
-  };
+    groups:
+      count >= 3
+        ? [{id: 'sales', title: 'Sales and orders', series: ['series-1', 'series-2'], total: null, adjustTotal: 'direct', reconcile: 'mint', line: 1}]
+        : [],
+  });
   const history: History | null = opts.history
     ? {
         previousPeriod: '2026-09',
@@ -284,5 +280,6 @@ export function makeReport(opts: FixtureOptions = {}): Report {
     inputs: [{file: '/packs/harbourline/data/trading.csv', sha256: 'ab'.repeat(32), bytes: 12345, rows: 96}],
     notes: [{file: '/packs/harbourline/data/trading.csv', line: 42, message: 'Blank value for col_1 in Apr 2021.'}],
     history,
+    groups: [],
   };
 }

@@ -2,7 +2,7 @@ import {describe, expect, test} from 'vitest';
 import {renderHtml} from '../../src/render/index.js';
 import {buildView} from '../../src/render/view.js';
 import type {Report} from '../../src/render/types.js';
-import type {RevisionRow, TrackingRow} from '../../src/archive/types.js';
+import type {RevisionRow, TrackingRow} from '../../src/results/index.js';
 import {makeReport} from './fixtures.js';
 
 const month = (k: number) => `2026-${String(k).padStart(2, '0')}`;

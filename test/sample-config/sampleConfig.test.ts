@@ -30,8 +30,19 @@ describe('sample-config generator', () => {
     expect(rows.at(-1)).toMatchObject({month: '2027-03', net_sales: ''});
     expect(rows.filter((r) => r.net_sales !== '' && r.footfall === '').map((r) => r.month)).toEqual(['2019-08', '2023-02', '2023-03']);
     expect(Object.keys(rows[0])).toEqual([
-      'month', 'net_sales', 'footfall', 'avg_basket', 'returns_rate', 'payroll', 'inventory', 'marketing', 'sales_budget',
+      'month', 'net_sales', 'sales_north', 'sales_lakes', 'sales_coast', 'web_sales', 'cogs', 'transactions', 'footfall',
+      'avg_basket', 'returns_rate', 'payroll', 'inventory', 'marketing', 'sales_budget', 'payroll_budget',
+      'marketing_budget',
     ]);
+    expect(rows.at(-1)!.payroll_budget).toMatch(/^\d/);
+  });
+
+  it('writes regions and web sales that add up to net sales exactly (to the 0.1 written)', () => {
+    const rows = parse(read('trading.csv'), {columns: true}) as Record<string, string>[];
+    for (const r of rows.filter((x) => x.net_sales !== '')) {
+      const parts = ['sales_north', 'sales_lakes', 'sales_coast', 'web_sales'].reduce((a, c) => a + Number(r[c]), 0);
+      expect(Math.abs(Number(r.net_sales) - parts)).toBeLessThan(1e-9);
+    }
   });
 
   it('writes the web file long, with dates like "Oct 2026"', () => {
@@ -64,8 +75,16 @@ describe('sample packs', () => {
     expect(plan.id).toBe('tarnwick-monthly');
     expect(plan.fiscalYearStart).toBe(4);
     expect(plan.series.map((s) => s.id)).toEqual([
-      'net-sales', 'footfall', 'avg-basket', 'returns-rate', 'payroll', 'inventory', 'marketing', 'sales-budget',
+      'net-sales', 'sales-north', 'sales-lakes', 'sales-coast', 'shop-sales', 'web-sales', 'cogs', 'gross-margin',
+      'transactions', 'footfall', 'avg-basket', 'returns-rate', 'payroll', 'inventory', 'marketing', 'sales-budget',
+      'payroll-budget', 'marketing-budget',
     ]);
+    expect(plan.series.find((s) => s.id === 'gross-margin')!.formula!.text).toBe('100 * (net-sales - cogs) / net-sales');
+    expect(plan.groups.filter((g) => g.total !== null).map((g) => [g.id, g.total, g.adjustTotal])).toEqual([
+      ['channels', 'net-sales', 'direct'],
+      ['regions', 'shop-sales', 'indirect'],
+    ]);
+    expect(plan.series.find((s) => s.id === 'payroll')).toMatchObject({target: 'payroll-budget', better: 'lower'});
     // The `fromSource: web` entry is expanded by ingest into web-sessions and web-orders.
     expect((plan as unknown as {fromSource: {source: string}[]}).fromSource.map((f) => f.source)).toEqual(['web']);
     expect(plan.series.find((s) => s.id === 'sales-budget')!.hidden).toBe(true);
@@ -76,7 +95,7 @@ describe('sample packs', () => {
   it('quarterly pack loads', async () => {
     const plan = await loadPlan(join(dir, 'quarterly-pack.yaml'));
     expect(plan.frequency).toBe('quarterly');
-    expect(plan.series).toHaveLength(6);
+    expect(plan.series).toHaveLength(7);
     expect(plan.sources[0]).toMatchObject({delimiter: ';', decimal: ','});
   });
 });

@@ -7,6 +7,7 @@ import {chooseModel} from './chooseModel.js';
 import {classicalDecomposition} from './classical.js';
 import {residualSeasonality, seasonalStability, varianceShares} from './diagnostics.js';
 import {detectOutliers} from './outliers.js';
+import {constantValue} from '../numeric/constantValue.js';
 import {median} from '../numeric/median.js';
 import {stl} from './stl.js';
 import type {Adjustment, CalendarRegressor} from './types.js';
@@ -45,130 +46,75 @@ const FILL_ROUNDS = 2;
 const REVISION_ENDS: Record<Frequency, number> = {monthly: 12, quarterly: 8, weekly: 26};
 
 /**
- * Seasonally adjust one series: the engine behind `adjustSeries` (see index.ts for the pipeline it follows).
+ * Seasonally adjust one series: the engine behind `adjustSeries` (see index.ts for the pipeline it follows), as
+ * named steps: observed span and length check → model → (constant: nothing to remove) → fill gaps → calendar
+ * rounds and final decomposition → components → outliers → diagnostics → the result with its resolved options.
  * Never throws for data reasons: poor data gives `{ok: false, reason}` with one plain sentence.
  */
 export function adjust(values: Float64Array, ctx: AdjustContext): AdjustOutcome {
   const {frequency} = ctx;
   const period = PERIOD[frequency];
-  const n = values.length;
-  const clean = values.map((v) => (Number.isFinite(v) ? v : NaN));
-  let first = 0;
-  while (first < n && Number.isNaN(clean[first])) first++;
-  let last = n - 1;
-  while (last >= 0 && Number.isNaN(clean[last])) last--;
-  if (first > last) return {ok: false, reason: 'The series has no values to adjust.'};
-  const span = clean.subarray(first, last + 1);
-  const m = span.length;
-  let observed = 0;
-  for (const v of span) if (!Number.isNaN(v)) observed++;
+  const observed = observedSpan(values);
+  if (observed === null) return {ok: false, reason: 'The series has no values to adjust.'};
+  const {first, last, span} = observed;
   const method = frequency === 'weekly' ? 'fourier' : ctx.options.method;
   const minimum = frequency === 'weekly' ? MIN_WEEKS : method === 'stl' ? 2 * period + 1 : 2 * period;
-  if (m < minimum || observed < 2 * period) {
-    const unit = {monthly: 'months', quarterly: 'quarters', weekly: 'weeks'}[frequency];
-    return {
-      ok: false,
-      reason: `Not seasonally adjusted: this needs at least two full years of data (${minimum} ${unit}), and the series has ${observed} observed ${unit}.`,
-    };
-  }
-  const missing = span.map((v) => (Number.isNaN(v) ? 1 : 0));
-  const filledCount = missing.reduce((a, b) => a + b, 0);
+  const short = tooShort(span, minimum, period, frequency);
+  if (short !== null) return {ok: false, reason: short};
   const chosen = chooseModel(span, period, ctx.options.model);
-  const model: Model = chosen.model;
-  const mult = model === 'multiplicative';
-  const toModel = (v: number): number => (mult ? Math.log(v) : v);
-  const fromModel = (v: number): number => (mult ? Math.exp(v) : v);
-  const combine = (a: number, b: number): number => (mult ? a * b : a + b);
-  const remove = (a: number, b: number): number => (mult ? a / b : a - b);
+  const scale = modelScale(chosen.model);
+  if (constantValue(span) !== null) {
+    return {ok: true, adjustment: constantAdjustment(values, first, last, ctx, chosen.model, period)};
+  }
   const start = ctx.start + first;
-
-  if (isConstant(span)) return {ok: true, adjustment: constantAdjustment(values, first, last, ctx, model, period)};
-
   const decompose = (x: Float64Array): Parts =>
-    decomposeOnce(x, {frequency, start, model, options: ctx.options, period});
-
-  // Gaps: straight lines first, then (FILL_ROUNDS times) the fitted trend and seasonal at the missing points.
-  const x = fillGaps(span).values;
-  if (filledCount > 0) {
-    for (let round = 0; round < FILL_ROUNDS; round++) {
-      const fit = decompose(x);
-      for (let i = 0; i < m; i++) {
-        const v = combine(fit.trend[i], fit.seasonal[i]);
-        if (missing[i] && Number.isFinite(v)) x[i] = v;
-      }
-    }
-  }
-
-  // Calendar: decompose → regress the irregular (model scale) on the regressors → remove → decompose again.
-  const regressors = calendarRegressors(ctx, start, m);
-  const xm = x.map(toModel);
-  let estimates: CalendarRegressor[] | null = null;
-  let calendarModel: Float64Array = new Float64Array(m);
-  let fit = decompose(x);
-  if (regressors.length > 0) {
-    for (let round = 0; round < CALENDAR_ROUNDS; round++) {
-      const e = xm.map((v, i) => (missing[i] ? NaN : v - toModel(fit.trend[i]) - toModel(fit.seasonal[i])));
-      estimates = regressCalendar(e, regressors, mult);
-      if (estimates === null) break;
-      calendarModel = effectOf(regressors, estimates, m, false);
-      fit = decompose(xm.map((v, i) => fromModel(v - calendarModel[i])));
-    }
-    if (estimates !== null) {
-      const significant = effectOf(regressors, estimates, m, true);
-      const anySignificant = estimates.some((r) => r.significant);
-      if (anySignificant) fit = decompose(xm.map((v, i) => fromModel(v - significant[i])));
-      else fit = decompose(x);
-      calendarModel = significant;
-    }
-  }
-  const anyCalendar = estimates !== null && estimates.some((r) => r.significant);
-  const calendarFactor = calendarModel.map(fromModel);
+    decomposeOnce(x, {frequency, start, model: chosen.model, options: ctx.options, period});
+  const missing = span.map((v) => (Number.isNaN(v) ? 1 : 0));
+  const x = fillMissing(span, missing, decompose, scale);
+  const regressors = calendarRegressors(ctx, start, span.length);
+  const calendar = calendarRounds(x, missing, regressors, decompose, scale);
+  const {fit, anyCalendar} = calendar;
+  const parts = components(span, missing, fit, calendar, scale);
+  const outliers = ctx.outliers
+    ? detectOutliers(
+        parts.irregularModel,
+        parts.adjustedModel,
+        ctx.residualSigma,
+        outlierFloor(parts.adjustedModel, scale.mult),
+      ).map((o) => ({...o, index: o.index + first}))
+    : [];
+  const revision = revisionDiagnostic(x, span, parts.adjusted, (sub) => {
+    const cal = calendar.model.subarray(0, sub.length);
+    const f = decompose(sub.map((v, i) => scale.fromModel(scale.toModel(v) - (anyCalendar ? cal[i] : 0))));
+    return sub.map((v, i) => scale.remove(scale.remove(v, f.seasonal[i]), calendar.at(i)));
+  }, REVISION_ENDS[frequency], minimum, scale.mult);
 
   const full = <T>(part: ArrayLike<T>, fill: T): T[] => {
-    const out = new Array<T>(n).fill(fill);
-    for (let i = 0; i < m; i++) out[first + i] = part[i];
+    const out = new Array<T>(values.length).fill(fill);
+    for (let i = 0; i < span.length; i++) out[first + i] = part[i];
     return out;
   };
-  const calendarAt = (i: number): number => (anyCalendar ? calendarFactor[i] : fromModel(0));
-  const irregular = span.map((v, i) =>
-    missing[i] ? NaN : remove(remove(remove(v, fit.trend[i]), fit.seasonal[i]), calendarAt(i)),
-  );
-  const adjusted = span.map((v, i) => remove(remove(v, fit.seasonal[i]), calendarAt(i)));
-  const irregularModel = irregular.map(toModel);
-  const adjustedModel = adjusted.map(toModel);
-  const outliers = ctx.outliers
-    ? detectOutliers(irregularModel, adjustedModel, ctx.residualSigma, outlierFloor(adjustedModel, mult)).map((o) => ({
-        ...o,
-        index: o.index + first,
-      }))
-    : [];
-  const seasonGroup = Int32Array.from({length: m}, (_, i) =>
-    frequency === 'weekly'
-      ? civilFromDays(periodStartDay('weekly', start + i) + 3).month - 1
-      : seasonOf(frequency, start + i),
-  );
-  const revision = revisionDiagnostic(x, span, adjusted, (sub) => {
-    const cal = calendarModel.subarray(0, sub.length);
-    const f = decompose(sub.map((v, i) => fromModel(toModel(v) - (anyCalendar ? cal[i] : 0))));
-    return sub.map((v, i) => remove(remove(v, f.seasonal[i]), calendarAt(i)));
-  }, REVISION_ENDS[frequency], minimum, mult);
-
+  const model = chosen.model;
+  const filledCount = missing.reduce((a, b) => a + b, 0);
   const adjustment: Adjustment = {
     method: method === 'classical' ? 'classical' : 'stl',
-    methodLabel: METHOD_LABEL[method],
     model,
     modelReason: frequency === 'weekly' ? `${chosen.reason} ${WEEKLY_NOTE}` : chosen.reason,
     trend: full(fit.trend, NaN),
     seasonal: full(fit.seasonal, NaN),
-    irregular: full(irregular, NaN),
-    adjusted: full(adjusted.map((v, i) => (missing[i] ? NaN : v)), NaN),
-    calendar: anyCalendar ? {effect: full(calendarFactor, NaN), regressors: estimates!} : null,
+    irregular: full(parts.irregular, NaN),
+    adjusted: full(parts.adjusted.map((v, i) => (missing[i] ? NaN : v)), NaN),
+    calendar: anyCalendar ? {effect: full(calendar.factor, NaN), regressors: calendar.estimates!} : null,
     outliers,
     filled: full(Array.from(missing, (v) => v === 1), false),
     diagnostics: {
-      varianceShares: varianceShares(fit.trend.map(toModel), fit.seasonal.map(toModel), irregularModel),
-      residualSeasonality: residualSeasonality(adjustedModel, seasonGroup, frequency === 'weekly' ? 12 : period),
-      seasonalStability: seasonalStability(fit.seasonal.map(toModel), period),
+      varianceShares: varianceShares(fit.trend.map(scale.toModel), fit.seasonal.map(scale.toModel), parts.irregularModel),
+      residualSeasonality: residualSeasonality(
+        parts.adjustedModel,
+        seasonGroups(frequency, start, span.length),
+        frequency === 'weekly' ? 12 : period,
+      ),
+      seasonalStability: seasonalStability(fit.seasonal.map(scale.toModel), period),
       revision,
     },
     options: {
@@ -178,11 +124,11 @@ export function adjust(values: Float64Array, ctx: AdjustContext): AdjustOutcome 
       autoModelRule: 'multiplicative when all values > 0, yearly level varies ≥ 10% and log-log slope of yearly range on level > 0.5',
       calendar: {
         regressors: regressors.map((r) => r.name),
-        estimated: estimates,
+        estimated: calendar.estimates,
         rounds: regressors.length > 0 ? CALENDAR_ROUNDS : 0,
         significanceLevel: 0.05,
         easterWindowDays: 8,
-        scale: mult ? 'log' : 'level',
+        scale: scale.mult ? 'log' : 'level',
       },
       missing: {filled: filledCount, method: `linear interpolation, then trend and seasonal of the fit (${FILL_ROUNDS} rounds)`},
       outliers: {enabled: ctx.outliers, thresholdSigmas: ctx.residualSigma, sigma: '1.4826 × MAD of the irregular'},
@@ -191,15 +137,145 @@ export function adjust(values: Float64Array, ctx: AdjustContext): AdjustOutcome 
       calendarInIrregular: !anyCalendar,
     },
   };
-  if (!anyCalendar && estimates !== null) adjustment.options.calendarNote = 'no calendar effect was significant at 5%';
+  if (!anyCalendar && calendar.estimates !== null) {
+    adjustment.options.calendarNote = 'no calendar effect was significant at 5%';
+  }
   return {ok: true, adjustment};
 }
 
-const METHOD_LABEL = {
-  stl: 'STL (seasonal-trend decomposition by LOESS)',
-  classical: 'classical decomposition by moving averages',
-  fourier: 'yearly Fourier seasonal with a LOESS trend (weekly)',
-};
+/** Arithmetic of the model's scale: logs for multiplicative models, levels for additive ones. */
+interface Scale {
+  mult: boolean;
+  toModel: (v: number) => number;
+  fromModel: (v: number) => number;
+  /** trend ⊕ seasonal: × or +. */
+  combine: (a: number, b: number) => number;
+  /** value ⊖ component: ÷ or −. */
+  remove: (a: number, b: number) => number;
+}
+
+function modelScale(model: Model): Scale {
+  const mult = model === 'multiplicative';
+  return {
+    mult,
+    toModel: (v) => (mult ? Math.log(v) : v),
+    fromModel: (v) => (mult ? Math.exp(v) : v),
+    combine: (a, b) => (mult ? a * b : a + b),
+    remove: (a, b) => (mult ? a / b : a - b),
+  };
+}
+
+/** From the first to the last finite value (non-finite values become NaN), or null when there is none. */
+function observedSpan(values: Float64Array): {first: number; last: number; span: Float64Array} | null {
+  const n = values.length;
+  const clean = values.map((v) => (Number.isFinite(v) ? v : NaN));
+  let first = 0;
+  while (first < n && Number.isNaN(clean[first])) first++;
+  let last = n - 1;
+  while (last >= 0 && Number.isNaN(clean[last])) last--;
+  return first > last ? null : {first, last, span: clean.subarray(first, last + 1)};
+}
+
+/** The plain sentence when the span is shorter than `minimum` or has fewer than two years observed, else null. */
+function tooShort(span: Float64Array, minimum: number, period: number, frequency: Frequency): string | null {
+  let observed = 0;
+  for (const v of span) if (!Number.isNaN(v)) observed++;
+  if (span.length >= minimum && observed >= 2 * period) return null;
+  const unit = {monthly: 'months', quarterly: 'quarters', weekly: 'weeks'}[frequency];
+  return `Not seasonally adjusted: this needs at least two full years of data (${minimum} ${unit}), and the series has ${observed} observed ${unit}.`;
+}
+
+/** Gaps: straight lines first, then (FILL_ROUNDS times) the fitted trend and seasonal at the missing points. */
+function fillMissing(
+  span: Float64Array,
+  missing: Float64Array,
+  decompose: (x: Float64Array) => Parts,
+  scale: Scale,
+): Float64Array {
+  const x = fillGaps(span).values;
+  if (!missing.some((v) => v === 1)) return x;
+  for (let round = 0; round < FILL_ROUNDS; round++) {
+    const fit = decompose(x);
+    for (let i = 0; i < x.length; i++) {
+      const v = scale.combine(fit.trend[i], fit.seasonal[i]);
+      if (missing[i] && Number.isFinite(v)) x[i] = v;
+    }
+  }
+  return x;
+}
+
+interface CalendarRounds {
+  /** The final decomposition (of the series less its significant calendar effect). */
+  fit: Parts;
+  estimates: CalendarRegressor[] | null;
+  anyCalendar: boolean;
+  /** Calendar effect on the model scale (significant regressors only, after the rounds). */
+  model: Float64Array;
+  /** The same as factors (or differences). */
+  factor: Float64Array;
+  /** The calendar effect removed at position i: the factor when any is significant, else neutral. */
+  at: (i: number) => number;
+}
+
+/** Calendar: decompose → regress the irregular (model scale) on the regressors → remove → decompose again. */
+function calendarRounds(
+  x: Float64Array,
+  missing: Float64Array,
+  regressors: RegressorColumn[],
+  decompose: (x: Float64Array) => Parts,
+  scale: Scale,
+): CalendarRounds {
+  const m = x.length;
+  const xm = x.map(scale.toModel);
+  let estimates: CalendarRegressor[] | null = null;
+  let calendarModel: Float64Array = new Float64Array(m);
+  let fit = decompose(x);
+  if (regressors.length > 0) {
+    for (let round = 0; round < CALENDAR_ROUNDS; round++) {
+      const e = xm.map((v, i) => (missing[i] ? NaN : v - scale.toModel(fit.trend[i]) - scale.toModel(fit.seasonal[i])));
+      estimates = regressCalendar(e, regressors, scale.mult);
+      if (estimates === null) break;
+      calendarModel = effectOf(regressors, estimates, m, false);
+      fit = decompose(xm.map((v, i) => scale.fromModel(v - calendarModel[i])));
+    }
+    if (estimates !== null) {
+      const significant = effectOf(regressors, estimates, m, true);
+      const anySignificant = estimates.some((r) => r.significant);
+      if (anySignificant) fit = decompose(xm.map((v, i) => scale.fromModel(v - significant[i])));
+      else fit = decompose(x);
+      calendarModel = significant;
+    }
+  }
+  const anyCalendar = estimates !== null && estimates.some((r) => r.significant);
+  const factor = calendarModel.map(scale.fromModel);
+  const at = (i: number): number => (anyCalendar ? factor[i] : scale.fromModel(0));
+  return {fit, estimates, anyCalendar, model: calendarModel, factor, at};
+}
+
+/** Irregular (NaN where missing) and adjusted series, on the data scale and on the model scale. */
+function components(
+  span: Float64Array,
+  missing: Float64Array,
+  fit: Parts,
+  calendar: CalendarRounds,
+  scale: Scale,
+): {irregular: Float64Array; adjusted: Float64Array; irregularModel: Float64Array; adjustedModel: Float64Array} {
+  const {remove} = scale;
+  const irregular = span.map((v, i) =>
+    missing[i] ? NaN : remove(remove(remove(v, fit.trend[i]), fit.seasonal[i]), calendar.at(i)),
+  );
+  const adjusted = span.map((v, i) => remove(remove(v, fit.seasonal[i]), calendar.at(i)));
+  return {irregular, adjusted, irregularModel: irregular.map(scale.toModel), adjustedModel: adjusted.map(scale.toModel)};
+}
+
+/** Season of each position for the residual-seasonality test: the month (weekly: of the week's Thursday). */
+function seasonGroups(frequency: Frequency, start: number, m: number): Int32Array {
+  return Int32Array.from({length: m}, (_, i) =>
+    frequency === 'weekly'
+      ? civilFromDays(periodStartDay('weekly', start + i) + 3).month - 1
+      : seasonOf(frequency, start + i),
+  );
+}
 
 const WEEKLY_NOTE =
   'Weekly series: the seasonal is a yearly Fourier pattern in the date (year = 365.2425 days), so 53-week years need no special handling; the trend is a LOESS.';
@@ -309,17 +385,6 @@ function revisionDiagnostic(
     }
   }
   return count > 0 ? {meanAbsPp: sum / count, periodsTested: count} : null;
-}
-
-/** True when every non-NaN value is the same. */
-function isConstant(values: Float64Array): boolean {
-  let seen = NaN;
-  for (const v of values) {
-    if (Number.isNaN(v)) continue;
-    if (Number.isNaN(seen)) seen = v;
-    else if (v !== seen) return false;
-  }
-  return true;
 }
 
 function constantAdjustment(

@@ -41,6 +41,44 @@ export function classicalDecomposition(
   }
   const multiplicative = model === 'multiplicative';
   const trend = centredMovingAverage(values, period);
+  const figure = figureFromTrend(values, trend, period, multiplicative);
+  const seasonal = new Float64Array(n);
+  const irregular = new Float64Array(n);
+  for (let i = 0; i < n; i++) {
+    seasonal[i] = figure[i % period];
+    irregular[i] = multiplicative ? values[i] / seasonal[i] / trend[i] : values[i] - seasonal[i] - trend[i];
+  }
+  return {trend, seasonal, irregular, figure};
+}
+
+/**
+ * The classical seasonal figure alone (the `figure` of {@link classicalDecomposition}, the same arithmetic):
+ * figure[i] belongs to observations i, i + m, i + 2m, …, counted from the first observation, not the calendar.
+ *
+ * Why: forecasting deseasonalises with it too (Theta, the M3 benchmarks Naive2 and Comb S-H-D, ETS start
+ * values), and must match R's `stats::decompose` there as well; one routine keeps both uses the same.
+ * Reference: R's `stats::decompose` (test/reference/decompose.json).
+ *
+ * Complexity: O(n). NaN policy: rejects NaN (the caller fills gaps first; not checked here, as the forecasting
+ * callers pass prepared series). Needs n ≥ 2m.
+ */
+export function classicalFigure(
+  values: Float64Array,
+  period: number,
+  model: 'additive' | 'multiplicative',
+): Float64Array {
+  if (values.length < 2 * period) throw new RangeError('classical decomposition requires two full periods');
+  return figureFromTrend(values, centredMovingAverage(values, period), period, model === 'multiplicative');
+}
+
+/** Mean detrended value per cycle position, centred to sum 0 (additive) or scaled to mean 1 (multiplicative). */
+function figureFromTrend(
+  values: Float64Array,
+  trend: Float64Array,
+  period: number,
+  multiplicative: boolean,
+): Float64Array {
+  const n = values.length;
   const figure = new Float64Array(period);
   for (let j = 0; j < period; j++) {
     let sum = 0;
@@ -56,11 +94,5 @@ export function classicalDecomposition(
   for (let j = 0; j < period; j++) centre += figure[j];
   centre /= period;
   for (let j = 0; j < period; j++) figure[j] = multiplicative ? figure[j] / centre : figure[j] - centre;
-  const seasonal = new Float64Array(n);
-  const irregular = new Float64Array(n);
-  for (let i = 0; i < n; i++) {
-    seasonal[i] = figure[i % period];
-    irregular[i] = multiplicative ? values[i] / seasonal[i] / trend[i] : values[i] - seasonal[i] - trend[i];
-  }
-  return {trend, seasonal, irregular, figure};
+  return figure;
 }

@@ -1,8 +1,6 @@
 /** Result of the seasonal-adjustment engine (`adjustSeries`). Arrays are aligned with the input values. */
 export interface Adjustment {
   method: 'stl' | 'classical';
-  /** Plain name of the method that ran; weekly series report `method: 'stl'` but run a Fourier seasonal. */
-  methodLabel?: string;
   model: 'additive' | 'multiplicative';
   /** Why the model was chosen (e.g. the `auto` rule's finding), one plain sentence. */
   modelReason: string;

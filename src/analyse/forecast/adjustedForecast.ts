@@ -21,6 +21,15 @@ export function reseasonalise<F extends Forecast>(
     lower.set(level, adjustment.restore(forecast.lower.get(level)!));
     upper.set(level, adjustment.restore(forecast.upper.get(level)!));
   }
-  // Running totals of the adjusted series do not carry over to the original scale; the caller recomputes them.
-  return {...forecast, method, mean: adjustment.restore(forecast.mean), lower, upper, runningTotals: undefined};
+  // Running totals and in-sample fits of the adjusted series do not carry over to the original scale; the caller
+  // recomputes them (inSampleSeasonal.ts for the fits).
+  return {
+    ...forecast,
+    method,
+    mean: adjustment.restore(forecast.mean),
+    lower,
+    upper,
+    runningTotals: undefined,
+    fitted: undefined,
+  };
 }

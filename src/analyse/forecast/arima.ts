@@ -76,9 +76,11 @@ export function fitArima(values: Float64Array, order: ArimaOrder): ArimaFit | nu
   const arPoly = new Float64Array(p + 1);
   const maPoly = new Float64Array(q + 1);
   const shift = constant ? 0 : -centre / spread;
-  const objective = (x: Float64Array): number => {
-    if (!admissible(x, p, q, arPoly, maPoly)) return Infinity;
-    return sumOfSquares(z, x, p, q, constant ? x[p + q] : shift, e);
+  // The sum of squares first, stopping once past the optimiser's bound (nelderMead.ts); admissibility only matters
+  // for a value below it.
+  const objective = (x: Float64Array, bound: number): number => {
+    const ss = sumOfSquares(z, x, p, q, constant ? x[p + q] : shift, e, bound * (1 + 1e-12));
+    return ss >= bound || admissible(x, p, q, arPoly, maPoly) ? ss : Infinity;
   };
   const k = p + q + (constant ? 1 : 0);
   const x0 = new Float64Array(k);
@@ -99,8 +101,19 @@ export function fitArima(values: Float64Array, order: ArimaOrder): ArimaFit | nu
   };
 }
 
-/** Σ eₜ² for t ≥ p of the ARMA recursion on z with mean mu; residuals written to e (0 before p). */
-function sumOfSquares(z: Float64Array, x: Float64Array, p: number, q: number, mu: number, e: Float64Array): number {
+/**
+ * Σ eₜ² for t ≥ p of the ARMA recursion on z with mean mu; residuals written to e (0 before p). Stops with
+ * Infinity once the sum passes `limit` (it only grows).
+ */
+function sumOfSquares(
+  z: Float64Array,
+  x: Float64Array,
+  p: number,
+  q: number,
+  mu: number,
+  e: Float64Array,
+  limit = Infinity,
+): number {
   let ss = 0;
   e.fill(0, 0, p);
   for (let t = p; t < z.length; t++) {
@@ -109,6 +122,7 @@ function sumOfSquares(z: Float64Array, x: Float64Array, p: number, q: number, mu
     for (let j = 1; j <= q && t - j >= p; j++) r -= x[p + j - 1] * e[t - j];
     e[t] = r;
     ss += r * r;
+    if (ss > limit) return Infinity;
   }
   return ss;
 }

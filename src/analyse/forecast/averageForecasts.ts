@@ -50,6 +50,13 @@ export function averageForecasts(
     upper.set(level, hi);
   }
   const out: Forecast = {method, mean, levels, lower, upper};
+  if (forecasts.every((f) => f.fitted)) {
+    const fitted = new Float64Array(forecasts[0].fitted!.length);
+    forecasts.forEach((f, j) => {
+      for (let t = 0; t < fitted.length; t++) fitted[t] += share(f.fitted![t], j);
+    });
+    out.fitted = fitted;
+  }
   if (forecasts.every((f) => f.runningTotals)) {
     const totalMean = new Float64Array(h);
     let running = 0;

@@ -6,6 +6,7 @@ import {forecastNaive} from './naive.js';
 import {reseasonalise} from './adjustedForecast.js';
 import {averageForecasts} from './averageForecasts.js';
 import {seasonalAdjustment} from './seasonalAdjustment.js';
+import {inSampleSeasonal} from './inSampleSeasonal.js';
 
 /**
  * The M3 benchmark methods on classically seasonally adjusted data (adjusted only when the 90% seasonality
@@ -36,13 +37,18 @@ export function forecastBenchmarks(
 ): Map<BenchmarkName, Forecast> {
   const sa = seasonalAdjustment(values, period);
   const out = new Map<BenchmarkName, Forecast>();
-  if (which.includes('Naive2')) out.set('Naive2', reseasonalise(forecastNaive(sa.adjusted, options), sa, 'Naive2'));
+  // In-sample one-step forecasts on the original scale, for every method here (forecast reconciliation uses them).
+  const withFitted = (fc: Forecast, name: string): Forecast => ({
+    ...reseasonalise(fc, sa, name),
+    fitted: fc.fitted && inSampleSeasonal(fc.fitted, values, sa),
+  });
+  if (which.includes('Naive2')) out.set('Naive2', withFitted(forecastNaive(sa.adjusted, options), 'Naive2'));
   const smooth = new Map<string, Forecast>();
   for (const name of ['SES', 'Holt', 'Damped'] as const) {
     if (!which.includes(name) && !which.includes('Comb S-H-D')) continue;
     const fit = fitEts(sa.adjusted, SPECS[name], {optCrit: 'mse'});
-    const fc = fit ? forecastEts(fit, options) : forecastNaive(sa.adjusted, options);
-    smooth.set(name, reseasonalise(fc, sa, name));
+    const fc = fit ? {...forecastEts(fit, options), fitted: fit.fitted} : forecastNaive(sa.adjusted, options);
+    smooth.set(name, withFitted(fc, name));
   }
   for (const name of ['SES', 'Holt', 'Damped'] as const) if (which.includes(name)) out.set(name, smooth.get(name)!);
   if (which.includes('Comb S-H-D')) {

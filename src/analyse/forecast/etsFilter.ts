@@ -49,6 +49,9 @@ export function etsFilter(
  * The same recursions without allocation, for optimisers: writes into the optional buffers and returns the
  * criterion and, when `mse` is asked for, the one-step mean squared error (NaN otherwise). Work that only some
  * forms need (the log term, the running MSE, the output buffers) is skipped when not needed.
+ *
+ * `bound` (an optimiser's rejection level, see nelderMead.ts): with additive errors the criterion n·log(Σ e²)
+ * only grows along the series, so the recursion stops once it has clearly passed `bound` and returns Infinity.
  */
 export function etsRecurse(
   y: Float64Array,
@@ -61,12 +64,14 @@ export function etsRecurse(
     finalStates = null,
     seasonBuffer = new Float64Array(Math.max(1, spec.period)),
     mse: wantMse = false,
+    bound = Infinity,
   }: {
     residuals?: Float64Array | null;
     fitted?: Float64Array | null;
     finalStates?: Float64Array | null;
     seasonBuffer?: Float64Array;
     mse?: boolean;
+    bound?: number;
   } = {},
 ): {lik: number; mse: number} {
   const n = y.length;
@@ -94,6 +99,8 @@ export function etsRecurse(
   let product = 1;
   let mse = 0;
   const keep = residuals !== null || fitted !== null;
+  // Σ e² beyond which n·log(Σ e²) is past `bound` (with a relative margin of 1e-12, far above rounding).
+  const sseLimit = !multError && !keep && finalStates === null ? Math.exp(bound / n) * (1 + 1e-12) : Infinity;
   for (let t = 0; t < n; t++) {
     const phib = phi * b;
     const q = l + phib;
@@ -131,6 +138,7 @@ export function etsRecurse(
     if (hasTrend) b = phib + ratio * (lNew - l - phib);
     l = lNew;
     sse += e * e;
+    if (sse > sseLimit) return {lik: Infinity, mse: NaN};
     if (multError) {
       const size = Math.abs(f);
       if (size < 1e100 && size > 1e-100) {

@@ -15,14 +15,17 @@ import {normalIntervals} from './normalIntervals.js';
  * exponential smoothing using two new classes of state space models, Journal of Forecasting 24, 17–37;
  * Hyndman et al. (2008), ch. 6.
  *
- * Complexity: O(h²) for classes 1–2; O(h·(km)³) for class 3 (k = 1 or 2 level/trend states).
+ * Complexity: O(h²) for classes 1–2; O(h·(km)³) for class 3 (k = 1 or 2 level/trend states), or O(h·km) when no
+ * level is asked for: the class 3 mean does not need the variance recursion, which is then skipped (variance NaN).
  * NaN policy: NaN in the fit → NaN out.
  */
 export function forecastEts(fit: EtsFit, options: ForecastOptions): Forecast & {variance: Float64Array} {
   const levels = checkForecastOptions(options);
   const {h} = options;
   const {mean, variance} =
-    fit.spec.error === 'M' && fit.spec.season === 'M' ? etsClass3Moments(fit, h) : etsLinearMoments(fit, h);
+    fit.spec.error === 'M' && fit.spec.season === 'M'
+      ? etsClass3Moments(fit, h, levels.length > 0)
+      : etsLinearMoments(fit, h);
   return {method: fit.method, mean, variance, levels, ...normalIntervals(mean, variance, levels)};
 }
 
@@ -108,7 +111,11 @@ function kron(a: Float64Array, ra: number, b: Float64Array, rb: number): Float64
  * Class 3 moments. The state splits into a level/trend block (k = 1 or 2) and the m seasonal states;
  * M_h = E[(level/trend) × seasonalᵀ] and V_h = Var(vec M_h) follow Hyndman et al. (2005), §4.
  */
-function etsClass3Moments(fit: EtsFit, h: number): {mean: Float64Array; variance: Float64Array} {
+function etsClass3Moments(
+  fit: EtsFit,
+  h: number,
+  withVariance: boolean,
+): {mean: Float64Array; variance: Float64Array} {
   const {spec, params, finalStates: x, sigma2} = fit;
   const k = spec.trend === 'N' ? 1 : 2;
   const m = spec.period;
@@ -140,28 +147,32 @@ function etsClass3Moments(fit: EtsFit, h: number): {mean: Float64Array; variance
     let hv = 0;
     for (let a = 0; a < k; a++) for (let b = 0; b < k; b++) hv += vh[((m - 1) * k + a) * d + (m - 1) * k + b];
     mean[step] = mu;
-    variance[step] = (1 + sigma2) * hv + sigma2 * mu * mu;
-    // vec(M) in column-major order: index r + c·k.
-    const vec = new Float64Array(d);
-    for (let r = 0; r < k; r++) for (let c = 0; c < m; c++) vec[r + c * k] = mh[r * m + c];
-    const outer = new Float64Array(d * d);
-    for (let i = 0; i < d; i++) for (let j = 0; j < d; j++) outer[i * d + j] = vec[i] * vec[j];
-    const fv = mul(f21, vh, d);
-    const gv = mul(g21, vh, d);
-    const a1 = mulT(fv, f21, d);
-    const a2 = mulT(fv, g21, d);
-    const a3 = mulT(gv, f21, d);
-    const inner = new Float64Array(d * d);
-    const inner2 = new Float64Array(d * d);
-    for (let i = 0; i < d * d; i++) {
-      inner[i] = vh[i] + outer[i];
-      inner2[i] = 3 * vh[i] + 2 * outer[i];
+    if (!withVariance) {
+      variance[step] = NaN;
+    } else {
+      variance[step] = (1 + sigma2) * hv + sigma2 * mu * mu;
+      // vec(M) in column-major order: index r + c·k.
+      const vec = new Float64Array(d);
+      for (let r = 0; r < k; r++) for (let c = 0; c < m; c++) vec[r + c * k] = mh[r * m + c];
+      const outer = new Float64Array(d * d);
+      for (let i = 0; i < d; i++) for (let j = 0; j < d; j++) outer[i * d + j] = vec[i] * vec[j];
+      const fv = mul(f21, vh, d);
+      const gv = mul(g21, vh, d);
+      const a1 = mulT(fv, f21, d);
+      const a2 = mulT(fv, g21, d);
+      const a3 = mulT(gv, f21, d);
+      const inner = new Float64Array(d * d);
+      const inner2 = new Float64Array(d * d);
+      for (let i = 0; i < d * d; i++) {
+        inner[i] = vh[i] + outer[i];
+        inner2[i] = 3 * vh[i] + 2 * outer[i];
+      }
+      const a4 = mulT(mul(kk, inner, d), kk, d);
+      const a5 = mulT(mul(g21, inner2, d), g21, d);
+      const next = new Float64Array(d * d);
+      for (let i = 0; i < d * d; i++) next[i] = a1[i] + sigma2 * (a2[i] + a3[i] + a4[i] + sigma2 * a5[i]);
+      vh = next;
     }
-    const a4 = mulT(mul(kk, inner, d), kk, d);
-    const a5 = mulT(mul(g21, inner2, d), g21, d);
-    const next = new Float64Array(d * d);
-    for (let i = 0; i < d * d; i++) next[i] = a1[i] + sigma2 * (a2[i] + a3[i] + a4[i] + sigma2 * a5[i]);
-    vh = next;
     // M ← F1 M F2ᵀ + σ² G1 M G2ᵀ: F2ᵀ on the right rotates columns; G2ᵀ puts γ·column m−1 into column 0.
     const rotated = new Float64Array(k * m);
     for (let r = 0; r < k; r++) {

@@ -1,5 +1,5 @@
 import {leastSquares} from '../numeric/leastSquares.js';
-import {classicalSeasonal} from './classicalSeasonal.js';
+import {classicalFigure} from '../decompose/classical.js';
 import type {EtsSpec} from './etsModel.js';
 
 /**
@@ -36,7 +36,7 @@ export function etsInitialStates(y: Float64Array, spec: EtsSpec): Float64Array {
         detrended[i] = spec.season === 'A' ? y[i] - line : y[i] / line;
       }
     } else {
-      const figure = classicalSeasonal(y, m, spec.season === 'A' ? 'additive' : 'multiplicative');
+      const figure = classicalFigure(y, m, spec.season === 'A' ? 'additive' : 'multiplicative');
       for (let i = 0; i < n; i++) detrended[i] = figure[i % m];
     }
     for (let i = m - 1; i >= 1; i--) initSeas.push(detrended[i]);

@@ -1,5 +1,5 @@
 import {fitEts, type EtsFit} from './etsFit.js';
-import type {EtsSpec} from './etsModel.js';
+import {etsName, type EtsSpec} from './etsModel.js';
 
 /**
  * Automatic ETS: fit every model of the stable subset and keep the one with the smallest AICc.
@@ -25,14 +25,30 @@ export function selectEts(
   y: Float64Array,
   {period, seasonal = true}: {period: number; seasonal?: boolean},
 ): EtsSelection | null {
+  let best: EtsFit | null = null;
+  const fits: EtsFit[] = [];
+  const candidates: {method: string; aicc: number}[] = [];
+  for (const spec of etsCandidates(y, {period, seasonal})) {
+    const fit = fitEts(y, spec);
+    const aicc = fit && Number.isFinite(fit.aicc) ? fit.aicc : Infinity;
+    candidates.push({method: etsName(spec), aicc});
+    if (fit && Number.isFinite(aicc)) fits.push(fit);
+    if (fit && aicc < (best?.aicc ?? Infinity)) best = fit;
+  }
+  return best ? {best, fits, candidates} : null;
+}
+
+/** The models automatic ETS tries, in its fixed order (see {@link selectEts}). */
+export function etsCandidates(
+  y: Float64Array,
+  {period, seasonal = true}: {period: number; seasonal?: boolean},
+): EtsSpec[] {
   const n = y.length;
   let positive = true;
   for (const v of y) if (!(v > 0)) positive = false;
   const allowSeason = seasonal && period > 1 && period <= 24 && n > period;
   const seasons: EtsSpec['season'][] = allowSeason ? ['N', 'A', 'M'] : ['N'];
-  let best: EtsFit | null = null;
-  const fits: EtsFit[] = [];
-  const candidates: {method: string; aicc: number}[] = [];
+  const specs: EtsSpec[] = [];
   for (const error of ['A', 'M'] as const) {
     if (error === 'M' && !positive) continue;
     for (const trend of ['N', 'A'] as const) {
@@ -40,15 +56,10 @@ export function selectEts(
         for (const damped of [true, false]) {
           if (trend === 'N' && damped) continue;
           if (error === 'A' && season === 'M') continue;
-          const spec: EtsSpec = {error, trend, damped, season, period: season === 'N' ? 1 : period};
-          const fit = fitEts(y, spec);
-          const aicc = fit && Number.isFinite(fit.aicc) ? fit.aicc : Infinity;
-          candidates.push({method: `ETS(${error},${trend}${damped ? 'd' : ''},${season})`, aicc});
-          if (fit && Number.isFinite(aicc)) fits.push(fit);
-          if (fit && aicc < (best?.aicc ?? Infinity)) best = fit;
+          specs.push({error, trend, damped, season, period: season === 'N' ? 1 : period});
         }
       }
     }
   }
-  return best ? {best, fits, candidates} : null;
+  return specs;
 }

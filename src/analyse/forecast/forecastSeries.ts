@@ -1,8 +1,9 @@
 import type {AnalysisOptions} from '../../config/plan.js';
 import {periodsPerYear, type Frequency} from '../../time/period.js';
 import {rollingBacktest} from './backtest.js';
-import {runMethod, type MethodName, type MethodRun} from './methods.js';
+import {fitMethod, type MethodFit, type MethodName, type MethodRun} from './methods.js';
 import type {Forecast} from './model.js';
+import {constantValue} from '../numeric/constantValue.js';
 import {prepareSeries} from './prepareSeries.js';
 import type {ForecastResult} from './types.js';
 
@@ -47,11 +48,12 @@ export function forecastSeries(
   }
   const period = periodsPerYear[frequency];
   let method: MethodName = options.method === 'auto' ? AUTO_METHOD : options.method;
-  const constant = y.every((v) => v === y[0]);
+  const constant = constantValue(y) !== null;
   // Steps between the last observation and the first forecast period (trailing NaN are forecast too).
   const gap = values.length - (prepared.first + n);
   const h = horizon + gap;
   let run: MethodRun;
+  let fit: MethodFit | null = null;
   if (constant) {
     notes.push('The series is constant; the forecast repeats the constant.');
     const mean = new Float64Array(h).fill(y[0]);
@@ -60,7 +62,8 @@ export function forecastSeries(
   } else if (n < 4) {
     notes.push('Fewer than four values: the naive method (last value repeated) is used.');
     method = 'naive';
-    run = runMethod('naive', y, {period, h, levels});
+    fit = fitMethod('naive', y, {period});
+    run = fit.forecast({h, levels});
   } else {
     if (method === 'seasonal-naive' && n <= period) {
       notes.push('Less than one full year: the naive method replaces the seasonal naive method.');
@@ -73,11 +76,13 @@ export function forecastSeries(
           'and the seasonal pattern is added back.',
       );
     }
-    run = runMethod(method, y, {period, h, levels});
+    fit = fitMethod(method, y, {period});
+    run = fit.forecast({h, levels});
     if (!isFinitePath(run.forecast)) {
       notes.push(`The ${run.forecast.method} forecast was not finite; the naive method is used instead.`);
       method = 'naive';
-      run = runMethod('naive', y, {period, h, levels});
+      fit = fitMethod('naive', y, {period});
+      run = fit.forecast({h, levels});
     }
   }
   const forecast = run.forecast;
@@ -96,18 +101,9 @@ export function forecastSeries(
       }
     : undefined;
   const backtest =
-    constant || backtestOrigins < 1 || n < 5
+    fit === null || backtestOrigins < 1 || n < 5
       ? null
-      : rollingBacktest(y, {
-          method,
-          period,
-          horizon,
-          origins: backtestOrigins,
-          minTrain: 4,
-          offset: prepared.first,
-          etsModels: run.etsModels,
-          arimaOrder: run.arimaOrder,
-        });
+      : rollingBacktest(y, {fit, period, horizon, origins: backtestOrigins, minTrain: 4, offset: prepared.first});
   return {
     method: forecast.method,
     startOffset: values.length,
@@ -127,8 +123,20 @@ export function forecastSeries(
       ...run.details,
     },
     notes,
+    residuals: forecast.fitted ? inSampleErrors(values, forecast.fitted, prepared.first) : [],
     ...(totals ? {runningTotals: totals} : {}),
   };
+}
+
+/**
+ * yₜ − ŷₜ|ₜ₋₁ on the series' own positions: the fit covers values[first …]; NaN where the value is missing (it was
+ * filled for fitting) or the model has no fitted value.
+ */
+function inSampleErrors(values: Float64Array, fitted: Float64Array, first: number): number[] {
+  return Array.from(values, (v, i) => {
+    const t = i - first;
+    return t >= 0 && t < fitted.length ? v - fitted[t] : NaN;
+  });
 }
 
 function isFinitePath(f: Forecast): boolean {

@@ -11,6 +11,11 @@ export interface Forecast {
   upper: Map<number, Float64Array>;
   /** Intervals for running totals of the forecasts (steps 1 … k), when the model can give them. */
   runningTotals?: RunningTotals;
+  /**
+   * In-sample one-step forecasts ŷₜ|ₜ₋₁, aligned with the fitted values (NaN where the model gives none), when the
+   * model defines them.
+   */
+  fitted?: Float64Array;
 }
 
 /** Lower and upper bounds, by level, of T_k = y_{n+1} + … + y_{n+k} for k = 1 … h. */

@@ -48,5 +48,6 @@ function seasonalNaiveCore(
     mean[i] = values[n - lag + (i % lag)];
     variance[i] = sigma2 * (Math.floor(i / lag) + 1);
   }
-  return {method, mean, variance, levels, ...normalIntervals(mean, variance, levels)};
+  const fitted = Float64Array.from(values, (_, t) => (t >= lag ? values[t - lag] : NaN));
+  return {method, mean, variance, levels, ...normalIntervals(mean, variance, levels), fitted};
 }

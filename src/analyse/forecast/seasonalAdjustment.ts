@@ -1,4 +1,4 @@
-import {classicalSeasonal} from './classicalSeasonal.js';
+import {classicalFigure} from '../decompose/classical.js';
 import {seasonalityTest} from './seasonalityTest.js';
 
 /**
@@ -28,7 +28,7 @@ export function seasonalAdjustment(values: Float64Array, period: number): Season
   }
   const positive = values.every((v) => v > 0);
   const kind = positive ? 'multiplicative' : 'additive';
-  const figure = classicalSeasonal(values, period, kind);
+  const figure = classicalFigure(values, period, kind);
   if (positive && figure.some((f) => !(Math.abs(f) >= 1e-10))) return noSeasonalAdjustment(values);
   const adjusted = values.map((v, t) => (positive ? v / figure[t % period] : v - figure[t % period]));
   const nextYear = Float64Array.from({length: period}, (_, i) => figure[(n - period + i) % period]);

@@ -2,6 +2,7 @@ import {fitEts} from './etsFit.js';
 import {checkForecastOptions, type Forecast, type ForecastOptions} from './model.js';
 import {normalIntervals} from './normalIntervals.js';
 import {seasonalAdjustment, type SeasonalAdjustment} from './seasonalAdjustment.js';
+import {inSampleSeasonal} from './inSampleSeasonal.js';
 
 /**
  * The Theta method as simple exponential smoothing with drift: on the (classically, multiplicatively)
@@ -31,6 +32,11 @@ export interface ThetaFit {
   adjustment: SeasonalAdjustment;
   fitted: Float64Array;
   residuals: Float64Array;
+  /**
+   * In-sample one-step Theta forecasts on the original scale: the SES forecast plus the drift term the forecast
+   * from that origin would carry, ℓₜ₋₁ + b·(1 − (1 − α)ᵗ)/α, with the in-sample seasonal figure put back.
+   */
+  oneStep: Float64Array;
 }
 
 export function fitTheta(
@@ -60,6 +66,12 @@ export function fitTheta(
     sxx += (t - mt) ** 2;
   }
   const drift = sxy / sxx / 2;
+  const alpha = ses.params.alpha;
+  const oneStep = inSampleSeasonal(
+    Float64Array.from(ses.fitted, (f, t) => f + (drift * (1 - (1 - alpha) ** t)) / alpha),
+    values,
+    sa,
+  );
   return {
     method: 'Theta',
     alpha: ses.params.alpha,
@@ -70,6 +82,7 @@ export function fitTheta(
     adjustment: sa,
     fitted: ses.fitted,
     residuals: ses.residuals,
+    oneStep,
   };
 }
 
@@ -98,5 +111,6 @@ export function forecastTheta(fit: ThetaFit, options: ForecastOptions): Forecast
     totalVariance[k] = fit.sigma2 * v;
   }
   const runningTotals = normalIntervals(totalMean, totalVariance, levels);
-  return {method: 'Theta', mean, variance, levels, ...normalIntervals(mean, variance, levels), runningTotals};
+  const fitted = fit.oneStep;
+  return {method: 'Theta', mean, variance, levels, ...normalIntervals(mean, variance, levels), runningTotals, fitted};
 }

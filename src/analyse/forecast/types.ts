@@ -15,6 +15,12 @@ export interface ForecastResult {
   /** Warnings such as fallbacks for short series. */
   notes: string[];
   /**
+   * In-sample one-step forecast errors yₜ − ŷₜ|ₜ₋₁ of the chosen method, aligned with the series' values (NaN where
+   * the method gives none, e.g. before its first fitted value or at missing values); empty when the method defines
+   * no fitted values. Forecast reconciliation (MinT) estimates the error covariance across series from these.
+   */
+  residuals: number[];
+  /**
    * Optional: intervals for running totals of the forecasts, `lower["80"][k]` bounding mean[0] + … + mean[k]
    * (ETS: simulated sample paths; Theta: closed form; combinations: members' bounds averaged). Used by the
    * fiscal-year outturn of flows; absent for methods without a joint error model.
@@ -33,6 +39,8 @@ export interface Backtest {
   benchmarks: {method: string; mase: number; smape: number}[];
   /** One-step-ahead back-test forecasts for the chart: offset into the series and value. */
   points: {offset: number; forecast: number}[];
+  /** The main method's forecasts from every origin: offset into the series of the first forecast, and the means. */
+  paths: {offset: number; mean: number[]}[];
 }
 
 /** Fiscal-year outturn: actual year-to-date plus forecast to year end. */

@@ -8,6 +8,10 @@
  * states; this variant is the one statistical software has long used for those fits, so results agree with
  * published reference implementations step for step (the arithmetic order below is kept deliberately).
  * Bounds are the caller's job: return `Infinity` (or NaN) outside the feasible region; such values count as 1e35.
+ * Each call also gets `bound`: a trial point whose value is at or above it is rejected whatever the value, so the
+ * objective may stop early and return any value ≥ `bound` there (e.g. skip a costly feasibility test, or a sum
+ * of squares that has already passed it); the search path is the same as with exact values. Vertices of the
+ * start simplex and of a shrink are stored, so they get `bound = Infinity`.
  *
  * Reference: J. A. Nelder and R. Mead (1965), A simplex method for function minimization, Computer Journal 7,
  * 308–313; J. C. Nash (1990), Compact Numerical Methods for Computers, 2nd ed., Algorithm 14.
@@ -47,7 +51,30 @@ export interface NelderMeadResult {
 const BIG = 1e35;
 
 export function nelderMead(
-  f: (x: Float64Array) => number,
+  f: (x: Float64Array, bound: number) => number,
+  start: Float64Array,
+  {maxEvaluations = 500, ...options}: NelderMeadOptions = {},
+): NelderMeadResult {
+  return nelderMeadSearch(f, start, options).run(maxEvaluations);
+}
+
+/** A Nelder-Mead search that can be run in stages: `run(a)` then `run(b)` takes exactly the path of `run(b)`. */
+export interface NelderMeadSearch {
+  /** Go on until more than `limit` evaluations in all (or a stop); the best point so far. */
+  run(limit: number): NelderMeadResult;
+  /** True once the search has stopped for good (tolerance met, or a shrink that did not shrink). */
+  readonly stopped: boolean;
+  /** Evaluations so far and the best value so far. */
+  readonly evaluations: number;
+  readonly value: number;
+}
+
+/**
+ * The search of {@link nelderMead} as an object, so a caller can look at the best value between stages and give
+ * up on a search that cannot pay (see etsScreen.ts). Throws when the objective is not finite at the start.
+ */
+export function nelderMeadSearch(
+  f: (x: Float64Array, bound: number) => number,
   start: Float64Array,
   {
     relTol = Math.sqrt(Number.EPSILON),
@@ -55,15 +82,17 @@ export function nelderMead(
     alpha = 1,
     beta = 0.5,
     gamma = 2,
-    maxEvaluations = 500,
     steps = null,
-  }: NelderMeadOptions = {},
-): NelderMeadResult {
+  }: Omit<NelderMeadOptions, 'maxEvaluations'> = {},
+): NelderMeadSearch {
   const n = start.length;
   const x = Float64Array.from(start);
-  const f0 = f(x);
+  const f0 = f(x, Infinity);
   if (!Number.isFinite(f0)) throw new RangeError('objective not finite at the start point');
-  if (n === 0) return {x, value: f0, evaluations: 1, converged: true};
+  if (n === 0) {
+    const result = {x, value: f0, evaluations: 1, converged: true};
+    return {run: () => ({...result, x: Float64Array.from(x)}), stopped: true, evaluations: 1, value: f0};
+  }
   const safe = (v: number): number => (Number.isFinite(v) ? v : BIG);
   // Simplex: n + 1 vertices, each a Float64Array of n coordinates, and their values.
   const p: Float64Array[] = [];
@@ -91,12 +120,14 @@ export function nelderMead(
   let recompute = true;
   let best = 0;
   let converged = false;
+  let stopped = false;
   const centroid = new Float64Array(n);
-  do {
+  // One iteration of the original loop; false when the search stops.
+  const iterate = (): boolean => {
     if (recompute) {
       for (let j = 0; j <= n; j++) {
         if (j === best) continue;
-        fv[j] = safe(f(p[j]));
+        fv[j] = safe(f(p[j], Infinity));
         evaluations++;
       }
       recompute = false;
@@ -118,7 +149,7 @@ export function nelderMead(
     }
     if (high <= low + convTol || low <= absTol) {
       converged = true;
-      break;
+      return false;
     }
     for (let i = 0; i < n; i++) {
       let t = -p[worst][i];
@@ -126,7 +157,9 @@ export function nelderMead(
       centroid[i] = t / n;
     }
     for (let i = 0; i < n; i++) x[i] = (1 + alpha) * centroid[i] - alpha * p[worst][i];
-    const reflected = safe(f(x));
+    // Only a reflected value below the worst is kept (or leads to an expansion); at or above it, a contraction
+    // follows and the shrink test asks only whether it was at or above.
+    const reflected = safe(f(x, high));
     evaluations++;
     if (reflected < low) {
       // Try an expansion; keep the reflected point in `centroid` meanwhile.
@@ -135,7 +168,7 @@ export function nelderMead(
         centroid[i] = x[i];
         x[i] = e;
       }
-      const expanded = safe(f(x));
+      const expanded = safe(f(x, reflected));
       evaluations++;
       if (expanded < reflected) {
         p[worst].set(x);
@@ -150,7 +183,7 @@ export function nelderMead(
         fv[worst] = reflected;
       }
       for (let i = 0; i < n; i++) x[i] = (1 - beta) * p[worst][i] + beta * centroid[i];
-      const contracted = safe(f(x));
+      const contracted = safe(f(x, fv[worst]));
       evaluations++;
       if (contracted < fv[worst]) {
         p[worst].set(x);
@@ -166,9 +199,25 @@ export function nelderMead(
           }
         }
         if (size < oldSize) oldSize = size;
-        else break;
+        else return false;
       }
     }
-  } while (evaluations <= maxEvaluations);
-  return {x: Float64Array.from(p[best]), value: fv[best], evaluations, converged};
+    return true;
+  };
+  return {
+    run(limit: number): NelderMeadResult {
+      // The original loop runs its first iteration unconditionally: evaluations is 1 then, within any limit.
+      while (!stopped && (evaluations <= limit || evaluations === 1)) stopped = !iterate();
+      return {x: Float64Array.from(p[best]), value: fv[best], evaluations, converged};
+    },
+    get stopped() {
+      return stopped;
+    },
+    get evaluations() {
+      return evaluations;
+    },
+    get value() {
+      return fv[best];
+    },
+  };
 }

@@ -1,11 +1,9 @@
+import {FLAT_TREND_PERCENT, FLAT_TREND_POINTS, trendSign} from '../../analyse/trendSign.js';
 import {periodsPerYear} from '../../time/period.js';
 import {chartId, type Rule} from '../context.js';
 import {robustZ} from '../robustZ.js';
 import * as say from '../wording.js';
 
-/** Trend change per period below which the trend counts as flat: 0.05% (0.01 pp for rates), common practice. */
-const FLAT_PCT = 0.05;
-const FLAT_PP = 0.01;
 
 /**
  * Direction of the trend-cycle and whether it has just turned, set against the latest adjusted move:
@@ -22,12 +20,12 @@ export const trendRule: Rule = {
     if (!trend) return [];
     const last = a.end - a.start;
     const step = (x: ArrayLike<number>, i: number) => (isRate ? x[i] - x[i - 1] : (x[i] / x[i - 1] - 1) * 100);
-    const flat = isRate ? FLAT_PP : FLAT_PCT;
+    const flat = isRate ? FLAT_TREND_POINTS : FLAT_TREND_PERCENT;
     const steps: number[] = [NaN];
     for (let i = 1; i <= last; i++) steps.push(step(trend, i));
     const trendChange = steps[last];
     if (!Number.isFinite(trendChange)) return [];
-    const sign = (x: number) => (!Number.isFinite(x) || Math.abs(x) < flat ? 0 : Math.sign(x));
+    const sign = (x: number) => trendSign(x, flat);
     const per = say.periodName(a.frequency);
     const chart = chartId(s.id, 'overview');
     const z = robustZ(steps.slice(1, last), trendChange);

@@ -1,6 +1,6 @@
 import {readFileSync} from 'node:fs';
 import {describe, expect, it} from 'vitest';
-import {nelderMead} from '../../../src/analyse/numeric/nelderMead.js';
+import {nelderMead, nelderMeadSearch} from '../../../src/analyse/numeric/nelderMead.js';
 
 // Fixture: test/reference/benchmarks.json from test/reference/benchmarks.R, R's optim(start, f, method = "Nelder-Mead")
 // with its defaults (reltol √ε, coefficients 1, 0.5, 2; maxit 500).
@@ -52,5 +52,28 @@ describe('nelderMead', () => {
     nelderMead((x) => x[0] ** 2 + x[1] ** 2, start);
     expect([...start]).toEqual([3, 4]);
     expect(() => nelderMead(() => NaN, start)).toThrow(/objective not finite/);
+  });
+
+  it('a value at or above the bound it is given may be anything at or above it: the path stays the same', () => {
+    const f = functions.Rosenbrock;
+    const exact = nelderMead(f, Float64Array.of(-1.2, 1));
+    let skipped = 0;
+    const lazy = nelderMead((x, bound) => {
+      const v = f(x);
+      if (v < bound) return v;
+      skipped++;
+      return Infinity;
+    }, Float64Array.of(-1.2, 1));
+    expect(lazy).toEqual(exact);
+    expect(skipped).toBeGreaterThan(0);
+  });
+
+  it('a search run in stages takes the path of one run', () => {
+    const f = functions['weighted quadratic'];
+    const once = nelderMead(f, Float64Array.of(0, 0, 0), {maxEvaluations: 400});
+    const search = nelderMeadSearch(f, Float64Array.of(0, 0, 0));
+    for (const limit of [10, 50, 51, 200]) search.run(limit);
+    expect(search.run(400)).toEqual(once);
+    expect(search.evaluations).toBe(once.evaluations);
   });
 });

@@ -1,5 +1,5 @@
 import {describe, expect, it} from 'vitest';
-import type {History, RevisionRow, TrackingRow} from '../../../src/archive/types.js';
+import type {History, RevisionRow, TrackingRow} from '../../../src/results/index.js';
 import {revisionsRule} from '../../../src/narrate/callouts/revisions.js';
 import {forecastTrackingRule} from '../../../src/narrate/callouts/forecastTracking.js';
 import {forecastCheckRule} from '../../../src/narrate/callouts/forecastCheck.js';

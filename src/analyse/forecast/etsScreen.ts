@@ -1,0 +1,74 @@
+import {etsSearch, fitEts, type EtsFit, type EtsSearch} from './etsFit.js';
+import {etsCandidates} from './etsSelect.js';
+
+/** AICc distance beyond which a model's Akaike weight is below 1%: exp(−Δ/2) < 0.01 ⇔ Δ > 2·ln 100. */
+const CUT = 2 * Math.log(100);
+/**
+ * Evaluations after which a search may be given up, and how much its AICc may still fall from there (its
+ * margin). Measured on the seasonal fits of 100 M3 monthly series and 60 series of the scale benchmark
+ * (test/bench/scale.ts data): the largest fall from 250, 500, 750, 1000 and 1500 evaluations to the end of
+ * the search was 284 / 126 / 100 / 82 / 36 (M3) and 113 / 64 / 58 / 51 / 30 (scale); the 99th percentiles
+ * 187 / 67 / 38 / 22 / 8. With these margins no model that ended with a weight of at least 1% was given up.
+ */
+const CHECKPOINTS = [250, 500, 750, 1000, 1500];
+const MARGINS = [350, 180, 120, 100, 50];
+
+/**
+ * The fits of automatic ETS (the models and order of selectEts) for Akaike weighting, screened: the
+ * non-seasonal models, quick to fit, are fitted first; the seasonal models' searches then run in stages, the
+ * most promising (lowest AICc so far) first, and a search is given up at a checkpoint when its AICc so far, less
+ * the checkpoint's margin, is still more than 2·ln 100 ≈ 9.21 above the best AICc known (of a finished fit, or
+ * of a search so far, which its end can only lower). Such a model would end with a weight under 1% (the cut of
+ * akaikeWeights), so it is not needed; every model kept is fitted exactly as selectEts fits it (a search's path
+ * does not depend on its stages). The fits come back in selectEts' order, without the models given up.
+ *
+ * Why: a seasonal model's search takes 1,500–2,000 likelihood evaluations (against 150–500 for non-seasonal
+ * ones) and most seasonal models end far outside the weights.
+ * Reference: Burnham & Anderson (2002) for the weights; the margins are measured, see above.
+ *
+ * Complexity: at most the cost of selectEts. NaN policy: rejects NaN. Empty when no model fits.
+ */
+export function selectEtsScreened(
+  y: Float64Array,
+  {period, seasonal = true}: {period: number; seasonal?: boolean},
+): EtsFit[] {
+  const specs = etsCandidates(y, {period, seasonal});
+  const fits: (EtsFit | null)[] = specs.map(() => null);
+  let best = Infinity;
+  const keep = (i: number, fit: EtsFit | null): void => {
+    if (fit && Number.isFinite(fit.aicc)) {
+      fits[i] = fit;
+      best = Math.min(best, fit.aicc);
+    }
+  };
+  const active: {i: number; search: EtsSearch; stage: number}[] = [];
+  specs.forEach((spec, i) => {
+    if (spec.season === 'N') keep(i, fitEts(y, spec));
+  });
+  specs.forEach((spec, i) => {
+    if (spec.season === 'N') return;
+    const search = etsSearch(y, spec);
+    if (!search) return;
+    search.run(CHECKPOINTS[0]);
+    if (search.stopped) keep(i, search.finish());
+    else active.push({i, search, stage: 0});
+  });
+  while (active.length > 0) {
+    const known = Math.min(best, ...active.map((a) => a.search.aicc()));
+    for (let j = active.length - 1; j >= 0; j--) {
+      const a = active[j];
+      if (a.search.aicc() - MARGINS[a.stage] > known + CUT) active.splice(j, 1);
+    }
+    if (active.length === 0) break;
+    let next = 0;
+    for (let j = 1; j < active.length; j++) if (active[j].search.aicc() < active[next].search.aicc()) next = j;
+    const a = active[next];
+    a.stage++;
+    if (a.stage < CHECKPOINTS.length) a.search.run(CHECKPOINTS[a.stage]);
+    if (a.stage >= CHECKPOINTS.length || a.search.stopped) {
+      keep(a.i, a.search.finish());
+      active.splice(next, 1);
+    }
+  }
+  return fits.filter((f): f is EtsFit => f !== null);
+}

@@ -1,0 +1,2 @@
+export {loadHistory, buildHistory} from './history.js';
+export {REVISION_WINDOW} from './revisions.js';

@@ -1,0 +1,68 @@
+import {groupChartId, type Rule} from '../context.js';
+import * as say from '../wording.js';
+
+/** Contributions smaller than this many percentage points are not named as drivers (common practice: 0.05). */
+export const MIN_DRIVER_POINTS = 0.05;
+
+/**
+ * What drove a total: for each group whose total is this series, the part with the largest contribution in the
+ * direction of the total's year-on-year change, and the largest contribution against it ("driven by the North,
+ * +3.1 points; Web subtracted 0.8"). Info severity; ranked by the size of the total's change.
+ */
+export const driversRule: Rule = {
+  name: 'drivers',
+  run({series: s, groups, plan, fmt, analysis: a}) {
+    const labels = new Map(plan.series.map((p) => [p.id, p.label]));
+    return groups
+      .filter((g) => g.total === s.id)
+      .flatMap((g) => {
+        const {total, parts} = g.contributions.yearOnYear;
+        if (!Number.isFinite(total)) return [];
+        const found = mainDrivers(total, parts);
+        if (found === null) return [];
+        const {driver, against} = found;
+        return [
+          {
+            key: g.id,
+            severity: 'info' as const,
+            text: say.drivers({
+              label: s.label,
+              change: fmt.size(Math.abs(total)),
+              rose: total >= 0,
+              period: fmt.period(a.frequency, a.end),
+              driver: {label: labels.get(driver.id) ?? driver.id, points: fmt.points(driver.points)},
+              against: against && {
+                label: labels.get(against.id) ?? against.id,
+                points: fmt.size(Math.abs(against.points)),
+                subtracted: against.points < 0,
+              },
+            }),
+            figures: {total, [driver.id]: driver.points, ...(against ? {[against.id]: against.points} : {})},
+            chart: groupChartId(g.id),
+            magnitude: Math.min(10, Math.abs(total) / 2),
+            periodsAgo: 0,
+          },
+        ];
+      });
+  },
+};
+
+/**
+ * The part contributing most in the direction of the total's change, and the one contributing most against it
+ * (null when none does by at least {@link MIN_DRIVER_POINTS}); ties go to the earlier part. Null when no part
+ * moves the total by that much.
+ */
+export function mainDrivers(
+  total: number,
+  parts: Record<string, number>,
+): {driver: {id: string; points: number}; against: {id: string; points: number} | null} | null {
+  const sign = total >= 0 ? 1 : -1;
+  let driver: {id: string; points: number} | null = null;
+  let against: {id: string; points: number} | null = null;
+  for (const [id, points] of Object.entries(parts)) {
+    if (!Number.isFinite(points) || Math.abs(points) < MIN_DRIVER_POINTS) continue;
+    if (points * sign > 0 && (driver === null || Math.abs(points) > Math.abs(driver.points))) driver = {id, points};
+    if (points * sign < 0 && (against === null || Math.abs(points) > Math.abs(against.points))) against = {id, points};
+  }
+  return driver === null ? null : {driver, against};
+}

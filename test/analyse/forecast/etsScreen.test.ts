@@ -1,0 +1,41 @@
+import {readFileSync} from 'node:fs';
+import {describe, expect, it} from 'vitest';
+import {akaikeWeights} from '../../../src/analyse/forecast/akaikeWeights.js';
+import {etsSearch, fitEts} from '../../../src/analyse/forecast/etsFit.js';
+import {selectEtsScreened} from '../../../src/analyse/forecast/etsScreen.js';
+import {selectEts} from '../../../src/analyse/forecast/etsSelect.js';
+
+// Real data: the seasonal series among R's datasets in test/reference/ets.json (written by test/reference/ets.R).
+const ref = JSON.parse(readFileSync(new URL('../../reference/ets.json', import.meta.url), 'utf8'));
+const seasonal = (ref.auto as {name: string; frequency: number; values: number[]}[]).filter((c) => c.frequency > 1);
+
+/** Kept models with their weights (1% cut), as the `auto` forecast uses them. */
+const weighted = (fits: {method: string; aicc: number; params: object}[]) => {
+  const w = akaikeWeights(fits.map((f) => f.aicc), 0.01);
+  return fits.flatMap((f, i) => (w[i] > 0 ? [{model: f.method, weight: w[i], params: f.params}] : []));
+};
+
+describe('selectEtsScreened', () => {
+  for (const c of seasonal) {
+    it(`${c.name}: the same models, weights and estimates as fitting every model`, () => {
+      const y = Float64Array.from(c.values);
+      const all = selectEts(y, {period: c.frequency})!.fits;
+      const screened = selectEtsScreened(y, {period: c.frequency});
+      expect(weighted(screened)).toEqual(weighted(all));
+      // The models it fitted are fitted exactly as selectEts fits them, in the same order.
+      for (const f of screened) expect(f).toEqual(all.find((g) => g.method === f.method));
+    });
+  }
+});
+
+describe('etsSearch', () => {
+  it('run in stages, finishes with what fitEts gives', () => {
+    const c = seasonal[0];
+    const y = Float64Array.from(c.values);
+    const spec = {error: 'M', trend: 'A', damped: true, season: 'M', period: c.frequency} as const;
+    const search = etsSearch(y, spec)!;
+    for (const limit of [250, 500, 1000]) search.run(limit);
+    expect(search.aicc()).toBeGreaterThanOrEqual(fitEts(y, spec)!.aicc - 1e-9);
+    expect(search.finish()).toEqual(fitEts(y, spec));
+  });
+});
