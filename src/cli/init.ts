@@ -7,7 +7,7 @@ import {InputError} from '../errors.js';
 export const STARTER_PACK = 'monthly-pack.yaml';
 
 /**
- * Copy the starter pack and every file it names (sources, logo, templates folder) from `sampleDir`
+ * Copy the starter pack and every file it names (sources, files its queries read, logo, templates folder) from `sampleDir`
  * into `dir`, keeping their relative layout so the pack's paths still work, and write the pack file's JSON Schema
  * beside it (`pack.schema.json`, which the pack's first line names for editors). The pack is validated
  * first, so a broken sample never reaches the user.
@@ -28,7 +28,20 @@ export async function initPack(dir: string, sampleDir: string): Promise<{packFil
   if (firstLine !== `# yaml-language-server: $schema=${PACK_SCHEMA_FILE}`) {
     throw new Error(`the starter pack's first line does not name ${PACK_SCHEMA_FILE}`);
   }
-  const named = [samplePack, ...plan.sources.map((s) => s.file), plan.branding.logo, plan.branding.templates];
+  // Files a query reads (DuckDB's read_parquet('data/x.parquet')) are named inside its text.
+  const queries = plan.sources.flatMap((s) => (s.query === null ? [] : [s.query]));
+  const queried = (await readdir(sampleDir, {recursive: true, withFileTypes: true}))
+    .filter((e) => e.isFile())
+    .map((e) => path.relative(sampleDir, path.join(e.parentPath, e.name)).split(path.sep).join('/'))
+    .filter((f) => queries.some((q) => q.includes(f)))
+    .map((f) => path.join(sampleDir, f));
+  const named = [
+    samplePack,
+    ...plan.sources.map((s) => s.file),
+    ...queried,
+    plan.branding.logo,
+    plan.branding.templates,
+  ];
   const files = [...new Set(named.filter((f): f is string => f !== null))].map((f) => path.relative(sampleDir, f));
   const outside = files.find((f) => f.startsWith('..') || path.isAbsolute(f));
   if (outside !== undefined) throw new Error(`the starter pack names a file outside its folder: ${outside}`);

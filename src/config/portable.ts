@@ -17,6 +17,6 @@ export function portablePlan(plan: Plan): Omit<Plan, 'outDir'> {
     packFile: path.basename(plan.packFile),
     browser: plan.browser === null || !path.isAbsolute(plan.browser) ? plan.browser : rel(plan.browser),
     branding: {...plan.branding, logo: relOrNull(plan.branding.logo), templates: relOrNull(plan.branding.templates)},
-    sources: plan.sources.map((s) => ({...s, file: rel(s.file)})),
+    sources: plan.sources.map((s) => ({...s, file: rel(s.file), readFolders: s.readFolders.map(rel)})),
   };
 }

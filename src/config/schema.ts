@@ -1,4 +1,6 @@
 import {z} from 'zod';
+import {DATE_FORMAT} from '../time/parseDate.js';
+import {isTimeZone} from '../time/zone.js';
 import {defaultConfig} from './defaults.js';
 import {SLUG} from './slug.js';
 
@@ -300,9 +302,23 @@ const thresholdsSection = z.strictObject({
     ),
 });
 
+const aggregate = z.enum(['sum', 'mean', 'last', 'first', 'min', 'max', 'count']);
+const seriesAggregate = aggregate
+  .nullish()
+  .meta(
+    doc(
+      'How the rows of one period combine: sum, mean, last, first, min, max or count. Default: sum for flows, last ' +
+        'for stocks, mean for ratios, and two rows for one period are a problem.',
+    ),
+  );
+
 const sourceEntry = z.strictObject({
   id: slug.meta(doc('Unique id of the source, named by series. Required.')),
-  file: text.meta(doc('CSV file, relative to the pack. Required.')),
+  file: optionalText.meta(
+    doc(
+      'Data file, relative to the pack: a CSV, or a workbook ending in .xlsx. Required, unless the source has a query.',
+    ),
+  ),
   layout: z
     .enum(['wide', 'long'])
     .nullish()
@@ -315,9 +331,65 @@ const sourceEntry = z.strictObject({
   delimiter: z
     .enum(['auto', ',', ';', '\t'])
     .nullish()
-    .meta(doc('Field separator; auto sniffs it from the header line.', d.source.delimiter)),
-  decimal: z.enum(['.', ',']).nullish().meta(doc('Decimal mark of the numbers.', d.source.decimal)),
-  encoding: z.enum(['utf-8', 'windows-1252']).nullish().meta(doc('Text encoding of the file.', d.source.encoding)),
+    .meta(doc('CSV field separator; auto sniffs it from the header line.', d.source.delimiter)),
+  decimal: z.enum(['.', ',']).nullish().meta(doc('Decimal mark of the numbers (CSV).', d.source.decimal)),
+  encoding: z
+    .enum(['utf-8', 'windows-1252'])
+    .nullish()
+    .meta(doc('Text encoding of the file (CSV).', d.source.encoding)),
+  // Data as exported: header position, date spelling, workbooks and queries (crossCheck relates them).
+  headerRow: z
+    .number()
+    .int()
+    .min(1, {error: 'must be a line number from 1'})
+    .nullish()
+    .meta(
+      doc('Line (CSV) or row (workbook) holding the column names; lines above it are ignored.', d.source.headerRow),
+    ),
+  dateFormat: z
+    .string()
+    .regex(DATE_FORMAT, {
+      error: 'must be DD/MM/YYYY, MM/DD/YYYY, DD.MM.YYYY or DD-MM-YYYY, optionally with " HH:mm:ss"',
+    })
+    .nullish()
+    .meta(
+      doc(
+        'Day-first or month-first dates: DD/MM/YYYY, MM/DD/YYYY, DD.MM.YYYY or DD-MM-YYYY, optionally with " HH:mm:ss". ' +
+          'Default: none, only year-first dates are read.',
+      ),
+    ),
+  timeZone: z
+    .string()
+    .refine(isTimeZone, {error: 'must be a time zone name such as UTC or Europe/Berlin'})
+    .nullish()
+    .meta(doc('IANA zone in which a timestamp written with an offset gets its date.', d.source.timeZone)),
+  emptyMeans: z
+    .enum(['missing', 'zero'])
+    .nullish()
+    .meta(
+      doc('A period without rows inside the data: missing (a gap) or zero (for sum and count).', d.source.emptyMeans),
+    ),
+  sheet: optionalText.meta(doc('Workbooks: the sheet to read. Default: the first sheet.')),
+  query: optionalText.meta(doc('One SELECT, run by engine, instead of a file.', null)),
+  engine: z
+    .enum(['duckdb', 'postgres'])
+    .nullish()
+    .meta(doc('What runs the query: embedded DuckDB or a PostgreSQL server. Required with query.')),
+  connection: z
+    .strictObject({
+      env: z
+        .string()
+        .regex(/^[A-Za-z_][A-Za-z0-9_]*$/, {error: 'must be an environment variable name'})
+        .meta(doc('Name of the environment variable holding the connection string. Required.')),
+    })
+    .nullish()
+    .meta(doc('engine: postgres only: where the connection string is. Required for postgres.')),
+  timeoutSeconds: z
+    .number()
+    .positive()
+    .max(3600)
+    .nullish()
+    .meta(doc('A PostgreSQL query (and connection attempt) running longer is stopped.', d.source.timeoutSeconds)),
 });
 
 const seriesUnit = optionalText.meta(doc('Unit shown beside the figures, e.g. EUR k.', d.series.unit));
@@ -329,7 +401,9 @@ const seriesKindDoc = doc(
 const better = z.enum(['higher', 'lower']);
 const betterDoc = doc('Which side of the target is favourable (lower for costs); needs a target.', d.series.better);
 const seriesLabel = optionalText.meta(doc('Name shown in the report. Default: the id.'));
-const seriesTarget = optionalText.meta(doc("Id of another series holding this one's target or budget.", d.series.target));
+const seriesTarget = optionalText.meta(
+  doc("Id of another series holding this one's target or budget.", d.series.target),
+);
 const seriesHidden = z
   .boolean()
   .nullish()
@@ -345,6 +419,7 @@ const seriesEntry = z.strictObject({
   target: seriesTarget,
   better: better.nullish().meta(betterDoc),
   hidden: seriesHidden,
+  aggregate: seriesAggregate,
   ...analysisShape,
 });
 
@@ -363,6 +438,7 @@ const formulaEntry = z.strictObject({
   target: seriesTarget,
   better: better.nullish().meta(betterDoc),
   hidden: seriesHidden,
+  aggregate: seriesAggregate,
   ...analysisShape,
 });
 
@@ -375,6 +451,7 @@ const fromSourceEntry = z.strictObject({
     .nullish()
     .meta(doc('flow: sums over a period (sales, orders); stock: a level (headcount, inventory).', d.series.kind)),
   hidden: seriesHidden,
+  aggregate: seriesAggregate,
   ...analysisShape,
 });
 
@@ -382,7 +459,7 @@ const groupEntry = z.strictObject({
   id: slug.meta(doc('Unique id of the group. Required.')),
   title: text.meta(doc('Heading of the report section. Required.')),
   series: z.array(text).min(1).meta(doc('Ids of the series in the section, in order. Required.')),
-  total: optionalText.meta(doc('Id of a series that the group\'s series add up to.', null)),
+  total: optionalText.meta(doc("Id of a series that the group's series add up to.", null)),
   adjustTotal: z
     .enum(['direct', 'indirect'])
     .nullish()
