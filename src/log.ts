@@ -2,6 +2,8 @@
 export interface Logger {
   info(message: string): void;
   warn(message: string): void;
+  /** Told as each stage of a build starts (`config`, `ingest`, `analyse`, …), so a verbose logger can time them. */
+  stage?(name: string): void;
 }
 
 /** Prints progress to stderr, so stdout stays clean for scripts. */

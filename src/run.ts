@@ -43,7 +43,7 @@ export interface BuildSummary {
   period: string;
   folder: string;
   outputs: string[];
-  /** Why the PDF was not written, or null. */
+  /** Why the PDF was not written, or null. Not logged here: the caller says it once for a batch. */
   pdfSkipped: string | null;
 }
 
@@ -58,8 +58,12 @@ export interface BuildSummary {
  */
 export async function build(request: BuildRequest, log: Logger): Promise<BuildSummary> {
   const {packFile, period, outDir, formats, allowDirs} = request;
+  log.stage?.('config');
   const loaded = await loadPlan(packFile, {period, outDir, formats, allowDirs});
-  const read = derive(loaded, await ingest(loaded));
+  log.stage?.('ingest');
+  const rows = await ingest(loaded);
+  log.stage?.('derive');
+  const read = derive(loaded, rows);
   const {data, ratios} = deriveFormulas(loaded, read);
   const plan: Plan = {...loaded, series: data.plans}; // `fromSource` entries expanded, formula kinds resolved
   const periodLabel = formatPeriod(plan.frequency, data.period);
@@ -70,14 +74,20 @@ export async function build(request: BuildRequest, log: Logger): Promise<BuildSu
     if (plan.formats.includes('pdf')) session.warm(plan.browser);
     const charts = plan.formats.includes('html') || plan.formats.includes('pdf') ? chartPrefetch(plan) : null;
     const threads = analysisThreads(request.jobs, charts !== null);
-    const combined = combine(plan, data, await analyseAll(plan, data, {threads, log, onResult: charts?.add}), ratios);
+    log.stage?.('analyse');
+    const separate = await analyseAll(plan, data, {threads, log, onResult: charts?.add});
+    log.stage?.('combine');
+    const combined = combine(plan, data, separate, ratios);
     const analyses = combined.analyses;
+    log.stage?.('history');
     const digest = digestOf(plan, periodLabel, analyses);
     const {revisionPct} = plan.thresholds;
     const history = await loadHistory(plan.outDir, plan.id, periodLabel, plan.frequency, digest, revisionPct);
+    log.stage?.('narrate');
     const report = narrated(plan, data, combined, history);
+    log.stage?.('render');
     const rendered = await render(report, {charts: (await charts?.drawn()) ?? new Map(), session});
-    if (rendered.pdfSkipped) log.warn(rendered.pdfSkipped);
+    log.stage?.('archive');
     const written = await archive({
       report,
       html: rendered.html,
@@ -88,6 +98,7 @@ export async function build(request: BuildRequest, log: Logger): Promise<BuildSu
       force: request.force,
       plan: portablePlan(plan),
       warnings: runWarnings(plan, analyses),
+      log,
     });
     log.info(`${plan.id} ${periodLabel}: written to ${written.folder}`);
     const {folder, outputs} = written;

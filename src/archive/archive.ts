@@ -1,12 +1,14 @@
-import {createHash} from 'node:crypto';
+import {createHash, randomBytes} from 'node:crypto';
 import {mkdir, open, rename, rm} from 'node:fs/promises';
 import {join} from 'node:path';
 import type {Report} from '../render/types.js';
 import {digestJson, resultsJsonChunks, type PeriodDigest} from '../results/index.js';
 import {REVISION_WINDOW} from '../history/index.js';
 import {InputError} from '../errors.js';
+import type {Logger} from '../log.js';
 import {headlinesJson} from './headlines.js';
 import {buildManifest} from './manifest.js';
+import {lockPackDir} from './lock.js';
 import {recoverPackDir} from './recover.js';
 import {writeIndex} from './writeIndex.js';
 import {exists} from './exists.js';
@@ -31,6 +33,8 @@ export interface ArchiveArgs {
   warnings: string[];
   /** What later periods compare with this one (revisions, forecast tracking), kept as `digest.json`. */
   digest: PeriodDigest;
+  /** Told when the run waits for another run's lock on the pack folder. Default: none. */
+  log?: Logger;
   /**
    * Called after each step with its name (`temp-written`, `old-moved`, `new-in-place`, `done`), and
    * awaited. Default: none. Used by the crash-safety tests to stop the process between steps.
@@ -42,12 +46,16 @@ export interface ArchiveArgs {
  * Write one period's folder `<outDir>/<pack-id>/<period>/` (report.html, report.pdf, results.json,
  * headlines.json, digest.json, exports/, manifest.json), then regenerate the pack's index.html.
  *
- * Crash safety: everything is written into a hidden sibling `.<period>.tmp-<pid>` and renamed into
+ * Crash safety: everything is written into a hidden sibling `.<period>.tmp-<token>` and renamed into
  * place in one step, so the period folder is always either absent, the previous complete folder, or
- * the new complete folder. With `force` the old folder is first renamed to `.<period>.old-<pid>` and
+ * the new complete folder. With `force` the old folder is first renamed to `.<period>.old-<token>` and
  * deleted only after the new one is in place; a run that dies in between is repaired by the next
  * run (see {@link recoverPackDir}). Without `force` an existing folder is a refusal ({@link InputError})
- * and nothing is written.
+ * and nothing is written. The token is random per run, so a leftover never has the name a later run
+ * wants, even when every run has the same process id (process 1 in a container).
+ *
+ * All of it, from recovery to the index, happens under the pack folder's lock ({@link lockPackDir}), so
+ * two runs never interleave their renames and recovery never mistakes a live run's folder for a leftover.
  *
  * Files are flushed to the disk before the rename, so this holds after a power cut as well.
  *
@@ -64,10 +72,6 @@ export async function archive(args: ArchiveArgs): Promise<{folder: string; outpu
     if (!/^[^/\\]+$/.test(e.name) || e.name === '.' || e.name === '..') throw new Error(badExportName(e.name));
   }
 
-  await mkdir(packDir, {recursive: true});
-  await recoverPackDir(packDir);
-  await refuseExisting(args.outDir, report.plan.id, label, force);
-
   const files: {path: string; content: string | Uint8Array}[] = [];
   if (args.html !== null) files.push({path: 'report.html', content: args.html});
   if (args.pdf !== null) files.push({path: 'report.pdf', content: args.pdf});
@@ -78,10 +82,14 @@ export async function archive(args: ArchiveArgs): Promise<{folder: string; outpu
     files.push({path: `exports/${e.name}`, content: e.content});
   }
 
-  const tmp = join(packDir, `.${label}.tmp-${process.pid}`);
-  const old = join(packDir, `.${label}.old-${process.pid}`);
+  await mkdir(packDir, {recursive: true});
+  const lock = await lockPackDir(packDir, args.log);
+  const token = randomBytes(8).toString('hex');
+  const tmp = join(packDir, `.${label}.tmp-${token}`);
+  const old = join(packDir, `.${label}.old-${token}`);
   try {
-    await rm(tmp, {recursive: true, force: true});
+    await recoverPackDir(packDir);
+    await refuseExisting(args.outDir, report.plan.id, label, force);
     await mkdir(tmp);
     if (args.exports.length > 0) await mkdir(join(tmp, 'exports'));
     // results.json is streamed series by series (it can exceed the longest string V8 holds); its size and hash
@@ -95,6 +103,7 @@ export async function archive(args: ArchiveArgs): Promise<{folder: string; outpu
     if (args.exports.length > 0) await syncFolder(join(tmp, 'exports'));
     await syncFolder(tmp);
     await step('temp-written');
+    lock.assertHeld();
     if (await exists(folder)) {
       await rename(folder, old);
       await step('old-moved');
@@ -110,10 +119,11 @@ export async function archive(args: ArchiveArgs): Promise<{folder: string; outpu
       await rename(tmp, folder);
     }
     await syncFolder(packDir);
+    await writeIndex(args.outDir, report.plan.id);
   } finally {
     await rm(tmp, {recursive: true, force: true});
+    await lock.release();
   }
-  await writeIndex(args.outDir, report.plan.id);
   await step('done');
   // Listed in the order report files, results.json, headlines, digest, exports, manifest.
   const paths = files.map((f) => f.path);

@@ -1,7 +1,9 @@
+import {readFileSync} from 'node:fs';
+import {join} from 'node:path';
 import {frequencyOf} from '../results/index.js';
 import {parsePeriod} from '../time/period.js';
+import {packageRoot} from '../version.js';
 import {wordsFor, type MessageKey, type Words} from '../words/index.js';
-import {escapeHtml} from './escapeHtml.js';
 import type {Headlines} from './headlines.js';
 import {unreadableResults} from './messages.js';
 
@@ -26,77 +28,78 @@ const LINKS: [file: string, text: MessageKey][] = [
   ['manifest.json', 'index.manifest'],
 ];
 
-const STYLE = `body{font-family:"Liberation Sans",Arial,sans-serif;margin:2rem auto;max-width:60rem;padding:0 1rem}
-body{color:#1f2a2e}
-h1{font-size:1.6rem;margin-bottom:.2rem}h2{font-size:1.15rem;margin:1.6rem 0 .3rem;border-bottom:1px solid #c9d3d6}
-.muted{color:#5b6a70;font-weight:normal;font-size:.9rem}.links a{margin-right:1rem}
-table{border-collapse:collapse;width:100%;margin-top:.4rem}th,td{padding:.25rem .5rem;border-bottom:1px solid #e4eaec}
-th{text-align:left;font-weight:600}td,th.num{text-align:right}td{font-variant-numeric:tabular-nums}`;
+/** The index page's view model: plain JSON, every text already worded and formatted. */
+interface IndexView {
+  lang: string;
+  title: string;
+  pageTitle: string;
+  intro: string;
+  headers: {series: string; latest: string; yearOnYear: string};
+  periods: {
+    folder: string;
+    heading: string;
+    links: {href: string; text: string}[];
+    /** Null when the period's figures could not be read (`unreadable` is shown instead). */
+    rows: {label: string; latest: string; yearOnYear: string}[] | null;
+    more: string | null;
+    unreadable: string;
+  }[];
+}
+
+let compiled: HandlebarsTemplateDelegate<IndexView> | null = null;
 
 /**
  * The archive's index.html: every archived period of one pack, newest first, with links to its files
  * and headline figures (each visible series' value in the review period and its year-on-year change, for the
- * first 50 visible series), worded and formatted in the newest pack's language and locale. Self-contained (inline CSS, no script, no external resource); every text from
- * a pack or a folder name is escaped; no clock values, so the same archive gives the same bytes.
+ * first 50 visible series), worded and formatted in the newest pack's language and locale. Drawn from
+ * `templates/index.hbs` by handlebars, as the report is (its own environment, strict, no helpers), so every text
+ * from a pack or a folder name is escaped. Self-contained (inline CSS, no script, no external resource); no clock
+ * values, so the same archive gives the same bytes. Handlebars loads on first use, so commands that write no index
+ * (`check`) do not pay for it.
  *
  * Complexity: O(periods × series).
  */
-export function renderIndex(packId: string, entries: IndexEntry[]): string {
+export async function renderIndex(packId: string, entries: IndexEntry[]): Promise<string> {
+  if (compiled === null) {
+    const {default: Handlebars} = await import('handlebars');
+    const source = readFileSync(join(packageRoot(), 'templates', 'index.hbs'), 'utf8');
+    compiled = Handlebars.create().compile<IndexView>(source, {strict: true, knownHelpersOnly: true});
+  }
+  return compiled(indexView(packId, entries));
+}
+
+function indexView(packId: string, entries: IndexEntry[]): IndexView {
   const sorted = [...entries].sort((a, b) => (a.folder < b.folder ? 1 : a.folder > b.folder ? -1 : 0));
   const newest = sorted.find((e) => e.results !== null)?.results ?? null;
   const title = newest?.pack.title ?? packId;
   const w = wordsFor(newest?.pack.locale ?? 'en-GB');
-  const lang = w.locale;
-  const sections = sorted.map((e) => section(e, w)).join('\n');
-  return `<!DOCTYPE html>
-<html lang="${escapeHtml(lang)}">
-<head>
-<meta charset="utf-8">
-<meta name="viewport" content="width=device-width, initial-scale=1">
-<title>${escapeHtml(w.t('index.title', {title}))}</title>
-<style>${STYLE}</style>
-</head>
-<body>
-<h1>${escapeHtml(title)}</h1>
-<p class="muted">${escapeHtml(w.t('index.intro', {pack: packId, count: sorted.length}))}</p>
-${sections}
-</body>
-</html>
-`;
+  return {
+    lang: w.locale,
+    title,
+    pageTitle: w.t('index.title', {title}),
+    intro: w.t('index.intro', {pack: packId, count: sorted.length}),
+    headers: {series: w.t('label.series'), latest: w.t('label.latest'), yearOnYear: w.t('index.yoy')},
+    periods: sorted.map((e) => periodView(e, w)),
+  };
 }
 
-function section(entry: IndexEntry, w: Words): string {
+function periodView(entry: IndexEntry, w: Words): IndexView['periods'][number] {
   const r = entry.results;
   const index = r === null ? undefined : parsePeriod(frequencyOf(r.pack.frequency), entry.folder);
   const heading = r !== null && index !== undefined ? w.periodLong(frequencyOf(r.pack.frequency), index) : entry.folder;
   const href = encodeURIComponent(entry.folder);
-  const links = LINKS.filter(([file]) => entry.files.includes(file))
-    .map(([file, text]) => `<a href="${escapeHtml(`${href}/${file}`)}">${escapeHtml(w.t(text))}</a>`)
-    .join('');
-  const body = r === null ? `<p class="muted">${escapeHtml(unreadableResults())}</p>` : table(r, w);
-  return `<section id="period-${escapeHtml(entry.folder)}">
-<h2>${escapeHtml(heading)} <span class="muted">${escapeHtml(entry.folder)}</span></h2>
-<p class="links">${links}</p>
-${body}
-</section>`;
-}
-
-function table(r: Headlines, w: Words): string {
+  const links = LINKS.filter(([file]) => entry.files.includes(file)).map(([file, text]) => ({
+    href: `${href}/${file}`,
+    text: w.t(text),
+  }));
+  const base = {folder: entry.folder, heading, links, unreadable: unreadableResults()};
+  if (r === null) return {...base, rows: null, more: null};
   const visible = r.series.filter((s) => !s.hidden);
-  const rows = visible
-    .slice(0, MAX_ROWS)
-    .map((s) => {
-      const cells = [s.latest === null ? '–' : w.value(s.latest, s.unit), s.yearOnYear === null ? '–' : w.percent(s.yearOnYear)];
-      const tds = cells.map((c) => `<td>${escapeHtml(c)}</td>`).join('');
-      return `<tr><th scope="row">${escapeHtml(s.label)}</th>${tds}</tr>`;
-    })
-    .join('\n');
-  const head = [w.t('label.series'), w.t('label.latest'), w.t('index.yoy')].map(escapeHtml);
+  const rows = visible.slice(0, MAX_ROWS).map((s) => ({
+    label: s.label,
+    latest: s.latest === null ? '–' : w.value(s.latest, s.unit),
+    yearOnYear: s.yearOnYear === null ? '–' : w.percent(s.yearOnYear),
+  }));
   const more = visible.length - MAX_ROWS;
-  return `<table>
-<thead><tr><th>${head[0]}</th><th class="num">${head[1]}</th><th class="num">${head[2]}</th></tr></thead>
-<tbody>
-${rows}
-</tbody>
-</table>${more > 0 ? `\n<p class="muted">${escapeHtml(w.t('index.more', {n: w.number(more, 0)}))}</p>` : ''}`;
+  return {...base, rows, more: more > 0 ? w.t('index.more', {n: w.number(more, 0)}) : null};
 }

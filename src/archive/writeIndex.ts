@@ -1,16 +1,17 @@
-import {readdir, readFile, rename, rm, writeFile} from 'node:fs/promises';
+import {randomBytes} from 'node:crypto';
+import {readdir, readFile, rename, rm} from 'node:fs/promises';
 import {join} from 'node:path';
 import {headlinesFromResults, parseHeadlines, type Headlines} from './headlines.js';
 import {periodFolders} from '../results/index.js';
 import {renderIndex, type IndexEntry} from './indexPage.js';
-
-let counter = 0;
+import {syncFolder, writeFileDurable} from './durable.js';
 
 /**
  * Regenerate `<outDir>/<packId>/index.html` from the archived period folders, reading each one's headlines.json
  * (or, for folders archived before it existed, its results.json). A period whose figures are missing or
- * unreadable is still listed, with a note. The page is written to a
- * temporary file and renamed, so readers never see half a page. Returns the page's path.
+ * unreadable is still listed, with a note. The page is written to a temporary file (a random name, so no
+ * leftover of a dead run is in the way), flushed to the disk and renamed, so readers never see half a page,
+ * not even after a power cut. `archive` calls it under the pack's lock. Returns the page's path.
  */
 export async function writeIndex(outDir: string, packId: string): Promise<string> {
   const packDir = join(outDir, packId);
@@ -21,10 +22,11 @@ export async function writeIndex(outDir: string, packId: string): Promise<string
     entries.push({folder, results: await readHeadlines(dir, files), files});
   }
   const target = join(packDir, 'index.html');
-  const tmp = join(packDir, `.index.html.tmp-${process.pid}-${++counter}`);
+  const tmp = join(packDir, `.index.html.tmp-${randomBytes(8).toString('hex')}`);
   try {
-    await writeFile(tmp, renderIndex(packId, entries));
+    await writeFileDurable(tmp, await renderIndex(packId, entries));
     await rename(tmp, target);
+    await syncFolder(packDir);
   } finally {
     await rm(tmp, {force: true});
   }

@@ -3,17 +3,18 @@ import {realpathSync} from 'node:fs';
 import {availableParallelism} from 'node:os';
 import path from 'node:path';
 import {fileURLToPath} from 'node:url';
-import {Command, CommanderError} from 'commander';
-import {loadPlan} from '../config/index.js';
+import {Command, CommanderError, Option} from 'commander';
+import {loadPlan, packJsonSchema} from '../config/index.js';
 import type {OutputFormat} from '../config/plan.js';
-import {formatProblem, InputError} from '../errors.js';
+import {formatProblem, InputError, type Problem} from '../errors.js';
 import {pdfSession} from '../render/pdfSession.js';
 import {build, check} from '../run.js';
 import {packageRoot, toolVersion} from '../version.js';
 import {initPack} from './init.js';
+import {builtPeriod, jsonText, type BuildOutput, type BuiltPeriod, type CheckOutput} from './jsonOutput.js';
 import {parseFormats, parseJobs} from './options.js';
 import {expandPeriodRange, isPeriodRange} from './periods.js';
-import {cliLogger, type TextStream} from './progress.js';
+import {cliLogger, type TextStream, type Verbosity} from './progress.js';
 import {parseShard, selectShard, type Shard} from './shard.js';
 
 /** Where the CLI writes: the process streams in the bin, string collectors in tests. */
@@ -25,7 +26,14 @@ export interface Io {
   env?: NodeJS.ProcessEnv;
 }
 
-interface BuildOptions {
+/** `--json`, `--quiet`, `--verbose`, shared by build and check. */
+interface OutputOptions {
+  json: boolean;
+  quiet?: boolean;
+  verbose?: boolean;
+}
+
+interface BuildOptions extends OutputOptions {
   period?: string;
   out?: string;
   formats?: OutputFormat[];
@@ -35,44 +43,72 @@ interface BuildOptions {
   allowDir: string[];
 }
 
+/** A failed command: bad input (exit 2, every problem) or a failure while working (exit 1, one message). */
+interface Failure {
+  code: 1 | 2;
+  problems: Problem[];
+  error: string | null;
+}
+
+function classify(error: unknown): Failure {
+  if (error instanceof InputError) return {code: 2, problems: error.problems, error: null};
+  const message = error instanceof Error ? error.message : String(error);
+  return {code: 1, problems: [], error: message.split('\n')[0]};
+}
+
 /**
- * Report a failure and give the exit code: 2 with every problem for bad input, 1 with one line for
- * anything else (the stack only when EBBFLOW_DEBUG=1).
+ * Report a failure on stderr and give its exit code: 2 with every problem for bad input (left to the JSON document
+ * with `--json`), 1 with one line for anything else (the stack only when EBBFLOW_DEBUG=1).
  */
-function fail(error: unknown, io: Io, kept = 0): number {
-  if (error instanceof InputError) {
-    for (const p of error.problems) io.stderr.write(`${formatProblem(p)}\n`);
-    const n = error.problems.length;
+function fail(error: unknown, io: Io, json = false, kept = 0): Failure {
+  const failure = classify(error);
+  if (failure.code === 2) {
+    if (json) return failure;
+    for (const p of failure.problems) io.stderr.write(`${formatProblem(p)}\n`);
+    const n = failure.problems.length;
     const after =
       kept > 0 ? `the ${kept} period folder${kept === 1 ? '' : 's'} built before were kept` : 'nothing was written';
     io.stderr.write(`${n} problem${n === 1 ? '' : 's'}; ${after}\n`);
-    return 2;
+    return failure;
   }
-  const message = error instanceof Error ? error.message : String(error);
-  io.stderr.write(`ebbflow: ${message.split('\n')[0]}\n`);
+  io.stderr.write(`ebbflow: ${failure.error}\n`);
   const debug = (io.env ?? process.env).EBBFLOW_DEBUG === '1';
   if (debug && error instanceof Error && error.stack) io.stderr.write(`${error.stack}\n`);
-  return 1;
+  return failure;
+}
+
+function verbosity(opts: OutputOptions): Verbosity {
+  return opts.quiet ? 'quiet' : opts.verbose ? 'verbose' : 'normal';
 }
 
 /**
  * Validate every pack first (so bad input stops the batch before anything is written), then build in order. With
- * `--shard i/n` only the packs of part i are validated and built (see `selectShard`).
+ * `--shard i/n` only the packs of part i are validated and built (see `selectShard`). stdout carries the folders
+ * built (or, with `--json`, one {@link BuildOutput} document, also when the run fails).
  */
 async function runBuild(given: string[], opts: BuildOptions, io: Io): Promise<number> {
   // Progress and warnings go to stderr so stdout carries only results (folders, next steps).
-  const log = cliLogger(io.stderr);
+  const log = cliLogger(io.stderr, {verbosity: verbosity(opts)});
+  const built: BuiltPeriod[] = [];
+  const done = (failure: Failure | null): number => {
+    if (opts.json) {
+      const output: BuildOutput = {built, warnings: log.warnings, problems: failure?.problems ?? []};
+      if (failure?.error) output.error = failure.error;
+      io.stdout.write(jsonText(output));
+    }
+    return failure?.code ?? 0;
+  };
   let packs = given;
   if (opts.shard) {
     const {index, count} = opts.shard;
     packs = selectShard(given, opts.shard);
     const total = new Set(given.map((p) => path.resolve(p))).size;
     log.info(`shard ${index}/${count}: ${packs.length} of ${total} pack${total === 1 ? '' : 's'}`);
-    if (packs.length === 0) return 0;
+    if (packs.length === 0) return done(null);
   }
   const allowDirs = opts.allowDir.map((d) => path.resolve(d));
   const jobs: {packFile: string; period: string | undefined}[] = [];
-  const problems: InputError['problems'] = [];
+  const problems: Problem[] = [];
   for (const packFile of packs) {
     try {
       const range = opts.period !== undefined && isPeriodRange(opts.period);
@@ -81,46 +117,64 @@ async function runBuild(given: string[], opts: BuildOptions, io: Io): Promise<nu
       const periods = range ? expandPeriodRange(plan.frequency, opts.period ?? '') : [opts.period];
       for (const period of periods) jobs.push({packFile, period});
     } catch (e) {
-      if (!(e instanceof InputError)) return fail(e, io);
+      if (!(e instanceof InputError)) return done(fail(e, io, opts.json));
       problems.push(...e.problems);
     }
   }
-  if (problems.length > 0) return fail(new InputError(problems), io);
+  if (problems.length > 0) return done(fail(new InputError(problems), io, opts.json));
 
   // One browser for the whole batch (per browser setting) instead of one launch per period.
   const pdf = pdfSession();
-  let built = 0;
+  // A missing browser is said once for the batch, not once per period.
+  const said = new Set<string>();
+  let finished = 0;
   try {
     for (const job of jobs) {
       const {packFile, period} = job;
       const {out: outDir, formats, force, jobs: threads} = opts;
       const summary = await build({packFile, period, outDir, formats, force, jobs: threads, pdf, allowDirs}, log);
-      io.stdout.write(`${summary.folder}\n`);
-      built++;
+      if (summary.pdfSkipped && !said.has(summary.pdfSkipped)) {
+        said.add(summary.pdfSkipped);
+        log.warn(summary.pdfSkipped);
+      }
+      log.finish(`${summary.packId} ${summary.period}`);
+      if (opts.json) built.push(await builtPeriod(summary));
+      else if (!opts.quiet) io.stdout.write(`${summary.folder}\n`);
+      finished++;
     }
   } catch (e) {
     log.close(); // a progress bar left by the failure goes before the message
-    return fail(e, io, built);
+    return done(fail(e, io, opts.json, finished));
   } finally {
     await pdf.close();
   }
-  return 0;
+  return done(null);
 }
 
-/** Check every pack, collecting the problems of all of them. */
-async function runCheck(packs: string[], allowDir: string[], io: Io): Promise<number> {
-  const log = cliLogger(io.stderr);
-  const allowDirs = allowDir.map((d) => path.resolve(d));
-  const problems: InputError['problems'] = [];
+/** Check every pack, collecting the problems of all of them; with `--json`, one {@link CheckOutput} on stdout. */
+async function runCheck(packs: string[], opts: OutputOptions & {allowDir: string[]}, io: Io): Promise<number> {
+  const log = cliLogger(io.stderr, {verbosity: verbosity(opts)});
+  const allowDirs = opts.allowDir.map((d) => path.resolve(d));
+  const problems: Problem[] = [];
+  let failure: Failure | null = null;
   for (const packFile of packs) {
     try {
       await check(packFile, log, allowDirs);
     } catch (e) {
-      if (!(e instanceof InputError)) return fail(e, io);
+      if (!(e instanceof InputError)) {
+        failure = fail(e, io, opts.json);
+        break;
+      }
       problems.push(...e.problems);
     }
   }
-  return problems.length > 0 ? fail(new InputError(problems), io) : 0;
+  if (failure === null && problems.length > 0) failure = fail(new InputError(problems), io, opts.json);
+  if (opts.json) {
+    const output: CheckOutput = {problems: failure?.problems ?? []};
+    if (failure?.error) output.error = failure.error;
+    io.stdout.write(jsonText(output));
+  }
+  return failure?.code ?? 0;
 }
 
 async function runInit(dir: string, io: Io): Promise<number> {
@@ -131,7 +185,7 @@ async function runInit(dir: string, io: Io): Promise<number> {
     io.stdout.write(`Next: ebbflow build ${shown}\n`);
     return 0;
   } catch (e) {
-    return fail(e, io);
+    return fail(e, io).code;
   }
 }
 
@@ -142,8 +196,16 @@ function collect(value: string, previous: string[]): string[] {
   return [...previous, value];
 }
 
+/** `--json`, `--quiet` and `--verbose` on a command. */
+function outputOptions(command: Command, json: string): Command {
+  return command
+    .option('--json', json, false)
+    .addOption(new Option('-q, --quiet', 'print only problems and warnings').conflicts('verbose'))
+    .option('-v, --verbose', 'stamp each message with the time since start and print the time of each stage');
+}
+
 /**
- * The command line: `ebbflow build|check|init`. Returns the exit code instead of exiting, so tests
+ * The command line: `ebbflow build|check|init|schema`. Returns the exit code instead of exiting, so tests
  * can run it in-process: 0 success, 1 the run failed while working, 2 bad input or usage.
  */
 export async function main(argv: string[], io: Io): Promise<number> {
@@ -159,7 +221,7 @@ export async function main(argv: string[], io: Io): Promise<number> {
     .configureOutput({writeOut: (s) => io.stdout.write(s), writeErr: (s) => io.stderr.write(s)})
     .showHelpAfterError('(add --help for usage)');
 
-  program
+  const buildCommand = program
     .command('build')
     .description('build the report for each pack file and write it under <out>/<pack id>/<period>/')
     .argument('<pack...>', 'pack files (YAML)')
@@ -181,7 +243,8 @@ export async function main(argv: string[], io: Io): Promise<number> {
       '--shard <i/n>',
       'build only part i of n of the packs (sorted by full path, every n-th from the i-th), for batch schedulers',
       parseShard,
-    )
+    );
+  outputOptions(buildCommand, 'print what was written (folders, files with SHA-256, skipped formats, warnings) as JSON')
     .addHelpText(
       'after',
       '\nExamples:\n  ebbflow build pack.yaml\n' +
@@ -192,21 +255,30 @@ export async function main(argv: string[], io: Io): Promise<number> {
       code = await runBuild(packs, opts, io);
     });
 
-  program
+  const checkCommand = program
     .command('check')
     .description('validate pack files and their data, print every problem, write nothing')
     .argument('<pack...>', 'pack files (YAML)')
-    .option('--allow-dir <dir>', ALLOW_DIR_HELP, collect, [])
-    .action(async (packs: string[], opts: {allowDir: string[]}) => {
-      code = await runCheck(packs, opts.allowDir, io);
-    });
+    .option('--allow-dir <dir>', ALLOW_DIR_HELP, collect, []);
+  outputOptions(checkCommand, 'print the problems as JSON: {problems: [{file, line, column, message}]}').action(
+    async (packs: string[], opts: OutputOptions & {allowDir: string[]}) => {
+      code = await runCheck(packs, opts, io);
+    },
+  );
 
   program
     .command('init')
-    .description('write a starter pack with example data into a new folder')
+    .description("write a starter pack with example data and the pack file's JSON Schema into a new folder")
     .argument('[dir]', 'folder to create', './ebbflow-pack')
     .action(async (dir: string) => {
       code = await runInit(dir, io);
+    });
+
+  program
+    .command('schema')
+    .description("print the pack file's JSON Schema (for editors and other validators)")
+    .action(() => {
+      io.stdout.write(packJsonSchema());
     });
 
   try {
@@ -215,7 +287,7 @@ export async function main(argv: string[], io: Io): Promise<number> {
     if (e instanceof CommanderError) {
       return e.code === 'commander.helpDisplayed' || e.code === 'commander.version' ? 0 : 2;
     }
-    return fail(e, io);
+    return fail(e, io).code;
   }
   return code;
 }

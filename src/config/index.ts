@@ -4,3 +4,4 @@ export {slugify} from './slug.js';
 export type * from './plan.js';
 export {salvagePlan} from './salvage.js';
 export {portablePlan} from './portable.js';
+export {packJsonSchema, PACK_SCHEMA_FILE} from './jsonSchema.js';

@@ -19,12 +19,30 @@ interface Face {
 const faces = new Map<string, Face>();
 const widths = new Map<string, number>();
 
-/** Absolute path of the font file fontconfig picks for a family and weight. */
+/** What to do when fontconfig is missing (an environment problem: exit 1, the fix in the message). */
+export const noFontconfig = (family: string) =>
+  `charts need fontconfig's fc-match to find the report font "${family}", and it is not installed; ` +
+  'install it with `apt-get install fontconfig fonts-liberation2` (or leave html and pdf out of --formats)';
+
+/**
+ * Absolute path of the font file fontconfig picks for a family and weight.
+ *
+ * @throws Error naming the fix when `fc-match` is not on the PATH, or when it finds no file
+ */
 export function fontFile(family: string, bold: boolean): string {
   const pattern = `${family.replace(/[:\\-]/g, '\\$&')}${bold ? ':bold' : ''}`;
-  const path = execFileSync('fc-match', ['-f', '%{file}', pattern], {encoding: 'utf8'}).trim();
-  if (!path) throw new Error(`font not found: ${family}`);
-  return path;
+  let path: string;
+  try {
+    path = execFileSync('fc-match', ['-f', '%{file}', pattern], {
+      encoding: 'utf8',
+      stdio: ['ignore', 'pipe', 'ignore'],
+    });
+  } catch (e) {
+    if ((e as NodeJS.ErrnoException).code === 'ENOENT') throw new Error(noFontconfig(family));
+    throw e;
+  }
+  if (!path.trim()) throw new Error(`font not found: ${family}; install it, or name an installed one in branding.font`);
+  return path.trim();
 }
 
 function face(family: string, bold: boolean): Face {

@@ -128,12 +128,15 @@ describe('archive', () => {
     expect(await readFile(join(packDir, '2026-09', 'results.json'), 'utf8')).toBe('kept');
   });
 
-  it('leaves the leftovers of a live process alone', async () => {
+  it('two archives of one pack at once take turns under the pack lock; the index lists both', async () => {
     const out = await tempDir();
+    const sep = report(2026, 9, [{id: 'net-sales', label: 'Net sales'}]);
+    await Promise.all([archive(args(out, oct())), archive(args(out, sep))]);
     const packDir = join(out, 'harbourline-monthly');
-    await mkdir(join(packDir, `.2026-08.tmp-${process.ppid}`), {recursive: true});
-    await archive(args(out, oct()));
-    expect(await readdir(packDir)).toContain(`.2026-08.tmp-${process.ppid}`);
+    expect(await readdir(packDir)).toEqual(['2026-09', '2026-10', 'index.html']);
+    const index = await readFile(join(packDir, 'index.html'), 'utf8');
+    expect(index).toContain('2026-09/report.html');
+    expect(index).toContain('2026-10/report.html');
   });
 
   it('rejects export names that would leave the exports folder', async () => {

@@ -55,7 +55,7 @@ async function withOld(): Promise<string> {
 /** After recovery only the period folder and index.html may remain. */
 async function recoverAndCheck(out: string): Promise<'absent' | 'old' | 'new'> {
   await recoverPackDir(packDirOf(out));
-  const names = (await readdir(packDirOf(out))).filter((n) => n.startsWith('.'));
+  const names = (await readdir(packDirOf(out))).filter((n) => n.startsWith('.') && n !== '.lock');
   expect(names).toEqual([]);
   return folderState(folderOf(out));
 }
@@ -65,7 +65,7 @@ describe('archive crash safety (SIGKILL)', () => {
     const out = await tempDir();
     expect(await runAndKill(out, false, {step: 'temp-written'})).toBe('killed SIGKILL');
     expect(await folderState(folderOf(out))).toBe('absent');
-    expect((await readdir(packDirOf(out))).some((n) => /^\.2026-10\.tmp-\d+$/.test(n))).toBe(true);
+    expect((await readdir(packDirOf(out))).some((n) => /^\.2026-10\.tmp-[0-9a-f]{16}$/.test(n))).toBe(true);
     await archive(bigArchiveArgs(out, 'new', false));
     expect(await readdir(packDirOf(out))).toEqual(['2026-10', 'index.html']);
     expect(await folderState(folderOf(out))).toBe('new');

@@ -22,12 +22,18 @@ describe('recoverPackDir', () => {
     expect(await readFile(join(dir, '2026-09', 'results.json'), 'utf8')).toBe('2026-09');
   });
 
-  it('leaves entries of live processes (this one included) and unrelated names alone', async () => {
+  it('treats every leftover as dead, whoever made it (it runs under the pack lock), and leaves other names alone', async () => {
     const dir = await tempDir();
-    const names = [`.2026-10.tmp-${process.pid}`, `.2026-11.old-${process.ppid}`, '.hidden', 'notes.txt'];
-    for (const name of names) await writeFile(join(dir, name), '');
-    expect(await recoverPackDir(dir)).toEqual({restored: [], removed: []});
-    expect((await readdir(dir)).sort()).toEqual([...names].sort());
+    // Process 1's leftover, as a run in a container leaves it, and this process's own: both belong to dead runs.
+    for (const name of ['.2026-10.tmp-1', '.2026-11.old-9f3a0c12d4e5b6a7', `.2026-12.tmp-${process.pid}`]) {
+      await mkdir(join(dir, name));
+    }
+    for (const name of ['.hidden', '.lock', 'notes.txt']) await writeFile(join(dir, name), '');
+    expect(await recoverPackDir(dir)).toEqual({
+      restored: ['.2026-11.old-9f3a0c12d4e5b6a7'],
+      removed: ['.2026-10.tmp-1', `.2026-12.tmp-${process.pid}`],
+    });
+    expect((await readdir(dir)).sort()).toEqual(['.hidden', '.lock', '2026-11', 'notes.txt']);
   });
 
   it('does nothing for a pack that has no folder yet', async () => {

@@ -2,7 +2,9 @@ import {mkdir, mkdtemp, readdir, readFile, writeFile} from 'node:fs/promises';
 import {tmpdir} from 'node:os';
 import path from 'node:path';
 import {fileURLToPath} from 'node:url';
+import Ajv2020 from 'ajv/dist/2020.js';
 import {beforeEach, describe, expect, test, vi} from 'vitest';
+import {parse} from 'yaml';
 import {loadPlan} from '../../src/config/index.js';
 import {InputError} from '../../src/errors.js';
 
@@ -56,12 +58,14 @@ describe('help and version', () => {
     const {code, stdout} = await run(['--help']);
     expect(code).toBe(0);
     expect(stdout).toMatch(/^Usage: ebbflow \[options\] \[command\]/);
-    for (const c of ['build [options] <pack...>', 'check [options] <pack...>', 'init [dir]']) expect(stdout).toContain(c);
+    for (const c of ['build [options] <pack...>', 'check [options] <pack...>', 'init [dir]', 'schema']) {
+      expect(stdout).toContain(c);
+    }
   });
 
   test.each([
     ['build', ['--period <period>', '--out <dir>', '--formats <list>', '--force', '--jobs <n>', 'Examples:']],
-    ['check', ['<pack...>']],
+    ['check', ['<pack...>', '--json', '--quiet', '--verbose']],
     ['init', ['[dir]', 'default: "./ebbflow-pack"']],
   ])('%s --help', async (command, expected) => {
     const {code, stdout} = await run([command, '--help']);
@@ -210,6 +214,17 @@ describe('init', () => {
     // The copy is a working pack: its paths still resolve.
     const plan = await loadPlan(path.join(dir, 'monthly-pack.yaml'));
     expect(plan.sources[0].file.startsWith(dir)).toBe(true);
+  });
+
+  test('writes the JSON Schema beside the pack, which names it on its first line and passes it (ajv)', async () => {
+    const dir = path.join(await mkdtemp(path.join(tmpdir(), 'ebbflow-init-')), 'starter');
+    expect((await run(['init', dir])).code).toBe(0);
+    const text = await readFile(path.join(dir, 'monthly-pack.yaml'), 'utf8');
+    expect(text.split('\n')[0]).toBe('# yaml-language-server: $schema=pack.schema.json');
+    const schema = JSON.parse(await readFile(path.join(dir, 'pack.schema.json'), 'utf8'));
+    const validate = new Ajv2020({strict: true}).compile(schema);
+    expect(validate(parse(text)), JSON.stringify(validate.errors)).toBe(true);
+    expect(validate(parse(text.replace('  title:', '  titel:')))).toBe(false);
   });
 
   test('refuses a folder that is not empty', async () => {

@@ -8,7 +8,7 @@
  */
 import {spawn} from 'node:child_process';
 import {createHash} from 'node:crypto';
-import {watch, type FSWatcher} from 'node:fs';
+import {readdirSync, watch, type FSWatcher} from 'node:fs';
 import {cp, mkdtemp, readdir, readFile, rm, writeFile} from 'node:fs/promises';
 import {tmpdir} from 'node:os';
 import {join, relative, resolve} from 'node:path';
@@ -224,9 +224,15 @@ describe('archive through the CLI', () => {
       expect(run.code).toBe(0);
 
       const r = await readJson(join(packDir, '2026-10', 'results.json'));
-      // Formulas over net sales (gross margin, average basket) change with it and show their own data revisions.
-      const data = r.history.revisions.filter((x: any) => x.kind === 'data' && x.seriesId === 'net-sales');
-      expect(data).toHaveLength(1);
+      // The corrected value, and the formula series computed from it (gross-margin = 100 · (net-sales − cogs) /
+      // net-sales, avg-basket = 1000 · net-sales / transactions), revised in the same period.
+      const revised = r.history.revisions.filter((x: any) => x.kind === 'data');
+      expect(revised.map((x: any) => `${x.seriesId} ${x.period}`).sort()).toEqual([
+        'avg-basket 2026-03',
+        'gross-margin 2026-03',
+        'net-sales 2026-03',
+      ]);
+      const data = revised.filter((x: any) => x.seriesId === 'net-sales');
       expect(data[0]).toMatchObject({
         seriesId: 'net-sales',
         period: '2026-03',
@@ -270,9 +276,11 @@ function buildAndKill(period: string, force: boolean, at: KillAt): Promise<strin
       if (proc.exitCode === null && !proc.killed) proc.kill('SIGKILL');
     };
     if ('entry' in at) {
-      // inotify on the pack folder: the temporary or set-aside folder of this very process.
+      // inotify on the pack folder: the temporary or set-aside folder of this very process, a name not there before
+      // (leftovers are named by a random token per run).
+      const before = new Set(readdirSync(packDir));
       watcher = watch(packDir, (_event, name) => {
-        if (name && at.entry.test(name) && name.endsWith(`-${proc.pid}`)) kill();
+        if (name && at.entry.test(name) && !before.has(name)) kill();
       });
     }
     let stderr = '';
@@ -302,18 +310,19 @@ describe('a build killed part-way', () => {
 
       // While writing the temporary folder of a replacement: the old folder or, if the kill came late, the new one
       // (`completeOrAbsent` checks every file against the manifest).
-      expect(await buildAndKill('2026-10', true, {entry: /^\.2026-10\.tmp-\d+$/})).toBe('killed');
+      expect(await buildAndKill('2026-10', true, {entry: /^\.2026-10\.tmp-[0-9a-f]+$/})).toBe('killed');
       expect(await completeOrAbsent(folder)).not.toBe('absent');
 
       // Just after the old folder was moved aside: the period may be absent, never half there.
-      expect(await buildAndKill('2026-10', true, {entry: /^\.2026-10\.old-\d+$/})).toBe('killed');
+      expect(await buildAndKill('2026-10', true, {entry: /^\.2026-10\.old-[0-9a-f]+$/})).toBe('killed');
       await completeOrAbsent(folder);
       const leftovers = (await readdir(packDir)).filter((n) => n.startsWith('.'));
-      const leftover = /^\.(2026-10|index\.html)\.(tmp|old)-\d+(-\d+)?$/;
+      // The dead run's temporary and old folders (named by its random token) and its lock.
+      const leftover = /^(\.lock|\.(2026-10|index\.html)\.(tmp|old)-[0-9a-f]{16})$/;
       expect(leftovers.every((n) => leftover.test(n)), leftovers.join()).toBe(true);
 
       // A new period killed while its folder is written.
-      expect(await buildAndKill('2026-07', false, {entry: /^\.2026-07\.tmp-\d+$/})).toBe('killed');
+      expect(await buildAndKill('2026-07', false, {entry: /^\.2026-07\.tmp-[0-9a-f]+$/})).toBe('killed');
       expect(await completeOrAbsent(join(packDir, '2026-07'))).toBe('absent');
 
       // The next build restores what a dead run set aside, replaces the period and removes every leftover.

@@ -2,9 +2,10 @@
  * Same inputs, same bytes (ARCHITECTURE.md, "Principles"): the demo pack built twice gives identical
  * period folders, file by file, and the PDF's dates come from the review period, not from the clock.
  *
- * Both builds write to the same out path (the first result is moved aside before the second build), because
- * the manifest records the fully-defaulted plan, which holds the absolute `outDir`. A third build runs in a
- * child process with another time zone and must give the same results.json bytes.
+ * The first build runs in-process into one output folder, the second through the command line with another
+ * `--out`: the manifest records the plan without the output folder, so the two period folders (PDF included) and
+ * the index pages must be byte-identical. A third build runs in a child process with another time zone and must
+ * give the same results.json and report.html bytes.
  */
 import {execFileSync, spawn} from 'node:child_process';
 import {mkdtempSync, readFileSync, readdirSync, renameSync, rmSync, statSync} from 'node:fs';
@@ -73,9 +74,10 @@ function unzipped(file: string): Map<string, Buffer> {
 beforeAll(async () => {
   await buildDemo();
   renameSync(join(out, PACK_ID), first);
-  await buildDemo();
-  // The time-zone build goes to the same out path again, after the second build is moved aside.
-  renameSync(join(out, PACK_ID), zoned);
+  const elsewhere = join(root, 'elsewhere');
+  const again = await cliChild(['build', PACK, '--out', elsewhere, '--jobs', '1'], 'UTC');
+  if (again.code !== 0) throw new Error(`--out ${elsewhere} build failed (${again.code}): ${again.stderr}`);
+  renameSync(join(elsewhere, PACK_ID), zoned);
   const args = ['build', PACK, '--out', out, '--formats', 'json,html', '--jobs', '1'];
   const child = await cliChild(args, 'America/New_York');
   if (child.code !== 0) throw new Error(`TZ=America/New_York build failed (${child.code}): ${child.stderr}`);
@@ -89,7 +91,7 @@ afterAll(() => rmSync(root, {recursive: true, force: true}));
 const second = join(root, 'second');
 const ny = join(root, 'ny');
 
-describe('the demo pack built twice', () => {
+describe('the demo pack built twice, into two different output folders', () => {
   it('writes the same set of files', () => {
     expect(pdfSkipped).toBeNull();
     const a = listFiles(first);
