@@ -8,7 +8,3 @@ export function chartAnchor(seriesId: string, name: string): string {
   return `chart-${seriesId}-${name}`;
 }
 
-/** The anchor of a group's contributions chart: `chart-group-<group>-contributions`. */
-export function groupChartAnchor(groupId: string): string {
-  return `chart-group-${groupId}-contributions`;
-}

@@ -1,5 +1,5 @@
 import type {Rule} from '../context.js';
-import {groupChartAnchor} from '../chartAnchor.js';
+import {chartAnchor} from '../chartAnchor.js';
 
 /** Contributions smaller than this many percentage points are not named as drivers (common practice: 0.05). */
 export const MIN_DRIVER_POINTS = 0.05;
@@ -37,7 +37,8 @@ export const driversRule: Rule = {
               againstPoints: against === null ? '' : w.points(Math.abs(against.points)).replace(/^\+/, ''),
             }),
             figures: {total, [driver.id]: driver.points, ...(against ? {[against.id]: against.points} : {})},
-            chart: groupChartAnchor(g.id),
+            // The contributions chart sits under the group's total (render/charts/contributions.ts).
+            chart: chartAnchor(s.id, 'contributions'),
             magnitude: Math.min(10, Math.abs(total) / 2),
             periodsAgo: 0,
           },

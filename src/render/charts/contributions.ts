@@ -1,6 +1,8 @@
 import type {TopLevelSpec} from 'vega-lite';
 import {ramp} from '../theme.js';
 import {epoch, finite, round, timeX, frame, type ChartContext} from './common.js';
+import {periodsPerYear} from '../../time/period.js';
+import type {SeriesChart} from './seriesChart.js';
 
 /** Contributions of a group's parts to its total's change, per period (see combine/contributions.ts). */
 export interface ContributionsInput {
@@ -73,3 +75,28 @@ export function contributionsChart(input: ContributionsInput, ctx: ChartContext)
     ],
   };
 }
+
+/** Registry entry: under a group's total, its parts' contributions to its change on a year earlier (three years). */
+export const contributionsEntry: SeriesChart = {
+  name: 'contributions',
+  row: 1.5,
+  shows: ({group}) => group !== null && group.history.length > 0,
+  build({series, words: w, group}, ctx) {
+    const g = group!;
+    const caption = w.t('chart.contributions');
+    const description = w.t('chart.contributionsDescription', {name: series.label, total: w.percent(g.latest.total), period: g.latest.period});
+    const spec = contributionsChart(
+      {
+        start: g.start,
+        history: g.history,
+        parts: g.parts,
+        totalLabel: w.t('chart.contributionsTotal', {name: series.label}),
+        axisTitle: w.t('chart.contributionsAxis'),
+        periods: 3 * periodsPerYear[ctx.frequency],
+        description,
+      },
+      ctx,
+    );
+    return {caption, spec, note: w.t('chart.contributionsNote')};
+  },
+};

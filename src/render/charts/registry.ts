@@ -1,5 +1,6 @@
 import type {SeriesChart} from './seriesChart.js';
 import {overviewEntry} from './overview.js';
+import {contributionsEntry} from './contributions.js';
 import {seasonalEntry} from './seasonal.js';
 import {yearOnYearEntry} from './yearOnYear.js';
 import {irregularEntry} from './irregular.js';
@@ -12,6 +13,7 @@ import {forecastEntry} from './forecast.js';
  */
 export const seriesCharts: readonly SeriesChart[] = [
   overviewEntry,
+  contributionsEntry,
   seasonalEntry,
   yearOnYearEntry,
   irregularEntry,

@@ -4,11 +4,26 @@ import type {SeriesAnalysis} from '../../analyse/types.js';
 import type {Words} from '../../words/index.js';
 import type {ChartContext} from './common.js';
 
-/** What a series chart is drawn from: the series, its analysis and the pack's words. */
+/** Contributions of a group's parts to the change of its total, for the chart under the total (combine's figures). */
+export interface GroupChartData {
+  /** Period index of `history[0]`. */
+  start: number;
+  /** One entry per period: the total's change on a year earlier (percent) and each part's contribution (points). */
+  history: {total: number; parts: Record<string, number>}[];
+  /** Parts in the group's order, with their labels. */
+  parts: {id: string; label: string}[];
+  latest: {period: string; total: number};
+}
+
+/**
+ * What a series chart is drawn from: the series, its analysis, the pack's words and, for a group's total, its
+ * parts' contributions (null for other series, and for charts drawn ahead of the work across series).
+ */
 export interface SeriesChartInput {
   series: SeriesPlan;
   analysis: SeriesAnalysis;
   words: Words;
+  group: GroupChartData | null;
 }
 
 /** A chart ready to draw: its caption, vega-lite spec and an optional reading note printed under it. */

@@ -4,6 +4,7 @@ import {periodsPerYear} from '../../time/period.js';
 import {wordsFor, type Words} from '../../words/index.js';
 import {chartAnchor} from '../../narrate/chartAnchor.js';
 import {seriesCharts} from '../charts/registry.js';
+import type {GroupChartData} from '../charts/seriesChart.js';
 import type {ChartContext} from '../charts/common.js';
 import {themeFor} from '../theme.js';
 import {pageGeometry} from './geometry.js';
@@ -12,10 +13,16 @@ import type {FigureSlot} from './types.js';
 /**
  * The chart rows of one series section, from the chart registry: each registered chart the series has something
  * for, grouped by the entry's row; a row of one chart is full width (210 px high), a row of two shares the width
- * (180 px high). Built from the plan and the analysis alone, so charts can be drawn while other series are still
- * being analysed.
+ * (180 px high). Built from the plan and the analysis (and, for a group's total, its parts' contributions), so
+ * charts can be drawn ahead while other series are still being analysed.
  */
-export function seriesFigureRows(plan: Plan, series: SeriesPlan, analysis: SeriesAnalysis, w: Words = wordsFor(plan.locale)): FigureSlot[][] {
+export function seriesFigureRows(
+  plan: Plan,
+  series: SeriesPlan,
+  analysis: SeriesAnalysis,
+  w: Words = wordsFor(plan.locale),
+  group: GroupChartData | null = null,
+): FigureSlot[][] {
   const theme = themeFor(plan.branding.accent, plan.branding.font);
   const geometry = pageGeometry(plan.branding.paper, plan.branding.orientation);
   const frequency = analysis.frequency;
@@ -30,7 +37,7 @@ export function seriesFigureRows(plan: Plan, series: SeriesPlan, analysis: Serie
     seasonNames,
     words: w,
   });
-  const input = {series, analysis, words: w};
+  const input = {series, analysis, words: w, group};
   const shown = seriesCharts.filter((c) => c.shows(input));
   const rows = [...new Set(shown.map((c) => c.row))];
   return rows.map((row) => {

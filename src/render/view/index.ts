@@ -10,6 +10,7 @@ import {orderSeries} from './order.js';
 import {flatten, reportOutline} from './outline.js';
 import {seriesView} from './series.js';
 import {summaryRow} from './summary.js';
+import {driverLines, groupChartData, structureParagraphs, varianceRows} from './structure.js';
 import type {ViewModel} from './types.js';
 
 export type * from './types.js';
@@ -37,7 +38,9 @@ export function buildView(report: Report, logo: string | null): ViewModel {
   const ordered = orderSeries(report);
   const visible = report.series.filter((s) => !s.plan.hidden);
   const labels = new Map(report.series.map((s) => [s.plan.id, s.plan.label]));
-  const series = ordered.map(({entry, kicker}) => seriesView(plan, entry, kicker, w));
+  const series = ordered.map(({entry, kicker}) =>
+    seriesView(plan, entry, kicker, w, groupChartData(entry.plan.id, report.groups, labels, report.period)),
+  );
   const charts = new Set(series.flatMap((s) => s.rows.flat().map((slot) => slot.chart.id)));
   const link = calloutLink(charts, new Set(labels.keys()));
   series.forEach((view, k) => {
@@ -64,9 +67,14 @@ export function buildView(report: Report, logo: string | null): ViewModel {
     headline: report.callouts.slice(0, HEADLINE_CALLOUTS).map((c) => calloutView(c, w, labels, link)),
     summary: visible.map((s) => summaryRow(s, w, theme)),
     summaryNote: w.t('summary.note', {previous: w.t('previous.period', {frequency: plan.frequency})}),
+    drivers: driverLines(report),
+    variance: varianceRows(visible, w),
     series,
     history: historyView(report, w, theme, geometry, labels),
-    methods: {paragraphs: methodsParagraphs(w), rows: ordered.map(({entry}) => methodsRow(entry, w))},
+    methods: {
+      paragraphs: [...methodsParagraphs(w), ...structureParagraphs(report, w)],
+      rows: ordered.map(({entry}) => methodsRow(entry, w)),
+    },
     cautions: cautions(w),
     inputs: report.inputs.map((i) => ({
       path: relative(dirname(plan.packFile), i.file) || i.file,
@@ -142,6 +150,14 @@ const TEMPLATE_LABELS = {
   forecastModel: 'label.forecastModel',
   mase: 'label.mase',
   cautionsColumn: 'label.cautionsColumn',
+  drivers: 'summary.drivers',
+  variance: 'summary.variance',
+  varianceYearToDate: 'summary.varianceYearToDate',
+  varianceActual: 'summary.varianceActual',
+  varianceTarget: 'summary.varianceTarget',
+  varianceDifference: 'summary.varianceDifference',
+  varianceCalendar: 'summary.varianceCalendar',
+  varianceNote: 'summary.varianceNote',
 } as const satisfies Record<string, MessageKey>;
 
 function templateLabels(w: Words): Record<keyof typeof TEMPLATE_LABELS, string> {

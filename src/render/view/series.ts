@@ -3,13 +3,15 @@ import type {Plan} from '../../config/plan.js';
 import {methodName, phaseWords, shortMethod, wordNote, type Words} from '../../words/index.js';
 import type {ReportSeries} from '../types.js';
 import {seriesFigureRows} from './figures.js';
+import type {GroupChartData} from '../charts/seriesChart.js';
+import {varianceKeyFigures} from './structure.js';
 import type {SeriesView} from './types.js';
 
 /**
  * One series section: key figures, the paragraph, charts from the chart registry and the forecast table.
  * The callouts are filled in by `buildView` once every chart anchor is known.
  */
-export function seriesView(plan: Plan, s: ReportSeries, kicker: string | null, w: Words): SeriesView {
+export function seriesView(plan: Plan, s: ReportSeries, kicker: string | null, w: Words, group: GroupChartData | null): SeriesView {
   const a = s.analysis;
   const f = a.frequency;
   const notes = [
@@ -19,7 +21,7 @@ export function seriesView(plan: Plan, s: ReportSeries, kicker: string | null, w
   ].map((n) => wordNote(w, n));
   if (a.forecast === null) notes.push(w.t('note.noForecast'));
   if (a.cycle === null) notes.push(w.t('note.noCycle'));
-  const rows = seriesFigureRows(plan, s.plan, a, w);
+  const rows = seriesFigureRows(plan, s.plan, a, w, group);
   if (rows.length === 0) notes.push(w.t('note.noValuesToChart'));
   return {
     id: s.plan.id,
@@ -33,6 +35,7 @@ export function seriesView(plan: Plan, s: ReportSeries, kicker: string | null, w
       {label: w.t('label.adjustedOnPrevious'), value: w.percent(a.changes.periodOnPeriodAdjusted)},
       {label: w.t('term.trendCycle'), value: a.adjustment ? w.t(`direction.${a.changes.trendDirection}`) : '–'},
       {label: w.t('label.cycle'), value: a.cycle ? phaseWords(w, a.cycle) : '–'},
+      ...varianceKeyFigures(s, w),
     ],
     commentary: s.commentary,
     callouts: [],

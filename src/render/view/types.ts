@@ -136,6 +136,10 @@ export interface ViewModel {
   headline: CalloutView[];
   summary: SummaryRow[];
   summaryNote: string;
+  /** The main driver of each group's total, one sentence each. */
+  drivers: string[];
+  /** Series with a target: actual against target for the period and the fiscal year to date. */
+  variance: VarianceRow[];
   series: SeriesView[];
   history: HistoryView | null;
   methods: {paragraphs: string[]; rows: MethodsRow[]};
@@ -147,4 +151,22 @@ export interface ViewModel {
   period: string;
   /** Sections the PDF bookmarks point to, for the page's hidden list of links to them. */
   outline: {title: string; dest: string}[];
+}
+
+/** One row of the summary's variance table. */
+export interface VarianceRow {
+  anchor: string;
+  label: string;
+  period: VarianceCells;
+  yearToDate: VarianceCells;
+}
+
+export interface VarianceCells {
+  actual: string;
+  target: string;
+  percent: string;
+  favourable: string;
+  calendar: string;
+  /** `good` or `bad`, for the cell's colour. */
+  tone: 'good' | 'bad';
 }
