@@ -224,8 +224,10 @@ describe('archive through the CLI', () => {
       expect(run.code).toBe(0);
 
       const r = await readJson(join(packDir, '2026-10', 'results.json'));
-      const data = r.history.revisions.filter((x: any) => x.kind === 'data');
-      expect(data).toHaveLength(1);
+      const revised = r.history.revisions.filter((x: any) => x.kind === 'data');
+      // The formulas over net sales (gross margin, average basket) are revised with it.
+      expect(revised.map((x: any) => x.seriesId)).toEqual(['net-sales', 'gross-margin', 'avg-basket']);
+      const data = revised.filter((x: any) => x.seriesId === 'net-sales');
       expect(data[0]).toMatchObject({
         seriesId: 'net-sales',
         period: '2026-03',
