@@ -30,6 +30,14 @@ import {
   plural,
   pValue,
 } from './words.js';
+import {
+  contributionsSlot,
+  driverLines,
+  structureMethodItems,
+  varianceKeyFigures,
+  varianceRows,
+  type VarianceRow,
+} from './structureView.js';
 
 /**
  * Report → view model: every string the templates print, already formatted for the pack's locale, plus the
@@ -138,6 +146,10 @@ export interface ViewModel {
   };
   headline: CalloutView[];
   summary: SummaryRow[];
+  /** Series with a target: actual against target for the period and the fiscal year to date. */
+  variance: VarianceRow[];
+  /** The main driver of each group's total, one sentence each. */
+  drivers: string[];
   summaryNote: string;
   series: SeriesView[];
   history: {
@@ -187,6 +199,12 @@ export function buildView(report: Report, logo: string | null): ViewModel {
   const ordered = orderSeries(report, visible);
   const labels = new Map(report.series.map((s) => [s.plan.id, s.plan.label]));
   const series = ordered.map(({entry, kicker}) => seriesView(entry, kicker, f, theme, geometry, report.plan.frequency));
+  // A group's total shows its parts' contributions under its overview chart.
+  ordered.forEach(({entry}, k) => {
+    const ctx: ChartContext = {frequency: plan.frequency, theme, width: geometry.width, height: 210, unit: null, seasonNames: []};
+    const slot = contributionsSlot(entry.plan.id, entry.plan.label, report.groups, labels, ctx, report.period, f);
+    if (slot) series[k].rows.splice(Math.min(1, series[k].rows.length), 0, [slot]);
+  });
   const anchors = new Set(series.flatMap((s) => s.rows.flat().map((slot) => slot.chart.id)));
   const link = (c: Callout) =>
     c.chart && anchors.has(c.chart) ? `#${c.chart}` : c.seriesId && labels.has(c.seriesId) ? `#series-${c.seriesId}` : null;
@@ -207,10 +225,15 @@ export function buildView(report: Report, logo: string | null): ViewModel {
     },
     headline: report.callouts.slice(0, 6).map((c) => calloutView(c, labels, link)),
     summary: visible.map((s) => summaryRow(s, f, theme)),
+    variance: varianceRows(visible, f),
+    drivers: driverLines(report),
     summaryNote: summaryNote(plan.frequency),
     series,
     history: historyView(report, f, theme, geometry, labels),
-    methods: visible.map((s) => methodsView(s, f)),
+    methods: visible.map((s) => {
+      const m = methodsView(s, f);
+      return {...m, items: [...m.items, ...structureMethodItems(s, report.groups, f)]};
+    }),
     cautions: CAUTIONS,
     inputs: report.inputs.map((i) => ({
       path: relative(dirname(plan.packFile), i.file) || i.file,
@@ -551,6 +574,7 @@ function seriesView(
       {label: 'Adjusted, on previous period', value: f.percent(a.changes.periodOnPeriodAdjusted)},
       {label: 'Trend-cycle', value: adj ? a.changes.trendDirection : '–'},
       {label: 'Cycle', value: a.cycle?.phaseLabel ?? '–'},
+      ...varianceKeyFigures(s, f, frequency, a.end),
     ],
     // Filled by buildView once every chart anchor is known.
     callouts: [],
