@@ -1,10 +1,13 @@
 // Generates the demo data of Tarnwick Outdoor Co., an invented regional outdoor-gear retailer.
 //
-//   node sample-config/generate.mjs
+//   node sample-config/generate.mjs [FOLDER]       (default: sample-config/data)
 //
-// Writes sample-config/data/trading.csv (wide, monthly), data/web.csv (long, monthly, dates like `Oct 2026`)
-// and data/quarterly.csv (wide, quarterly, `;` delimiter and `,` decimal mark). Plain Node, no dependencies,
-// seeded PRNG: the same script always writes the same bytes.
+// Writes sample-config/data/trading.csv (wide, monthly), data/web.csv (long, monthly, dates like `Oct 2026`),
+// data/quarterly.csv (wide, quarterly, `;` delimiter and `,` decimal mark), data/repairs.parquet (the repair
+// workshop's job log, one row per finished job with its time, written through the embedded DuckDB) and
+// data/budget.xlsx (the sales budget as the finance team keeps it, a workbook written with exceljs). Node and the
+// project's own dependencies, seeded PRNG: the same script always writes the same CSV and Parquet bytes and the same
+// workbook cells.
 //
 // What is planted (the report should find these; README.md lists them too):
 //   Business cycle (multiplicative, % deviation from trend; extremes exactly at these months):
@@ -24,14 +27,21 @@
 //     by how many of those days fall in each month (Easter dates by the Gregorian computus).
 //   Gaps: footfall is blank for 2019-08, 2023-02 and 2023-03 (door counter fault).
 //   Budget: sales_budget runs to 2027-03 (the end of fiscal year 2026/27; the fiscal year starts in April), and so
-//     do payroll_budget and marketing_budget (cost lines: below budget is favourable).
+//     do payroll_budget and marketing_budget (cost lines: below budget is favourable). The sales budget is also in
+//     budget.xlsx, which the monthly pack reads.
 //   Structure: net sales are the sum of three shop regions (North, Lakes, Coast), each rounded to 0.1, and the web
 //     store (the rest of net sales, also in tenths), so the parts add up exactly; cost of goods sold (cogs) gives a gross margin near 46%, falling by
 //     about a point in the 2023-11 flash sale; transactions give the average basket (net sales / transactions).
 //     These use a second seeded generator, so every other series keeps its values.
-import {mkdirSync, writeFileSync} from 'node:fs';
-import {dirname, join} from 'node:path';
+//   Repairs: about 9 jobs a day (more in spring and before Christmas, none on the closing days), 2017-12-01 to
+//     2026-10-31 (from a Friday, so that the first month is whole); each job finishes between 09:00 and 17:59
+//     and costs EUR 18–120.
+import {mkdirSync, mkdtempSync, rmSync, writeFileSync} from 'node:fs';
+import {tmpdir} from 'node:os';
+import {dirname, join, resolve} from 'node:path';
 import {fileURLToPath} from 'node:url';
+import {DuckDBInstance} from '@duckdb/node-api';
+import ExcelJS from 'exceljs';
 
 const here = dirname(fileURLToPath(import.meta.url));
 const MONTHS = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'];
@@ -300,8 +310,59 @@ function wideCsv(rows, delimiter = ',', decimal = '.') {
   return [columns.join(delimiter), ...rows.map((r) => columns.map((c) => cell(r[c])).join(delimiter))].join('\n') + '\n';
 }
 
-const dataDir = join(here, 'data');
+const dataDir = process.argv[2] ? resolve(process.argv[2]) : join(here, 'data');
 mkdirSync(dataDir, {recursive: true});
 writeFileSync(join(dataDir, 'trading.csv'), wideCsv(trading));
 writeFileSync(join(dataDir, 'web.csv'), ['date,series,value', ...web.map((r) => r.join(','))].join('\n') + '\n');
 writeFileSync(join(dataDir, 'quarterly.csv'), wideCsv(quarterly, ';', ','));
+
+// Repair workshop job log: one row per finished job. Its own seeded generator, so the files above do not change.
+const repairRng = mulberry32(20171201);
+const REPAIR_SEASON = [0.7, 0.75, 1.05, 1.25, 1.2, 1.05, 0.95, 0.9, 1.05, 1.1, 1.0, 1.0];
+const SHOPS = ['Harrowgate', 'Millbrook', 'Tarn Quay', 'Westfell'];
+const repairs = ['done_at,shop,amount'];
+for (let day = Date.UTC(2017, 11, 1); day <= Date.UTC(2026, 9, 31); day += 86_400_000) {
+  const date = new Date(day);
+  const [y, m, d] = [date.getUTCFullYear(), date.getUTCMonth() + 1, date.getUTCDate()];
+  if ((m === 12 && (d === 25 || d === 26)) || (m === 1 && d === 1)) continue;
+  const t = mi(y, m);
+  const weekday = [0.6, 1, 1, 1, 1.05, 1.1, 1.4][date.getUTCDay()];
+  const mean = 9 * REPAIR_SEASON[m - 1] * Math.pow(1.02, (t - START) / 12) * Math.pow(1 + cyclePct(t) / 100, 0.5) * weekday;
+  const jobs = Math.max(0, Math.round(mean + Math.sqrt(mean) * normal(repairRng)));
+  const times = Array.from({length: jobs}, () => 9 * 60 + Math.floor(repairRng() * 540)).sort((a, b) => a - b);
+  for (const minute of times) {
+    const at = `${date.toISOString().slice(0, 10)} ${String(Math.floor(minute / 60)).padStart(2, '0')}:${String(minute % 60).padStart(2, '0')}:00`;
+    const shop = SHOPS[Math.floor(repairRng() * SHOPS.length)];
+    repairs.push(`${at},${shop},${(18 + 102 * repairRng() ** 2).toFixed(2)}`);
+  }
+}
+const scratch = mkdtempSync(join(tmpdir(), 'tarnwick-'));
+try {
+  writeFileSync(join(scratch, 'repairs.csv'), repairs.join('\n') + '\n');
+  const duck = await (await DuckDBInstance.create(':memory:')).connect();
+  const quote = (p) => `'${p.replace(/'/g, "''")}'`;
+  await duck.run(
+    `COPY (SELECT done_at::TIMESTAMP AS done_at, shop, amount::DECIMAL(8,2) AS amount FROM read_csv(${quote(join(scratch, 'repairs.csv'))}, ` +
+      `header = true, columns = {'done_at': 'VARCHAR', 'shop': 'VARCHAR', 'amount': 'VARCHAR'})) ` +
+      `TO ${quote(join(dataDir, 'repairs.parquet'))} (FORMAT parquet, COMPRESSION zstd, ROW_GROUP_SIZE 100000)`,
+  );
+  duck.closeSync();
+} finally {
+  rmSync(scratch, {recursive: true, force: true});
+}
+
+// The sales budget as finance keeps it: a workbook with two title rows above the header, real date cells.
+const book = new ExcelJS.Workbook();
+book.creator = 'Finance team, Tarnwick Outdoor Co.';
+book.created = book.modified = new Date(Date.UTC(2026, 2, 31));
+const sheet = book.addWorksheet('Budget');
+sheet.addRow(['Tarnwick Outdoor Co. — sales budget']);
+sheet.addRow(['EUR k; fiscal years start in April']);
+sheet.addRow(['Month', 'Sales budget']);
+for (const r of trading) {
+  const [y, m] = r.month.split('-').map(Number);
+  sheet.addRow([new Date(Date.UTC(y, m - 1, 1)), r.sales_budget]);
+}
+sheet.getColumn(1).numFmt = 'mmm yyyy';
+sheet.getColumn(1).width = 12;
+await book.xlsx.writeFile(join(dataDir, 'budget.xlsx'));

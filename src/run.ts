@@ -1,6 +1,7 @@
 import {loadPlan, portablePlan, salvagePlan} from './config/index.js';
 import type {OutputFormat, Plan} from './config/plan.js';
 import {ingest} from './ingest/index.js';
+import {derive} from './derive/index.js';
 import type {Dataset} from './ingest/types.js';
 import {checkFormulas, deriveFormulas} from './derive/formulas/index.js';
 import {analyseAll, analysisThreads} from './analyse/index.js';
@@ -57,7 +58,7 @@ export interface BuildSummary {
 export async function build(request: BuildRequest, log: Logger): Promise<BuildSummary> {
   const {packFile, period, outDir, formats, allowDirs} = request;
   const loaded = await loadPlan(packFile, {period, outDir, formats, allowDirs});
-  const read = await ingest(loaded);
+  const read = derive(loaded, await ingest(loaded));
   const {data, ratios} = deriveFormulas(loaded, read);
   const plan: Plan = {...loaded, series: data.plans}; // `fromSource` entries expanded, formula kinds resolved
   const periodLabel = formatPeriod(plan.frequency, data.period);
@@ -112,7 +113,7 @@ export async function check(packFile: string, log: Logger, allowDirs: string[] =
   let data: Dataset | null = null;
   if (plan) {
     try {
-      data = await ingest(plan);
+      data = derive(plan, await ingest(plan));
       const formulas = checkFormulas(plan, data.plans);
       if (!formulas.ok) throw new InputError(formulas.problems);
     } catch (e) {

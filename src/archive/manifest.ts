@@ -14,8 +14,11 @@ export interface Manifest {
   pack: {id: string; title: string; period: string; frequency: Frequency};
   /** The fully-defaulted plan exactly as the run used it. */
   plan: unknown;
-  /** Every input file; paths relative to the pack file's folder, `/`-separated; sorted by path. */
-  inputs: {file: string; bytes: number; sha256: string; rows: number}[];
+  /**
+   * Every input file; paths relative to the pack file's folder, `/`-separated; sorted by path. A query source is
+   * `<id> (<engine> query)` with its engine and query text; its hash is of the rows it returned (ingest/queryRows.ts).
+   */
+  inputs: {file: string; bytes: number; sha256: string; rows: number; engine?: string; query?: string}[];
   /** Every file written beside the manifest (paths relative to the period folder), sorted by path. */
   outputs: {path: string; bytes: number; sha256: string}[];
   warnings: string[];
@@ -42,7 +45,13 @@ export function buildManifest(args: {
     pack: {id: report.plan.id, title: report.plan.title, period: report.periodLabel, frequency: report.plan.frequency},
     plan: args.plan,
     inputs: report.inputs
-      .map((f) => ({file: portable(base, f.file), bytes: f.bytes, sha256: f.sha256, rows: f.rows}))
+      .map((f) => ({
+        file: portable(base, f.file),
+        bytes: f.bytes,
+        sha256: f.sha256,
+        rows: f.rows,
+        ...(f.query ? {engine: f.query.engine, query: f.query.text} : {}),
+      }))
       .sort((a, b) => compare(a.file, b.file)),
     outputs: args.outputs
       .map((o) => ({path: o.path, bytes: byteLength(o.content), sha256: sha256(o.content)}))

@@ -90,6 +90,7 @@ export async function crossCheck(
           add(['sources', i, key], `sources[${i}].${key} only applies to layout long`);
       }
     }
+    for (const [at, message] of sourceKindProblems(s, i)) add(['sources', i, at], message);
     const file = text(s.file);
     if (file !== undefined && (await contained(['sources', i, 'file'], `sources[${i}].file`, file))) {
       const abs = path.resolve(packDir, file);
@@ -193,5 +194,29 @@ export async function crossCheck(
       for (const t of await templateProblems(abs, roots))
         out.push({path: ['branding', 'templates'], message: t.message, at: {file: t.file, line: t.line}});
   }
+  return out;
+}
+
+/**
+ * How a source says where its rows come from: a `file` (CSV, or a workbook ending in `.xlsx`) or a `query` with
+ * its `engine`; `connection` belongs to PostgreSQL and `sheet` to workbooks. Returns [key, message] pairs.
+ */
+function sourceKindProblems(s: Record<string, unknown>, i: number): [string, string][] {
+  const out: [string, string][] = [];
+  const has = (key: string) => s[key] !== undefined && s[key] !== null;
+  const at = `sources[${i}]`;
+  if (has('file') && has('query')) out.push(['query', `${at} has both file and query; keep one of them`]);
+  if (!has('file') && !has('query'))
+    out.push(['id', `${at} needs file (a CSV or .xlsx file) or query (with engine: duckdb or postgres)`]);
+  if (has('query') && !has('engine')) out.push(['query', `${at}.query needs engine: duckdb or engine: postgres`]);
+  if (has('engine') && !has('query')) out.push(['engine', `${at}.engine only applies to a query source; add query`]);
+  if (s.engine === 'postgres' && !has('connection'))
+    out.push(['engine', `${at} has engine postgres, which needs connection: {env: NAME} (an environment variable)`]);
+  if (has('connection') && s.engine !== 'postgres')
+    out.push(['connection', `${at}.connection only applies to engine postgres`]);
+  const file = text(s.file);
+  if (has('sheet') && !(file !== undefined && /\.xlsx$/i.test(file)))
+    out.push(['sheet', `${at}.sheet only applies to a file ending in .xlsx`]);
+  if (has('timeoutSeconds') && !has('query')) out.push(['timeoutSeconds', `${at}.timeoutSeconds only applies to a query source`]);
   return out;
 }

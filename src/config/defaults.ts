@@ -64,7 +64,18 @@ export const defaultConfig = {
     decimal: '.',
     /** Default: `utf-8`. */
     encoding: 'utf-8',
-  } satisfies Partial<SourcePlan> as Pick<SourcePlan, 'layout' | 'dateColumn' | 'delimiter' | 'decimal' | 'encoding'>,
+    /** Default: 1 (the first line or row holds the header). */
+    headerRow: 1,
+    /** Default: `UTC`. */
+    timeZone: 'UTC',
+    /** Default: `missing`. */
+    emptyMeans: 'missing',
+    /** Default: 60 seconds. */
+    timeoutSeconds: 60,
+  } satisfies Partial<SourcePlan> as Pick<
+    SourcePlan,
+    'layout' | 'dateColumn' | 'delimiter' | 'decimal' | 'encoding' | 'headerRow' | 'timeZone' | 'emptyMeans' | 'timeoutSeconds'
+  >,
   series: {
     /** Default: `flow`. */
     kind: 'flow',

@@ -4,6 +4,7 @@ import {LineCounter, parseDocument} from 'yaml';
 import {InputError, type Problem} from '../errors.js';
 import {parsePeriod} from '../time/period.js';
 import {crossCheck, periodExample} from './crossCheck.js';
+import {allowedRoots} from './fileAccess.js';
 import {defaultConfig} from './defaults.js';
 import {schemaProblems} from './issues.js';
 import {issueMessage} from './issues.js';
@@ -119,6 +120,7 @@ export async function loadPlan(packFile: string, overrides: PlanOverrides = {}):
     outDir,
     formats: overrides.formats,
     lineOf: (p) => locate(doc, lineCounter, p).line,
+    readFolders: await allowedRoots(packDir, overrides.allowDirs),
   });
 }
 

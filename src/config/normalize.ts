@@ -18,6 +18,8 @@ export interface NormalizeContext {
   formats: OutputFormat[] | undefined;
   /** 1-based pack-file line of a data path. */
   lineOf: (p: PropertyKey[]) => number;
+  /** Folders the pack may read (its own and `--allow-dir`), symlinks resolved: what a DuckDB query may open. */
+  readFolders: string[];
 }
 
 /** Keep only the analysis blocks of a series entry. */
@@ -48,6 +50,23 @@ function fromPack(packDir: string, p: string | null | undefined): string | null 
   return p === undefined || p === null ? null : path.resolve(packDir, p);
 }
 
+/** The source keys for data as exported (header row, dates, workbooks, queries), defaulted. */
+function exportedAs(s: PackConfig['sources'][number], readFolders: string[]) {
+  const reader: SourcePlan['reader'] = s.query ? (s.engine ?? 'duckdb') : /\.xlsx$/i.test(s.file ?? '') ? 'xlsx' : 'csv';
+  return {
+    reader,
+    headerRow: s.headerRow ?? defaultConfig.source.headerRow,
+    dateFormat: s.dateFormat ?? null,
+    timeZone: s.timeZone ?? defaultConfig.source.timeZone,
+    emptyMeans: s.emptyMeans ?? defaultConfig.source.emptyMeans,
+    sheet: s.sheet ?? null,
+    query: s.query ?? null,
+    connectionEnv: s.connection?.env ?? null,
+    timeoutSeconds: s.timeoutSeconds ?? defaultConfig.source.timeoutSeconds,
+    readFolders: reader === 'duckdb' ? [...readFolders] : [],
+  };
+}
+
 /**
  * Validated pack → fully-defaulted `Plan`: defaults merged (defaultConfig → `defaults:` → each series),
  * frequency-dependent defaults filled, paths made absolute. Pure apart from `path.resolve`.
@@ -62,7 +81,7 @@ export function normalize(cfg: PackConfig, ctx: NormalizeContext): Plan {
 
   const sources: SourcePlan[] = cfg.sources.map((s, i) => ({
     id: s.id,
-    file: path.resolve(packDir, s.file),
+    file: path.resolve(packDir, s.file ?? path.basename(ctx.packFile)),
     layout: s.layout ?? defaultConfig.source.layout,
     dateColumn: s.dateColumn ?? defaultConfig.source.dateColumn,
     keyColumn: s.keyColumn ?? null,
@@ -71,6 +90,7 @@ export function normalize(cfg: PackConfig, ctx: NormalizeContext): Plan {
     decimal: s.decimal ?? defaultConfig.source.decimal,
     encoding: s.encoding ?? defaultConfig.source.encoding,
     line: ctx.lineOf(['sources', i]),
+    ...exportedAs(s, ctx.readFolders),
   }));
 
   const series: SeriesPlan[] = [];
@@ -82,6 +102,7 @@ export function normalize(cfg: PackConfig, ctx: NormalizeContext): Plan {
       better: ('better' in entry ? entry.better : null) ?? defaultConfig.series.better,
       formula: null,
       hidden: entry.hidden ?? defaultConfig.series.hidden,
+      aggregate: ('aggregate' in entry ? entry.aggregate : null) ?? null,
       analysis: analysisFor(entry),
       line: ctx.lineOf(['series', i]),
     };

@@ -80,7 +80,7 @@ export interface Thresholds {
 
 export interface SourcePlan {
   id: string;
-  /** Absolute path. */
+  /** Absolute path of the CSV or XLSX file; for a query source, the pack file (problems point at its line). */
   file: string;
   layout: 'wide' | 'long';
   dateColumn: string;
@@ -94,6 +94,27 @@ export interface SourcePlan {
   decimal: '.' | ',';
   encoding: 'utf-8' | 'windows-1252';
   line: number;
+  // Data as exported (see the README's pack-file reference).
+  /** `csv` or `xlsx` by the file's extension, or the query's `engine`. */
+  reader: 'csv' | 'xlsx' | 'duckdb' | 'postgres';
+  /** 1-based line (CSV) or row (XLSX) of the header; the lines above it are ignored. Default: 1. */
+  headerRow: number;
+  /** Day-first or month-first date spelling (`DD/MM/YYYY`, …), or null: only year-first dates are read. */
+  dateFormat: string | null;
+  /** IANA time zone in which timestamps with a UTC offset are given their date. Default: `UTC`. */
+  timeZone: string;
+  /** Periods without rows inside the data's span: `missing` (NaN), or `zero` for `sum` and `count`. */
+  emptyMeans: 'missing' | 'zero';
+  /** XLSX: the worksheet's name; null = the first sheet. */
+  sheet: string | null;
+  /** Query sources: the SQL text, run as is; null for files. */
+  query: string | null;
+  /** postgres: the environment variable holding the connection string (never the string itself). */
+  connectionEnv: string | null;
+  /** Query sources: statement timeout in seconds. Default: 60. */
+  timeoutSeconds: number;
+  /** duckdb: the folders a query may read (pack folder and `--allow-dir`), absolute with symlinks resolved. */
+  readFolders: string[];
 }
 
 export interface SeriesPlan {
@@ -119,9 +140,17 @@ export interface SeriesPlan {
   better: 'higher' | 'lower';
   /** Hidden series are read (e.g. as targets) but get no section of their own. */
   hidden: boolean;
+  /**
+   * How rows falling in one period are combined; absent or null = not set: `sum` for flows, `last` for stocks,
+   * `mean` for ratios, and two rows naming the same period at the pack's own frequency are then a duplicate problem.
+   */
+  aggregate?: Aggregate | null;
   analysis: AnalysisOptions;
   line: number;
 }
+
+/** Ways to combine the rows of one period: values' sum, mean, last or first in time, minimum, maximum, or rows. */
+export type Aggregate = 'sum' | 'mean' | 'last' | 'first' | 'min' | 'max' | 'count';
 
 /** A derived series' formula as written. */
 export interface FormulaPlan {

@@ -16,6 +16,6 @@ export function portablePlan(plan: Plan): Plan {
     outDir: rel(plan.outDir),
     browser: plan.browser === null || !path.isAbsolute(plan.browser) ? plan.browser : rel(plan.browser),
     branding: {...plan.branding, logo: relOrNull(plan.branding.logo), templates: relOrNull(plan.branding.templates)},
-    sources: plan.sources.map((s) => ({...s, file: rel(s.file)})),
+    sources: plan.sources.map((s) => ({...s, file: rel(s.file), readFolders: s.readFolders.map(rel)})),
   };
 }

@@ -6,6 +6,7 @@ import {defaultConfig} from './defaults.js';
 import {schemaProblems} from './issues.js';
 import {locate} from './locate.js';
 import type {PlanOverrides} from './load.js';
+import {allowedRoots} from './fileAccess.js';
 import {normalize} from './normalize.js';
 import type {Plan} from './plan.js';
 import {packSchema} from './schema.js';
@@ -52,6 +53,7 @@ export async function salvagePlan(
         outDir: path.resolve(defaultConfig.pack.outDir),
         formats: undefined,
         lineOf: (p) => locate(doc, lineCounter, p).line,
+        readFolders: await allowedRoots(packDir, overrides.allowDirs),
       });
     }
     const before = JSON.stringify(raw);

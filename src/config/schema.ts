@@ -1,4 +1,6 @@
 import {z} from 'zod';
+import {DATE_FORMAT} from '../time/parseDate.js';
+import {isTimeZone} from '../time/zone.js';
 import {SLUG} from './slug.js';
 
 /**
@@ -130,9 +132,11 @@ const thresholdsSection = z.strictObject({
   targetPct: z.number().min(0).nullish(),
 });
 
+const aggregate = z.enum(['sum', 'mean', 'last', 'first', 'min', 'max', 'count']);
+
 const sourceEntry = z.strictObject({
   id: slug,
-  file: text,
+  file: optionalText,
   layout: z.enum(['wide', 'long']).nullish(),
   dateColumn: optionalText,
   keyColumn: optionalText,
@@ -140,6 +144,19 @@ const sourceEntry = z.strictObject({
   delimiter: z.enum(['auto', ',', ';', '\t']).nullish(),
   decimal: z.enum(['.', ',']).nullish(),
   encoding: z.enum(['utf-8', 'windows-1252']).nullish(),
+  // Data as exported: header position, date spelling, workbooks and queries (crossCheck relates them).
+  headerRow: z.number().int().min(1, {error: 'must be a line number from 1'}).nullish(),
+  dateFormat: z
+    .string()
+    .regex(DATE_FORMAT, {error: 'must be DD/MM/YYYY, MM/DD/YYYY, DD.MM.YYYY or DD-MM-YYYY, optionally with " HH:mm:ss"'})
+    .nullish(),
+  timeZone: z.string().refine(isTimeZone, {error: 'must be a time zone name such as UTC or Europe/Berlin'}).nullish(),
+  emptyMeans: z.enum(['missing', 'zero']).nullish(),
+  sheet: optionalText,
+  query: optionalText,
+  engine: z.enum(['duckdb', 'postgres']).nullish(),
+  connection: z.strictObject({env: z.string().regex(/^[A-Za-z_][A-Za-z0-9_]*$/, {error: 'must be an environment variable name'})}).nullish(),
+  timeoutSeconds: z.number().positive().max(3600).nullish(),
 });
 
 const seriesKind = z.enum(['flow', 'stock', 'ratio']);
@@ -168,6 +185,7 @@ const formulaEntry = z.strictObject({
   target: optionalText,
   better: better.nullish(),
   hidden: z.boolean().nullish(),
+  aggregate: aggregate.nullish(),
   ...analysisShape,
 });
 
@@ -177,6 +195,7 @@ const fromSourceEntry = z.strictObject({
   unit: optionalText,
   kind: z.enum(['flow', 'stock']).nullish(),
   hidden: z.boolean().nullish(),
+  aggregate: aggregate.nullish(),
   ...analysisShape,
 });
 

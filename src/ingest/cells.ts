@@ -1,30 +1,69 @@
 import type {SourcePlan} from '../config/plan.js';
 import {didYouMean} from '../config/suggest.js';
+import {monthNames} from '../time/monthNames.js';
 import type {Frequency} from '../time/period.js';
-import {labelFrequency, parseDateCell} from '../time/parseDate.js';
+import {dayMonthOrder, labelFrequency, readDateCell, type DateReading} from '../time/parseDate.js';
+import {stampOf, type Grain, type Stamp} from '../time/stamp.js';
 import * as msg from './messages.js';
 import {numberAdvice, parseNumberCell} from './parseNumber.js';
+import {placeAt} from './places.js';
 import type {ProblemLog} from './problemLog.js';
 import {sniffDelimiter} from './sniffDelimiter.js';
+import type {DataNote} from './types.js';
 
 /** Most distinct date texts remembered per file: long files repeat each date once per key. */
 const DATE_CACHE = 4096;
 
 /**
- * Reads the cells of one source (header columns, dates, numbers), reporting each bad cell at its
- * line and 1-based column with what to do about it. A wrong frequency is reported once per file.
+ * Reads the cells of one source (header columns, dates, numbers), reporting each bad cell at its place
+ * (line and column, sheet and cell, or query row) with what to do about it. Besides the stamps it keeps what
+ * derive needs of the source as a whole: the grain of its dates (one grain per column: mixing days and months
+ * is a problem once the rows are aggregated) and the span of days its rows cover.
+ *
+ * Rows whose date cell is blank or not a date are held back: if a dated row follows, each is a problem; if none
+ * does, they were a footer (`Total;;1234`) and {@link CellReader.finish} turns them into one data note.
  */
 export class CellReader {
   /** 0-based index of the date column, once the header is known. */
   dateColumn = -1;
-  private readonly dates = new Map<string, number | undefined>();
+  /** Each grain of the dates read, with the first cell of that grain (derive decides whether a mix matters). */
+  readonly grains = new Map<Grain, {line: number; text: string}>();
+  /** First and last day covered by the rows (days since 1970-01-01), once a date was read. */
+  span: {from: number; to: number} | undefined;
+  /** First and last pack period any dated row fell in. */
+  periods: {first: number; last: number} | undefined;
+  /** XLSX: the worksheet being read, for places such as `budget.xlsx:Budget!B12`. */
+  sheet: string | null = null;
+  private readonly dates = new Map<string, Stamp | undefined>();
+  private readonly reading: DateReading;
+  private readonly decimal: '.' | ',';
   private mixedReported = false;
+  private lastText = '';
+  private lastStamp: Stamp | undefined;
+  private held: {line: number; text: string; report: () => void}[] = [];
 
   constructor(
     readonly source: SourcePlan,
     readonly frequency: Frequency,
     readonly problems: ProblemLog,
-  ) {}
+    locale: string,
+  ) {
+    this.reading = {dateFormat: source.dateFormat, months: monthNames(locale)};
+    // Workbook and query cells hold numbers as numbers, which readers write with a `.` decimal mark.
+    this.decimal = source.reader === 'csv' ? source.decimal : '.';
+  }
+
+  /** Report a problem at a line (or row) and 1-based column of this source. */
+  report(line: number | null, column: number | null, message: string): void {
+    const p = placeAt(this.source, this.sheet, line, column);
+    this.problems.add(p.file, p.line, p.column, p.prefix + message);
+  }
+
+  /** A data note at a line (or row) of this source. */
+  note(line: number | null, message: string): DataNote {
+    const p = placeAt(this.source, this.sheet, line, null);
+    return {file: p.file, line: p.line, message: p.prefix + message};
+  }
 
   /** 0-based index of a header name, or -1 with a problem suggesting the nearest name or the right delimiter. */
   column(header: string[], line: number, what: string, name: string): number {
@@ -32,45 +71,95 @@ export class CellReader {
     if (at >= 0) return at;
     // A one-column header that another delimiter splits: the source declares the wrong delimiter.
     const declared = this.source.delimiter;
-    const found = header.length === 1 && declared !== 'auto' ? sniffDelimiter(header[0]) : declared;
+    const found =
+      this.source.reader === 'csv' && header.length === 1 && declared !== 'auto' ? sniffDelimiter(header[0]) : declared;
     const message =
       found !== declared && header[0].includes(found)
         ? msg.missingColumnDelimiter(what, name, declared, found)
         : msg.missingColumn(what, name, didYouMean(name, header), header);
-    this.problems.add(this.source.file, line, null, message);
+    this.report(line, null, message);
     return at;
   }
 
-  /** Period index of a date cell, or undefined (problem reported). */
-  period(text: string, line: number): number | undefined {
-    let period = this.dates.get(text);
-    if (period === undefined && !this.dates.has(text)) {
-      period = parseDateCell(text, this.frequency);
-      if (this.dates.size >= DATE_CACHE) this.dates.clear();
-      this.dates.set(text, period);
+  /** The stamp of a date cell, or undefined (a problem reported, or the row held back as a possible footer). */
+  stamp(text: string, line: number): Stamp | undefined {
+    // Exports repeat a date on consecutive rows (one per key): the last one is checked before the cache.
+    if (text === this.lastText && this.lastStamp !== undefined && this.held.length === 0) {
+      this.cover(this.lastStamp);
+      return this.lastStamp;
     }
-    if (period !== undefined) return period;
-    const {file, dateColumn: name} = this.source;
-    const column = this.dateColumn + 1;
-    const shown = text.trim();
-    const found = labelFrequency(shown);
-    if (found !== undefined && found !== this.frequency) {
-      if (!this.mixedReported) {
-        this.problems.add(file, line, column, msg.mixedFrequency(shown, name, found, this.frequency));
-      }
-      this.mixedReported = true;
-    } else if (shown === '') this.problems.add(file, line, column, msg.blankDate(name));
-    else this.problems.add(file, line, column, msg.badDate(shown, name, this.frequency));
+    let stamp = this.dates.get(text);
+    if (stamp === undefined && !this.dates.has(text)) {
+      const cell = readDateCell(text, this.reading);
+      stamp = cell === undefined ? undefined : stampOf(cell, this.frequency, this.source.timeZone);
+      if (this.dates.size >= DATE_CACHE) this.dates.clear();
+      this.dates.set(text, stamp);
+    }
+    if (stamp !== undefined) {
+      this.release();
+      if (!this.grains.has(stamp.grain)) this.grains.set(stamp.grain, {line, text: text.trim()});
+      this.cover(stamp);
+      this.lastText = text;
+      this.lastStamp = stamp;
+      return stamp;
+    }
+    this.badDate(text, line);
     return undefined;
   }
 
   /** Number in a cell (NaN when missing), or undefined (problem reported). */
   value(text: string, line: number, at: number, name: string): number | undefined {
-    const value = parseNumberCell(text, this.source.decimal);
+    const value = parseNumberCell(text, this.decimal);
     if (value === undefined) {
-      const advice = numberAdvice(text, this.source.decimal);
-      this.problems.add(this.source.file, line, at + 1, msg.notANumber(text.trim(), name, advice));
+      const advice = numberAdvice(text, this.decimal);
+      this.report(line, at + 1, msg.notANumber(text.trim(), name, advice));
     }
     return value;
+  }
+
+  /** Rows still held back at the end of the data: a footer, told in one note (or nothing when there is none). */
+  finish(): DataNote[] {
+    if (this.held.length === 0) return [];
+    const {line, text} = this.held[0];
+    const last = this.held[this.held.length - 1].line;
+    this.held = [];
+    return [this.note(line, msg.footerIgnored(this.source.dateColumn, line, last, text))];
+  }
+
+  /** Widen the span of days and the range of periods to a stamp. */
+  private cover(stamp: Stamp): void {
+    if (this.span === undefined || this.periods === undefined) {
+      this.span = {from: stamp.from, to: stamp.to};
+      this.periods = {first: stamp.period, last: stamp.period};
+      return;
+    }
+    if (stamp.from < this.span.from) this.span.from = stamp.from;
+    if (stamp.to > this.span.to) this.span.to = stamp.to;
+    if (stamp.period < this.periods.first) this.periods.first = stamp.period;
+    if (stamp.period > this.periods.last) this.periods.last = stamp.period;
+  }
+
+  private release(): void {
+    if (this.held.length === 0) return;
+    for (const h of this.held) h.report();
+    this.held = [];
+  }
+
+  private badDate(text: string, line: number): void {
+    const name = this.source.dateColumn;
+    const column = this.dateColumn + 1;
+    const shown = text.trim();
+    const found = labelFrequency(shown, this.reading);
+    const order = this.source.dateFormat === null ? dayMonthOrder(shown) : undefined;
+    if (found !== undefined && found !== this.frequency) {
+      if (!this.mixedReported) this.report(line, column, msg.mixedFrequency(shown, name, found, this.frequency));
+      this.mixedReported = true;
+    } else if (order !== undefined) {
+      if (!this.mixedReported) this.report(line, column, msg.dayMonthDate(shown, name, order));
+      this.mixedReported = true;
+    } else {
+      const message = shown === '' ? msg.blankDate(name) : msg.badDate(shown, name, this.frequency);
+      this.held.push({line, text: shown, report: () => this.report(line, column, message)});
+    }
   }
 }

@@ -1,102 +1,48 @@
 import type {Plan, SeriesPlan} from '../config/plan.js';
-import {InputError} from '../errors.js';
-import {formatPeriod} from '../time/period.js';
 import {expandSeries} from './expandSeries.js';
 import * as msg from './messages.js';
-import type {PeriodStore} from './periodStore.js';
-import {placeSeries} from './placeSeries.js';
 import {ProblemLog} from './problemLog.js';
 import {readSource} from './readSource.js';
 import type {SourceData, Wanted} from './sourceData.js';
-import type {Dataset, Series} from './types.js';
+
+/** What ingest read of a pack: each source's period stores, the series list with `fromSource` expanded, problems. */
+export interface Readings {
+  /** By source id, in pack order. */
+  sources: Map<string, SourceData>;
+  /**
+   * The plan of each series: the pack's own series and those expanded from `fromSource` entries
+   * (id = slug of the key, label = column = key), in pack order.
+   */
+  plans: SeriesPlan[];
+  /** Every problem found while reading; derive adds its own and throws them together. */
+  problems: ProblemLog;
+}
 
 /**
- * The ingest stage: read every source of a plan once and return its series on a regular calendar
- * ending at the review period.
+ * The ingest stage: read every source of a plan once (CSV, XLSX, DuckDB or PostgreSQL query) into period stores.
  *
  * ```
- * sources ──► readSource (stream, hash, decode, parse, cells → period stores)
+ * sources ──► readSource (read, hash, decode, parse, cells → stamps → period stores)
  *         ──► expandSeries (fromSource keys → series)
- *         ──► review period (the pack's, or the last period with data in a visible series)
- *         ──► placeSeries (gaps, truncation, padding)
+ *         ──► references (targets, group members)
  * ```
  *
- * Every problem in every source is collected first; if there is any, one InputError lists them all.
+ * Problems are collected, not thrown: derive (which turns the stores into series) adds its own and throws one
+ * InputError listing them all.
  */
-export async function ingest(plan: Plan): Promise<Dataset> {
+export async function ingest(plan: Plan): Promise<Readings> {
   const problems = new ProblemLog();
-  const reads = new Map<string, SourceData>();
+  const sources = new Map<string, SourceData>();
   for (const source of plan.sources) {
-    reads.set(source.id, await readSource(source, wantedFrom(plan, source.id), plan.frequency, problems));
+    sources.set(source.id, await readSource(source, wantedFrom(plan, source.id), plan.frequency, plan.locale, problems));
   }
   const keysOf = (id: string): string[] | undefined => {
-    const data = reads.get(id);
+    const data = sources.get(id);
     return data?.input ? [...data.stores.keys()] : undefined;
   };
   const plans = expandSeries(plan, keysOf, problems);
-  checkReferences(plan, plans, reads, problems);
-
-  const found: {plan: SeriesPlan; data: SourceData; store: PeriodStore; range: {first: number; last: number}}[] = [];
-  for (const s of plans) {
-    // Derived series (formulas) are made from the others by derive.
-    if (s.formula !== null) continue;
-    const data = reads.get(s.source);
-    if (data === undefined) {
-      problems.add(plan.packFile, s.line, null, msg.unknownSource(s.id, s.source));
-      continue;
-    }
-    const store = data.stores.get(s.column);
-    if (data.input === undefined || store === undefined) continue;
-    const range = store.dataRange();
-    // A file without rows, or a column with unreadable cells, already has its problems.
-    if (range === undefined && (data.input.rows === 0 || store.rejected > 0)) continue;
-    if (range === undefined) {
-      const at = data.columnNumbers.get(s.column);
-      const where = at !== undefined ? `column "${s.column}"` : `the rows for "${s.column}"`;
-      problems.add(data.input.file, at !== undefined ? data.headerLine : null, at ?? null, msg.allMissing(s.id, where));
-      continue;
-    }
-    found.push({plan: s, data, store, range});
-  }
-
-  const notes = [...reads.values()].flatMap((d) => d.notes);
-  const visible = found.filter((f) => !f.plan.hidden);
-  const last = (visible.length > 0 ? visible : found).reduce((max, f) => Math.max(max, f.range.last), -Infinity);
-  const period = plan.period ?? (Number.isFinite(last) ? last : undefined);
-  if (period === undefined) {
-    if (problems.size === 0) problems.add(plan.packFile, null, null, msg.noData());
-    throw new InputError(problems.list());
-  }
-  if (plan.period === null) {
-    notes.push({file: plan.packFile, line: null, message: msg.inferredPeriod(formatPeriod(plan.frequency, period))});
-  }
-
-  // A set, not a search of the plans per series: with 10,000 series that search took 14 s.
-  const targets = new Set(plans.flatMap((p) => p.target ?? []));
-  const series: Series[] = [];
-  for (const {plan: s, data, store, range} of found) {
-    // A target (budget) keeps its values past the review period: the fiscal-year outturn compares against them.
-    const placed = placeSeries(s.id, store, range, period, plan.frequency, targets.has(s.id));
-    const file = data.input!.file;
-    if (!placed.ok) {
-      problems.add(plan.packFile, s.line, null, placed.problem);
-      continue;
-    }
-    const seriesNotes = placed.notes.map((message) => ({file, line: null, message: `${s.id}: ${message}`}));
-    series.push({
-      id: s.id,
-      frequency: plan.frequency,
-      start: placed.start,
-      values: placed.values,
-      ahead: placed.ahead,
-      sourceId: s.source,
-      file,
-      notes: seriesNotes,
-    });
-  }
-  if (problems.size > 0) throw new InputError(problems.list());
-  const inputs = plan.sources.flatMap((source) => reads.get(source.id)?.input ?? []);
-  return {period, series, inputs, notes, plans};
+  checkReferences(plan, plans, sources, problems);
+  return {sources, plans, problems};
 }
 
 /** Columns (wide) or keys (long) of one source that the pack's series name; every key for `fromSource`. */

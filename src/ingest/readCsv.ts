@@ -1,32 +1,27 @@
 import {createHash} from 'node:crypto';
 import {createReadStream} from 'node:fs';
-import {Readable} from 'node:stream';
-import {CsvError, parse} from 'csv-parse';
 import iconv from 'iconv-lite';
 import type {SourcePlan} from '../config/plan.js';
+import {CsvRecords, CsvSyntaxError} from './csvRecords.js';
 import type {InputFile} from './types.js';
 import type {ProblemLog} from './problemLog.js';
 import {sniffDelimiter} from './sniffDelimiter.js';
 import * as msg from './messages.js';
+import type {RowVisitor} from './rowVisitor.js';
 
-/** Receives the header, then each data record, with the 1-based line where the record ends. */
-export interface CsvVisitor {
-  /** Return false to stop reading (the header lacks a needed column). */
-  header(fields: string[], line: number): boolean;
-  record(fields: string[], line: number): void;
-}
 
 /**
  * Stream one CSV source through a visitor, reading the file once: the raw bytes are hashed (SHA-256)
  * and counted, decoded (UTF-8 validated strictly, or Windows-1252 through iconv-lite because Node 20's
  * TextDecoder maps 0x80–0x9F to control characters), the delimiter is sniffed from the header line when
- * `auto`, and csv-parse turns the text into records. Memory stays bounded by the stream's chunk size.
+ * `auto`, and {@link CsvRecords} cuts the text into records from the source's `headerRow` on (title lines above it
+ * are skipped). Memory stays bounded by the stream's chunk size.
  *
  * File, decoding and CSV-syntax failures go to `problems`; the result is then undefined.
  */
 export async function readCsv(
   source: SourcePlan,
-  visitor: CsvVisitor,
+  visitor: RowVisitor,
   problems: ProblemLog,
 ): Promise<InputFile | undefined> {
   const hash = createHash('sha256');
@@ -35,53 +30,64 @@ export async function readCsv(
   let rows = 0;
   try {
     let head = '';
+    let lines: string[] = [];
     for (;;) {
       const next = await text.next();
       if (next.done) break;
       head += next.value;
-      if (/[\r\n]/.test(head)) break;
+      lines = head.replace(/^\ufeff/, '').split(/\r\n|\r|\n/, source.headerRow + 1);
+      if (lines.length > source.headerRow) break;
     }
-    const headerLine = head.replace(/^\ufeff/, '').split(/\r\n|\r|\n/, 1)[0];
+    const headerLine = lines[source.headerRow - 1];
+    if (headerLine === undefined) {
+      const count = lines.length - (lines.at(-1) === '' ? 1 : 0);
+      if (count === 0) problems.add(source.file, 1, null, msg.emptyFile());
+      else problems.add(source.file, null, null, msg.headerBeyondEnd(source.headerRow, count));
+      return undefined;
+    }
     const delimiter = source.delimiter === 'auto' ? sniffDelimiter(headerLine) : source.delimiter;
-    const parser = parse({
-      bom: true,
-      info: true,
-      delimiter,
-      relax_column_count: true,
-      relax_quotes: true,
-      skip_empty_lines: true,
-    });
-    const input = Readable.from(prepend(head, text));
+    if (headerLine.split(delimiter).every((f) => f.trim() === '') && head.trim() !== '') {
+      problems.add(source.file, source.headerRow, null, msg.emptyHeader(source.headerRow));
+      return undefined;
+    }
     let headerSeen = false;
-    // Records are taken from 'data' events rather than async iteration: at a million rows the
-    // per-record promise of `for await` costs more than the parsing itself.
-    const stopped = await new Promise<boolean>((resolve, reject) => {
-      input.on('error', reject);
-      parser.on('error', reject);
-      parser.on('end', () => resolve(false));
-      parser.on('data', ({record, info}: {record: string[]; info: {lines: number}}) => {
+    let stopped = false;
+    const records = new CsvRecords(
+      delimiter,
+      (record, line) => {
+        if (stopped) return;
         if (headerSeen) {
           rows++;
-          visitor.record(record, info.lines);
+          visitor.record(record, line);
         } else {
           headerSeen = true;
-          if (!visitor.header(record.map((f) => f.trim()), info.lines)) {
-            input.destroy();
-            parser.destroy();
-            resolve(true);
-          }
+          stopped = !visitor.header(
+            record.map((f) => f.trim()),
+            line,
+          );
         }
-      });
-      input.pipe(parser);
-    });
-    if (stopped) return undefined;
+      },
+      source.headerRow,
+    );
+    records.push(head.replace(/^\ufeff/, ''));
+    for (;;) {
+      if (stopped) break;
+      const next = await text.next();
+      if (next.done) break;
+      records.push(next.value);
+    }
+    if (stopped) {
+      await text.return(undefined);
+      return undefined;
+    }
+    records.end();
     if (!headerSeen) {
       problems.add(source.file, 1, null, msg.emptyFile());
       return undefined;
     }
   } catch (e) {
     if (e instanceof DecodeFailure) problems.add(source.file, e.line, null, e.message);
-    else if (e instanceof CsvError) problems.add(source.file, numberOr(e.lines), null, msg.csvSyntax(e.message));
+    else if (e instanceof CsvSyntaxError) problems.add(source.file, e.line, null, msg.csvSyntax(e.message));
     else if (isFileError(e)) problems.add(source.file, null, null, msg.unreadableFile(e.code));
     else throw e;
     return undefined;
@@ -134,19 +140,10 @@ async function* decodedText(
   }
 }
 
-async function* prepend(head: string, rest: AsyncIterable<string>): AsyncGenerator<string> {
-  if (head !== '') yield head;
-  yield* rest;
-}
-
 function countNewlines(text: string): number {
   let n = 0;
   for (let i = text.indexOf('\n'); i >= 0; i = text.indexOf('\n', i + 1)) n++;
   return n;
-}
-
-function numberOr(x: unknown): number | null {
-  return typeof x === 'number' && Number.isFinite(x) ? x : null;
 }
 
 function isFileError(e: unknown): e is {code: string} {

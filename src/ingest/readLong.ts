@@ -1,20 +1,19 @@
 import {basename} from 'node:path';
 import {didYouMean} from '../config/suggest.js';
-import {formatPeriod} from '../time/period.js';
 import type {CellReader} from './cells.js';
 import * as msg from './messages.js';
 import {PeriodStore} from './periodStore.js';
-import type {CsvVisitor} from './readCsv.js';
+import {blankRow, type RowVisitor} from './rowVisitor.js';
 import type {SourceData, Wanted} from './sourceData.js';
 
 /**
- * Visitor for a long source: one row per (key, period) with date, key and value columns. Only the keys
+ * Visitor for a long source: one row per (key, date) with date, key and value columns. Only the keys
  * the pack asks for are kept (all of them for `fromSource`), each straight into its own store, so memory
- * grows with keys × periods, not with rows. `finish` reports keys the pack names but the file lacks,
+ * grows with keys × periods, not with rows. `finish` reports keys the pack names but the source lacks,
  * at the pack line of the series that names the key when `wanted.pack` gives it.
  */
-export function longVisitor(cells: CellReader, wanted: Wanted, data: SourceData): CsvVisitor & {finish(): void} {
-  const {file, keyColumn: keyName, valueColumn: valueName} = cells.source;
+export function longVisitor(cells: CellReader, wanted: Wanted, data: SourceData): RowVisitor & {finish(): void} {
+  const {keyColumn: keyName, valueColumn: valueName} = cells.source;
   const keyLabel = keyName ?? '';
   const valueLabel = valueName ?? '';
   let keyAt = -1;
@@ -33,13 +32,18 @@ export function longVisitor(cells: CellReader, wanted: Wanted, data: SourceData)
     },
     record(fields, line) {
       // Spreadsheets often end a file with rows of bare delimiters.
-      if (fields.every((f) => f.trim() === '')) return;
-      if (fields.length < width) cells.problems.add(file, line, null, msg.shortRow(fields.length, width));
+      if (blankRow(fields)) return;
       const key = (fields[keyAt] ?? '').trim();
       let store = data.stores.get(key);
+      const stamp = cells.stamp(fields[cells.dateColumn] ?? '', line);
+      if (stamp === undefined) {
+        if (store !== undefined) store.rejected++;
+        return;
+      }
+      if (fields.length < width) cells.report(line, null, msg.shortRow(fields.length, width));
       if (store === undefined) {
         if (key === '') {
-          cells.problems.add(file, line, keyAt + 1, msg.blankKey(keyLabel));
+          cells.report(line, keyAt + 1, msg.blankKey(keyLabel));
           return;
         }
         if (!wanted.all && !wanted.names.has(key)) {
@@ -49,25 +53,16 @@ export function longVisitor(cells: CellReader, wanted: Wanted, data: SourceData)
         store = new PeriodStore();
         data.stores.set(key, store);
       }
-      const period = cells.period(fields[cells.dateColumn] ?? '', line);
-      if (period === undefined) {
-        store.rejected++;
-        return;
-      }
       const value = cells.value(fields[valueAt] ?? '', line, valueAt, valueLabel);
       if (value === undefined) {
         store.rejected++;
         return;
       }
-      const before = store.set(period, value, line);
-      if (before !== 0) {
-        const label = formatPeriod(cells.frequency, period);
-        cells.problems.add(file, line, cells.dateColumn + 1, msg.duplicateKeyRow(key, label, before, line));
-      }
+      store.add(stamp, value, line);
       if (outOfOrder === 0 && store.outOfOrderLine !== 0) outOfOrder = store.outOfOrderLine;
     },
     finish() {
-      if (outOfOrder !== 0) data.notes.push({file, line: outOfOrder, message: msg.outOfOrder(outOfOrder)});
+      if (outOfOrder !== 0) data.notes.push(cells.note(outOfOrder, msg.outOfOrder(outOfOrder)));
       const keys = [...data.stores.keys(), ...skipped];
       for (const [key, ids] of wanted.names) {
         if (data.stores.has(key)) continue;
@@ -75,8 +70,8 @@ export function longVisitor(cells: CellReader, wanted: Wanted, data: SourceData)
         // The key is written in the pack, so the problem points at the series entry that names it.
         const line = wanted.pack?.lines.get(key);
         if (wanted.pack !== undefined && line !== undefined)
-          cells.problems.add(wanted.pack.file, line, null, `${basename(file)}: ${message}`);
-        else cells.problems.add(file, null, null, message);
+          cells.problems.add(wanted.pack.file, line, null, `${basename(cells.source.file)}: ${message}`);
+        else cells.report(null, null, message);
       }
     },
   };

@@ -6,28 +6,45 @@ import type {ProblemLog} from './problemLog.js';
 import {readCsv} from './readCsv.js';
 import {longVisitor} from './readLong.js';
 import {wideVisitor} from './readWide.js';
+import type {RowVisitor} from './rowVisitor.js';
 import type {SourceData, Wanted} from './sourceData.js';
+import type {InputFile} from './types.js';
 
 /**
- * Read one source into period stores, reporting bad headers, dates, numbers, duplicates and short rows
- * with line and column. Rows with a bad date or value are skipped; the rest of the file is still checked,
- * so one run lists every problem.
+ * Read one source into period stores, whatever its reader (CSV, XLSX, DuckDB or PostgreSQL query), reporting
+ * bad headers, dates, numbers and short rows at their place. Rows with a bad date or value are skipped; the
+ * rest is still checked, so one run lists every problem.
  */
 export async function readSource(
   source: SourcePlan,
   wanted: Wanted,
   frequency: Frequency,
+  locale: string,
   problems: ProblemLog,
 ): Promise<SourceData> {
-  const data: SourceData = {input: undefined, stores: new Map(), headerLine: 1, columnNumbers: new Map(), notes: []};
-  const cells = new CellReader(source, frequency, problems);
-  if (source.layout === 'wide') {
-    data.input = await readCsv(source, wideVisitor(cells, wanted, data), problems);
-  } else {
-    const visitor = longVisitor(cells, wanted, data);
-    data.input = await readCsv(source, visitor, problems);
-    if (data.input !== undefined && data.input.rows > 0) visitor.finish();
+  const cells = new CellReader(source, frequency, problems, locale);
+  const data: SourceData = {input: undefined, stores: new Map(), headerLine: 1, columnNumbers: new Map(), notes: [], cells};
+  const long = source.layout === 'long' ? longVisitor(cells, wanted, data) : undefined;
+  const visitor = long ?? wideVisitor(cells, wanted, data);
+  data.input = await rowsOf(cells, visitor, problems);
+  if (data.input !== undefined) {
+    if (long !== undefined && data.input.rows > 0) long.finish();
+    data.notes.push(...cells.finish());
+    if (data.input.rows === 0) cells.report(source.reader === 'csv' ? data.headerLine : null, null, msg.noRows());
   }
-  if (data.input !== undefined && data.input.rows === 0) problems.add(source.file, data.headerLine, null, msg.noRows());
   return data;
+}
+
+/** The reader of a source; the workbook and database libraries load only for packs that use them (about 1 s). */
+async function rowsOf(cells: CellReader, visitor: RowVisitor, problems: ProblemLog): Promise<InputFile | undefined> {
+  switch (cells.source.reader) {
+    case 'csv':
+      return readCsv(cells.source, visitor, problems);
+    case 'xlsx':
+      return (await import('./readXlsx.js')).readXlsx(cells, visitor, problems);
+    case 'duckdb':
+      return (await import('./readDuckdb.js')).readDuckdb(cells, visitor);
+    case 'postgres':
+      return (await import('./readPostgres.js')).readPostgres(cells, visitor);
+  }
 }

@@ -1,18 +1,16 @@
-import {formatPeriod} from '../time/period.js';
 import type {CellReader} from './cells.js';
 import * as msg from './messages.js';
 import {PeriodStore} from './periodStore.js';
-import type {CsvVisitor} from './readCsv.js';
+import {blankRow, type RowVisitor} from './rowVisitor.js';
 import type {SourceData, Wanted} from './sourceData.js';
 
 /**
- * Visitor for a wide source: one row per period, a date column and one column per series. A period
- * given by two rows is a problem naming both lines (the second row is skipped).
+ * Visitor for a wide source: one row per date, a date column and one column per series. Each value goes
+ * straight into its column's store at the row's stamp; whether two rows of one period are a duplicate or
+ * rows to aggregate is decided once the whole source is read (derive).
  */
-export function wideVisitor(cells: CellReader, wanted: Wanted, data: SourceData): CsvVisitor {
-  const file = cells.source.file;
+export function wideVisitor(cells: CellReader, wanted: Wanted, data: SourceData): RowVisitor {
   const columns: {at: number; name: string; store: PeriodStore}[] = [];
-  const rowLines = new Map<number, number>();
   let width = 0;
   let previous = -Infinity;
   let outOfOrder = false;
@@ -26,7 +24,7 @@ export function wideVisitor(cells: CellReader, wanted: Wanted, data: SourceData)
         if (at < 0) continue;
         const repeats = header.flatMap((h, i) => (h === name ? [i + 1] : []));
         if (repeats.length > 1) {
-          cells.problems.add(file, line, null, msg.duplicateColumn(name, repeats));
+          cells.report(line, null, msg.duplicateColumn(name, repeats));
           continue;
         }
         const store = new PeriodStore();
@@ -38,29 +36,22 @@ export function wideVisitor(cells: CellReader, wanted: Wanted, data: SourceData)
     },
     record(fields, line) {
       // Spreadsheets often end a file with rows of bare delimiters.
-      if (fields.every((f) => f.trim() === '')) return;
-      if (fields.length < width) cells.problems.add(file, line, null, msg.shortRow(fields.length, width));
-      const period = cells.period(fields[cells.dateColumn] ?? '', line);
-      if (period === undefined) {
+      if (blankRow(fields)) return;
+      const stamp = cells.stamp(fields[cells.dateColumn] ?? '', line);
+      if (stamp === undefined) {
         // The row's values are unusable, not missing: a column is not then reported as all blank.
         for (const {store} of columns) store.rejected++;
         return;
       }
-      const before = rowLines.get(period);
-      if (before !== undefined) {
-        const label = formatPeriod(cells.frequency, period);
-        cells.problems.add(file, line, cells.dateColumn + 1, msg.duplicateRow(label, before, line));
-        return;
-      }
-      rowLines.set(period, line);
-      if (period < previous && !outOfOrder) {
+      if (fields.length < width) cells.report(line, null, msg.shortRow(fields.length, width));
+      if (stamp.at < previous && !outOfOrder) {
         outOfOrder = true;
-        data.notes.push({file, line, message: msg.outOfOrder(line)});
+        data.notes.push(cells.note(line, msg.outOfOrder(line)));
       }
-      previous = period;
+      previous = stamp.at;
       for (const {at, name, store} of columns) {
         const value = cells.value(fields[at] ?? '', line, at, name);
-        if (value !== undefined) store.set(period, value, line);
+        if (value !== undefined) store.add(stamp, value, line);
         else store.rejected++;
       }
     },

@@ -1,16 +1,22 @@
+import type {CellReader} from './cells.js';
 import type {PeriodStore} from './periodStore.js';
 import type {DataNote, InputFile} from './types.js';
 
 /** What one source gave: a store per wide column or long key, in header or first-seen order. */
 export interface SourceData {
-  /** Undefined when the file could not be read to the end (problems say why). */
+  /** Undefined when the source could not be read to the end (problems say why). */
   input: InputFile | undefined;
   stores: Map<string, PeriodStore>;
-  /** Line of the header, for problems about columns. */
+  /** Line (or row) of the header, for problems about columns. */
   headerLine: number;
   /** Wide layout: 1-based column number of each stored column. */
   columnNumbers: Map<string, number>;
   notes: DataNote[];
+  /**
+   * The cell reader that read the source: its places (for problems found later, such as duplicates), the
+   * grain of its dates and the span of days its rows cover (for incomplete periods).
+   */
+  cells: CellReader;
 }
 
 /** Which wide columns or long keys to keep, each with the ids of the series naming it; `all`: every long key. */

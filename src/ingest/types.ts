@@ -15,7 +15,7 @@ export interface Series {
    */
   ahead: Float64Array;
   sourceId: string;
-  /** Absolute path of the CSV it came from. */
+  /** Absolute path of the CSV or workbook it came from; the pack file for a query source. */
   file: string;
   notes: DataNote[];
 }
@@ -27,14 +27,16 @@ export interface DataNote {
   message: string;
 }
 
-/** An input file as read, for the manifest and the data-notes page. */
+/** An input file (or query) as read, for the manifest and the data-notes page. */
 export interface InputFile {
-  /** Absolute path. */
+  /** Absolute path; for a query, `<source id> (<engine> query)`. */
   file: string;
   sha256: string;
   bytes: number;
   /** Data rows read (header excluded). */
   rows: number;
+  /** Query sources: the engine and the query text as written in the pack (the hash is of the rows it returned). */
+  query?: {engine: 'duckdb' | 'postgres'; text: string};
 }
 
 /** Everything ingest produced for one pack. */

@@ -1,4 +1,4 @@
-import {relative, dirname} from 'node:path';
+import {relative, dirname, isAbsolute} from 'node:path';
 import type {TopLevelSpec} from 'vega-lite';
 import type {SeriesAnalysis} from '../analyse/types.js';
 import type {Callout} from '../narrate/types.js';
@@ -236,7 +236,7 @@ export function buildView(report: Report, logo: string | null): ViewModel {
     }),
     cautions: CAUTIONS,
     inputs: report.inputs.map((i) => ({
-      path: relative(dirname(plan.packFile), i.file) || i.file,
+      path: isAbsolute(i.file) ? relative(dirname(plan.packFile), i.file) || i.file : i.file,
       sha256: i.sha256,
       size: `${f.number(i.bytes, 0)} bytes`,
       rows: f.number(i.rows, 0),

@@ -1,4 +1,4 @@
-import {daysFromCivil, isoWeekIndex, isoWeeksInYear, monthIndex, periodStartDay, quarterIndex} from './period.js';
+import {daysFromCivil, isoWeeksInYear} from './period.js';
 import type {Frequency} from './period.js';
 
 /** What a date cell names before it is matched to the pack's frequency. */
@@ -6,53 +6,87 @@ export type DateCell =
   | {kind: 'month'; year: number; month: number}
   | {kind: 'quarter'; year: number; quarter: number}
   | {kind: 'week'; year: number; week: number}
-  | {kind: 'day'; year: number; month: number; day: number};
+  | {
+      kind: 'day';
+      year: number;
+      month: number;
+      day: number;
+      /** Time of day in ms (0 when the cell has none). */
+      ms: number;
+      /** UTC offset in minutes written in the cell (`Z` = 0), or null when it has none (local time of the source). */
+      offset: number | null;
+    };
 
-const MONTH_NAMES = ['jan', 'feb', 'mar', 'apr', 'may', 'jun', 'jul', 'aug', 'sep', 'oct', 'nov', 'dec'];
-const FULL_MONTH_NAMES = [
-  'january',
-  'february',
-  'march',
-  'april',
-  'may',
-  'june',
-  'july',
-  'august',
-  'september',
-  'october',
-  'november',
-  'december',
-];
+/**
+ * How a source writes its day-first or month-first dates: `DD/MM/YYYY`, `MM/DD/YYYY`, `DD.MM.YYYY`, `DD-MM-YYYY`
+ * (any of `/ . -` as separator), optionally followed by ` HH:mm` or ` HH:mm:ss`; a time of day is accepted after
+ * any date either way. `YYYY-MM-DD` and `YYYY/MM/DD` are always read and need no setting.
+ */
+export const DATE_FORMAT = /^(DD([./-])MM\2YYYY|MM([./-])DD\3YYYY|YYYY([./-])MM\4DD)( HH:mm(:ss)?)?$/;
 
+/** What reading a date cell depends on besides its text. */
+export interface DateReading {
+  /** The source's `dateFormat` (see {@link DATE_FORMAT}), or null: day-first and month-first dates are not read. */
+  dateFormat: string | null;
+  /** Month names of the pack's locale (see monthNames.ts); English names are always read. */
+  months: ReadonlyMap<string, number>;
+}
+
+const ENGLISH_MONTHS = new Map<string, number>([
+  ...['jan', 'feb', 'mar', 'apr', 'may', 'jun', 'jul', 'aug', 'sep', 'oct', 'nov', 'dec'].map(
+    (n, i) => [n, i + 1] as [string, number],
+  ),
+  ...['january', 'february', 'march', 'april', 'may', 'june', 'july', 'august', 'september'].map(
+    (n, i) => [n, i + 1] as [string, number],
+  ),
+  ['october', 10],
+  ['november', 11],
+  ['december', 12],
+  ['sept', 9],
+]);
+const NONE: DateReading = {dateFormat: null, months: new Map()};
+
+const TIME = String.raw`(?:[T ](\d{1,2}):(\d{2})(?::(\d{2})(?:[.,](\d{1,9}))?)?\s?(Z|[+-]\d{2}(?::?\d{2})?)?)?`;
 const YEAR_MONTH = /^(\d{4})-(\d{1,2})$/;
 const MONTH_SLASH_YEAR = /^(\d{1,2})\/(\d{4})$/;
-const NAME_YEAR = /^([a-z]+)\.?[ -](\d{4})$/i;
+const NAME_YEAR = /^(\p{L}+\.?)[ -](\d{4})$/u;
 const YEAR_QUARTER = /^(\d{4})-?Q([1-4])$/i;
 const QUARTER_YEAR = /^Q([1-4])[ -]?(\d{4})$/i;
 const YEAR_WEEK = /^(\d{4})-?W(\d{1,2})(?:-?[1-7])?$/i;
-const YEAR_MONTH_DAY = /^(\d{4})([-/])(\d{1,2})\2(\d{1,2})(?:[T ]\d{1,2}:\d{2}(?::\d{2}(?:\.\d+)?)?(?:Z|[+-]\d{2}:?\d{2})?)?$/;
+const YEAR_MONTH_DAY = new RegExp(String.raw`^(\d{4})([-/.])(\d{1,2})\2(\d{1,2})${TIME}$`);
+const DAY_MONTH_YEAR = new RegExp(String.raw`^(\d{1,2})([-/.])(\d{1,2})\2(\d{4})${TIME}$`);
 
 /**
  * Read a date cell into what it names, without deciding the frequency.
  *
  * Accepted (case-insensitive, surrounding blanks ignored):
- * - months: `2026-10`, `10/2026`, `Oct 2026`, `October 2026`, `Sept 2026`, `Oct-2026`
+ * - months: `2026-10`, `10/2026`, `Oct 2026`, `October 2026`, `Sept 2026`, `Oct-2026`, and the month names of the
+ *   pack's locale given in `reading.months` (`Okt 2026`, `janv. 2026`)
  * - quarters: `2026-Q3`, `2026Q3`, `Q3 2026`, `Q3-2026`
  * - ISO weeks: `2026-W41`, `2026W41`, and ISO week dates `2026-W41-3`
- * - days: `2026-10-31`, `2026/10/31`, with an optional time of day (`2026-10-31T00:00:00Z`), which is ignored
+ * - days: `2026-10-31`, `2026/10/31`, and with `reading.dateFormat` day-first or month-first dates (`31/10/2026`,
+ *   `10/31/2026`, `31.10.2026`); each with an optional time of day (`2015/01/01 01:00:00`,
+ *   `2026-10-31T22:15:00.5+01:00`), kept with the UTC offset when one is written (ISO 8601)
  *
- * Day-first and month-first dates such as `31/10/2026` are not accepted: they are ambiguous between
- * locales. Values outside the calendar (month 13, 31 April, week 53 of a 52-week year) give undefined.
+ * Day-first and month-first dates without a `dateFormat` give undefined: they are ambiguous between locales
+ * (see {@link dayMonthOrder}). Values outside the calendar (month 13, 31 April, week 53 of a 52-week year,
+ * 24:00) give undefined.
  *
  * Complexity: O(length of text).
  *
  * @example readDateCell('Q3 2026') // => {kind: 'quarter', year: 2026, quarter: 3}
  */
-export function readDateCell(text: string): DateCell | undefined {
+export function readDateCell(text: string, reading: DateReading = NONE): DateCell | undefined {
   const s = text.trim();
   let m: RegExpMatchArray | null;
   if ((m = s.match(YEAR_MONTH))) return month(Number(m[1]), Number(m[2]));
-  if ((m = s.match(YEAR_MONTH_DAY))) return day(Number(m[1]), Number(m[3]), Number(m[4]));
+  if ((m = s.match(YEAR_MONTH_DAY))) return day(Number(m[1]), Number(m[3]), Number(m[4]), m);
+  if ((m = s.match(DAY_MONTH_YEAR))) {
+    const order = reading.dateFormat?.slice(0, 2);
+    if (order === 'DD') return day(Number(m[4]), Number(m[3]), Number(m[1]), m);
+    if (order === 'MM') return day(Number(m[4]), Number(m[1]), Number(m[3]), m);
+    return undefined;
+  }
   if ((m = s.match(MONTH_SLASH_YEAR))) return month(Number(m[2]), Number(m[1]));
   if ((m = s.match(YEAR_QUARTER))) return {kind: 'quarter', year: Number(m[1]), quarter: Number(m[2])};
   if ((m = s.match(QUARTER_YEAR))) return {kind: 'quarter', year: Number(m[2]), quarter: Number(m[1])};
@@ -62,53 +96,60 @@ export function readDateCell(text: string): DateCell | undefined {
     return week >= 1 && week <= isoWeeksInYear(year) ? {kind: 'week', year, week} : undefined;
   }
   if ((m = s.match(NAME_YEAR))) {
-    const index = monthNameIndex(m[1].toLowerCase());
-    return index === undefined ? undefined : month(Number(m[2]), index + 1);
+    const name = m[1].toLowerCase();
+    const bare = name.replace(/\.$/, '');
+    const index = ENGLISH_MONTHS.get(bare) ?? reading.months.get(name) ?? reading.months.get(bare);
+    return index === undefined ? undefined : month(Number(m[2]), index);
   }
   return undefined;
 }
 
 /**
- * The period index (see time/period.ts) a date cell names at the pack's frequency, or undefined when the
- * cell is not a date or names a period of another frequency (a quarter in a monthly pack, a month in a
- * weekly pack). A full date maps to the month, quarter or ISO week that contains it.
+ * For a day-first or month-first date read without a `dateFormat`: the setting that reads it. A first field
+ * above 12 can only be a day, and so can a second one; when both are ≤ 12 the text is `ambiguous`. Undefined
+ * when the text is not such a date.
  *
- * @example parseDateCell('2026-08-15', 'quarterly') // => quarterIndex(2026, 3)
+ * @example dayMonthOrder('31/10/2026') // => 'DD/MM/YYYY'
  */
-export function parseDateCell(text: string, frequency: Frequency): number | undefined {
-  const cell = readDateCell(text);
-  if (cell === undefined) return undefined;
-  if (cell.kind === 'day') {
-    if (frequency === 'monthly') return monthIndex(cell.year, cell.month);
-    if (frequency === 'quarterly') return quarterIndex(cell.year, Math.ceil(cell.month / 3));
-    return Math.floor((daysFromCivil(cell.year, cell.month, cell.day) - periodStartDay('weekly', 0)) / 7);
-  }
-  if (cell.kind === 'month') return frequency === 'monthly' ? monthIndex(cell.year, cell.month) : undefined;
-  if (cell.kind === 'quarter') return frequency === 'quarterly' ? quarterIndex(cell.year, cell.quarter) : undefined;
-  return frequency === 'weekly' ? isoWeekIndex(cell.year, cell.week) : undefined;
+export function dayMonthOrder(text: string): string | undefined {
+  const m = text.trim().match(DAY_MONTH_YEAR);
+  if (!m) return undefined;
+  const [a, b, sep] = [Number(m[1]), Number(m[3]), m[2]];
+  if (a > 12 && b <= 12) return `DD${sep}MM${sep}YYYY`;
+  if (b > 12 && a <= 12) return `MM${sep}DD${sep}YYYY`;
+  return 'ambiguous';
 }
 
 /** The frequency a date cell's label implies (`undefined` for full dates, which fit any frequency, and non-dates). */
-export function labelFrequency(text: string): Frequency | undefined {
-  const cell = readDateCell(text);
+export function labelFrequency(text: string, reading: DateReading = NONE): Frequency | undefined {
+  const cell = readDateCell(text, reading);
   if (cell === undefined || cell.kind === 'day') return undefined;
   return cell.kind === 'month' ? 'monthly' : cell.kind === 'quarter' ? 'quarterly' : 'weekly';
-}
-
-function monthNameIndex(name: string): number | undefined {
-  if (name === 'sept') return 8;
-  const short = MONTH_NAMES.indexOf(name);
-  if (short >= 0) return short;
-  const full = FULL_MONTH_NAMES.indexOf(name);
-  return full >= 0 ? full : undefined;
 }
 
 function month(year: number, m: number): DateCell | undefined {
   return m >= 1 && m <= 12 ? {kind: 'month', year, month: m} : undefined;
 }
 
-function day(year: number, m: number, d: number): DateCell | undefined {
+/** A day cell, with the time of day and offset from match groups 5–9 (hour, minute, second, fraction, offset). */
+function day(year: number, m: number, d: number, match: RegExpMatchArray): DateCell | undefined {
   if (m < 1 || m > 12 || d < 1) return undefined;
   const next = m === 12 ? daysFromCivil(year + 1, 1, 1) : daysFromCivil(year, m + 1, 1);
-  return d <= next - daysFromCivil(year, m, 1) ? {kind: 'day', year, month: m, day: d} : undefined;
+  if (d > next - daysFromCivil(year, m, 1)) return undefined;
+  const [hour, minute, second, fraction, zone] = match.slice(5, 10);
+  let ms = 0;
+  if (hour !== undefined) {
+    const [h, mi, sec] = [Number(hour), Number(minute), Number(second ?? 0)];
+    if (h > 23 || mi > 59 || sec > 59) return undefined;
+    ms = ((h * 60 + mi) * 60 + sec) * 1000 + (fraction ? Math.round(Number(`0.${fraction}`) * 1000) : 0);
+  }
+  return {kind: 'day', year, month: m, day: d, ms, offset: zone === undefined ? null : offsetMinutes(zone)};
+}
+
+/** `Z` → 0, `+01:00` / `+0100` / `+01` → 60, `-05:30` → -330. */
+function offsetMinutes(zone: string): number {
+  if (zone === 'Z') return 0;
+  const sign = zone[0] === '-' ? -1 : 1;
+  const digits = zone.slice(1).replace(':', '');
+  return sign * (Number(digits.slice(0, 2)) * 60 + Number(digits.slice(2) || 0));
 }

@@ -3,9 +3,9 @@ import {createWriteStream, mkdtempSync, rmSync} from 'node:fs';
 import {tmpdir} from 'node:os';
 import {join} from 'node:path';
 import {performance} from 'node:perf_hooks';
-import {ingest} from '../../src/ingest/index.js';
+
 import {formatPeriod, monthIndex} from '../../src/time/period.js';
-import {fromSource, plan, source} from '../ingest/plan.js';
+import {fromSource, plan, readPack, source} from '../ingest/plan.js';
 
 const KEYS = 10_000;
 const MONTHS = 120;
@@ -26,7 +26,7 @@ export async function run(): Promise<void> {
     const rssBefore = process.memoryUsage().rss;
     const t0 = performance.now();
     const cpu0 = process.cpuUsage();
-    const dataset = await ingest(p);
+    const dataset = await readPack(p);
     const seconds = (performance.now() - t0) / 1000;
     const cpu = process.cpuUsage(cpu0);
     const cpuSeconds = (cpu.user + cpu.system) / 1e6;

@@ -7,6 +7,7 @@ import {loadPlan} from '../../src/config/index.js';
 import type {GroupPlan, Plan} from '../../src/config/plan.js';
 import {deriveFormulas} from '../../src/derive/formulas/index.js';
 import {ingest} from '../../src/ingest/index.js';
+import {derive} from '../../src/derive/index.js';
 import type {Dataset} from '../../src/ingest/types.js';
 import {collectingLogger} from '../../src/log.js';
 import {monthIndex} from '../../src/time/period.js';
@@ -27,7 +28,7 @@ export async function run(): Promise<void> {
     for (const method of ['mint', 'ols', 'bottom-up'] as const) {
       const loaded = await loadPlan(path.join(root, 'sample-config', pack), {formats: ['json']});
       const plan = {...loaded, groups: loaded.groups.map((g) => ({...g, reconcile: method}))};
-      const read = await ingest(plan);
+      const read = derive(plan, await ingest(plan));
       await report(`${pack} ${method}`, {...plan, series: read.plans}, read);
     }
   }

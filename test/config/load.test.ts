@@ -64,6 +64,16 @@ describe('a valid pack', async () => {
       decimal: ',',
       encoding: 'utf-8',
       line: 16,
+      reader: 'csv',
+      headerRow: 1,
+      dateFormat: null,
+      timeZone: 'UTC',
+      emptyMeans: 'missing',
+      sheet: null,
+      query: null,
+      connectionEnv: null,
+      timeoutSeconds: 60,
+      readFolders: [],
     });
     expect(plan.sources[1]).toMatchObject({
       layout: 'long',

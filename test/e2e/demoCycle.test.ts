@@ -1,6 +1,6 @@
 import {describe, expect, it} from 'vitest';
 import {loadPlan} from '../../src/config/index.js';
-import {ingest} from '../../src/ingest/index.js';
+import {readPack} from '../ingest/plan.js';
 import {analyseSeries} from '../../src/analyse/index.js';
 import {formatPeriod, parsePeriod} from '../../src/time/period.js';
 
@@ -17,7 +17,7 @@ const planted = [
 describe('demo pack: the planted business cycle is recovered', () => {
   it('dates the turns of net sales within three months of the planted ones', async () => {
     const plan = await loadPlan('sample-config/monthly-pack.yaml');
-    const data = await ingest(plan);
+    const data = await readPack(plan);
     const i = data.plans.findIndex((s) => s.id === 'net-sales');
     const series = data.series[i];
     const a = analyseSeries({

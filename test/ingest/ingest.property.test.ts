@@ -4,10 +4,10 @@ import {join} from 'node:path';
 import fc from 'fast-check';
 import {afterAll, describe, expect, it} from 'vitest';
 import {InputError} from '../../src/errors.js';
-import {ingest} from '../../src/ingest/index.js';
+
 import type {Dataset} from '../../src/ingest/index.js';
 import type {Frequency} from '../../src/time/period.js';
-import {plan, series, source} from './plan.js';
+import {plan, readPack, series, source} from './plan.js';
 
 const temp = mkdtempSync(join(tmpdir(), 'ebbflow-ingest-prop-'));
 afterAll(() => rmSync(temp, {recursive: true, force: true}));
@@ -48,7 +48,7 @@ describe('ingest on random wide CSV text', () => {
           const src = source('s', file, {decimal, encoding});
           const list = [series('a', 's'), series('b', 's')];
           const p = plan(frequency, [src], list, {period: frequency === 'monthly' ? period : null});
-          const outcome: Dataset | Error = await ingest(p).catch((e: Error) => e);
+          const outcome: Dataset | Error = await readPack(p).catch((e: Error) => e);
           if (outcome instanceof Error) expect(outcome).toBeInstanceOf(InputError);
           else for (const s of outcome.series) expect(s.start + s.values.length - 1).toBe(outcome.period);
         },

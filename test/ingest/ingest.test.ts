@@ -4,14 +4,14 @@ import {join} from 'node:path';
 import {afterAll, describe, expect, it} from 'vitest';
 import {InputError} from '../../src/errors.js';
 import type {Problem} from '../../src/errors.js';
-import {ingest} from '../../src/ingest/index.js';
+
 import type {Dataset} from '../../src/ingest/index.js';
 import type {Plan} from '../../src/config/plan.js';
 import {isoWeekIndex, monthIndex, quarterIndex} from '../../src/time/period.js';
-import {FIXTURES, fromSource, plan, series, source} from './plan.js';
+import {FIXTURES, fromSource, plan, readPack, series, source} from './plan.js';
 
 async function problemsOf(p: Plan): Promise<Problem[]> {
-  const error = await ingest(p).then(
+  const error = await readPack(p).then(
     () => undefined,
     (e: unknown) => e,
   );
@@ -34,7 +34,7 @@ const write = (name: string, text: string | Buffer): string => {
 describe('wide layout', () => {
   it('reads a UTF-8 file with BOM, CRLF, thousands separators and missing markers', async () => {
     const src = source('trading', 'wide-bom.csv');
-    const d = await ingest(plan('monthly', [src], ['net_sales', 'orders', 'margin'].map((c) => series(c, 'trading'))));
+    const d = await readPack(plan('monthly', [src], ['net_sales', 'orders', 'margin'].map((c) => series(c, 'trading'))));
     expect(d.period).toBe(monthIndex(2024, 6));
     expect(d.series.map((s) => s.start)).toEqual([monthIndex(2024, 1), monthIndex(2024, 1), monthIndex(2024, 1)]);
     expect(values(d, 'net_sales')).toEqual([1234.5, 1300, 1310.25, 1290, 1400, 2001000]);
@@ -60,7 +60,7 @@ describe('wide layout', () => {
   });
 
   it('reads every month format in one file', async () => {
-    const d = await ingest(plan('monthly', [source('s', 'date-formats.csv')], [series('sales', 's')]));
+    const d = await readPack(plan('monthly', [source('s', 'date-formats.csv')], [series('sales', 's')]));
     expect(d.series[0].start).toBe(monthIndex(2024, 1));
     expect(values(d, 'sales')).toEqual([1, 2, 3, 4, 5, 6, 7]);
   });
@@ -68,14 +68,14 @@ describe('wide layout', () => {
   it('semicolons and decimal commas, with space and point grouping', async () => {
     const src = source('de', 'semicolon-decimal-comma.csv', {dateColumn: 'Monat', decimal: ','});
     const list = [series('umsatz', 'de', {column: 'Umsatz'}), series('kosten', 'de', {column: 'Kosten'})];
-    const d = await ingest(plan('monthly', [src], list));
+    const d = await readPack(plan('monthly', [src], list));
     expect(values(d, 'umsatz')).toEqual([1234.5, 1300.75, 1400]);
     expect(values(d, 'kosten')).toEqual([10.25, -3.5, 12]);
   });
 
   it('tabs, ISO weeks and a date inside a week', async () => {
     const src = source('w', 'tab.tsv', {dateColumn: 'week'});
-    const d = await ingest(plan('weekly', [src], [series('visits', 'w')]));
+    const d = await readPack(plan('weekly', [src], [series('visits', 'w')]));
     // 2026-01-15 is in ISO week 2026-W03 (python3: datetime.date(2026,1,15).isocalendar() → (2026, 3, 4)).
     expect(d.series[0].start).toBe(isoWeekIndex(2026, 1));
     expect(d.period).toBe(isoWeekIndex(2026, 3));
@@ -93,20 +93,20 @@ describe('wide layout', () => {
 
   it('quarters in every label form and a date inside a quarter', async () => {
     const src = source('q', 'quarterly.csv', {dateColumn: 'quarter'});
-    const d = await ingest(plan('quarterly', [src], [series('sales', 'q')]));
+    const d = await readPack(plan('quarterly', [src], [series('sales', 'q')]));
     expect(d.series[0].start).toBe(quarterIndex(2024, 1));
     expect(values(d, 'sales')).toEqual([10, 11, 12, 13]);
   });
 
   it('keeps gaps as NaN and lists them', async () => {
-    const d = await ingest(plan('monthly', [source('s', 'gaps.csv')], [series('sales', 's')]));
+    const d = await readPack(plan('monthly', [source('s', 'gaps.csv')], [series('sales', 's')]));
     expect(values(d, 'sales')).toEqual([10, NaN, NaN, 13, 14, 15, NaN, 17]);
     expect(notes(d, 'sales')).toEqual(['sales: 3 missing months: 2024-02, 2024-03, 2024-07']);
   });
 
   it('sorts rows out of date order and notes it', async () => {
     const file = write('unsorted.csv', 'month,sales\n2024-03,3\n2024-01,1\n2024-02,2\n');
-    const d = await ingest(plan('monthly', [source('s', file)], [series('sales', 's')]));
+    const d = await readPack(plan('monthly', [source('s', file)], [series('sales', 's')]));
     expect(values(d, 'sales')).toEqual([1, 2, 3]);
     expect(d.notes[0]).toEqual({
       file,
@@ -120,7 +120,7 @@ describe('encodings', () => {
   it('windows-1252 with € (byte 0x80) and é in the header', async () => {
     const src = source('fr', 'windows-1252.csv', {dateColumn: 'mois', decimal: ',', encoding: 'windows-1252'});
     const list = [series('ca', 'fr', {column: "chiffre d'affaires (€)"}), series('act', 'fr', {column: 'activité'})];
-    const d = await ingest(plan('monthly', [src], list));
+    const d = await readPack(plan('monthly', [src], list));
     expect(values(d, 'ca')).toEqual([1000.5, 2000.25]);
     expect(values(d, 'act')).toEqual([1, 2]);
   });
@@ -162,7 +162,7 @@ describe('problems', () => {
         file: join(FIXTURES, 'duplicates.csv'),
         line: 5,
         column: 1,
-        message: '2024-02 appears twice, on lines 3 and 5; keep one row per period',
+        message: '2024-02 appears twice, on lines 3 and 5; keep one row per period, or set `aggregate` on the series to combine them',
       },
     ]);
   });
@@ -185,7 +185,7 @@ describe('problems', () => {
     );
     expect(problems[1].message).toMatch(/"€12" in column "sales" is not a number: remove the currency symbol/);
     expect(problems[2].message).toBe(
-      '"31/10/2024" in column "month" is not a date; write 2026-10 or a full date such as 2026-10-31',
+      '"31/10/2024" in column "month" is a day-first date; add `dateFormat: DD/MM/YYYY` to the source',
     );
     expect(problems[3].message).toMatch(/"5%" in column "costs" is not a number: write percentages as plain numbers/);
     expect(problems[4].message).toMatch(/"1,5" in column "sales" .*set `decimal: ","`/);
@@ -286,7 +286,7 @@ describe('review period', () => {
   ];
 
   it('defaults to the last period with data and pads series that end earlier', async () => {
-    const d = await ingest(plan('monthly', [src], list()));
+    const d = await readPack(plan('monthly', [src], list()));
     expect(d.period).toBe(monthIndex(2024, 8));
     expect(values(d, 'budget')).toEqual([9, 10, 11, 12, 13, 14, NaN, NaN]);
     expect(notes(d, 'budget')).toEqual([
@@ -296,7 +296,7 @@ describe('review period', () => {
   });
 
   it('truncates data after the review period (a back-filled pack sees only data up to it)', async () => {
-    const d = await ingest(plan('monthly', [src], list(), {period: monthIndex(2024, 6)}));
+    const d = await readPack(plan('monthly', [src], list(), {period: monthIndex(2024, 6)}));
     expect(d.period).toBe(monthIndex(2024, 6));
     expect(values(d, 'sales')).toEqual([10, 11, 12, 13, 14, 15]);
     expect(notes(d, 'sales')).toEqual([
@@ -307,7 +307,7 @@ describe('review period', () => {
   });
 
   it('hidden series do not set the default review period', async () => {
-    const d = await ingest(plan('monthly', [src], [series('sales', 'r', {hidden: true}), series('budget', 'r')]));
+    const d = await readPack(plan('monthly', [src], [series('sales', 'r', {hidden: true}), series('budget', 'r')]));
     expect(d.period).toBe(monthIndex(2024, 6));
     expect(values(d, 'sales')).toHaveLength(6);
   });
@@ -327,7 +327,7 @@ describe('long layout', () => {
   it('expands fromSource keys into series in first-seen order, at the pack position', async () => {
     const sales = source('s', 'gaps.csv');
     const p = plan('monthly', [sales, web], [series('sales', 's')], {fromSource: [fromSource('web', 0)]});
-    const d = await ingest(p);
+    const d = await readPack(p);
     expect(d.series.map((s) => s.id)).toEqual(['web-visits-uk', 'web-visits-de', 'sign-ups', 'sales']);
     expect(d.plans!.map((s) => [s.id, s.label, s.column, s.source])).toEqual([
       ['web-visits-uk', 'Web visits (UK)', 'Web visits (UK)', 'web'],
@@ -346,7 +346,7 @@ describe('long layout', () => {
   });
 
   it('explicit series name keys; a missing key suggests the nearest', async () => {
-    const d = await ingest(plan('monthly', [web], [series('uk', 'web', {column: 'Web visits (UK)'})]));
+    const d = await readPack(plan('monthly', [web], [series('uk', 'web', {column: 'Web visits (UK)'})]));
     expect(values(d, 'uk')).toEqual([100, 110, 120]);
     const problems = await problemsOf(plan('monthly', [web], [series('fr', 'web', {column: 'Web visit (UK)'})]));
     // The key is written in the pack, so the problem points at the series' pack line (10 in these test plans).
@@ -364,7 +364,7 @@ describe('long layout', () => {
     const src = source('l', 'long-duplicate.csv', long);
     const problems = await problemsOf(plan('monthly', [src], [series('visits', 'l')]));
     expect(problems.map((p) => [p.line, p.message])).toEqual([
-      [5, '"visits" has two rows for 2024-02, on lines 3 and 5; keep one row per period'],
+      [5, '"visits" has two rows for 2024-02, on lines 3 and 5; keep one row per period, or set `aggregate` on the series to combine them'],
     ]);
   });
 
@@ -385,7 +385,7 @@ describe('long layout', () => {
 describe('blank rows and keys', () => {
   it('rows of bare delimiters are skipped; a blank key in a long file is a problem', async () => {
     const wide = source('w', write('trailing.csv', 'month,sales\n2024-01,1\n2024-02,2\n,\n,\n'));
-    const d = await ingest(plan('monthly', [wide], [series('sales', 'w')]));
+    const d = await readPack(plan('monthly', [wide], [series('sales', 'w')]));
     expect(values(d, 'sales')).toEqual([1, 2]);
     const long = source('l', write('blank-key.csv', 'date,series,value\n2024-01,a,1\n2024-02, ,2\n'), {
       layout: 'long',

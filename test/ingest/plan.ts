@@ -2,6 +2,8 @@ import {dirname, join} from 'node:path';
 import {fileURLToPath} from 'node:url';
 import type {AnalysisOptions, FromSourcePlan, Plan, SeriesPlan, SourcePlan} from '../../src/config/plan.js';
 import type {Frequency} from '../../src/time/period.js';
+import {derive} from '../../src/derive/index.js';
+import {ingest, type Dataset} from '../../src/ingest/index.js';
 import {analysisOptions, planFixture, seriesPlanFixture} from '../fixtures/plans.js';
 
 export const FIXTURES = join(dirname(fileURLToPath(import.meta.url)), '..', 'fixtures', 'ingest');
@@ -21,6 +23,16 @@ export function source(id: string, file: string, more: Partial<SourcePlan> = {})
     decimal: '.',
     encoding: 'utf-8',
     line: 1,
+    reader: /\.xlsx$/i.test(file) ? 'xlsx' : 'csv',
+    headerRow: 1,
+    dateFormat: null,
+    timeZone: 'UTC',
+    emptyMeans: 'missing',
+    sheet: null,
+    query: null,
+    connectionEnv: null,
+    timeoutSeconds: 60,
+    readFolders: [],
     ...more,
   };
 }
@@ -36,4 +48,9 @@ export function fromSource(sourceId: string, position: number): FromSourcePlan {
 
 export function plan(frequency: Frequency, sources: SourcePlan[], list: SeriesPlan[], more: Partial<Plan> = {}): Plan {
   return planFixture({packFile: join(FIXTURES, 'pack.yaml'), id: 'test', title: 'Test', frequency, sources, series: list, ...more});
+}
+
+/** Ingest and derive, as a build runs them: the plan's sources read into series. */
+export async function readPack(p: Plan): Promise<Dataset> {
+  return derive(p, await ingest(p));
 }

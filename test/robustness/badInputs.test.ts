@@ -2,7 +2,9 @@ import {mkdtemp, readdir, readFile, rm} from 'node:fs/promises';
 import {tmpdir} from 'node:os';
 import path from 'node:path';
 import {fileURLToPath} from 'node:url';
-import {afterEach, beforeEach, describe, expect, test} from 'vitest';
+import {createServer} from 'node:net';
+import {afterAll, afterEach, beforeAll, beforeEach, describe, expect, test} from 'vitest';
+import {startCluster, type Cluster} from '../helpers/postgresCluster.js';
 import {CRASH_TEXT, runCli} from './run.js';
 
 /**
@@ -16,13 +18,44 @@ interface BadCase {
   pack: string;
   /** Regular expressions, each matched against one stderr line. */
   expect: string[];
-  /** Regular expressions no stderr line may match (misleading follow-on problems). */
+  /** Regular expressions no stderr line may match (misleading follow-on problems, leaked passwords). */
   reject?: string[];
   why: string;
+  /**
+   * Environment variables set for the run; `{closedPort}` becomes a port nothing listens on, `{clusterPort}` the
+   * port of a throwaway PostgreSQL server (test/helpers/postgresCluster.ts), started when a case sets `postgres`.
+   */
+  env?: Record<string, string>;
+  postgres?: boolean;
 }
 
 const fixtures = fileURLToPath(new URL('../fixtures/bad/', import.meta.url));
 const cases: BadCase[] = JSON.parse(await readFile(path.join(fixtures, 'cases.json'), 'utf8'));
+
+let cluster: Cluster | undefined;
+let closedPort = 0;
+beforeAll(async () => {
+  closedPort = await new Promise<number>((resolve) => {
+    const server = createServer().listen(0, '127.0.0.1', () => {
+      const {port} = server.address() as {port: number};
+      server.close(() => resolve(port));
+    });
+  });
+  if (cases.some((c) => c.postgres)) cluster = await startCluster();
+});
+afterAll(() => cluster?.stop());
+
+/** Set a case's environment variables for the length of `run`. */
+async function withEnv<T>(env: Record<string, string> | undefined, run: () => Promise<T>): Promise<T> {
+  const names = Object.keys(env ?? {});
+  for (const name of names)
+    process.env[name] = env![name].replace('{closedPort}', String(closedPort)).replace('{clusterPort}', String(cluster?.port));
+  try {
+    return await run();
+  } finally {
+    for (const name of names) delete process.env[name];
+  }
+}
 
 let out = '';
 beforeEach(async () => {
@@ -63,12 +96,12 @@ test('the control pack the cases derive from is valid', async () => {
   expect(run.code).toBe(0);
 });
 
-describe.each(cases)('$name', ({pack, expect: expected, reject}) => {
+describe.each(cases)('$name', ({pack, expect: expected, reject, env}) => {
   const packFile = path.join(fixtures, pack);
 
   test('check: exit 2 with file:line problems', async () => {
     const before = await readdir(path.dirname(packFile));
-    const run = await runCli(['check', packFile]);
+    const run = await withEnv(env, () => runCli(['check', packFile]));
     expectProblems(run.stderr, expected, reject);
     expect(run.stdout).toBe('');
     expect(run.code).toBe(2);
@@ -77,7 +110,7 @@ describe.each(cases)('$name', ({pack, expect: expected, reject}) => {
 
   test('build: exit 2, same problems, nothing written', async () => {
     const before = await readdir(path.dirname(packFile));
-    const run = await runCli(['build', packFile, '--out', out, '--jobs', '1']);
+    const run = await withEnv(env, () => runCli(['build', packFile, '--out', out, '--jobs', '1']));
     expectProblems(run.stderr, expected, reject);
     expect(run.stdout).toBe('');
     expect(run.code).toBe(2);

@@ -1,6 +1,8 @@
 import {describe, expect, it} from 'vitest';
 import {execFileSync} from 'node:child_process';
-import {copyFileSync, mkdtempSync, readFileSync, rmSync} from 'node:fs';
+import {mkdtempSync, readFileSync, rmSync} from 'node:fs';
+import {DuckDBInstance} from '@duckdb/node-api';
+import ExcelJS from 'exceljs';
 import {tmpdir} from 'node:os';
 import {join, resolve} from 'node:path';
 import {parse} from 'csv-parse/sync';
@@ -10,17 +12,42 @@ const dir = resolve(import.meta.dirname, '../../sample-config');
 const read = (name: string) => readFileSync(join(dir, 'data', name), 'utf8');
 
 describe('sample-config generator', () => {
-  it('is deterministic and the committed CSVs are its output', () => {
+  it('is deterministic and the committed CSVs, Parquet file and workbook cells are its output', async () => {
     const tmp = mkdtempSync(join(tmpdir(), 'ebbflow-sample-'));
     try {
-      copyFileSync(join(dir, 'generate.mjs'), join(tmp, 'generate.mjs'));
-      execFileSync(process.execPath, [join(tmp, 'generate.mjs')]);
+      execFileSync(process.execPath, [join(dir, 'generate.mjs'), join(tmp, 'data')]);
       for (const name of ['trading.csv', 'web.csv', 'quarterly.csv']) {
         expect(readFileSync(join(tmp, 'data', name), 'utf8'), name).toBe(read(name));
       }
+      expect(readFileSync(join(tmp, 'data', 'repairs.parquet')).equals(readFileSync(join(dir, 'data', 'repairs.parquet')))).toBe(true);
+      // exceljs stamps zip entries with the time of writing: compare the cells, not the bytes.
+      const cells = async (file: string) => {
+        const book = new ExcelJS.Workbook();
+        await book.xlsx.readFile(file);
+        return book.worksheets.map((w) => w.getSheetValues());
+      };
+      expect(await cells(join(tmp, 'data', 'budget.xlsx'))).toEqual(await cells(join(dir, 'data', 'budget.xlsx')));
     } finally {
       rmSync(tmp, {recursive: true, force: true});
     }
+  });
+
+  it('writes the budget workbook with the CSV budget column, and the repair job log as Parquet', async () => {
+    const book = new ExcelJS.Workbook();
+    await book.xlsx.readFile(join(dir, 'data', 'budget.xlsx'));
+    const sheet = book.getWorksheet('Budget')!;
+    expect(sheet.getRow(3).values).toEqual([undefined, 'Month', 'Sales budget']);
+    const rows = parse(read('trading.csv'), {columns: true}) as Record<string, string>[];
+    const budget = rows.map((r, i) => [sheet.getCell(4 + i, 1).value, sheet.getCell(4 + i, 2).value]);
+    expect(budget.map(([d]) => (d as Date).toISOString().slice(0, 7))).toEqual(rows.map((r) => r.month));
+    expect(budget.map(([, v]) => v)).toEqual(rows.map((r) => Number(r.sales_budget)));
+    const db = await (await DuckDBInstance.create(':memory:')).connect();
+    const file = join(dir, 'data', 'repairs.parquet').replace(/'/g, "''");
+    const reader = await db.runAndReadAll(`SELECT min(done_at)::VARCHAR, max(done_at)::VARCHAR, count(*)::INTEGER FROM read_parquet('${file}')`);
+    const [[first, last, count]] = reader.getRows();
+    db.closeSync();
+    expect([first, last]).toEqual([expect.stringMatching(/^2017-12-01 /), expect.stringMatching(/^2026-10-31 /)]);
+    expect(count).toBeGreaterThan(30_000);
   });
 
   it('writes monthly trading data Jan 2018 – Oct 2026, the budget to Mar 2027, and the planted gaps', () => {
@@ -77,7 +104,7 @@ describe('sample packs', () => {
     expect(plan.series.map((s) => s.id)).toEqual([
       'net-sales', 'sales-north', 'sales-lakes', 'sales-coast', 'shop-sales', 'web-sales', 'cogs', 'gross-margin',
       'transactions', 'footfall', 'avg-basket', 'returns-rate', 'payroll', 'inventory', 'marketing', 'sales-budget',
-      'payroll-budget', 'marketing-budget',
+      'payroll-budget', 'marketing-budget', 'repair-income', 'repair-jobs',
     ]);
     expect(plan.series.find((s) => s.id === 'gross-margin')!.formula!.text).toBe('100 * (net-sales - cogs) / net-sales');
     expect(plan.groups.filter((g) => g.total !== null).map((g) => [g.id, g.total, g.adjustTotal])).toEqual([
@@ -85,6 +112,11 @@ describe('sample packs', () => {
       ['regions', 'shop-sales', 'indirect'],
     ]);
     expect(plan.series.find((s) => s.id === 'payroll')).toMatchObject({target: 'payroll-budget', better: 'lower'});
+    // The sales budget comes from the workbook, the repairs from the Parquet job log through DuckDB.
+    expect(plan.sources.map((s) => [s.id, s.reader])).toEqual([
+      ['trading', 'csv'], ['web', 'csv'], ['budget', 'xlsx'], ['repairs', 'duckdb'],
+    ]);
+    expect(plan.series.filter((s) => s.source === 'repairs').map((s) => s.aggregate)).toEqual(['sum', 'count']);
     // The `fromSource: web` entry is expanded by ingest into web-sessions and web-orders.
     expect((plan as unknown as {fromSource: {source: string}[]}).fromSource.map((f) => f.source)).toEqual(['web']);
     expect(plan.series.find((s) => s.id === 'sales-budget')!.hidden).toBe(true);

@@ -1,5 +1,14 @@
 import {describe, expect, it} from 'vitest';
-import {labelFrequency, parseDateCell, readDateCell} from '../../src/time/parseDate.js';
+import {DATE_FORMAT, dayMonthOrder, labelFrequency, readDateCell, type DateReading} from '../../src/time/parseDate.js';
+import {monthNames} from '../../src/time/monthNames.js';
+import {stampOf} from '../../src/time/stamp.js';
+import type {Frequency} from '../../src/time/period.js';
+
+/** The pack period a date cell falls in (UTC), or undefined. */
+const parseDateCell = (text: string, frequency: Frequency, reading?: DateReading): number | undefined => {
+  const cell = readDateCell(text, reading);
+  return cell === undefined ? undefined : stampOf(cell, frequency, 'UTC')?.period;
+};
 import {isoWeekIndex, monthIndex, quarterIndex} from '../../src/time/period.js';
 
 describe('parseDateCell, monthly', () => {
@@ -22,9 +31,12 @@ describe('parseDateCell, monthly', () => {
     expect(parseDateCell('2024-02-29', 'monthly')).toBe(monthIndex(2024, 2));
     expect(parseDateCell('2100-02-29', 'monthly')).toBeUndefined(); // 2100 is not a leap year (Gregorian rule)
   });
-  it('quarter and week labels are not months', () => {
+  it('a quarter label is not a month; an ISO week falls in the month of its Thursday (ISO 8601 year rule)', () => {
     expect(parseDateCell('2026-Q3', 'monthly')).toBeUndefined();
-    expect(parseDateCell('2026-W41', 'monthly')).toBeUndefined();
+    // 2026-W41 runs Mon 5 Oct to Sun 11 Oct 2026; 2026-W01 runs Mon 29 Dec 2025 to Sun 4 Jan 2026 (Thursday 1 Jan).
+    expect(parseDateCell('2026-W41', 'monthly')).toBe(monthIndex(2026, 10));
+    expect(parseDateCell('2026-W01', 'monthly')).toBe(monthIndex(2026, 1));
+    expect(parseDateCell('2026-W01', 'quarterly')).toBe(quarterIndex(2026, 1));
   });
 });
 
@@ -39,8 +51,11 @@ describe('parseDateCell, quarterly', () => {
     expect(parseDateCell('2026-10-01', 'quarterly')).toBe(quarterIndex(2026, 4));
     expect(parseDateCell('2026-01-01', 'quarterly')).toBe(quarterIndex(2026, 1));
   });
-  it.each(['2026-Q5', '2026-Q0', '2026-10', 'Oct 2026', '2026-W41'])('%s is not a quarter', (text) =>
+  it.each(['2026-Q5', '2026-Q0'])('%s is not a quarter', (text) =>
     expect(parseDateCell(text, 'quarterly')).toBeUndefined(),
+  );
+  it.each(['2026-10', 'Oct 2026', '2026-W41'])('%s is a finer period inside 2026 Q4', (text) =>
+    expect(parseDateCell(text, 'quarterly')).toBe(quarterIndex(2026, 4)),
   );
 });
 
@@ -64,7 +79,7 @@ describe('parseDateCell, weekly', () => {
 describe('readDateCell and labelFrequency', () => {
   it('says what a cell names', () => {
     expect(readDateCell('Q3 2026')).toEqual({kind: 'quarter', year: 2026, quarter: 3});
-    expect(readDateCell('2026-10-31')).toEqual({kind: 'day', year: 2026, month: 10, day: 31});
+    expect(readDateCell('2026-10-31')).toEqual({kind: 'day', year: 2026, month: 10, day: 31, ms: 0, offset: null});
     expect(readDateCell('2026W41')).toEqual({kind: 'week', year: 2026, week: 41});
     expect(readDateCell('October 2026')).toEqual({kind: 'month', year: 2026, month: 10});
   });
@@ -74,5 +89,51 @@ describe('readDateCell and labelFrequency', () => {
     expect(labelFrequency('2026-W41')).toBe('weekly');
     expect(labelFrequency('2026-10-31')).toBeUndefined();
     expect(labelFrequency('nonsense')).toBeUndefined();
+  });
+});
+
+describe('dates as exports write them', () => {
+  const months = (locale: string): DateReading => ({dateFormat: null, months: monthNames(locale)});
+  it('day-first and month-first dates need dateFormat, and say which one', () => {
+    expect(readDateCell('01/10/2026')).toBeUndefined();
+    expect(dayMonthOrder('01/10/2026')).toBe('ambiguous');
+    expect(dayMonthOrder('31/10/2026')).toBe('DD/MM/YYYY');
+    expect(dayMonthOrder('10/31/2026')).toBe('MM/DD/YYYY');
+    expect(dayMonthOrder('31.10.2026')).toBe('DD.MM.YYYY');
+    const dmy = {dateFormat: 'DD/MM/YYYY', months: new Map()};
+    const mdy = {dateFormat: 'MM/DD/YYYY', months: new Map()};
+    expect(parseDateCell('01/10/2026', 'monthly', dmy)).toBe(monthIndex(2026, 10));
+    expect(parseDateCell('01/10/2026', 'monthly', mdy)).toBe(monthIndex(2026, 1));
+    expect(parseDateCell('31.10.2026 23:59:59', 'monthly', {dateFormat: 'DD.MM.YYYY', months: new Map()})).toBe(
+      monthIndex(2026, 10),
+    );
+    expect(parseDateCell('31/02/2026', 'monthly', dmy)).toBeUndefined();
+    expect(DATE_FORMAT.test('DD/MM/YYYY HH:mm:ss')).toBe(true);
+    expect(DATE_FORMAT.test('DD/MM.YYYY')).toBe(false);
+  });
+  it('month names of the pack locale, as Intl.DateTimeFormat writes them (Node 20 ICU)', () => {
+    expect(parseDateCell('Okt 2026', 'monthly', months('de-DE'))).toBe(monthIndex(2026, 10));
+    expect(parseDateCell('März 2026', 'monthly', months('de-DE'))).toBe(monthIndex(2026, 3));
+    expect(parseDateCell('janv. 2026', 'monthly', months('fr-FR'))).toBe(monthIndex(2026, 1));
+    expect(parseDateCell('février 2026', 'monthly', months('fr-FR'))).toBe(monthIndex(2026, 2));
+    expect(parseDateCell('Okt 2026', 'monthly', months('en-GB'))).toBeUndefined();
+    // English names are read whatever the locale.
+    expect(parseDateCell('Oct 2026', 'monthly', months('de-DE'))).toBe(monthIndex(2026, 10));
+  });
+  it('timestamps with times and ISO 8601 offsets take the date in the source time zone', () => {
+    const at = (text: string, zone: string) => stampOf(readDateCell(text)!, 'monthly', zone)!;
+    expect(readDateCell('2015/01/01 01:00:00')).toEqual({kind: 'day', year: 2015, month: 1, day: 1, ms: 3_600_000, offset: null});
+    // 23:30 at UTC-4 is 03:30 UTC the next day: November in UTC, still October in New York (EDT, UTC-4, until
+    // 1 November 2026); at UTC-5 it is 00:30 EDT on 1 November.
+    expect(at('2026-10-31T23:30:00-04:00', 'UTC').period).toBe(monthIndex(2026, 11));
+    expect(at('2026-10-31T23:30:00-04:00', 'America/New_York').period).toBe(monthIndex(2026, 10));
+    expect(at('2026-10-31T23:30:00-05:00', 'America/New_York').period).toBe(monthIndex(2026, 11));
+    // 23:30 UTC on 31 October is 00:30 on 1 November in Berlin (CET, UTC+1, after the 25 October change).
+    expect(at('2026-10-31T23:30:00Z', 'Europe/Berlin').period).toBe(monthIndex(2026, 11));
+    expect(at('2026-06-30T22:30:00+00:00', 'Europe/Berlin').period).toBe(monthIndex(2026, 7));
+    // A timestamp without offset is the local time as written, whatever the zone.
+    expect(at('2026-10-31T23:30:00', 'Europe/Berlin').period).toBe(monthIndex(2026, 10));
+    expect(readDateCell('2026-10-31T24:00:00')).toBeUndefined();
+    expect(readDateCell('2026-10-31 10:00:00+0530')).toMatchObject({offset: 330});
   });
 });

@@ -8,7 +8,10 @@ const CUT = 2 * Math.log(100);
  * margin). Measured on the seasonal fits of 100 M3 monthly series and 60 series of the scale benchmark
  * (test/bench/scale.ts data): the largest fall from 250, 500, 750, 1000 and 1500 evaluations to the end of
  * the search was 284 / 126 / 100 / 82 / 36 (M3) and 113 / 64 / 58 / 51 / 30 (scale); the 99th percentiles
- * 187 / 67 / 38 / 22 / 8. With these margins no model that ended with a weight of at least 1% was given up.
+ * 187 / 67 / 38 / 22 / 8 (M3). The margins are those falls with room to spare: an empirical rule, not a bound.
+ * With them the screened selection kept the same models with the same weights as the full one on 159 M3 monthly
+ * series, 60 scale-benchmark series and the seasonal series of test/reference/ets.json (etsScreen.test.ts), and
+ * the M3 figures of `auto` did not move (npm run bench:m3).
  */
 const CHECKPOINTS = [250, 500, 750, 1000, 1500];
 const MARGINS = [350, 180, 120, 100, 50];

@@ -1,7 +1,9 @@
 import {formatPeriod} from '../time/period.js';
 import type {Frequency} from '../time/period.js';
-import * as msg from './messages.js';
-import type {PeriodStore} from './periodStore.js';
+import * as msg from '../ingest/messages.js';
+
+/** Values by period index (NaN where there is none). */
+export type PeriodValues = (period: number) => number;
 
 /** A series placed on the calendar, or why it could not be. */
 export type Placement =
@@ -22,7 +24,7 @@ export type Placement =
  */
 export function placeSeries(
   id: string,
-  store: PeriodStore,
+  store: PeriodValues,
   range: {first: number; last: number},
   period: number,
   frequency: Frequency,
@@ -34,17 +36,17 @@ export function placeSeries(
   const missing: string[] = [];
   const end = Math.min(range.last, period);
   for (let p = range.first; p <= period; p++) {
-    const v = store.get(p);
+    const v = store(p);
     values[p - range.first] = v;
     if (Number.isNaN(v) && p <= end) missing.push(label(p));
   }
   const notes: string[] = [];
   if (missing.length > 0) notes.push(msg.gaps(frequency, missing));
   const ahead = new Float64Array(keepAhead ? Math.max(0, range.last - period) : 0);
-  for (let k = 0; k < ahead.length; k++) ahead[k] = store.get(period + 1 + k);
+  for (let k = 0; k < ahead.length; k++) ahead[k] = store(period + 1 + k);
   if (range.last > period && !keepAhead) {
     let after = 0;
-    for (let p = period + 1; p <= range.last; p++) if (!Number.isNaN(store.get(p))) after++;
+    for (let p = period + 1; p <= range.last; p++) if (!Number.isNaN(store(p))) after++;
     notes.push(msg.truncated(frequency, after, label(period), label(period + 1), label(range.last)));
   } else if (range.last < period) {
     notes.push(msg.padded(frequency, label(range.last), period - range.last, label(period)));

@@ -1,0 +1,44 @@
+import {periodLabel, periodStartDay, type Frequency} from '../time/period.js';
+import * as msg from '../ingest/messages.js';
+
+/** Periods of a source that its rows cover whole, and a note for each end period that is cut. */
+export interface Coverage {
+  first: number;
+  last: number;
+  notes: string[];
+}
+
+/**
+ * Which periods a source finer than the pack covers whole. Rows cover the days from `span.from` to `span.to`
+ * (a daily row one day, a weekly row seven); the first period with rows is incomplete when the span starts after
+ * its first day, the last when the span ends before its last day (daily data up to 12 December: December has
+ * 12 of 31 days). Such a period is left out: it would be analysed as if it were whole (a December of 12 days
+ * reads as a slump).
+ *
+ * `periods` are the first and last period any row fell in (for ISO weeks in months, the month of the week's
+ * Thursday, so a week that starts in the month before still covers its month's first days).
+ *
+ * Complexity: O(1).
+ */
+export function completePeriods(
+  span: {from: number; to: number},
+  periods: {first: number; last: number},
+  frequency: Frequency,
+): Coverage {
+  let {first, last} = periods;
+  const notes: string[] = [];
+  const start = periodStartDay(frequency, first);
+  const length = (p: number) => periodStartDay(frequency, p + 1) - periodStartDay(frequency, p);
+  if (span.from > start) {
+    const days = periodStartDay(frequency, first + 1) - span.from;
+    notes.push(msg.incomplete(periodLabel(frequency, first), days, length(first), 'start'));
+    first++;
+  }
+  const end = periodStartDay(frequency, last + 1) - 1;
+  if (span.to < end && last >= first) {
+    const days = span.to - periodStartDay(frequency, last) + 1;
+    notes.push(msg.incomplete(periodLabel(frequency, last), days, length(last), 'end'));
+    last--;
+  }
+  return {first, last, notes};
+}

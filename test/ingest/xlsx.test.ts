@@ -1,0 +1,93 @@
+import {mkdtempSync, rmSync} from 'node:fs';
+import {tmpdir} from 'node:os';
+import {join} from 'node:path';
+import ExcelJS from 'exceljs';
+import {afterAll, describe, expect, it} from 'vitest';
+import type {Plan} from '../../src/config/plan.js';
+import {InputError, type Problem} from '../../src/errors.js';
+import {monthIndex} from '../../src/time/period.js';
+import {FIXTURES, fromSource, plan, readPack, series, source} from './plan.js';
+
+/**
+ * Workbooks written by a second, independent writer: test/reference/xlsx.py (openpyxl, version in
+ * test/fixtures/ingest/openpyxl.json) writes the same data as two workbooks (1900 and 1904 date systems) and as CSV.
+ * Read through ingest and derive, the workbooks must give exactly the CSV's values.
+ */
+const temp = mkdtempSync(join(tmpdir(), 'ebbflow-xlsx-'));
+afterAll(() => rmSync(temp, {recursive: true, force: true}));
+async function problemsOf(p: Plan): Promise<Problem[]> {
+  const error = await readPack(p).then(
+    () => undefined,
+    (e: unknown) => e,
+  );
+  expect(error).toBeInstanceOf(InputError);
+  return (error as InputError).problems;
+}
+const wide = (file: string, more = {}) =>
+  plan('monthly', [source('b', file, {dateColumn: 'Month', ...more})], [series('budget', 'b', {column: 'Budget'}), series('stock', 'b', {column: 'Stock', kind: 'stock'})]);
+const long = (file: string, more = {}) =>
+  plan('monthly', [source('l', file, {layout: 'long', dateColumn: 'at', keyColumn: 'shop', valueColumn: 'amount', ...more})], [], {
+    fromSource: [fromSource('l', 0)],
+  });
+const values = (d: Awaited<ReturnType<typeof readPack>>) => d.series.map((s) => [s.id, s.start, [...s.values]]);
+
+describe('XLSX sources written by openpyxl', () => {
+  it.each(['openpyxl-1900.xlsx', 'openpyxl-1904.xlsx'])('%s, sheet Budget from header row 3, equals the CSV', async (name) => {
+    const fromCsv = await readPack(wide('openpyxl.csv'));
+    const fromXlsx = await readPack(wide(name, {sheet: 'Budget', headerRow: 3}));
+    expect(fromXlsx.series[0].start).toBe(monthIndex(2024, 1));
+    expect(values(fromXlsx)).toEqual(values(fromCsv));
+    expect(fromXlsx.inputs[0]).toMatchObject({file: join(FIXTURES, name), rows: 30});
+  });
+
+  it.each(['openpyxl-1900.xlsx', 'openpyxl-1904.xlsx'])('%s, long sheet of timestamps aggregated to months, equals the CSV', async (name) => {
+    const fromCsv = await readPack(long('openpyxl-long.csv'));
+    const fromXlsx = await readPack(long(name, {sheet: 'Long'}));
+    expect(values(fromXlsx)).toEqual(values(fromCsv));
+    // 75 days from 1 January 2024: January and February whole, March (to 15 March) left out.
+    expect(fromXlsx.series.map((s) => s.values.length)).toEqual([2, 2]);
+  });
+});
+
+describe('XLSX problems at file.xlsx:Sheet!B12', () => {
+  it('a missing sheet lists the sheets; an empty header row names headerRow', async () => {
+    const p1 = await problemsOf(wide('openpyxl-1900.xlsx', {sheet: 'budget'}));
+    expect(p1[0].message).toBe('the workbook has no sheet "budget" (did you mean "Budget"?); the sheets are: "Budget", "Long"');
+    const p2 = await problemsOf(wide('openpyxl-1900.xlsx', {sheet: 'Budget', headerRow: 40}));
+    expect(p2[0].message).toMatch(/headerRow is 40 but the data has only 33 lines/);
+  });
+
+  it('formula cells through their cached results; one without a result is a problem at its cell', async () => {
+    const wb = new ExcelJS.Workbook();
+    const ws = wb.addWorksheet('Plan');
+    ws.addRow(['Month', 'Budget']);
+    ws.addRow([new Date(Date.UTC(2026, 0, 1)), 10]);
+    ws.addRow([new Date(Date.UTC(2026, 1, 1)), {formula: 'B2*2', result: 20}]);
+    ws.addRow([new Date(Date.UTC(2026, 2, 1)), {formula: 'B3+1', result: 21}]);
+    const good = join(temp, 'formulas.xlsx');
+    await wb.xlsx.writeFile(good);
+    const d = await readPack(plan('monthly', [source('p', good, {dateColumn: 'Month'})], [series('budget', 'p', {column: 'Budget'})]));
+    expect([...d.series[0].values]).toEqual([10, 20, 21]);
+    ws.getCell('B4').value = {formula: 'B3+1'} as ExcelJS.CellFormulaValue;
+    ws.getCell('B3').value = {error: '#DIV/0!'} as ExcelJS.CellErrorValue;
+    const bad = join(temp, 'uncalculated.xlsx');
+    await wb.xlsx.writeFile(bad);
+    const problems = await problemsOf(plan('monthly', [source('p', bad, {dateColumn: 'Month'})], [series('budget', 'p', {column: 'Budget'})]));
+    expect(problems.map((p) => [p.file.replace(temp, ''), p.line, p.message.slice(0, 40)])).toEqual([
+      ['/uncalculated.xlsx:Plan!B3', null, 'the cell holds the error #DIV/0!; fix th'],
+      ['/uncalculated.xlsx:Plan!B4', null, 'the formula =B3+1 has no stored result ('],
+    ]);
+  });
+
+  it('a bad number points at its cell', async () => {
+    const wb = new ExcelJS.Workbook();
+    const ws = wb.addWorksheet('Plan');
+    ws.addRow(['Month', 'Budget']);
+    ws.addRow(['2026-01', 'ten']);
+    const file = join(temp, 'text.xlsx');
+    await wb.xlsx.writeFile(file);
+    const problems = await problemsOf(plan('monthly', [source('p', file, {dateColumn: 'Month'})], [series('budget', 'p', {column: 'Budget'})]));
+    expect(problems[0].file).toBe(`${file}:Plan!B2`);
+    expect(problems[0].message).toMatch(/^"ten" in column "Budget" is not a number/);
+  });
+});
