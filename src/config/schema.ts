@@ -172,6 +172,7 @@ const seriesEntry = z.strictObject({
   target: optionalText,
   better: better.nullish(),
   hidden: z.boolean().nullish(),
+  aggregate: aggregate.nullish(),
   ...analysisShape,
 });
 
@@ -185,7 +186,6 @@ const formulaEntry = z.strictObject({
   target: optionalText,
   better: better.nullish(),
   hidden: z.boolean().nullish(),
-  aggregate: aggregate.nullish(),
   ...analysisShape,
 });
 
