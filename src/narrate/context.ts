@@ -45,13 +45,9 @@ export interface Rule {
 }
 
 /** Chart anchor ids in the HTML report: `chart-<series>-<part>`. */
-export type ChartPart = 'overview' | 'seasonal' | 'yoy' | 'irregular' | 'forecast' | 'cycle';
+export type ChartPart = 'overview' | 'seasonal' | 'yoy' | 'irregular' | 'forecast' | 'cycle' | 'contributions';
 
 export function chartId(seriesId: string, part: ChartPart): string {
   return `chart-${seriesId}-${part}`;
 }
 
-/** Anchor id of a group's contributions chart: `chart-group-<group>-contributions`. */
-export function groupChartId(groupId: string): string {
-  return `chart-group-${groupId}-contributions`;
-}

@@ -1,4 +1,4 @@
-import {groupChartId, type Rule} from '../context.js';
+import {chartId, type Rule} from '../context.js';
 import * as say from '../wording.js';
 
 /** Contributions smaller than this many percentage points are not named as drivers (common practice: 0.05). */
@@ -38,7 +38,7 @@ export const driversRule: Rule = {
               },
             }),
             figures: {total, [driver.id]: driver.points, ...(against ? {[against.id]: against.points} : {})},
-            chart: groupChartId(g.id),
+            chart: chartId(s.id, 'contributions'),
             magnitude: Math.min(10, Math.abs(total) / 2),
             periodsAgo: 0,
           },

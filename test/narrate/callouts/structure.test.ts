@@ -38,7 +38,7 @@ describe('drivers', () => {
     expect(drafts.map((d) => d.text)).toEqual([
       'Net sales rose 2.7% on a year earlier in October 2026, driven by the North, +3.1 pp; Web subtracted 0.8%.',
     ]);
-    expect(drafts[0].chart).toBe('chart-group-regions-contributions');
+    expect(drafts[0].chart).toBe('chart-net-sales-contributions');
   });
   it('reads a fall the other way round, and says nothing without a driver', () => {
     expect(mainDrivers(-2, {a: -1.5, b: 0.3, c: -1.5})).toEqual({
