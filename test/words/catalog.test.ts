@@ -53,7 +53,7 @@ describe('message catalogues', () => {
       'cycle.hp', 'cycle.bandpass', 'label.logo', 'label.trend', 'label.cycle', 'label.modelCell', 'chart.titleOf',
       'summary.forecast', 'summary.forecastNoRange', 'describe.flagged', 'para.sentence', 'para.unusualItem',
       'open.surpriseItem', 'forecast.benchmark', 'callout.outturnEnd', 'callout.trendRate', 'note.ofSeries',
-      'severity.info', 'label.page', 'label.series', 'label.period', 'label.forecastCaption',
+      'severity.info', 'label.page', 'label.series', 'label.period', 'label.forecastCaption', 'variance.keyFigure',
     ]);
     const untranslated = keys.filter((k) => !same.has(k) && catalog[k] === en[k as keyof typeof en]);
     expect(untranslated).toEqual([]);

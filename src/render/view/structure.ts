@@ -92,7 +92,7 @@ export function structureParagraphs(report: Report, w: Words): string[] {
           shown: g.adjustTotal,
           detected: rs.detected ? 'yes' : 'no',
           statistic: w.number(rs.statistic, 2),
-          p: w.pValue(rs.pValue),
+          p: w.number(rs.pValue, 3),
           difference: w.share(g.indirect.largestDifference.percent, 2),
           at: at ? w.t('methods.structureAt', {period: at}) : '',
         }),

@@ -491,7 +491,7 @@ export const de: Catalog = {
   'variance.favourable': "{favourable, select, yes {günstig} other {ungünstig}}",
   'variance.keyFigure': '{period} / {yearToDate}',
   'label.againstTarget': 'Gegenüber Plan, {period} / Geschäftsjahr bis heute',
-  'methods.structureIndirect': "{total} ({group}): Der Bericht zeigt die {shown, select, direct {direkte} other {indirekte}} Saisonbereinigung der Summe. Die Summe der saisonbereinigten Teile (indirekte Bereinigung) weist {detected, select, yes {eine Restsaisonalität auf, die der Test erkennt} other {keine Restsaisonalität auf, die der Test erkennt}} (F {statistic}, {p}); die größte Abweichung von der direkten Bereinigung beträgt {difference}{at}.",
+  'methods.structureIndirect': "{total} ({group}): Der Bericht zeigt die {shown, select, direct {direkte} other {indirekte}} Saisonbereinigung der Summe. Die Summe der saisonbereinigten Teile (indirekte Bereinigung) weist {detected, select, yes {eine Restsaisonalität auf, die der Test erkennt} other {keine Restsaisonalität auf, die der Test erkennt}} (F {statistic}, p-Wert {p}); die größte Abweichung von der direkten Bereinigung beträgt {difference}{at}.",
   'methods.structureAt': " für {period}",
   'methods.structureGap': "{total} ({group}): Die Teile ergeben in {n, plural, one {# Periode} other {# Perioden}} nicht die Summe; die größte Lücke beträgt {gap} ({percent}) für {period}.",
   'methods.structureReconciled': "Die Prognosen von {group} sind abgestimmt ({method}), sodass die Teile in jedem Horizont die Summe ergeben; die Basisprognosen stehen in results.json.{scores}",

@@ -490,7 +490,7 @@ export const en = {
   'variance.favourable': "{favourable, select, yes {favourable} other {unfavourable}}",
   'variance.keyFigure': '{period} / {yearToDate}',
   'label.againstTarget': 'Against target, {period} / fiscal year to date',
-  'methods.structureIndirect': "{total} ({group}): the report shows the {shown, select, direct {direct} other {indirect}} seasonal adjustment of the total. Adding up the adjusted parts (indirect adjustment) leaves {detected, select, yes {seasonality that the test detects} other {no seasonality that the test detects}} (F {statistic}, {p}); the largest difference from the direct adjustment is {difference}{at}.",
+  'methods.structureIndirect': "{total} ({group}): the report shows the {shown, select, direct {direct} other {indirect}} seasonal adjustment of the total. Adding up the adjusted parts (indirect adjustment) leaves {detected, select, yes {seasonality that the test detects} other {no seasonality that the test detects}} (F {statistic}, p value {p}); the largest difference from the direct adjustment is {difference}{at}.",
   'methods.structureAt': " in {period}",
   'methods.structureGap': "{total} ({group}): the parts do not add up to the total in {n, plural, one {# period} other {# periods}}; the largest gap is {gap} ({percent}) in {period}.",
   'methods.structureReconciled': "The forecasts of {group} are reconciled ({method}) so that the parts add up to the total at every horizon; the base forecasts are kept in results.json.{scores}",

@@ -490,7 +490,7 @@ export const fr: Catalog = {
   'variance.favourable': "{favourable, select, yes {favorable} other {défavorable}}",
   'variance.keyFigure': '{period} / {yearToDate}',
   'label.againstTarget': 'Par rapport à l’objectif, {period} / exercice à date',
-  'methods.structureIndirect': "{total} ({group}) : le rapport présente la correction des variations saisonnières {shown, select, direct {directe} other {indirecte}} du total. La somme des composantes corrigées (correction indirecte) {detected, select, yes {garde une saisonnalité résiduelle que le test détecte} other {ne garde pas de saisonnalité résiduelle que le test détecte}} (F {statistic}, {p}) ; le plus grand écart avec la correction directe est de {difference}{at}.",
+  'methods.structureIndirect': "{total} ({group}) : le rapport présente la correction des variations saisonnières {shown, select, direct {directe} other {indirecte}} du total. La somme des composantes corrigées (correction indirecte) {detected, select, yes {garde une saisonnalité résiduelle que le test détecte} other {ne garde pas de saisonnalité résiduelle que le test détecte}} (F {statistic}, valeur p {p}) ; le plus grand écart avec la correction directe est de {difference}{at}.",
   'methods.structureAt': " pour {period}",
   'methods.structureGap': "{total} ({group}) : les composantes ne s’additionnent pas au total sur {n, plural, one {# période} other {# périodes}} ; le plus grand écart est de {gap} ({percent}) pour {period}.",
   'methods.structureReconciled': "Les prévisions de {group} sont réconciliées ({method}) pour que les composantes s’additionnent au total à chaque horizon ; les prévisions de base restent dans results.json.{scores}",

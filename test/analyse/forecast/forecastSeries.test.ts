@@ -96,17 +96,17 @@ describe('forecastSeries', () => {
     const r = forecastSeries(v, {frequency: 'monthly', options: opts({method: 'theta'})});
     expect(r.startOffset).toBe(v.length);
     expect(r.mean).toHaveLength(12);
-    expect(r.notes.some((n) => /Filled 1 missing/.test(n))).toBe(true);
+    expect(r.notes).toContainEqual({code: 'forecastFilled', values: {count: 1}});
     expectWellFormed(r, 12);
   });
 
   it('falls back for short series: naive under four values, no seasonal models under two years', () => {
     const tiny = forecastSeries(Float64Array.of(3, 4, 5), {frequency: 'monthly', options: opts()});
     expect(tiny.method).toBe('Naive');
-    expect(tiny.notes.join(' ')).toMatch(/Fewer than four values/);
+    expect(tiny.notes.map((n) => n.code)).toContain('forecastFewValues');
     const short = forecastSeries(air.slice(0, 20), {frequency: 'monthly', options: opts({method: 'ets'})});
     expect(short.method).toMatch(/^ETS\([AM],(N|A|Ad),N\)$/);
-    expect(short.notes.join(' ')).toMatch(/two full years/);
+    expect(short.notes.map((n) => n.code)).toContain('noSeasonalModels');
   });
 
   it('handles weekly data through seasonal adjustment and says so', () => {
@@ -117,7 +117,7 @@ describe('forecastSeries', () => {
     );
     const r = forecastSeries(weeks, {frequency: 'weekly', options: opts({method: 'auto', horizon: 13})});
     expectWellFormed(r, 13);
-    expect(r.notes.join(' ')).toMatch(/Weekly data/);
+    expect(r.notes.map((n) => n.code)).toContain('weeklyEts');
   });
 
   it('property: any finite series gives finite, nested forecasts (no NaN out)', () => {
