@@ -10,15 +10,24 @@ import {bands, num, nums} from './figures.js';
 import type {GroupResult, ReconciledBacktest, SeriesCombination} from '../combine/index.js';
 import {groupResults, versusTargetResults} from './structure.js';
 
-/** A ranked statement as results.json keeps it (the narrate stage's callouts have this shape). */
+/**
+ * A ranked plain-language statement with the numbers behind it, as results.json keeps it. The narrate stage's
+ * callouts are of this type (declared here, below narrate, so that results.json can be written from them).
+ */
 export interface CalloutRecord {
+  /** Stable id, e.g. `net-sales/yoy`; also the HTML anchor suffix. */
   id: string;
+  /** Series the callout is about, or null for pack-level callouts. */
   seriesId: string | null;
+  /** Rule that produced it, e.g. `latest-change`, `large-residual`. */
   rule: string;
   severity: 'info' | 'watch' | 'alert';
+  /** Higher ranks come first in the summary. Deterministic. */
   rank: number;
   text: string;
+  /** The raw figures quoted in the text, full precision, for checks and exports. */
   figures: Record<string, number>;
+  /** Id of the chart the callout refers to (HTML anchor), e.g. `chart-net-sales-overview`. */
   chart: string | null;
 }
 
