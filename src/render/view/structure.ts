@@ -1,5 +1,6 @@
 import type {GroupResult, Variance} from '../../combine/index.js';
 import type {Words} from '../../words/index.js';
+import {parsePeriod, type Frequency} from '../../time/period.js';
 import type {Report, ReportSeries} from '../types.js';
 import type {GroupChartData} from '../charts/seriesChart.js';
 import type {KeyFigure, VarianceCells, VarianceRow} from './types.js';
@@ -78,6 +79,7 @@ export function driverLines(report: Report): string[] {
 
 /** The methods section's sentences on each group: direct or indirect adjustment, gaps, reconciled forecasts. */
 export function structureParagraphs(report: Report, w: Words): string[] {
+  const frequency = report.plan.frequency;
   const labels = new Map(report.series.map((s) => [s.plan.id, s.plan.label]));
   const out: string[] = [];
   for (const g of report.groups) {
@@ -94,14 +96,14 @@ export function structureParagraphs(report: Report, w: Words): string[] {
           statistic: w.number(rs.statistic, 2),
           p: w.number(rs.pValue, 3),
           difference: w.share(g.indirect.largestDifference.percent, 2),
-          at: at ? w.t('methods.structureAt', {period: at}) : '',
+          at: at ? w.t('methods.structureAt', {period: periodWords(w, frequency, at)}) : '',
         }),
       );
     }
     if (g.partsGap) {
       const gap = g.partsGap;
       out.push(
-        w.t('methods.structureGap', {total, group: g.title, n: gap.periods, gap: w.number(gap.gap), percent: w.percent(gap.percent), period: gap.period}),
+        w.t('methods.structureGap', {total, group: g.title, n: gap.periods, gap: w.number(gap.gap), percent: w.percent(gap.percent), period: periodWords(w, frequency, gap.period)}),
       );
     }
     const b = g.backtest;
@@ -117,4 +119,10 @@ export function structureParagraphs(report: Report, w: Words): string[] {
     }
   }
   return out;
+}
+
+/** A canonical period label (`2016-Q1`) in the report's words (`Q1 2016`); left as it is when it is not one. */
+function periodWords(w: Words, frequency: Frequency, label: string): string {
+  const index = parsePeriod(frequency, label);
+  return index === undefined ? label : w.period(frequency, index);
 }

@@ -477,7 +477,7 @@ export const de: Catalog = {
   'sheet.methods': 'Methoden',
   'chart.contributions': "Wachstumsbeiträge zur Veränderung gegenüber Vorjahr",
   'chart.contributionsTotal': "{name}, Veränderung",
-  'chart.contributionsAxis': "Prozentpunkte der Veränderung gegenüber Vorjahr",
+  'chart.contributionsAxis': 'Prozentpunkte',
   'chart.contributionsNote': "Die Balken jeder Periode ergeben zusammen die Markierung: die Veränderung der Summe gegenüber Vorjahr.",
   'chart.contributionsDescription': "Balkendiagramm der Beiträge der Teile zur Veränderung von {name} gegenüber Vorjahr in Prozentpunkten, mit der Veränderung der Summe als Markierung; zuletzt {total} für {period}.",
   'summary.drivers': "Was die Summen bewegt hat",

@@ -476,7 +476,7 @@ export const en = {
   'sheet.methods': 'methods',
   'chart.contributions': "Contributions to the change on a year earlier",
   'chart.contributionsTotal': "{name}, change",
-  'chart.contributionsAxis': "points of the change on a year earlier",
+  'chart.contributionsAxis': 'percentage points',
   'chart.contributionsNote': "The bars of each period add up to the mark: the total’s change on a year earlier.",
   'chart.contributionsDescription': "Bar chart of each part’s contribution to the change of {name} on a year earlier, in percentage points, with the total’s change as a mark; latest {total} in {period}.",
   'summary.drivers': "What drove the totals",

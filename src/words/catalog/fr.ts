@@ -476,7 +476,7 @@ export const fr: Catalog = {
   'sheet.methods': 'méthodes',
   'chart.contributions': "Contributions à l’évolution en glissement annuel",
   'chart.contributionsTotal': "{name}, évolution",
-  'chart.contributionsAxis': "points de l’évolution en glissement annuel",
+  'chart.contributionsAxis': 'points de pourcentage',
   'chart.contributionsNote': "Les barres de chaque période s’additionnent jusqu’au repère : l’évolution du total en glissement annuel.",
   'chart.contributionsDescription': "Diagramme en barres de la contribution de chaque composante à l’évolution de {name} en glissement annuel, en points de pourcentage, avec l’évolution du total en repère ; dernière valeur {total} pour {period}.",
   'summary.drivers': "Ce qui a fait bouger les totaux",
