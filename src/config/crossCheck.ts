@@ -12,21 +12,10 @@ import {
 import type {PathProblem} from './issues.js';
 import {structureCheck} from './structureCheck.js';
 import {hint} from './suggest.js';
+import {list, record, text} from './yamlShapes.js';
 
 /** How a review period is written for each frequency, for messages. */
 export const periodExample: Record<Frequency, string> = {monthly: '2026-10', quarterly: '2026-Q3', weekly: '2026-W41'};
-
-function record(x: unknown): Record<string, unknown> {
-  return typeof x === 'object' && x !== null && !Array.isArray(x) ? (x as Record<string, unknown>) : {};
-}
-
-function list(x: unknown): unknown[] {
-  return Array.isArray(x) ? x : [];
-}
-
-function text(x: unknown): string | undefined {
-  return typeof x === 'string' && x !== '' ? x : undefined;
-}
 
 async function kindOf(file: string): Promise<'file' | 'folder' | 'missing'> {
   try {

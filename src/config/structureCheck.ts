@@ -1,15 +1,6 @@
 import type {PathProblem} from './issues.js';
 import {hint} from './suggest.js';
-
-function record(x: unknown): Record<string, unknown> {
-  return typeof x === 'object' && x !== null && !Array.isArray(x) ? (x as Record<string, unknown>) : {};
-}
-function list(x: unknown): unknown[] {
-  return Array.isArray(x) ? x : [];
-}
-function text(x: unknown): string | undefined {
-  return typeof x === 'string' && x !== '' ? x : undefined;
-}
+import {list, record, text} from './yamlShapes.js';
 
 /**
  * The checks on the pack's structure: series keys that need another key (`better` needs a `target`, `kind:
