@@ -114,7 +114,7 @@ export const headerBeyondEnd = (headerRow: number, lines: number): string =>
   `headerRow is ${headerRow} but the data has only ${lines} ${lines === 1 ? 'line' : 'lines'}; set \`headerRow\` to the line with the column names`;
 
 export const notAWorkbook = (detail: string): string =>
-  `cannot read the workbook (${detail}); save it from the spreadsheet program as .xlsx (Excel Workbook)`;
+  `cannot read the workbook (${detail}); save it from the spreadsheet program as an .xlsx workbook (Office Open XML)`;
 export const sheetNotFound = (sheet: string, suggestion: string | undefined, sheets: string[]): string =>
   `the workbook has no sheet "${sheet}"${suggestion !== undefined ? ` (did you mean "${suggestion}"?)` : ''}; ` +
   `the sheets are: ${listed(sheets.map((n) => `"${n}"`))}`;
