@@ -39,7 +39,8 @@ interface Score {
 
 type Row = {id: string; frequency: number; scores: Record<string, Score>};
 
-const METHODS: {label: string; name: MethodName | 'auto'}[] = [
+/** The methods compared; `EBBFLOW_M3_METHODS=auto,ETS` runs only those (by label). */
+const ALL_METHODS: {label: string; name: MethodName | 'auto'}[] = [
   {label: 'auto', name: 'auto'},
   {label: 'ETS', name: 'ets'},
   {label: 'Theta', name: 'theta'},
@@ -49,6 +50,8 @@ const METHODS: {label: string; name: MethodName | 'auto'}[] = [
   {label: 'Naive2', name: 'naive2'},
   {label: 'Seasonal naive', name: 'seasonal-naive'},
 ];
+const chosen = process.env.EBBFLOW_M3_METHODS?.split(',');
+const METHODS = chosen ? ALL_METHODS.filter((m) => chosen.includes(m.label)) : ALL_METHODS;
 
 /** Published sMAPE (Makridakis & Hibon 2000; Hyndman 2018 for ETS; mean of ETS, ARIMA, Theta) and R 8.20 MASE. */
 const PUBLISHED: Record<string, {monthly: string; quarterly: string}> = {

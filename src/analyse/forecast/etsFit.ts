@@ -1,6 +1,8 @@
 import {nelderMead, nelderMeadSearch, type NelderMeadResult} from '../numeric/nelderMead.js';
+import {projectedBfgs} from '../numeric/projectedBfgs.js';
 import {etsAdmissible} from './etsAdmissible.js';
 import {etsFilter, etsRecurse} from './etsFilter.js';
+import {etsLikelihoodGradient} from './etsGradient.js';
 import {etsInitialStates} from './etsInitialStates.js';
 import {completeStates, etsName, freeStateCount, type EtsParams, type EtsSpec} from './etsModel.js';
 
@@ -51,6 +53,11 @@ export interface EtsFitOptions {
    * feasible for this model.
    */
   start?: {params: EtsParams; initialStates: Float64Array};
+  /**
+   * The search: `nelder-mead` (the reference implementation's, step for step) or `gradient` (projected BFGS on
+   * the analytic gradient, etsGradient.ts; likelihood only, no fixed parameters). Default: 'nelder-mead'.
+   */
+  optimizer?: 'nelder-mead' | 'gradient';
 }
 
 const LOWER = [1e-4, 1e-4, 1e-4, 0.8];
@@ -59,10 +66,14 @@ const UPPER = [0.9999, 0.9999, 0.9999, 0.98];
 export function fitEts(
   y: Float64Array,
   spec: EtsSpec,
-  {fixed = {}, optCrit = 'lik', maxEvaluations = 2000, start: warm}: EtsFitOptions = {},
+  {fixed = {}, optCrit = 'lik', maxEvaluations = 2000, start: warm, optimizer = 'nelder-mead'}: EtsFitOptions = {},
 ): EtsFit | null {
   const problem = etsProblem(y, spec, {fixed, optCrit});
   if (!problem) return null;
+  if (optimizer === 'gradient') {
+    const warmStart = warm ? problem.warmVector(warm) : null;
+    return problem.gradientFit(warmStart, maxEvaluations);
+  }
   let result: NelderMeadResult | undefined;
   const warmStart = warm ? problem.warmVector(warm) : null;
   if (warmStart && Number.isFinite(problem.objective(warmStart, Infinity))) {
@@ -129,6 +140,7 @@ function etsProblem(
   warmVector: (warm: {params: EtsParams; initialStates: Float64Array}) => Float64Array | null;
   aiccOf: (lik: number) => number;
   finish: (result: NelderMeadResult) => EtsFit | null;
+  gradientFit: (warm: Float64Array | null, maxEvaluations: number) => EtsFit | null;
 } | null {
   const n = y.length;
   const seasonal = spec.season !== 'N';
@@ -195,15 +207,16 @@ function etsProblem(
   const seasonBuffer = new Float64Array(m);
   const firstSeason = hasTrend ? 2 : 1;
   // Bounds first (cheap), then the recursion, then admissibility, which only matters for a value below `bound`.
-  const objective = (par: Float64Array, bound: number): number => {
+  // Unpacks `par` into params and full; false outside the bounds (checked before any recursion).
+  const place = (par: Float64Array): boolean => {
     unpack(par, params);
-    if (free.alpha && !(params.alpha >= lower[0] && params.alpha <= upper[0])) return Infinity;
+    if (free.alpha && !(params.alpha >= lower[0] && params.alpha <= upper[0])) return false;
     if (free.beta && !(params.beta >= lower[1] && params.beta <= params.alpha && params.beta <= upper[1])) {
-      return Infinity;
+      return false;
     }
-    if (free.phi && !(params.phi >= lower[3] && params.phi <= upper[3])) return Infinity;
+    if (free.phi && !(params.phi >= lower[3] && params.phi <= upper[3])) return false;
     if (free.gamma && !(params.gamma >= lower[2] && params.gamma <= 1 - params.alpha && params.gamma <= upper[2])) {
-      return Infinity;
+      return false;
     }
     let sum = 0;
     for (let i = 0; i < nStates; i++) {
@@ -212,8 +225,12 @@ function etsProblem(
     }
     if (seasonal) {
       full[nStates] = (spec.season === 'M' ? m : 0) - sum;
-      if (spec.season === 'M') for (let i = firstSeason; i <= nStates; i++) if (full[i] < 0) return Infinity;
+      if (spec.season === 'M') for (let i = firstSeason; i <= nStates; i++) if (full[i] < 0) return false;
     }
+    return true;
+  };
+  const objective = (par: Float64Array, bound: number): number => {
+    if (!place(par)) return Infinity;
     const lik = optCrit === 'lik';
     const run = etsRecurse(y, spec, params, full, {seasonBuffer, mse: !lik, bound: lik ? bound : Infinity});
     let value = lik ? run.lik : run.mse;
@@ -260,12 +277,72 @@ function etsProblem(
       options: {optCrit, evaluations: result.evaluations},
     };
   };
+  const startVector = Float64Array.from(start);
+  const gradientFit = (warmStart: Float64Array | null, maxEvaluations: number): EtsFit | null => {
+    if (optCrit !== 'lik' || Object.values(fixed).some((v) => v !== undefined)) return null;
+    const likelihood = etsLikelihoodGradient(y, spec);
+    const gradParams = new Float64Array(4);
+    const gradFull = new Float64Array(nStates + (seasonal ? 1 : 0));
+    const fg = (par: Float64Array, gradient: Float64Array): number => {
+      if (!place(par)) return Infinity;
+      let lik = likelihood(params, full, gradParams, gradFull);
+      if (lik < -1e10) lik = -1e10;
+      if (Number.isNaN(lik) || !etsAdmissible(spec, params)) return Infinity;
+      let j = 0;
+      if (free.alpha) gradient[j++] = gradParams[0];
+      if (free.beta) gradient[j++] = gradParams[1];
+      if (free.gamma) gradient[j++] = gradParams[2];
+      if (free.phi) gradient[j++] = gradParams[3];
+      for (let i = 0; i < nStates; i++) {
+        gradient[j++] = gradFull[i] - (seasonal && i >= firstSeason ? gradFull[nStates] : 0);
+      }
+      return lik;
+    };
+    // Box: the usual region of the smoothing parameters; multiplicative seasonal states are not negative.
+    const lo = new Float64Array(np).fill(-Infinity);
+    const hi = new Float64Array(np).fill(Infinity);
+    const sc = new Float64Array(np);
+    const bounds: [boolean, number][] = [
+      [free.alpha, 0],
+      [free.beta, 1],
+      [free.gamma, 2],
+      [free.phi, 3],
+    ];
+    let j = 0;
+    for (const [isFree, b] of bounds) {
+      if (!isFree) continue;
+      lo[j] = lower[b];
+      hi[j] = upper[b];
+      sc[j++] = 0.1;
+    }
+    // States are scaled by the size of the one-step changes of the series (relative to its level for seasonal
+    // factors), near the size of the errors that decide their curvature.
+    let change = 0;
+    let size = 0;
+    for (let t = 1; t < n; t++) change += Math.abs(y[t] - y[t - 1]);
+    for (let t = 0; t < n; t++) size += Math.abs(y[t]);
+    change = Math.max(change / (n - 1), 1e-8 * (size / n), 1e-12);
+    for (let i = 0; i < nStates; i++, j++) {
+      const factor = seasonal && spec.season === 'M' && i >= firstSeason;
+      sc[j] = factor ? change / Math.max(size / n, 1e-12) : change;
+      if (factor) lo[j] = 0;
+    }
+    const from = warmStart && Number.isFinite(objective(warmStart, Infinity)) ? warmStart : startVector;
+    let result;
+    try {
+      result = projectedBfgs(fg, from, {lower: lo, upper: hi, scale: sc, maxIterations: maxEvaluations});
+    } catch {
+      return null;
+    }
+    return finish({x: result.x, value: result.value, evaluations: result.evaluations, converged: true});
+  };
   return {
     objective,
-    start: Float64Array.from(start),
+    start: startVector,
     warmVector: (warm) => warmVector(warm, free, nStates),
     aiccOf,
     finish,
+    gradientFit,
   };
 }
 

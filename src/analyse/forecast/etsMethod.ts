@@ -1,11 +1,11 @@
 import {reseasonalise} from './adjustedForecast.js';
 import {inSampleSeasonal} from './inSampleSeasonal.js';
 import {akaikeWeights} from './akaikeWeights.js';
-import {fitEts, type EtsFit} from './etsFit.js';
+import {fitEts, type EtsFit, type EtsFitOptions} from './etsFit.js';
 import {forecastEtsMixture, simulateEtsMixture} from './etsMixture.js';
 import type {EtsParams, EtsSpec} from './etsModel.js';
 import {selectEtsScreened} from './etsScreen.js';
-import {selectEts} from './etsSelect.js';
+import {etsCandidates, selectEts} from './etsSelect.js';
 import type {MethodFit, MethodForecastOptions} from './method.js';
 import {forecastNaive} from './naive.js';
 import {runningTotalIntervals} from './runningTotalIntervals.js';
@@ -18,6 +18,8 @@ interface EtsStart {
   params?: EtsParams;
   initialStates?: Float64Array;
 }
+
+type EtsOptimizer = NonNullable<EtsFitOptions['optimizer']>;
 
 /** Weights under this share are dropped from the Akaike-weighted ETS forecast (see akaikeWeights.ts). */
 const MIN_WEIGHT = 0.01;
@@ -42,8 +44,9 @@ const WARM_EVALUATIONS = 300;
 export function fitEtsMethod(
   values: Float64Array,
   period: number,
-  {weighted, models}: {weighted: boolean; models?: EtsStart[]},
+  {weighted, models, optimizer = 'nelder-mead'}: {weighted: boolean; models?: EtsStart[]; optimizer?: EtsOptimizer},
 ): MethodFit {
+  const gradient = optimizer === 'gradient';
   const n = values.length;
   const seasonalOk = period <= 24 && n >= 2 * period;
   const sa = period <= 24 ? null : seasonalAdjustment(values, period);
@@ -54,18 +57,23 @@ export function fitEtsMethod(
   );
   let fits = usable.flatMap((m) => {
     const warm = m.params && m.initialStates ? {start: {params: m.params, initialStates: m.initialStates}} : {};
+    if (gradient) return fitEts(y, m.spec, {...warm, optimizer}) ?? [];
     return fitEts(y, m.spec, m.params ? {...warm, maxEvaluations: WARM_EVALUATIONS} : warm) ?? [];
   });
   if (fits.length === 0) {
     const options = {period: sa ? 1 : period, seasonal: !sa && seasonalOk};
     // Weighted: only the models that can reach the 1% cut are fitted to the end (etsScreen.ts).
-    fits = weighted ? selectEtsScreened(y, options) : (selectEts(y, options)?.fits ?? []);
+    fits = gradient
+      ? etsCandidates(y, options).flatMap((spec) => fitEts(y, spec, {optimizer}) ?? [])
+      : weighted
+        ? selectEtsScreened(y, options)
+        : (selectEts(y, options)?.fits ?? []);
   }
   if (fits.length === 0) {
     // Nothing to keep: a refit tries the same models again, as given (or selects, when none were given).
     return {
       forecast: ({h, levels}) => ({forecast: forecastNaive(values, {h, levels}), details: {fallback: 'naive'}}),
-      refit: (next) => fitEtsMethod(next, period, {weighted, models}),
+      refit: (next) => fitEtsMethod(next, period, {weighted, models, optimizer}),
     };
   }
   const criteria = fits.map((f) => f.aicc);
@@ -83,7 +91,7 @@ export function fitEtsMethod(
     kept.map((f) => (warm ? {spec: f.spec, params: f.params, initialStates: f.initialStates} : {spec: f.spec}));
   return {
     forecast: (options) => ({forecast: forecastKept(values, kept, weights, sa, options), details}),
-    refit: (next, {warm}) => fitEtsMethod(next, period, {weighted, models: starts(warm)}),
+    refit: (next, {warm}) => fitEtsMethod(next, period, {weighted, models: starts(warm), optimizer}),
   };
 }
 

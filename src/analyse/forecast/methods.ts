@@ -78,7 +78,8 @@ export function fitMethod(name: MethodName, values: Float64Array, {period}: {per
     case 'ets':
     case 'ets-theta-arima':
     case 'combination': {
-      const ets = fitEtsMethod(values, period, {weighted: name !== 'ets'});
+      const optimizer = name === 'ets-theta-arima' ? 'gradient' : 'nelder-mead';
+      const ets = fitEtsMethod(values, period, {weighted: name !== 'ets', optimizer});
       return name === 'ets' ? ets : combinationFit(name, values, period, ets);
     }
     case 'arima':
