@@ -283,15 +283,42 @@ function etsProblem(
     const likelihood = etsLikelihoodGradient(y, spec);
     const gradParams = new Float64Array(4);
     const gradFull = new Float64Array(nStates + (seasonal ? 1 : 0));
-    const fg = (par: Float64Array, gradient: Float64Array): number => {
-      if (!place(par)) return Infinity;
+    // The search runs over (α, β*, γ*, φ, states) with β = lβ + β*(α − lβ) and γ = lγ + γ*(1 − α − lγ), β*, γ* in
+    // [0, 1]: the constraints β ≤ α and γ ≤ 1 − α of the usual region become bounds of a box.
+    const iBeta = free.beta ? 1 : -1;
+    const iGamma = free.gamma ? 1 + (free.beta ? 1 : 0) : -1;
+    const [lb, lg] = [lower[1], lower[2]];
+    const outer = (inner: Float64Array, into: Float64Array): Float64Array => {
+      into.set(inner);
+      const alpha = inner[0];
+      if (iBeta >= 0) into[iBeta] = lb + inner[iBeta] * (alpha - lb);
+      if (iGamma >= 0) into[iGamma] = lg + inner[iGamma] * (1 - alpha - lg);
+      return into;
+    };
+    const innerOf = (x: Float64Array): Float64Array => {
+      const inner = Float64Array.from(x);
+      const alpha = x[0];
+      const ratio = (v: number, span: number) => Math.min(1, Math.max(0, span > 0 ? v / span : 0));
+      if (iBeta >= 0) inner[iBeta] = ratio(x[iBeta] - lb, alpha - lb);
+      if (iGamma >= 0) inner[iGamma] = ratio(x[iGamma] - lg, 1 - alpha - lg);
+      return inner;
+    };
+    const par = new Float64Array(np);
+    const fg = (inner: Float64Array, gradient: Float64Array): number => {
+      if (!place(outer(inner, par))) return Infinity;
       let lik = likelihood(params, full, gradParams, gradFull);
       if (lik < -1e10) lik = -1e10;
       if (Number.isNaN(lik) || !etsAdmissible(spec, params)) return Infinity;
       let j = 0;
-      if (free.alpha) gradient[j++] = gradParams[0];
-      if (free.beta) gradient[j++] = gradParams[1];
-      if (free.gamma) gradient[j++] = gradParams[2];
+      gradient[j++] = gradParams[0];
+      if (free.beta) {
+        gradient[0] += gradParams[1] * inner[iBeta];
+        gradient[j++] = gradParams[1] * (params.alpha - lb);
+      }
+      if (free.gamma) {
+        gradient[0] -= gradParams[2] * inner[iGamma];
+        gradient[j++] = gradParams[2] * (1 - params.alpha - lg);
+      }
       if (free.phi) gradient[j++] = gradParams[3];
       for (let i = 0; i < nStates; i++) {
         gradient[j++] = gradFull[i] - (seasonal && i >= firstSeason ? gradFull[nStates] : 0);
@@ -302,17 +329,17 @@ function etsProblem(
     const lo = new Float64Array(np).fill(-Infinity);
     const hi = new Float64Array(np).fill(Infinity);
     const sc = new Float64Array(np);
-    const bounds: [boolean, number][] = [
-      [free.alpha, 0],
-      [free.beta, 1],
-      [free.gamma, 2],
-      [free.phi, 3],
+    const bounds: [boolean, number, number][] = [
+      [true, lower[0], upper[0]],
+      [free.beta, 0, 1],
+      [free.gamma, 0, 1],
+      [free.phi, lower[3], upper[3]],
     ];
     let j = 0;
-    for (const [isFree, b] of bounds) {
+    for (const [isFree, l, u] of bounds) {
       if (!isFree) continue;
-      lo[j] = lower[b];
-      hi[j] = upper[b];
+      lo[j] = l;
+      hi[j] = u;
       sc[j++] = 0.1;
     }
     // States are scaled by the size of the one-step changes of the series (relative to its level for seasonal
@@ -330,11 +357,12 @@ function etsProblem(
     const from = warmStart && Number.isFinite(objective(warmStart, Infinity)) ? warmStart : startVector;
     let result;
     try {
-      result = projectedBfgs(fg, from, {lower: lo, upper: hi, scale: sc, maxIterations: maxEvaluations});
+      result = projectedBfgs(fg, innerOf(from), {lower: lo, upper: hi, scale: sc, maxIterations: maxEvaluations});
     } catch {
       return null;
     }
-    return finish({x: result.x, value: result.value, evaluations: result.evaluations, converged: true});
+    const x = outer(result.x, new Float64Array(np));
+    return finish({x, value: result.value, evaluations: result.evaluations, converged: true});
   };
   return {
     objective,

@@ -5,7 +5,7 @@ import {fitEts, type EtsFit, type EtsFitOptions} from './etsFit.js';
 import {forecastEtsMixture, simulateEtsMixture} from './etsMixture.js';
 import type {EtsParams, EtsSpec} from './etsModel.js';
 import {selectEtsScreened} from './etsScreen.js';
-import {etsCandidates, selectEts} from './etsSelect.js';
+import {selectEts} from './etsSelect.js';
 import type {MethodFit, MethodForecastOptions} from './method.js';
 import {forecastNaive} from './naive.js';
 import {runningTotalIntervals} from './runningTotalIntervals.js';
@@ -63,11 +63,7 @@ export function fitEtsMethod(
   if (fits.length === 0) {
     const options = {period: sa ? 1 : period, seasonal: !sa && seasonalOk};
     // Weighted: only the models that can reach the 1% cut are fitted to the end (etsScreen.ts).
-    fits = gradient
-      ? etsCandidates(y, options).flatMap((spec) => fitEts(y, spec, {optimizer}) ?? [])
-      : weighted
-        ? selectEtsScreened(y, options)
-        : (selectEts(y, options)?.fits ?? []);
+    fits = weighted ? selectEtsScreened(y, options) : (selectEts(y, options)?.fits ?? []);
   }
   if (fits.length === 0) {
     // Nothing to keep: a refit tries the same models again, as given (or selects, when none were given).

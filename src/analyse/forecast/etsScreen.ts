@@ -15,6 +15,14 @@ const CUT = 2 * Math.log(100);
  */
 const CHECKPOINTS = [250, 500, 750, 1000, 1500];
 const MARGINS = [350, 180, 120, 100, 50];
+/**
+ * How far a search's end may lie below the AICc of the quick gradient fit of the same model (projected BFGS,
+ * etsFit.ts), which mostly ends lower but can stop in another local optimum. Measured on the 1,200 fits of 80 M3
+ * monthly series (15 models each): the gradient fit ended higher in 143 fits, by at most 19.5 (90th percentile of
+ * the difference 0.6); 30 leaves room. An empirical rule, like the margins above.
+ */
+const GRADIENT_MARGIN = 30;
+const GRADIENT = {optimizer: 'gradient'} as const;
 
 /**
  * The fits of automatic ETS (the models and order of selectEts) for Akaike weighting, screened: the
@@ -48,8 +56,14 @@ export function selectEtsScreened(
   specs.forEach((spec, i) => {
     if (spec.season === 'N') keep(i, fitEts(y, spec));
   });
-  specs.forEach((spec, i) => {
-    if (spec.season === 'N') return;
+  // The quick gradient fit's AICc of each seasonal model, and the seasonal models from the most promising on.
+  const quick = specs.map((spec) => (spec.season === 'N' ? Infinity : (fitEts(y, spec, GRADIENT)?.aicc ?? Infinity)));
+  const hopeless = (i: number, known: number): boolean => quick[i] - GRADIENT_MARGIN > known + CUT;
+  const order = specs.flatMap((spec, i) => (spec.season === 'N' ? [] : [i])).sort((a, b) => quick[a] - quick[b]);
+  order.forEach((i, rank) => {
+    const spec = specs[i];
+    if (rank === 0 && Number.isFinite(quick[i])) return keep(i, fitEts(y, spec));
+    if (hopeless(i, best)) return;
     const search = etsSearch(y, spec);
     if (!search) return;
     search.run(CHECKPOINTS[0]);
@@ -60,7 +74,7 @@ export function selectEtsScreened(
     const known = Math.min(best, ...active.map((a) => a.search.aicc()));
     for (let j = active.length - 1; j >= 0; j--) {
       const a = active[j];
-      if (a.search.aicc() - MARGINS[a.stage] > known + CUT) active.splice(j, 1);
+      if (a.search.aicc() - MARGINS[a.stage] > known + CUT || hopeless(a.i, known)) active.splice(j, 1);
     }
     if (active.length === 0) break;
     let next = 0;

@@ -138,19 +138,21 @@ export function projectedBfgs(
     if (!accepted) break;
     let sy = 0;
     let yy = 0;
+    let ss = 0;
     for (let i = 0; i < k; i++) {
       // The update lives in the space of the variables moved: a held variable's change of gradient is left out.
       s[i] = zNew[i] - z[i];
       yv[i] = held[i] ? 0 : gNew[i] - g[i];
       sy += s[i] * yv[i];
       yy += yv[i] * yv[i];
+      ss += s[i] * s[i];
     }
     const change = f - fNew;
     z.set(zNew);
     g.set(gNew);
     f = fNew;
     if (change <= relTol * (Math.abs(f) + relTol)) break;
-    if (sy > 1e-12 * Math.sqrt(yy) * Math.hypot(...s)) {
+    if (sy > 1e-12 * Math.sqrt(yy * ss)) {
       if (!updated) {
         const gammaScale = sy / yy;
         for (let i = 0; i < k * k; i++) H[i] *= gammaScale;
