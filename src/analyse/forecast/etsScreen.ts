@@ -58,12 +58,13 @@ export function selectEtsScreened(
   });
   // The quick gradient fit's AICc of each seasonal model, and the seasonal models from the most promising on.
   const quick = specs.map((spec) => (spec.season === 'N' ? Infinity : (fitEts(y, spec, GRADIENT)?.aicc ?? Infinity)));
-  const hopeless = (i: number, known: number): boolean => quick[i] - GRADIENT_MARGIN > known + CUT;
+  // A quick fit above the search's own AICc so far stopped in a poor local optimum and says nothing.
+  const hopeless = (a: {i: number; search: EtsSearch}, known: number): boolean =>
+    quick[a.i] <= a.search.aicc() && quick[a.i] - GRADIENT_MARGIN > known + CUT;
   const order = specs.flatMap((spec, i) => (spec.season === 'N' ? [] : [i])).sort((a, b) => quick[a] - quick[b]);
   order.forEach((i, rank) => {
     const spec = specs[i];
     if (rank === 0 && Number.isFinite(quick[i])) return keep(i, fitEts(y, spec));
-    if (hopeless(i, best)) return;
     const search = etsSearch(y, spec);
     if (!search) return;
     search.run(CHECKPOINTS[0]);
@@ -74,7 +75,7 @@ export function selectEtsScreened(
     const known = Math.min(best, ...active.map((a) => a.search.aicc()));
     for (let j = active.length - 1; j >= 0; j--) {
       const a = active[j];
-      if (a.search.aicc() - MARGINS[a.stage] > known + CUT || hopeless(a.i, known)) active.splice(j, 1);
+      if (a.search.aicc() - MARGINS[a.stage] > known + CUT || hopeless(a, known)) active.splice(j, 1);
     }
     if (active.length === 0) break;
     let next = 0;

@@ -21,7 +21,9 @@
  * Complexity: O(iterations · (cost of f + k²)) for k variables, O(k²) memory. The start vector is not changed
  * (it is projected into the box first). NaN policy: a NaN or infinite value is infeasible; throws when the
  * start is.
- * @example projectedBfgs((x, g) => ((g[0] = 2 * (x[0] - 3)), (x[0] - 3) ** 2), Float64Array.of(0), {upper: Float64Array.of(2)}).x // => [2]
+ * @example
+ * const f = (x: Float64Array, g: Float64Array) => ((g[0] = 2 * (x[0] - 3)), (x[0] - 3) ** 2);
+ * projectedBfgs(f, Float64Array.of(0), {upper: Float64Array.of(2)}).x // => [2]
  */
 export interface ProjectedBfgsOptions {
   /** Lower bounds (−Infinity for none). Default: all −Infinity. */
