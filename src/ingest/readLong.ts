@@ -62,7 +62,7 @@ export function longVisitor(cells: CellReader, wanted: Wanted, data: SourceData)
       if (outOfOrder === 0 && store.outOfOrderLine !== 0) outOfOrder = store.outOfOrderLine;
     },
     finish() {
-      if (outOfOrder !== 0) data.notes.push(cells.note(outOfOrder, msg.outOfOrder(outOfOrder)));
+      if (outOfOrder !== 0) data.notes.push(cells.note(outOfOrder, {code: 'outOfOrder', values: {line: String(outOfOrder)}}));
       const keys = [...data.stores.keys(), ...skipped];
       for (const [key, ids] of wanted.names) {
         if (data.stores.has(key)) continue;

@@ -46,7 +46,7 @@ export function wideVisitor(cells: CellReader, wanted: Wanted, data: SourceData)
       if (fields.length < width) cells.report(line, null, msg.shortRow(fields.length, width));
       if (stamp.at < previous && !outOfOrder) {
         outOfOrder = true;
-        data.notes.push(cells.note(line, msg.outOfOrder(line)));
+        data.notes.push(cells.note(line, {code: 'outOfOrder', values: {line: String(line)}}));
       }
       previous = stamp.at;
       for (const {at, name, store} of columns) {
