@@ -17,6 +17,13 @@ import {completeStates, etsName, freeStateCount, type EtsParams, type EtsSpec} f
  * settings (relative tolerance √ε, 2000 evaluations) and information criteria as in the reference
  * implementation, so that fitted models agree with it.
  *
+ * With `optimizer: 'gradient'` the same likelihood is minimised by projected BFGS (projectedBfgs.ts) on its
+ * analytic gradient (etsGradient.ts), over α, β* = (β − 10⁻⁴)/(α − 10⁻⁴), γ* = (γ − 10⁻⁴)/(1 − α − 10⁻⁴), φ and
+ * the states, so that the usual region is a box; admissibility and non-negative seasonal factors still reject a
+ * trial point. Measured on 1,200 fits (80 M3 monthly series, 15 models): 41 evaluations (each with the gradient,
+ * about twice the cost of one without) against 1,231, a lower −2·log-likelihood in 1,004 fits (median 2.5 lower)
+ * and a higher one in 39 (at most 11.5). Not used where results must agree with the reference implementation.
+ *
  * Complexity: O(E·n) with E ≤ 2000 objective evaluations. NaN policy: rejects NaN (returns null when the
  * model cannot be fitted, e.g. too many parameters for the data).
  */

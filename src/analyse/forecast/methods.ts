@@ -78,6 +78,7 @@ export function fitMethod(name: MethodName, values: Float64Array, {period}: {per
     case 'ets':
     case 'ets-theta-arima':
     case 'combination': {
+      // `auto`: gradient fits screen the seasonal models and re-estimate at back-test origins (etsScreen.ts).
       const optimizer = name === 'ets-theta-arima' ? 'gradient' : 'nelder-mead';
       const ets = fitEtsMethod(values, period, {weighted: name !== 'ets', optimizer});
       return name === 'ets' ? ets : combinationFit(name, values, period, ets);
