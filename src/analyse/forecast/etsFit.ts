@@ -361,15 +361,29 @@ function etsProblem(
       sc[j] = factor ? change / Math.max(size / n, 1e-12) : change;
       if (factor) lo[j] = 0;
     }
-    const from = warmStart && Number.isFinite(objective(warmStart, Infinity)) ? warmStart : startVector;
-    let result;
-    try {
-      result = projectedBfgs(fg, innerOf(from), {lower: lo, upper: hi, scale: sc, maxIterations: maxEvaluations});
-    } catch {
-      return null;
+    const warmOk = warmStart !== null && Number.isFinite(objective(warmStart, Infinity));
+    const starts = [innerOf(warmOk ? warmStart : startVector)];
+    if (!warmOk) {
+      // A second start with α = 0.5: from the usual small α the search can end in the corner of a nearly fixed
+      // level (α at its lower bound) while the optimum has α near 1 (seen on M3 quarterly series).
+      const other = Float64Array.from(starts[0]);
+      other[0] = 0.5;
+      starts.push(other);
     }
-    const x = outer(result.x, new Float64Array(np));
-    return finish({x, value: result.value, evaluations: result.evaluations, converged: true});
+    let best: {x: Float64Array; value: number} | null = null;
+    let evaluations = 0;
+    for (const from of starts) {
+      try {
+        const r = projectedBfgs(fg, from, {lower: lo, upper: hi, scale: sc, maxIterations: maxEvaluations});
+        evaluations += r.evaluations;
+        if (!best || r.value < best.value) best = r;
+      } catch {
+        continue;
+      }
+    }
+    if (!best) return null;
+    const x = outer(best.x, new Float64Array(np));
+    return finish({x, value: best.value, evaluations, converged: true});
   };
   return {
     objective,

@@ -7,8 +7,9 @@
  * by returning Infinity (or NaN): the line search then shortens the step. The search works in scaled coordinates
  * x / `scale`, so variables of very different sizes (smoothing parameters and states of a level) are comparable.
  *
- * Stops when a step lowers f by less than `relTol`·(|f| + relTol), when the projected gradient vanishes, when the
- * line search finds no lower point, or after `maxIterations` iterations.
+ * Stops when a step lowers f by less than `relTol`·(|f| + relTol) or the line search finds no lower point (each
+ * once more after starting the approximation again from the identity), when the projected gradient vanishes, or
+ * after `maxIterations` iterations.
  *
  * Why: the likelihood of an exponential smoothing model with a dozen initial states takes a simplex search
  * 1,500–2,000 evaluations; with its gradient (etsGradient.ts), a quasi-Newton search needs far fewer.
@@ -137,7 +138,14 @@ export function projectedBfgs(
       const next = Number.isFinite(fNew) && curvature > 0 ? (-decrease * t) / (2 * curvature) : 0.5 * t;
       t = Math.min(0.5 * t, Math.max(0.1 * t, next));
     }
-    if (!accepted) break;
+    // A failed or tiny step with a learnt approximation may be the approximation's fault: start it again once
+    // from steepest descent before stopping.
+    if (!accepted) {
+      if (!updated) break;
+      resetH();
+      updated = false;
+      continue;
+    }
     let sy = 0;
     let yy = 0;
     let ss = 0;
@@ -153,7 +161,12 @@ export function projectedBfgs(
     z.set(zNew);
     g.set(gNew);
     f = fNew;
-    if (change <= relTol * (Math.abs(f) + relTol)) break;
+    if (change <= relTol * (Math.abs(f) + relTol)) {
+      if (!updated) break;
+      resetH();
+      updated = false;
+      continue;
+    }
     if (sy > 1e-12 * Math.sqrt(yy * ss)) {
       if (!updated) {
         const gammaScale = sy / yy;
