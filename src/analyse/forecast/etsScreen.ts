@@ -15,15 +15,6 @@ const CUT = 2 * Math.log(100);
  */
 const CHECKPOINTS = [250, 500, 750, 1000, 1500];
 const MARGINS = [350, 180, 120, 100, 50];
-/**
- * How far a search's end may lie below the AICc of the quick gradient fit of the same model (projected BFGS,
- * etsFit.ts), which mostly ends lower but can stop in another local optimum. Measured on the 1,200 fits of 80 M3
- * monthly series (15 models each): the gradient fit ended higher in 39 fits, by at most 11.5 (it ended lower in
- * 1,004, median 2.5 lower), on 15 other series once by 390 (a far-off local optimum, which the rule below catches:
- * it lay above the search so far); 30 leaves room. An empirical rule, like the margins above.
- */
-const GRADIENT_MARGIN = 30;
-const GRADIENT = {optimizer: 'gradient'} as const;
 
 /**
  * The fits of automatic ETS (the models and order of selectEts) for Akaike weighting, screened: the
@@ -34,16 +25,8 @@ const GRADIENT = {optimizer: 'gradient'} as const;
  * akaikeWeights), so it is not needed; every model kept is fitted exactly as selectEts fits it (a search's path
  * does not depend on its stages). The fits come back in selectEts' order, without the models given up.
  *
- * A quick fit of each seasonal model by projected BFGS on the likelihood's gradient (about 40 evaluations, see
- * etsFit.ts) orders the searches and shortens them: the model with the lowest quick AICc is fitted first and to
- * the end, and a search is also given up when the quick fit's AICc, less GRADIENT_MARGIN, is more than the cut
- * above the best known, provided the quick fit is at or below the search's own AICc so far (otherwise it stopped
- * in a poor local optimum and is not believed).
- *
  * Why: a seasonal model's search takes 1,500–2,000 likelihood evaluations (against 150–500 for non-seasonal
- * ones) and most seasonal models end far outside the weights. The searches themselves stay: their results are
- * what the M3 figures of `auto` were measured with (the gradient fits' better likelihoods gave worse forecasts
- * there, monthly sMAPE 13.57 against 13.48, when they replaced the searches).
+ * ones) and most seasonal models end far outside the weights.
  * Reference: Burnham & Anderson (2002) for the weights; the margins are measured, see above.
  *
  * Complexity: at most the cost of selectEts. NaN policy: rejects NaN. Empty when no model fits.
@@ -65,15 +48,8 @@ export function selectEtsScreened(
   specs.forEach((spec, i) => {
     if (spec.season === 'N') keep(i, fitEts(y, spec));
   });
-  // The quick gradient fit's AICc of each seasonal model, and the seasonal models from the most promising on.
-  const quick = specs.map((spec) => (spec.season === 'N' ? Infinity : (fitEts(y, spec, GRADIENT)?.aicc ?? Infinity)));
-  // A quick fit above the search's own AICc so far stopped in a poor local optimum and says nothing.
-  const hopeless = (a: {i: number; search: EtsSearch}, known: number): boolean =>
-    quick[a.i] <= a.search.aicc() && quick[a.i] - GRADIENT_MARGIN > known + CUT;
-  const order = specs.flatMap((spec, i) => (spec.season === 'N' ? [] : [i])).sort((a, b) => quick[a] - quick[b]);
-  order.forEach((i, rank) => {
-    const spec = specs[i];
-    if (rank === 0 && Number.isFinite(quick[i])) return keep(i, fitEts(y, spec));
+  specs.forEach((spec, i) => {
+    if (spec.season === 'N') return;
     const search = etsSearch(y, spec);
     if (!search) return;
     search.run(CHECKPOINTS[0]);
@@ -84,7 +60,7 @@ export function selectEtsScreened(
     const known = Math.min(best, ...active.map((a) => a.search.aicc()));
     for (let j = active.length - 1; j >= 0; j--) {
       const a = active[j];
-      if (a.search.aicc() - MARGINS[a.stage] > known + CUT || hopeless(a, known)) active.splice(j, 1);
+      if (a.search.aicc() - MARGINS[a.stage] > known + CUT) active.splice(j, 1);
     }
     if (active.length === 0) break;
     let next = 0;

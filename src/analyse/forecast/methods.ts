@@ -78,7 +78,7 @@ export function fitMethod(name: MethodName, values: Float64Array, {period}: {per
     case 'ets':
     case 'ets-theta-arima':
     case 'combination': {
-      // `auto`: gradient fits screen the seasonal models and re-estimate at back-test origins (etsScreen.ts).
+      // `auto`: back-test origins re-estimate by gradient fits (etsMethod.ts); the selection is the same for all.
       const optimizer = name === 'ets-theta-arima' ? 'gradient' : 'nelder-mead';
       const ets = fitEtsMethod(values, period, {weighted: name !== 'ets', optimizer});
       return name === 'ets' ? ets : combinationFit(name, values, period, ets);
