@@ -117,6 +117,16 @@ export class CellReader {
     return value;
   }
 
+  /**
+   * Rows that a database engine summed up by period instead of handing them over (duckdbSummary.ts): all dated by
+   * day, covering the days `from` … `to` and the pack periods `first` … `last`.
+   */
+  summarised(from: number, to: number, first: number, last: number): void {
+    this.grains.set('day', {line: 1, text: ''});
+    this.span = {from, to};
+    this.periods = {first, last};
+  }
+
   /** Rows still held back at the end of the data: a footer, told in one note (or nothing when there is none). */
   finish(): DataNote[] {
     if (this.held.length === 0) return [];

@@ -1,11 +1,19 @@
 import type {Stamp} from '../time/stamp.js';
+import {microUnits, UNITS_PER_ONE} from './decimalUnits.js';
 
 /**
  * The rows of one column or key, summed up by pack period as they arrive in any order: for each period the
  * number of rows and of values, their sum, minimum and maximum, the value at the earliest and at the latest
  * instant, and the file lines of its first two rows (so a duplicate can name both). These are all that any
- * `aggregate` needs (derive/aggregate.ts), so memory grows with periods, never with rows: about 90 bytes per
+ * `aggregate` needs (derive/aggregate.ts), so memory grows with periods, never with rows: about 100 bytes per
  * period from the earliest to the latest seen, whatever the number of rows.
+ *
+ * Sums are exact where the values allow: while every value of a period is a whole number of millionths
+ * (`microUnits`: decimals of at most six places below about 9·10^9), the period keeps its sum as an integer count
+ * of millionths (in a double while below 2^53, then as a bigint), so the sum is the same in any order of the rows;
+ * it reads as that count divided by 10^6 (the double nearest to the sum of the decimals while the count is below
+ * 2^53). A period with any other value (1/3, 1e-9) sums as doubles in row order. So a database engine that adds
+ * the same values in parallel (ingest/duckdbSummary.ts) gives the same sum to the last bit.
  *
  * NaN policy: a missing value (NaN) counts as a row but not as a value; it changes no sum, extreme, first or last.
  *
@@ -27,6 +35,10 @@ export class PeriodStore {
   private lastAt = new Float64Array(0);
   private last = new Float64Array(0);
   private seenAt = new Float64Array(0);
+  // Exact sums in millionths, and whether each period's sum is still exact; counts beyond 2^53 by period in `big`.
+  private units = new Float64Array(0);
+  private exact = new Uint8Array(0);
+  private readonly big = new Map<number, bigint>();
   /** Cells of this column or key that could not be read, or whose row has an unreadable date (each reported). */
   rejected = 0;
   /** Set when a row arrived for an earlier instant than the row before it. */
@@ -56,6 +68,7 @@ export class PeriodStore {
     }
     this.rowCount[i]++;
     if (Number.isNaN(value)) return;
+    this.addUnits(stamp.period, i, value);
     if (this.valueCount[i] === 0) {
       this.sum[i] = value;
       this.min[i] = value;
@@ -81,6 +94,26 @@ export class PeriodStore {
     this.valueCount[i]++;
   }
 
+  /**
+   * Set one period from a summary made elsewhere (a database that grouped the rows): rows and values counted, the
+   * exact sum in millionths (`units`), extremes, and whether its rows fell on more than one instant. For periods of
+   * day-dated rows only; the first and last values are not known (NaN).
+   */
+  put(period: number, s: {rows: number; values: number; units: bigint; min: number; max: number; instants: boolean}): void {
+    this.ensure(period);
+    const i = period - this.base;
+    this.rowCount[i] = s.rows;
+    this.valueCount[i] = s.values;
+    this.exact[i] = 1;
+    if (s.units >= -MAX_UNITS && s.units <= MAX_UNITS) this.units[i] = Number(s.units);
+    else this.big.set(period, s.units);
+    this.min[i] = s.min;
+    this.max[i] = s.max;
+    this.first[i] = NaN;
+    this.last[i] = NaN;
+    if (s.instants) this.finer = true;
+  }
+
   /** Rows, values and the summaries of one period (zero counts, NaN summaries when no row fell in it). */
   at(period: number): PeriodSummary {
     const i = period - this.base;
@@ -90,7 +123,7 @@ export class PeriodStore {
     return {
       rows: this.rowCount[i],
       values: this.valueCount[i],
-      sum: v(this.sum),
+      sum: !has ? NaN : this.exact[i] === 1 ? this.exactSum(period, i) : this.sum[i],
       min: v(this.min),
       max: v(this.max),
       first: v(this.first),
@@ -121,6 +154,37 @@ export class PeriodStore {
     return out;
   }
 
+  /** Add a value's millionths to the exact sum of `period` (slot i), or mark that sum as not exact. */
+  private addUnits(period: number, i: number, value: number): void {
+    const had = this.valueCount[i] > 0;
+    if (had && this.exact[i] === 0) return;
+    const u = microUnits(value);
+    if (Number.isNaN(u)) {
+      this.exact[i] = 0;
+      return;
+    }
+    this.exact[i] = 1;
+    const big = had ? this.big.get(period) : undefined;
+    const next = (had ? this.units[i] : 0) + u;
+    if (big !== undefined) this.big.set(period, big + BigInt(u));
+    else if (Math.abs(next) <= Number.MAX_SAFE_INTEGER) this.units[i] = next;
+    // Beyond 2^53 a double would round: the count goes on as a bigint.
+    else this.big.set(period, BigInt(this.units[i]) + BigInt(u));
+  }
+
+  private exactSum(period: number, i: number): number {
+    const big = this.big.get(period);
+    return (big === undefined ? this.units[i] : Number(big)) / UNITS_PER_ONE;
+  }
+
+  /** Make room for the periods `first` … `last` at once when the store is empty (a store filled from summaries knows its span). */
+  reserve(first: number, last: number): void {
+    if (this.size === 0) {
+      this.base = first;
+      this.resize(0, last - first + 1);
+    }
+  }
+
   private ensure(period: number): void {
     if (this.size === 0) {
       this.base = period;
@@ -138,7 +202,7 @@ export class PeriodStore {
   }
 
   private resize(shift: number, capacity: number): void {
-    const grow = <T extends Uint32Array | Float64Array>(a: T, make: (n: number) => T): T => {
+    const grow = <T extends Uint32Array | Float64Array | Uint8Array>(a: T, make: (n: number) => T): T => {
       const b = make(capacity);
       b.set(a, shift);
       return b;
@@ -156,6 +220,8 @@ export class PeriodStore {
     this.lastAt = grow(this.lastAt, float);
     this.last = grow(this.last, float);
     this.seenAt = grow(this.seenAt, float);
+    this.units = grow(this.units, float);
+    this.exact = grow(this.exact, (n) => new Uint8Array(n));
     this.size = capacity;
   }
 }
@@ -173,6 +239,8 @@ export interface PeriodSummary {
   line: number;
   secondLine: number;
 }
+
+const MAX_UNITS = BigInt(Number.MAX_SAFE_INTEGER);
 
 const EMPTY: PeriodSummary = {
   rows: 0,

@@ -11,8 +11,12 @@ import type {SourceData, Wanted} from './sourceData.js';
  * the pack asks for are kept (all of them for `fromSource`), each straight into its own store, so memory
  * grows with keys × periods, not with rows. `finish` reports keys the pack names but the source lacks,
  * at the pack line of the series that names the key when `wanted.pack` gives it.
+ *
+ * A query's rows have no order of their own (unless it sorts them), so for query sources the keys come in text
+ * order (code units) and no note says that rows were out of date order; a query whose engine already summed the rows
+ * by period (duckdbSummary.ts) then reads exactly like its rows one by one.
  */
-export function longVisitor(cells: CellReader, wanted: Wanted, data: SourceData): RowVisitor & {finish(): void} {
+export function longVisitor(cells: CellReader, wanted: Wanted, data: SourceData): LongVisitor {
   const {keyColumn: keyName, valueColumn: valueName} = cells.source;
   const keyLabel = keyName ?? '';
   const valueLabel = valueName ?? '';
@@ -21,7 +25,20 @@ export function longVisitor(cells: CellReader, wanted: Wanted, data: SourceData)
   let width = 0;
   let outOfOrder = 0;
   const skipped = new Set<string>();
+  const query = cells.source.query !== null;
+  const keep = (key: string): PeriodStore | undefined => {
+    let store = data.stores.get(key);
+    if (store !== undefined) return store;
+    if (!wanted.all && !wanted.names.has(key)) {
+      skipped.add(key);
+      return undefined;
+    }
+    store = new PeriodStore();
+    data.stores.set(key, store);
+    return store;
+  };
   return {
+    keep,
     header(header, line) {
       data.headerLine = line;
       width = header.length;
@@ -46,12 +63,8 @@ export function longVisitor(cells: CellReader, wanted: Wanted, data: SourceData)
           cells.report(line, keyAt + 1, msg.blankKey(keyLabel));
           return;
         }
-        if (!wanted.all && !wanted.names.has(key)) {
-          skipped.add(key);
-          return;
-        }
-        store = new PeriodStore();
-        data.stores.set(key, store);
+        store = keep(key);
+        if (store === undefined) return;
       }
       const value = cells.value(fields[valueAt] ?? '', line, valueAt, valueLabel);
       if (value === undefined) {
@@ -62,7 +75,12 @@ export function longVisitor(cells: CellReader, wanted: Wanted, data: SourceData)
       if (outOfOrder === 0 && store.outOfOrderLine !== 0) outOfOrder = store.outOfOrderLine;
     },
     finish() {
-      if (outOfOrder !== 0) data.notes.push(cells.note(outOfOrder, msg.outOfOrder(outOfOrder)));
+      if (outOfOrder !== 0 && !query) data.notes.push(cells.note(outOfOrder, msg.outOfOrder(outOfOrder)));
+      if (query) {
+        const sorted = [...data.stores].sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0));
+        data.stores.clear();
+        for (const [key, store] of sorted) data.stores.set(key, store);
+      }
       const keys = [...data.stores.keys(), ...skipped];
       for (const [key, ids] of wanted.names) {
         if (data.stores.has(key)) continue;
@@ -75,4 +93,11 @@ export function longVisitor(cells: CellReader, wanted: Wanted, data: SourceData)
       }
     },
   };
+}
+
+/** The long visitor: rows one by one, or a key's store for a summary made by the engine (`keep`, undefined when the
+ * pack does not want the key), and `finish` once the source is read. */
+export interface LongVisitor extends RowVisitor {
+  keep(key: string): PeriodStore | undefined;
+  finish(): void;
 }
