@@ -164,7 +164,7 @@ export class PeriodStore {
       return;
     }
     this.exact[i] = 1;
-    const big = had ? this.big.get(period) : undefined;
+    const big = had && this.big.size > 0 ? this.big.get(period) : undefined;
     const next = (had ? this.units[i] : 0) + u;
     if (big !== undefined) this.big.set(period, big + BigInt(u));
     else if (Math.abs(next) <= Number.MAX_SAFE_INTEGER) this.units[i] = next;
@@ -173,7 +173,7 @@ export class PeriodStore {
   }
 
   private exactSum(period: number, i: number): number {
-    const big = this.big.get(period);
+    const big = this.big.size > 0 ? this.big.get(period) : undefined;
     return (big === undefined ? this.units[i] : Number(big)) / UNITS_PER_ONE;
   }
 
