@@ -107,6 +107,16 @@ export class CellReader {
     return undefined;
   }
 
+  /**
+   * The stamp of the date cell before, when the text `s` from `a` to `b` repeats it and no row is held back (what
+   * {@link CellReader.stamp} would return for it, with nothing else to record), else undefined.
+   */
+  repeatedDate(s: string, a: number, b: number): Stamp | undefined {
+    const last = this.lastText;
+    if (this.lastStamp === undefined || this.held.length > 0 || b - a !== last.length) return undefined;
+    return s.startsWith(last, a) ? this.lastStamp : undefined;
+  }
+
   /** Number in a cell (NaN when missing), or undefined (problem reported). */
   value(text: string, line: number, at: number, name: string): number | undefined {
     const value = parseNumberCell(text, this.decimal);

@@ -2,6 +2,7 @@ import {basename} from 'node:path';
 import {didYouMean} from '../config/suggest.js';
 import type {CellReader} from './cells.js';
 import * as msg from './messages.js';
+import {plainDecimal} from './parseNumber.js';
 import {PeriodStore} from './periodStore.js';
 import {blankRow, type RowVisitor} from './rowVisitor.js';
 import type {SourceData, Wanted} from './sourceData.js';
@@ -37,8 +38,37 @@ export function longVisitor(cells: CellReader, wanted: Wanted, data: SourceData)
     data.stores.set(key, store);
     return store;
   };
+  /**
+   * A clean row read in place (no arrays, no cut fields but the key): a key already seen, the date of the row before,
+   * a plain decimal value. Anything else is left to `record`, which reads it the same way or reports its problem.
+   */
+  function line(s: string, start: number, end: number, lineNo: number, d: string): boolean {
+    let at = start;
+    for (let f = 0; f < width; f++) {
+      const next = f === width - 1 ? end : s.indexOf(d, at);
+      if (next === -1 || next > end) return false;
+      bounds[2 * f] = at;
+      bounds[2 * f + 1] = next;
+      at = next + 1;
+    }
+    if (at <= end) return false;
+    const date = 2 * cells.dateColumn;
+    const stamp = cells.repeatedDate(s, bounds[date], bounds[date + 1]);
+    if (stamp === undefined) return false;
+    const store = data.stores.get(s.slice(bounds[2 * keyAt], bounds[2 * keyAt + 1]).trim());
+    if (store === undefined) return false;
+    const value = plainDecimal(s, bounds[2 * valueAt], bounds[2 * valueAt + 1]);
+    if (value === undefined) return false;
+    store.add(stamp, value, lineNo);
+    if (outOfOrder === 0 && store.outOfOrderLine !== 0) outOfOrder = store.outOfOrderLine;
+    return true;
+  }
+  // Clean CSV lines are read in place: decimal point, exactly the header's fields.
+  const inPlace = cells.source.reader === 'csv' && cells.source.decimal === '.';
+  const bounds: number[] = [];
   return {
     keep,
+    ...(inPlace ? {line} : {}),
     header(header, line) {
       data.headerLine = line;
       width = header.length;
