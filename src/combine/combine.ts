@@ -2,7 +2,7 @@ import type {SeriesAnalysis} from '../analyse/index.js';
 import type {GroupPlan, Plan} from '../config/plan.js';
 import type {RatioParts} from '../derive/formulas/index.js';
 import type {DataNote, Dataset} from '../ingest/types.js';
-import {periodsPerYear, yearAgo} from '../time/period.js';
+import {parsePeriod, periodsPerYear, yearAgo} from '../time/period.js';
 import {align} from './align.js';
 import {groupResult} from './groupResult.js';
 import {hierarchies} from './hierarchies.js';
@@ -80,7 +80,7 @@ export function combine(
         file: plan.packFile,
         line: g.line,
         series: null,
-        note: msg.partsGap(g.id, g.total, period, gap, percent, periods),
+        note: msg.partsGap(g.id, g.total, {frequency, period: parsePeriod(frequency, period)!}, gap, percent, periods),
       });
     }
     if (g.adjustTotal === 'indirect')

@@ -1,3 +1,4 @@
+import type {Frequency} from '../time/period.js';
 import type {Note} from '../words/index.js';
 
 /**
@@ -8,11 +9,16 @@ import type {Note} from '../words/index.js';
 export const partsGap = (
   group: string,
   total: string,
-  period: string,
+  at: {frequency: Frequency; period: number},
   gap: number,
   percent: number,
   periods: number,
-): Note => ({code: 'partsGap', values: {group, total, period, gap: formatNumber(gap), percent: formatNumber(percent), periods}});
+): Note => ({
+  code: 'partsGap',
+  values: {group, total, periods},
+  periods: {frequency: at.frequency, named: {period: at.period}},
+  figures: {gap, percent},
+});
 
 export const mintFallback = (group: string, reason: string): Note => ({code: 'mintFallback', values: {group, reason}});
 
@@ -21,7 +27,3 @@ export const notReconciled = (group: string, why: 'noForecast' | 'notFinite', se
   code: 'notReconciled',
   values: {group, why, series},
 });
-
-function formatNumber(x: number): string {
-  return Number(x.toPrecision(4)).toString();
-}

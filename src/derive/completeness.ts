@@ -1,11 +1,11 @@
-import {periodLabel, periodStartDay, type Frequency} from '../time/period.js';
-import * as msg from '../ingest/messages.js';
+import {periodStartDay, type Frequency} from '../time/period.js';
+import type {Note} from '../words/index.js';
 
 /** Periods of a source that its rows cover whole, and a note for each end period that is cut. */
 export interface Coverage {
   first: number;
   last: number;
-  notes: string[];
+  notes: Note[];
 }
 
 /**
@@ -26,18 +26,23 @@ export function completePeriods(
   frequency: Frequency,
 ): Coverage {
   let {first, last} = periods;
-  const notes: string[] = [];
+  const notes: Note[] = [];
+  const note = (p: number, days: number, edge: 'start' | 'end'): Note => ({
+    code: 'incomplete',
+    values: {days, length: length(p), edge},
+    periods: {frequency, named: {period: p}},
+  });
   const start = periodStartDay(frequency, first);
   const length = (p: number) => periodStartDay(frequency, p + 1) - periodStartDay(frequency, p);
   if (span.from > start) {
     const days = periodStartDay(frequency, first + 1) - span.from;
-    notes.push(msg.incomplete(periodLabel(frequency, first), days, length(first), 'start'));
+    notes.push(note(first, days, 'start'));
     first++;
   }
   const end = periodStartDay(frequency, last + 1) - 1;
   if (span.to < end && last >= first) {
     const days = span.to - periodStartDay(frequency, last) + 1;
-    notes.push(msg.incomplete(periodLabel(frequency, last), days, length(last), 'end'));
+    notes.push(note(last, days, 'end'));
     last--;
   }
   return {first, last, notes};

@@ -50,7 +50,7 @@ export function derive(plan: Plan, readings: Readings): Dataset {
     const c = completePeriods(span, periods, plan.frequency);
     coverage.set(id, {first: c.first, last: c.last});
     notes.push(...c.notes.map((m) => data.cells.note(null, m)));
-    notes.push(data.cells.note(null, msg.combined([...grains.keys()][0], plan.frequency)));
+    notes.push(data.cells.note(null, {code: 'combined', values: {grain: [...grains.keys()][0], frequency: plan.frequency}}));
   }
 
   const found: Derived[] = [];
@@ -88,12 +88,14 @@ export function derive(plan: Plan, readings: Readings): Dataset {
     throw new InputError(problems.list());
   }
   if (plan.period === null) {
-    notes.push({file: plan.packFile, line: null, message: msg.inferredPeriod(formatPeriod(plan.frequency, period))});
+    const periods = {frequency: plan.frequency, named: {period}};
+    notes.push({file: plan.packFile, line: null, series: null, note: {code: 'inferredPeriod', values: {}, periods}});
   }
 
   // A set, not a search of the plans per series: with 10,000 series that search took 14 s.
   const targets = new Set(plans.flatMap((p) => p.target ?? []));
   const series: Series[] = [];
+  const cut = {series: 0, last: period};
   for (const {plan: s, data, start, values, range} of found) {
     const at = (p: number) => (p >= start && p < start + values.length ? values[p - start] : NaN);
     // A target (budget) keeps its values past the review period: the fiscal-year outturn compares against them.
@@ -103,7 +105,11 @@ export function derive(plan: Plan, readings: Readings): Dataset {
       problems.add(plan.packFile, s.line, null, placed.problem);
       continue;
     }
-    const seriesNotes = placed.notes.map((message) => ({file, line: null, message: `${s.id}: ${message}`}));
+    notes.push(...placed.notes.map((note) => ({file, line: null, series: s.id, note})));
+    if (placed.dropped > 0) {
+      cut.series++;
+      cut.last = Math.max(cut.last, range.last);
+    }
     series.push({
       id: s.id,
       frequency: plan.frequency,
@@ -112,8 +118,11 @@ export function derive(plan: Plan, readings: Readings): Dataset {
       ahead: placed.ahead,
       sourceId: s.source,
       file,
-      notes: seriesNotes,
     });
+  }
+  if (cut.series > 0) {
+    const periods = {frequency: plan.frequency, named: {period, last: cut.last}};
+    notes.push({file: plan.packFile, line: null, series: null, note: {code: 'truncated', values: {n: cut.series}, periods}});
   }
   if (problems.size > 0) throw new InputError(problems.list());
   const inputs = plan.sources.flatMap((source) => sources.get(source.id)?.input ?? []);

@@ -9,6 +9,7 @@ import {numberAdvice, parseNumberCell} from './parseNumber.js';
 import {placeAt} from './places.js';
 import type {ProblemLog} from './problemLog.js';
 import {sniffDelimiter} from './sniffDelimiter.js';
+import type {Note} from '../words/index.js';
 import type {DataNote} from './types.js';
 
 /** Most distinct date texts remembered per file: long files repeat each date once per key. */
@@ -59,10 +60,11 @@ export class CellReader {
     this.problems.add(p.file, p.line, p.column, p.prefix + message);
   }
 
-  /** A data note at a line (or row) of this source. */
-  note(line: number | null, message: string): DataNote {
+  /** A data note at a line (or row) of this source; a query source's note names the source and row. */
+  note(line: number | null, note: Note): DataNote {
     const p = placeAt(this.source, this.sheet, line, null);
-    return {file: p.file, line: p.line, message: p.prefix + message};
+    const query = this.source.reader !== 'csv' && this.source.reader !== 'xlsx' ? {query: {source: this.source.id, row: line}} : {};
+    return {file: p.file, line: p.line, series: null, note, ...query};
   }
 
   /** 0-based index of a header name, or -1 with a problem suggesting the nearest name or the right delimiter. */
@@ -143,7 +145,8 @@ export class CellReader {
     const {line, text} = this.held[0];
     const last = this.held[this.held.length - 1].line;
     this.held = [];
-    return [this.note(line, msg.footerIgnored(this.source.dateColumn, line, last, text))];
+    const values = {rows: last - line + 1, column: this.source.dateColumn, text, blank: text === '' ? 'yes' : 'no', last: String(last)};
+    return [this.note(line, {code: 'footerIgnored', values})];
   }
 
   /** Widen the span of days and the range of periods to a stamp. */

@@ -1,22 +1,12 @@
 /**
- * Every problem and note text of the ingest stage, one function each. Problems say what is wrong and
+ * Every problem text of the ingest stage, one function each (its data notes are coded notes, worded by src/words). Problems say what is wrong and
  * how to fix it; the file, line and column travel beside the text (see errors.ts).
  */
 import type {Frequency} from '../time/period.js';
 import type {Grain} from '../time/stamp.js';
 
-const UNIT: Record<Frequency, [string, string]> = {
-  monthly: ['month', 'months'],
-  quarterly: ['quarter', 'quarters'],
-  weekly: ['week', 'weeks'],
-};
 const EXAMPLE: Record<Frequency, string> = {monthly: '2026-10', quarterly: '2026-Q3', weekly: '2026-W41'};
 const LISTED = 12;
-
-/** `1 month`, `3 months`. */
-export function count(frequency: Frequency, n: number): string {
-  return `${n} ${UNIT[frequency][n === 1 ? 0 : 1]}`;
-}
 
 export const emptyFile = (): string => 'the file is empty: it needs a header line and data rows';
 export const noRows = (): string => 'the file has a header line but no data rows';
@@ -64,16 +54,6 @@ export const noData = (): string => 'the pack names no series with data, so ther
 export const unknownSource = (seriesId: string, sourceId: string): string =>
   `series ${seriesId} names source ${sourceId}, which the pack does not define`;
 
-export const outOfOrder = (line: number): string =>
-  `rows are not in date order (first at line ${line}); they were sorted`;
-export const gaps = (frequency: Frequency, labels: string[]): string =>
-  `${count(frequency, labels.length).replace(/ /, ' missing ')}: ${listed(labels)}`;
-export const truncated = (frequency: Frequency, n: number, period: string, from: string, to: string): string =>
-  `${count(frequency, n)} of data after the review period ${period} ignored (${from === to ? from : `${from} to ${to}`})`;
-export const padded = (frequency: Frequency, last: string, n: number, period: string): string =>
-  `data end at ${last}: the ${count(frequency, n)} up to the review period ${period} are missing`;
-export const inferredPeriod = (period: string): string =>
-  `review period ${period}: the pack sets none, so the last period with data is used`;
 
 function shown(delimiter: string): string {
   return delimiter === '\t' ? 'tabs' : `"${delimiter}"`;
@@ -92,9 +72,6 @@ export const unknownMember = (groupId: string, id: string): string =>
 
 const GRAIN: Record<Grain, string> = {day: 'days', week: 'weeks', month: 'months', quarter: 'quarters'};
 
-export const footerIgnored = (column: string, first: number, last: number, text: string): string =>
-  `${first === last ? `1 row` : `${last - first + 1} rows`} after the data ignored ` +
-  `(${text === '' ? `blank "${column}"` : `"${text}"`}${first === last ? '' : ` to line ${last}`}): not a date, so taken as a footer`;
 export const mixedGrains = (
   column: string,
   first: {text: string; line: number; grain: Grain},
@@ -156,8 +133,3 @@ export const duplicateAtPack = (label: string, first: number, second: number, pl
 export const duplicateKeyAtPack = (key: string, label: string, first: number, second: number, place: string): string =>
   `"${key}" has two rows for ${label}, ${place} ${first} and ${second}; keep one row per period, or set ` +
   '`aggregate` on the series to combine them';
-export const combined = (grain: Grain, frequency: Frequency): string =>
-  `rows on ${GRAIN[grain]} combined into ${UNIT[frequency][1]}: by each series' aggregate (default sum for flows, ` +
-  'last for stocks)';
-export const incomplete = (label: string, days: number, length: number, edge: 'start' | 'end'): string =>
-  `${label} has data for ${days} of ${length} days (the data ${edge === 'end' ? 'stop' : 'start'} inside it) and is left out`;

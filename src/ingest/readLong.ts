@@ -105,7 +105,9 @@ export function longVisitor(cells: CellReader, wanted: Wanted, data: SourceData)
       if (outOfOrder === 0 && store.outOfOrderLine !== 0) outOfOrder = store.outOfOrderLine;
     },
     finish() {
-      if (outOfOrder !== 0 && !query) data.notes.push(cells.note(outOfOrder, msg.outOfOrder(outOfOrder)));
+      if (outOfOrder !== 0 && !query) {
+        data.notes.push(cells.note(outOfOrder, {code: 'outOfOrder', values: {line: String(outOfOrder)}}));
+      }
       if (query) {
         const sorted = [...data.stores].sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0));
         data.stores.clear();

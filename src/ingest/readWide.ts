@@ -47,7 +47,7 @@ export function wideVisitor(cells: CellReader, wanted: Wanted, data: SourceData)
       // A query's rows have no order of their own unless it sorts them: no note for them.
       if (stamp.at < previous && !outOfOrder && cells.source.query === null) {
         outOfOrder = true;
-        data.notes.push(cells.note(line, msg.outOfOrder(line)));
+        data.notes.push(cells.note(line, {code: 'outOfOrder', values: {line: String(line)}}));
       }
       previous = stamp.at;
       for (const {at, name, store} of columns) {

@@ -1,4 +1,4 @@
-import type {Note} from '../words/index.js';
+import type {Note, QueryPlace} from '../words/index.js';
 import type {SeriesPlan} from '../config/plan.js';
 import type {Frequency} from '../time/period.js';
 
@@ -18,18 +18,20 @@ export interface Series {
   sourceId: string;
   /** Absolute path of the CSV or workbook it came from; the pack file for a query source. */
   file: string;
-  notes: DataNote[];
 }
 
 /**
- * Something worth telling the reader about the data (not fatal): either a coded note that the words module words in
- * the pack's language (`note`, with `series` the id of the series it is about, or null), or a sentence of the reading
- * stages (`message`, English; the notes of ingest and derive that are not coded yet).
+ * Something worth telling the reader about the data (not fatal), as a coded note that the words module words in the
+ * pack's language: `series` is the id of the series it is about (or null), `query` the query source and row it came
+ * from (query sources only).
  */
-export type DataNote = {file: string; line: number | null} & (
-  | {series: string | null; note: Note; message?: undefined}
-  | {message: string; series?: undefined; note?: undefined}
-);
+export interface DataNote {
+  file: string;
+  line: number | null;
+  series: string | null;
+  note: Note;
+  query?: QueryPlace;
+}
 
 /** An input file (or query) as read, for the manifest and the data-notes page. */
 export interface InputFile {

@@ -5,6 +5,7 @@ import {afterAll, describe, expect, it} from 'vitest';
 import type {Aggregate} from '../../src/config/plan.js';
 import {formatPeriod, parsePeriod, periodLength, type Frequency} from '../../src/time/period.js';
 import {plan, readPack, series, source} from '../ingest/plan.js';
+import {worded} from '../fixtures/notes.js';
 
 /**
  * Aggregation checked against R: test/reference/aggregate.R aggregates R's datasets::airquality (daily, 1 May to
@@ -48,7 +49,7 @@ async function check(frequency: Frequency, groups: Groups, file: string): Promis
   return {
     first: formatPeriod(frequency, data.series[0].start),
     last: formatPeriod(frequency, data.period),
-    notes: data.notes.map((n) => n.message),
+    notes: data.notes.map(worded),
   };
 }
 
@@ -77,7 +78,7 @@ describe('aggregation against R stats::aggregate (datasets::airquality, daily)',
     writeFileSync(file, cut.join('\n') + '\n');
     const monthly = await check('monthly', reference.truncated.monthly, file);
     expect(monthly.last).toBe('1973-08');
-    expect(monthly.notes).toContain('Sep 1973 has data for 12 of 30 days (the data stop inside it) and is left out');
+    expect(monthly.notes).toContain('September 1973 has data for 12 of 30 days (the data stop inside it) and is left out');
     const weekly = await check('weekly', reference.truncated.weekly, file);
     // Wednesday 12 September 1973 is in 1973-W37.
     expect(weekly.last).toBe('1973-W36');

@@ -160,7 +160,7 @@ describe('the same rows through CSV, DuckDB and PostgreSQL', () => {
     const pdf = execFileSync('pdftotext', [join(folder, 'report.pdf'), '-']).toString();
     expect(pdf).toContain('Tills by region');
     const html = await readFile(join(folder, 'report.html'), 'utf8');
-    expect(html).toContain('Jun 2025 has data for 14 of 30 days (the data stop inside it) and is left out');
+    expect(html).toContain('June 2025 has data for 14 of 30 days (the data stop inside it) and is left out');
   }, 60_000);
 
   it('the query runs read-only and under the statement timeout', async () => {

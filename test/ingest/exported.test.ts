@@ -6,6 +6,7 @@ import type {Plan} from '../../src/config/plan.js';
 import {InputError, type Problem} from '../../src/errors.js';
 import {monthIndex} from '../../src/time/period.js';
 import {plan, readPack, series, source} from './plan.js';
+import {worded} from '../fixtures/notes.js';
 
 const temp = mkdtempSync(join(tmpdir(), 'ebbflow-exported-'));
 afterAll(() => rmSync(temp, {recursive: true, force: true}));
@@ -42,9 +43,9 @@ describe('daily and transaction rows in a monthly pack', () => {
     expect([...d.series[0].values]).toEqual([742, 1736]);
     expect([...d.series[1].values]).toEqual([40, 71]);
     expect(d.period).toBe(monthIndex(2026, 3));
-    const notes = d.notes.map((n) => n.message);
-    expect(notes).toContain('Jan 2026 has data for 12 of 31 days (the data start inside it) and is left out');
-    expect(notes).toContain('Apr 2026 has data for 12 of 30 days (the data stop inside it) and is left out');
+    const notes = d.notes.map(worded);
+    expect(notes).toContain('January 2026 has data for 12 of 31 days (the data start inside it) and is left out');
+    expect(notes).toContain('April 2026 has data for 12 of 30 days (the data stop inside it) and is left out');
   });
 
   it('transactions with times: count, mean; empty days are missing unless emptyMeans: zero', async () => {
@@ -75,7 +76,7 @@ describe('daily and transaction rows in a monthly pack', () => {
     const months = write('months.csv', 'month,v\n2026-01,1\n2026-02,2\n2026-03,3\n2026-04,4\n2026-05,5\n2026-06,6\n2026-07,7\n');
     const q = await readPack(plan('quarterly', [source('m', months)], [series('v', 'm')]));
     expect([...q.series[0].values]).toEqual([6, 15]);
-    expect(q.notes.map((n) => n.message)).toContain('Q3 2026 has data for 31 of 92 days (the data stop inside it) and is left out');
+    expect(q.notes.map(worded)).toContain('Q3 2026 has data for 31 of 92 days (the data stop inside it) and is left out');
     // 2026-W01 (Mon 29 Dec 2025, Thursday 1 Jan) to 2026-W09 (Mon 23 Feb to Sun 1 Mar, Thursday 26 Feb).
     const weeks = write('weeks.csv', ['week,v', ...Array.from({length: 9}, (_, i) => `2026-W${String(i + 1).padStart(2, '0')},1`)].join('\n'));
     const m = await readPack(plan('monthly', [source('w', weeks, {dateColumn: 'week'})], [series('v', 'w')]));
@@ -115,7 +116,7 @@ describe('dates and layouts as exports write them', () => {
     const d = await readPack(plan('monthly', [src], [series('umsatz', 'de', {column: 'Umsatz'})], {locale: 'de-DE'}));
     expect([...d.series[0].values]).toEqual([1.5, 2.5, 3]);
     expect(d.series[0].start).toBe(monthIndex(2026, 10));
-    expect(d.notes.map((n) => [n.line, n.message])).toContainEqual([
+    expect(d.notes.map((n) => [n.line, worded(n)])).toContainEqual([
       7,
       '1 row after the data ignored ("Total"): not a date, so taken as a footer',
     ]);

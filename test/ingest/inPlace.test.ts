@@ -30,7 +30,7 @@ async function readBoth(lines: string[], quoted: string[]): Promise<[unknown, un
     const src = source('tx', file, {layout: 'long', dateColumn: 'day', keyColumn: 'region', valueColumn: 'amount'});
     try {
       const data = await readPack(plan('monthly', [src], [], {fromSource: [fromSource('tx', 0)]}));
-      return {series: data.series.map((s) => [s.id, s.start, [...s.values]]), notes: data.notes.map((n) => n.message)};
+      return {series: data.series.map((s) => [s.id, s.start, [...s.values]]), notes: JSON.stringify(data.notes).replaceAll(name, 'FILE')};
     } catch (e) {
       if (!(e instanceof InputError)) throw e;
       return {problems: e.problems.map((p) => `${p.line}:${p.column}: ${p.message.replaceAll(name, 'FILE')}`)};

@@ -9,6 +9,7 @@ import type {Dataset} from '../../src/ingest/index.js';
 import type {Plan} from '../../src/config/plan.js';
 import {isoWeekIndex, monthIndex, quarterIndex} from '../../src/time/period.js';
 import {FIXTURES, fromSource, plan, readPack, series, source} from './plan.js';
+import {placed, worded} from '../fixtures/notes.js';
 
 async function problemsOf(p: Plan): Promise<Problem[]> {
   const error = await readPack(p).then(
@@ -20,7 +21,7 @@ async function problemsOf(p: Plan): Promise<Problem[]> {
 }
 
 const values = (d: Dataset, id: string): number[] => [...d.series.find((s) => s.id === id)!.values];
-const notes = (d: Dataset, id: string): string[] => d.series.find((s) => s.id === id)!.notes.map((n) => n.message);
+const notes = (d: Dataset, id: string): string[] => d.notes.filter((n) => n.series === id).map(worded);
 const temp = mkdtempSync(join(tmpdir(), 'ebbflow-ingest-'));
 afterAll(() => rmSync(temp, {recursive: true, force: true}));
 /** `2000-01` for i = 0, one month per step. */
@@ -41,8 +42,8 @@ describe('wide layout', () => {
     expect(values(d, 'orders')).toEqual([10, 11, NaN, 12, 13, 14]);
     expect(values(d, 'margin')).toEqual([0.5, NaN, 0.6, NaN, NaN, NaN]);
     expect(notes(d, 'margin')).toEqual([
-      'margin: 1 missing month: 2024-02',
-      'margin: data end at 2024-03: the 3 months up to the review period 2024-06 are missing',
+      'margin: 1 missing month: February 2024',
+      'margin: data end at March 2024: the 3 months up to the review period June 2024 are missing',
     ]);
     // Reference: `sha256sum test/fixtures/ingest/wide-bom.csv` (GNU coreutils) and `wc -c`.
     expect(d.inputs).toEqual([
@@ -53,8 +54,11 @@ describe('wide layout', () => {
         rows: 6,
       },
     ]);
-    expect(d.notes.map((n) => n.message)).toEqual([
-      'review period 2024-06: the pack sets none, so the last period with data is used',
+    expect(d.notes.map(worded)).toEqual([
+      'review period June 2024: the pack sets none, so the last period with data is used',
+      'orders: 1 missing month: March 2024',
+      'margin: 1 missing month: February 2024',
+      'margin: data end at March 2024: the 3 months up to the review period June 2024 are missing',
     ]);
     expect(d.plans!.map((s) => s.id)).toEqual(['net_sales', 'orders', 'margin']);
   });
@@ -101,14 +105,14 @@ describe('wide layout', () => {
   it('keeps gaps as NaN and lists them', async () => {
     const d = await readPack(plan('monthly', [source('s', 'gaps.csv')], [series('sales', 's')]));
     expect(values(d, 'sales')).toEqual([10, NaN, NaN, 13, 14, 15, NaN, 17]);
-    expect(notes(d, 'sales')).toEqual(['sales: 3 missing months: 2024-02, 2024-03, 2024-07']);
+    expect(notes(d, 'sales')).toEqual(['sales: 3 missing months: February 2024, March 2024 and July 2024']);
   });
 
   it('sorts rows out of date order and notes it', async () => {
     const file = write('unsorted.csv', 'month,sales\n2024-03,3\n2024-01,1\n2024-02,2\n');
     const d = await readPack(plan('monthly', [source('s', file)], [series('sales', 's')]));
     expect(values(d, 'sales')).toEqual([1, 2, 3]);
-    expect(d.notes[0]).toEqual({
+    expect(placed(d.notes[0])).toEqual({
       file,
       line: 3,
       message: 'rows are not in date order (first at line 3); they were sorted',
@@ -290,7 +294,7 @@ describe('review period', () => {
     expect(d.period).toBe(monthIndex(2024, 8));
     expect(values(d, 'budget')).toEqual([9, 10, 11, 12, 13, 14, NaN, NaN]);
     expect(notes(d, 'budget')).toEqual([
-      'budget: data end at 2024-06: the 2 months up to the review period 2024-08 are missing',
+      'budget: data end at June 2024: the 2 months up to the review period August 2024 are missing',
     ]);
     expect(d.series.find((s) => s.id === 'stock')!.start).toBe(monthIndex(2024, 5));
   });
@@ -299,11 +303,11 @@ describe('review period', () => {
     const d = await readPack(plan('monthly', [src], list(), {period: monthIndex(2024, 6)}));
     expect(d.period).toBe(monthIndex(2024, 6));
     expect(values(d, 'sales')).toEqual([10, 11, 12, 13, 14, 15]);
-    expect(notes(d, 'sales')).toEqual([
-      'sales: 2 months of data after the review period 2024-06 ignored (2024-07 to 2024-08)',
-    ]);
+    expect(notes(d, 'sales')).toEqual([]);
     expect(values(d, 'stock')).toEqual([1, 2]);
-    expect(d.notes).toEqual([]);
+    expect(d.notes.map(worded)).toEqual([
+      'data after the review period June 2024 ignored in 2 series (up to August 2024): a pack for an earlier period sees only the data up to it',
+    ]);
   });
 
   it('hidden series do not set the default review period', async () => {
@@ -338,7 +342,7 @@ describe('long layout', () => {
     expect(d.period).toBe(monthIndex(2024, 8));
     expect(values(d, 'web-visits-uk')).toEqual([100, 110, 120, NaN, NaN, NaN, NaN, NaN]);
     expect(values(d, 'sign-ups').slice(0, 3)).toEqual([5, 6, 7]);
-    expect(d.notes.find((n) => /date order/.test(n.message))).toEqual({
+    expect(placed(d.notes.find((n) => /date order/.test(worded(n))))).toEqual({
       file: join(FIXTURES, 'long.csv'),
       line: 10,
       message: 'rows are not in date order (first at line 10); they were sorted',

@@ -52,7 +52,7 @@ export function deriveFormulas(plan: Plan, data: Dataset): {data: Dataset; ratio
   const checked = checkFormulas(plan, data.plans);
   if (!checked.ok) throw new InputError(checked.problems);
   if (checked.order.length === 0) return {data, ratios: new Map()};
-  const {series, ratios} = deriveSeries(
+  const {series, ratios, notes: formulaNotes} = deriveSeries(
     checked.order.map((o) => ({
       id: o.plan.id,
       formula: o.formula,
@@ -65,6 +65,6 @@ export function deriveFormulas(plan: Plan, data: Dataset): {data: Dataset; ratio
   const byId = new Map([...data.series, ...series].map((s) => [s.id, s]));
   const ordered = checked.plans.flatMap((p) => byId.get(p.id) ?? []);
   // A formula's data notes (divisions by zero) go to the pack's data notes with those of the sources.
-  const notes = [...data.notes, ...series.flatMap((s) => s.notes)];
+  const notes = [...data.notes, ...formulaNotes];
   return {data: {...data, series: ordered, plans: checked.plans, notes}, ratios};
 }

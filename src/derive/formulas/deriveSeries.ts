@@ -1,4 +1,4 @@
-import {formatPeriod, type Frequency} from '../../time/period.js';
+import type {Frequency} from '../../time/period.js';
 import type {DataNote, Series} from '../../ingest/types.js';
 import {evaluateFormula} from './evaluateFormula.js';
 import * as msg from './messages.js';
@@ -35,10 +35,11 @@ export function deriveSeries(
   ordered: readonly DerivedEntry[],
   data: readonly Series[],
   {frequency, period, packFile}: {frequency: Frequency; period: number; packFile: string},
-): {series: Series[]; ratios: Map<string, RatioParts>} {
+): {series: Series[]; ratios: Map<string, RatioParts>; notes: DataNote[]} {
   const byId = new Map(data.map((s) => [s.id, s]));
   const out: Series[] = [];
   const ratios = new Map<string, RatioParts>();
+  const notes: DataNote[] = [];
   for (const entry of ordered) {
     const inputs = references(entry.formula).map((r) => byId.get(r.id)!);
     const start = inputs.length > 0 ? Math.min(...inputs.map((s) => s.start)) : period;
@@ -53,10 +54,9 @@ export function deriveSeries(
       });
     };
     const {values, divisionByZero} = evaluateFormula(entry.formula, lookup, n);
-    const notes: DataNote[] = [];
     if (divisionByZero.length > 0) {
-      const periods = divisionByZero.map((i) => formatPeriod(frequency, start + i));
-      notes.push({file: packFile, line: entry.line, series: entry.id, note: msg.divisionByZero(periods)});
+      const periods = divisionByZero.map((i) => start + i);
+      notes.push({file: packFile, line: entry.line, series: entry.id, note: msg.divisionByZero(frequency, periods)});
     }
     let first = 0;
     while (first < period - start && Number.isNaN(values[first])) first++;
@@ -71,7 +71,6 @@ export function deriveSeries(
       ahead: values.slice(known, last),
       sourceId: '',
       file: packFile,
-      notes,
     };
     if (entry.ratio) {
       const parts = ratioParts(entry.formula)!;
@@ -83,5 +82,5 @@ export function deriveSeries(
     byId.set(entry.id, series);
     out.push(series);
   }
-  return {series: out, ratios};
+  return {series: out, ratios, notes};
 }

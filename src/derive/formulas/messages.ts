@@ -1,3 +1,4 @@
+import type {Frequency} from '../../time/period.js';
 import type {Note} from '../../words/index.js';
 /**
  * Every problem and note text about formulas, one function each. Problems say what is wrong and how to fix it;
@@ -24,7 +25,8 @@ export const ratioWithoutFormula = (id: string): string =>
   `series ${id} has kind ratio, which needs a formula (numerator / denominator) so that year-to-date figures are ratios of sums`;
 
 /** A data note (coded; worded in the pack's language by src/words), led by the series id when worded. */
-export const divisionByZero = (periods: string[]): Note => ({
+export const divisionByZero = (frequency: Frequency, periods: number[]): Note => ({
   code: 'divisionByZero',
-  values: {n: periods.length, list: periods.slice(0, 6).join(', '), more: Math.max(0, periods.length - 6)},
+  values: {n: periods.length},
+  periods: {frequency, named: {list: periods}},
 });

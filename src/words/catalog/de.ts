@@ -391,9 +391,9 @@ export const de: Catalog = {
     'Der Trend der letzten {count} Perioden ist vorläufig: Ein zweiseitiger Filter sieht keine Daten über das Ende hinaus, daher werden diese Werte und der Abstand mit neuen Daten revidiert.',
   'note.outOfOrder': 'Zeilen nicht in Datumsfolge (erstmals in Zeile {line}); sie wurden sortiert',
   'note.gaps':
-    '{frequency, select, monthly {{n, plural, one {# Monat fehlt} other {# Monate fehlen}}} quarterly {{n, plural, one {# Quartal fehlt} other {# Quartale fehlen}}} other {{n, plural, one {# Woche fehlt} other {# Wochen fehlen}}}}: {list}{more, plural, =0 {} other { und # weitere}}',
+    '{frequency, select, monthly {{n, plural, one {# Monat fehlt} other {# Monate fehlen}}} quarterly {{n, plural, one {# Quartal fehlt} other {# Quartale fehlen}}} other {{n, plural, one {# Woche fehlt} other {# Wochen fehlen}}}}: {list}',
   'note.truncated':
-    '{frequency, select, monthly {{n, plural, one {# Monat} other {# Monate}}} quarterly {{n, plural, one {# Quartal} other {# Quartale}}} other {{n, plural, one {# Woche} other {# Wochen}}}} an Daten nach dem Berichtszeitraum {period} nicht berücksichtigt ({same, select, yes {{from}} other {{from} bis {to}}})',
+    'Daten nach dem Berichtszeitraum {period} in {n, plural, one {# Reihe} other {# Reihen}} nicht berücksichtigt (bis {last}): Ein Paket für einen früheren Zeitraum sieht nur die Daten bis zu diesem',
   'note.padded':
     'Daten enden mit {last}: {frequency, select, monthly {{n, plural, one {# Monat} other {# Monate}}} quarterly {{n, plural, one {# Quartal} other {# Quartale}}} other {{n, plural, one {# Woche} other {# Wochen}}}} bis zum Berichtszeitraum {period} fehlen',
   'note.inferredPeriod': 'Berichtszeitraum {period}: Das Paket legt keinen fest, daher gilt die letzte Periode mit Daten',
@@ -403,7 +403,14 @@ export const de: Catalog = {
   'note.mintFallback': 'Gruppe {group}: Die Kovarianz der Einschrittfehler ist unbrauchbar ({reason}); Prognosen per OLS statt MinT abgestimmt',
   'note.notReconciled':
     'Gruppe {group}: Prognosen nicht abgestimmt ({why, select, noForecast {{series} hat keine Prognose} other {die Prognosen sind nicht endlich}})',
-  'note.divisionByZero': 'Division durch null in {n, plural, one {Periode} other {den Perioden}} {list}{more, plural, =0 {} other { und # weiteren}}; als fehlend belassen',
+  'note.divisionByZero': 'Division durch null in {n, plural, one {Periode} other {den Perioden}} {list}; als fehlend belassen',
+  'note.footerIgnored':
+    '{rows, plural, one {1 Zeile} other {# Zeilen}} nach den Daten nicht berücksichtigt ({blank, select, yes {leere Spalte „{column}“} other {„{text}“}}{rows, plural, one {} other { bis Zeile {last}}}): kein Datum, daher als Fußzeile gewertet',
+  'note.combined':
+    'Zeilen auf {grain, select, day {Tagesebene} week {Wochenebene} month {Monatsebene} other {Quartalsebene}} zu {frequency, select, monthly {Monaten} quarterly {Quartalen} other {Wochen}} zusammengefasst: nach der Aggregation jeder Reihe (Standard: Summe für Stromgrößen, letzter Wert für Bestandsgrößen)',
+  'note.incomplete':
+    '{period} enthält Daten für {days} von {length} Tagen (die Daten {edge, select, end {enden} other {beginnen}} innerhalb der Periode) und bleibt unberücksichtigt',
+  'note.ofQuery': 'Quelle {source}{at, select, row {, Abfragezeile {row}} other {}}: {text}',
   'note.noValuesToChart': 'Die Reihe hat keine Werte für eine Grafik.',
 
   // Archive index page

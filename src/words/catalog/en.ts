@@ -390,9 +390,9 @@ export const en = {
     'The trend over the latest {count} periods is provisional: a two-sided filter sees no data beyond the end, so these values and the gap will be revised as new data arrive.',
   'note.outOfOrder': 'rows are not in date order (first at line {line}); they were sorted',
   'note.gaps':
-    '{n} missing {frequency, select, monthly {{n, plural, one {month} other {months}}} quarterly {{n, plural, one {quarter} other {quarters}}} other {{n, plural, one {week} other {weeks}}}}: {list}{more, plural, =0 {} other { and # more}}',
+    '{n} missing {frequency, select, monthly {{n, plural, one {month} other {months}}} quarterly {{n, plural, one {quarter} other {quarters}}} other {{n, plural, one {week} other {weeks}}}}: {list}',
   'note.truncated':
-    '{frequency, select, monthly {{n, plural, one {# month} other {# months}}} quarterly {{n, plural, one {# quarter} other {# quarters}}} other {{n, plural, one {# week} other {# weeks}}}} of data after the review period {period} ignored ({same, select, yes {{from}} other {{from} to {to}}})',
+    'data after the review period {period} ignored in {n, plural, one {# series} other {# series}} (up to {last}): a pack for an earlier period sees only the data up to it',
   'note.padded':
     'data end at {last}: the {frequency, select, monthly {{n, plural, one {# month} other {# months}}} quarterly {{n, plural, one {# quarter} other {# quarters}}} other {{n, plural, one {# week} other {# weeks}}}} up to the review period {period} are missing',
   'note.inferredPeriod': 'review period {period}: the pack sets none, so the last period with data is used',
@@ -402,7 +402,14 @@ export const en = {
   'note.mintFallback': 'group {group}: the one-step error covariance is unusable ({reason}); forecasts reconciled by OLS instead of MinT',
   'note.notReconciled':
     'group {group}: forecasts not reconciled ({why, select, noForecast {{series} has no forecast} other {the forecasts are not finite}})',
-  'note.divisionByZero': 'division by zero in {n, plural, one {period} other {periods}} {list}{more, plural, =0 {} other { and # more}}; left missing',
+  'note.divisionByZero': 'division by zero in {n, plural, one {period} other {periods}} {list}; left missing',
+  'note.footerIgnored':
+    '{rows, plural, one {1 row} other {# rows}} after the data ignored ({blank, select, yes {blank "{column}"} other {"{text}"}}{rows, plural, one {} other { to line {last}}}): not a date, so taken as a footer',
+  'note.combined':
+    'rows on {grain, select, day {days} week {weeks} month {months} other {quarters}} combined into {frequency, select, monthly {months} quarterly {quarters} other {weeks}}: by each series’ aggregate (default sum for flows, last for stocks)',
+  'note.incomplete':
+    '{period} has data for {days} of {length} days (the data {edge, select, end {stop} other {start}} inside it) and is left out',
+  'note.ofQuery': 'source {source}{at, select, row {, query row {row}} other {}}: {text}',
   'note.noValuesToChart': 'The series has no values to chart.',
 
   // Archive index page

@@ -390,9 +390,9 @@ export const fr: Catalog = {
     'La tendance des {count} dernières périodes est provisoire : un filtre bilatéral ne voit aucune donnée au-delà de la fin ; ces valeurs et l’écart seront révisés avec de nouvelles données.',
   'note.outOfOrder': 'lignes hors de l’ordre chronologique (dès la ligne {line}) ; elles ont été triées',
   'note.gaps':
-    '{frequency, select, monthly {{n, plural, one {# mois manquant} other {# mois manquants}}} quarterly {{n, plural, one {# trimestre manquant} other {# trimestres manquants}}} other {{n, plural, one {# semaine manquante} other {# semaines manquantes}}}} : {list}{more, plural, =0 {} other { et # autres}}',
+    '{frequency, select, monthly {{n, plural, one {# mois manquant} other {# mois manquants}}} quarterly {{n, plural, one {# trimestre manquant} other {# trimestres manquants}}} other {{n, plural, one {# semaine manquante} other {# semaines manquantes}}}} : {list}',
   'note.truncated':
-    '{frequency, select, monthly {{n, plural, one {# mois} other {# mois}}} quarterly {{n, plural, one {# trimestre} other {# trimestres}}} other {{n, plural, one {# semaine} other {# semaines}}}} de données après la période sous revue {period} ignorés ({same, select, yes {{from}} other {{from} à {to}}})',
+    'données postérieures à la période sous revue {period} ignorées dans {n, plural, one {# série} other {# séries}} (jusqu’à {last}) : un dossier établi pour une période antérieure ne voit que les données jusqu’à celle-ci',
   'note.padded':
     'les données s’arrêtent à {last} : {frequency, select, monthly {{n, plural, one {# mois manque} other {# mois manquent}}} quarterly {{n, plural, one {# trimestre manque} other {# trimestres manquent}}} other {{n, plural, one {# semaine manque} other {# semaines manquent}}}} jusqu’à la période sous revue {period}',
   'note.inferredPeriod': 'période sous revue {period} : le dossier n’en fixe pas, la dernière période avec des données est retenue',
@@ -402,7 +402,14 @@ export const fr: Catalog = {
   'note.mintFallback': 'groupe {group} : la covariance des erreurs à un pas est inutilisable ({reason}) ; prévisions réconciliées par MCO au lieu de MinT',
   'note.notReconciled':
     'groupe {group} : prévisions non réconciliées ({why, select, noForecast {{series} n’a pas de prévision} other {les prévisions ne sont pas finies}})',
-  'note.divisionByZero': 'division par zéro pour {n, plural, one {la période} other {les périodes}} {list}{more, plural, =0 {} other { et # autres}} ; laissé manquant',
+  'note.divisionByZero': 'division par zéro pour {n, plural, one {la période} other {les périodes}} {list} ; laissé manquant',
+  'note.footerIgnored':
+    '{rows, plural, one {1 ligne ignorée} other {# lignes ignorées}} après les données ({blank, select, yes {« {column} » vide} other {« {text} »}}{rows, plural, one {} other { jusqu’à la ligne {last}}}) : {rows, plural, one {ce n’est pas une date, elle est donc lue} other {ce ne sont pas des dates, elles sont donc lues}} comme un pied de tableau',
+  'note.combined':
+    'lignes {grain, select, day {journalières} week {hebdomadaires} month {mensuelles} other {trimestrielles}} regroupées en {frequency, select, monthly {mois} quarterly {trimestres} other {semaines}} : selon l’agrégation de chaque série (par défaut la somme pour les flux, la dernière valeur pour les stocks)',
+  'note.incomplete':
+    '{period} : données pour {days} jours sur {length} seulement (les données {edge, select, end {s’arrêtent} other {commencent}} en cours de période) ; la période est écartée',
+  'note.ofQuery': 'source {source}{at, select, row {, ligne {row} de la requête} other {}} : {text}',
   'note.noValuesToChart': 'La série n’a aucune valeur à représenter.',
 
   // Archive index page
