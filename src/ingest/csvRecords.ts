@@ -58,8 +58,10 @@ export class CsvRecords {
       const nl = lf === -1 ? cr : cr === -1 ? lf : Math.min(lf, cr);
       if (nl === -1 && !eof) break;
       const end = nl === -1 ? s.length : nl;
-      const next = nl === -1 ? s.length : s[nl] === '\r' && s[nl + 1] === '\n' ? nl + 2 : nl + 1;
-      if (nl !== -1 && s[nl] === '\r' && nl + 1 === s.length && !eof) break; // a CR at the end may be half of CRLF
+      // Character codes, not one-character strings: this runs once per line.
+      const isCr = nl !== -1 && s.charCodeAt(nl) === 13;
+      const next = nl === -1 ? s.length : isCr && s.charCodeAt(nl + 1) === 10 ? nl + 2 : nl + 1;
+      if (isCr && nl + 1 === s.length && !eof) break; // a CR at the end may be half of CRLF
       if (this.line < this.fromLine) {
         this.line++;
         i = next;
