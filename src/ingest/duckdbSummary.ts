@@ -55,8 +55,8 @@ const LAST_DAY = daysFromCivil(9999, 12, 31);
  *   date within the years 1000–9999; keys are neither NULL nor blank, no two differ only by surrounding blanks, and rows are finer than the pack.
  *
  * Then each period holds what the rows would have given, to the last bit, and the stores come in key order either
- * way. The manifest's SHA-256 is of the summaries' canonical text (COPY text form, ordered by key and period): a
- * change to the table that changes any count, sum, extreme or covered day changes it.
+ * way. The manifest's SHA-256 is of the summaries in a canonical form ({@link SummaryHash}, ordered by key and
+ * period): a change to the table that changes any count, sum, extreme or covered day changes it.
  */
 export async function duckdbSummary(
   connection: DuckDBConnection,
@@ -144,9 +144,7 @@ export async function duckdbSummary(
   if (!instants) return null;
 
   visitor.header(names, 0);
-  const hash = createHash('sha256');
-  let text = line(['key', 'period', 'rows', 'values', 'millionths', 'min', 'max', 'first day', 'last day', 'first ms', 'last ms']);
-  let bytes = 0;
+  const hash = new SummaryHash();
   let rows = 0;
   let from = Infinity;
   let to = -Infinity;
@@ -179,23 +177,60 @@ export async function duckdbSummary(
     rows += n[g] as number;
     if (first < from) from = first;
     if (last > to) to = last;
-    // Only the key may need escaping; the rest are numbers (or \N).
-    const fields = [p, n[g], nv[g], units, lo[g], hi[g], first, last, t0[g], t1[g]];
-    text += line([k[g] as string]).slice(0, -1);
-    for (const f of fields) text += f === null ? '\t\\N' : `\t${f}`;
-    text += '\n';
-    if (text.length > 1 << 16 || g === groups - 1) {
-      bytes += Buffer.byteLength(text);
-      hash.update(text);
-      text = '';
-    }
+    hash.add(k[g] as string, units, [p, n[g], nv[g], lo[g], hi[g], first, last, t0[g], t1[g]] as (number | null)[]);
   }
   cells.summarised(from, to, periodOfDay(frequency, from), periodOfDay(frequency, to));
   return {
     file: `${source.id} (duckdb query)`,
-    sha256: hash.digest('hex'),
-    bytes,
+    sha256: hash.digest(),
+    bytes: hash.bytes,
     rows,
     query: {engine: 'duckdb', text: source.query ?? '', summarised: true},
   };
 }
+
+/**
+ * SHA-256 of the summaries in a canonical form, in order: for each batch of 4,096 groups, their keys (COPY text form,
+ * one line each, a sum beyond 2^53 millionths as one more line of its digits), then each group's numbers as
+ * little-endian 64-bit floats (period, rows, values, sum in millionths, minimum, maximum, first and last day, first
+ * and last instant; NaN for none). Numbers as bytes, not text: writing 3 million numbers as text took 0.5 s.
+ */
+class SummaryHash {
+  private readonly hash = createHash('sha256');
+  private readonly numbers = new DataView(new ArrayBuffer(BATCH * FIELDS * 8));
+  private keys = '';
+  private filled = 0;
+  bytes = 0;
+
+  constructor() {
+    this.keys = line(['key', 'period', 'rows', 'values', 'millionths', 'min', 'max', 'first day', 'last day', 'first ms', 'last ms']);
+  }
+
+  add(key: string, units: bigint, numbers: (number | null)[]): void {
+    this.keys += line([key]);
+    const big = units > MAX_UNITS || units < -MAX_UNITS;
+    if (big) this.keys += `${units}\n`;
+    const o = this.filled * FIELDS * 8;
+    const values = [numbers[0], numbers[1], numbers[2], big ? NaN : Number(units), ...numbers.slice(3)];
+    for (let f = 0; f < FIELDS; f++) this.numbers.setFloat64(o + 8 * f, values[f] ?? NaN, true);
+    if (++this.filled === BATCH) this.flush();
+  }
+
+  digest(): string {
+    this.flush();
+    return this.hash.digest('hex');
+  }
+
+  private flush(): void {
+    const numbers = new Uint8Array(this.numbers.buffer, 0, this.filled * FIELDS * 8);
+    this.hash.update(this.keys);
+    this.hash.update(numbers);
+    this.bytes += Buffer.byteLength(this.keys) + numbers.length;
+    this.keys = '';
+    this.filled = 0;
+  }
+}
+
+const BATCH = 4096;
+const FIELDS = 10;
+const MAX_UNITS = BigInt(Number.MAX_SAFE_INTEGER);
