@@ -122,6 +122,18 @@ describe('a DuckDB query summed up by the engine', () => {
     }
   });
 
+  it('query rows have no order of their own: keys in text order, no note about date order, on both paths', async () => {
+    const backwards = `${AS_TEXT} ORDER BY day DESC, account DESC`;
+    const rows = await read(backwards, 'monthly', 'sum');
+    const summed = await read(`${SUMMED} ORDER BY day DESC, account DESC`, 'monthly', 'sum');
+    expect(summed.inputs[0].query?.summarised).toBe(true);
+    const ids = rows.series.map((x) => x.id);
+    expect(ids).toEqual([...ids].sort());
+    expect(summed.series.map((x) => x.id)).toEqual(ids);
+    expect(rows.notes.some((n) => n.note?.code === 'outOfOrder')).toBe(false);
+    expect(summed.notes).toEqual(rows.notes);
+  });
+
   it('the manifest hash follows the summaries: a changed amount changes it, the same table keeps it', async () => {
     const a = await read(SUMMED, 'monthly', 'sum');
     const b = await read(SUMMED, 'monthly', 'sum');
