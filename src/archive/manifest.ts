@@ -16,9 +16,18 @@ export interface Manifest {
   plan: unknown;
   /**
    * Every input file; paths relative to the pack file's folder, `/`-separated; sorted by path. A query source is
-   * `<id> (<engine> query)` with its engine and query text; its hash is of the rows it returned (ingest/queryRows.ts).
+   * `<id> (<engine> query)` with its engine and query text; its hash is of the rows it returned (ingest/queryRows.ts),
+   * or, with `hashed: "period summaries"`, of the summaries by key and period the engine made (ingest/duckdbSummary.ts).
    */
-  inputs: {file: string; bytes: number; sha256: string; rows: number; engine?: string; query?: string}[];
+  inputs: {
+    file: string;
+    bytes: number;
+    sha256: string;
+    rows: number;
+    engine?: string;
+    query?: string;
+    hashed?: 'period summaries';
+  }[];
   /** Every file written beside the manifest (paths relative to the period folder), sorted by path. */
   outputs: {path: string; bytes: number; sha256: string}[];
   warnings: string[];
@@ -51,6 +60,7 @@ export function buildManifest(args: {
         sha256: f.sha256,
         rows: f.rows,
         ...(f.query ? {engine: f.query.engine, query: f.query.text} : {}),
+        ...(f.query?.summarised ? {hashed: 'period summaries' as const} : {}),
       }))
       .sort((a, b) => compare(a.file, b.file)),
     outputs: args.outputs

@@ -109,6 +109,16 @@ export class CellReader {
     return undefined;
   }
 
+  /**
+   * The stamp of the date cell before, when the text `s` from `a` to `b` repeats it and no row is held back (what
+   * {@link CellReader.stamp} would return for it, with nothing else to record), else undefined.
+   */
+  repeatedDate(s: string, a: number, b: number): Stamp | undefined {
+    const last = this.lastText;
+    if (this.lastStamp === undefined || this.held.length > 0 || b - a !== last.length) return undefined;
+    return s.startsWith(last, a) ? this.lastStamp : undefined;
+  }
+
   /** Number in a cell (NaN when missing), or undefined (problem reported). */
   value(text: string, line: number, at: number, name: string): number | undefined {
     const value = parseNumberCell(text, this.decimal);
@@ -117,6 +127,16 @@ export class CellReader {
       this.report(line, at + 1, msg.notANumber(text.trim(), name, advice));
     }
     return value;
+  }
+
+  /**
+   * Rows that a database engine summed up by period instead of handing them over (duckdbSummary.ts): all dated by
+   * day, covering the days `from` … `to` and the pack periods `first` … `last`.
+   */
+  summarised(from: number, to: number, first: number, last: number): void {
+    this.grains.set('day', {line: 1, text: ''});
+    this.span = {from, to};
+    this.periods = {first, last};
   }
 
   /** Rows still held back at the end of the data: a footer, told in one note (or nothing when there is none). */

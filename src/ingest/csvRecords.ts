@@ -13,7 +13,8 @@ export class CsvSyntaxError extends Error {
  * with the 1-based line where each record ends. Lines end in LF, CRLF or CR; empty lines are skipped; records
  * may have any number of fields. A field that starts with `"` is quoted: it may hold delimiters, line breaks and
  * `""` for a quote, and must close before the next delimiter or line end. A quote inside an unquoted field is kept
- * as a character. Lines before `fromLine` are skipped unread (title lines above a header).
+ * as a character. Lines before `fromLine` are skipped unread (title lines above a header). A line without quotes is
+ * first offered whole to `onLine` (when given), which may read it without the fields being cut.
  *
  * Why not a general CSV library: a line without a quote, the common case of exports, is cut with `String.split`,
  * several times faster per row than a character-by-character parser (measured with the ingest benchmark); quoted
@@ -30,6 +31,7 @@ export class CsvRecords {
     private readonly delimiter: string,
     private readonly onRecord: (fields: string[], line: number) => void,
     private readonly fromLine = 1,
+    private readonly onLine?: (s: string, start: number, end: number, line: number) => boolean,
   ) {}
 
   /** Take a chunk of text; whole records in it are handed on, the incomplete tail is kept. */
@@ -56,15 +58,17 @@ export class CsvRecords {
       const nl = lf === -1 ? cr : cr === -1 ? lf : Math.min(lf, cr);
       if (nl === -1 && !eof) break;
       const end = nl === -1 ? s.length : nl;
-      const next = nl === -1 ? s.length : s[nl] === '\r' && s[nl + 1] === '\n' ? nl + 2 : nl + 1;
-      if (nl !== -1 && s[nl] === '\r' && nl + 1 === s.length && !eof) break; // a CR at the end may be half of CRLF
+      // Character codes, not one-character strings: this runs once per line.
+      const isCr = nl !== -1 && s.charCodeAt(nl) === 13;
+      const next = nl === -1 ? s.length : isCr && s.charCodeAt(nl + 1) === 10 ? nl + 2 : nl + 1;
+      if (isCr && nl + 1 === s.length && !eof) break; // a CR at the end may be half of CRLF
       if (this.line < this.fromLine) {
         this.line++;
         i = next;
         continue;
       }
       if (qt === -1 || qt >= end) {
-        if (end > i) this.onRecord(fieldsOf(s, i, end, d), this.line);
+        if (end > i && !this.onLine?.(s, i, end, this.line)) this.onRecord(fieldsOf(s, i, end, d), this.line);
         this.line++;
         i = next;
         continue;

@@ -55,7 +55,13 @@ function wantedFrom(plan: Plan, sourceId: string): Wanted {
     if (!lines.has(s.column)) lines.set(s.column, s.line);
   }
   const all = (plan.fromSource ?? []).some((f) => f.source === sourceId);
-  return {names, all, pack: {file: plan.packFile, lines}};
+  // The same defaults as derive/aggregate.ts's defaultAggregate: stocks take the period's last value.
+  const byOrder = (s: {aggregate?: string | null; kind: string}) =>
+    s.aggregate === 'first' || s.aggregate === 'last' || (s.aggregate == null && s.kind === 'stock');
+  const ordered =
+    plan.series.some((s) => s.source === sourceId && byOrder(s)) ||
+    (plan.fromSource ?? []).some((f) => f.source === sourceId && byOrder(f.template));
+  return {names, all, pack: {file: plan.packFile, lines}, ordered};
 }
 
 /** Targets and group members must name a series once `fromSource` entries are expanded. */

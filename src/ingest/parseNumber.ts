@@ -23,7 +23,11 @@ export function parseNumberCell(text: string, decimal: '.' | ','): number | unde
 
 /** {@link parseNumberCell} before the overflow check. */
 function readNumber(text: string, decimal: '.' | ','): number | undefined {
-  if (decimal === '.' && PLAIN.test(text)) return Number(text);
+  if (decimal === '.') {
+    const fast = plainDecimal(text);
+    if (fast !== undefined) return fast;
+    if (PLAIN.test(text)) return Number(text);
+  }
   let s = text.trim();
   if (MISSING.has(s.toLowerCase())) return NaN;
   let sign = 1;
@@ -45,6 +49,35 @@ function readNumber(text: string, decimal: '.' | ','): number | undefined {
   const plain = (decimal === '.' ? DOT_PLAIN : COMMA_PLAIN).exec(s);
   if (plain) return sign * Number(decimal === '.' ? s : s.replace(',', '.'));
   return undefined;
+}
+
+const POWERS = [1, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9, 1e10, 1e11, 1e12, 1e13, 1e14, 1e15];
+
+/**
+ * Plain decimal text of at most 15 digits (`-12.34`, `100`, `.5`, `7.`) read from its characters (`text` from
+ * `start` to `end`, so a CSV line need not be cut), or undefined for anything else. Equal to `Number(text)`: the digits form an integer below 2^53 and 10^k is exact, so their quotient
+ * is the correctly rounded value (Clinger's fast path). Several times faster than a regular expression and Number.
+ */
+export function plainDecimal(text: string, start = 0, end = text.length): number | undefined {
+  const n = end;
+  if (n === start || n - start > 17) return undefined;
+  const negative = text.charCodeAt(start) === 45;
+  let i = negative ? start + 1 : start;
+  let m = 0;
+  let digits = 0;
+  let places = -1;
+  for (; i < n; i++) {
+    const c = text.charCodeAt(i);
+    if (c >= 48 && c <= 57) {
+      m = m * 10 + (c - 48);
+      digits++;
+      if (places >= 0) places++;
+    } else if (c === 46 && places < 0) places = 0;
+    else return undefined;
+  }
+  if (digits === 0 || digits > 15) return undefined;
+  const v = places > 0 ? m / POWERS[places] : m;
+  return negative ? -v : v;
 }
 
 /** Why a cell that {@link parseNumberCell} rejected is not a number, and how to fix it. */

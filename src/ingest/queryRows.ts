@@ -60,7 +60,7 @@ export class QueryRows {
 const SPECIAL = /[\\\t\n\r]/;
 
 /** One row in COPY text form: fields tab-separated, NULL as `\N`, backslash, tab and line breaks escaped. */
-function line(fields: readonly (string | null)[]): string {
+export function line(fields: readonly (string | null)[]): string {
   let out = '';
   for (let i = 0; i < fields.length; i++) {
     const f = fields[i];

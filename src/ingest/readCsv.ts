@@ -68,6 +68,13 @@ export async function readCsv(
         }
       },
       source.headerRow,
+      visitor.line === undefined
+        ? undefined
+        : (s, start, end, line) => {
+            if (stopped || !headerSeen || !visitor.line!(s, start, end, line, delimiter)) return false;
+            rows++;
+            return true;
+          },
     );
     records.push(head.replace(/^\ufeff/, ''));
     for (;;) {

@@ -1,9 +1,12 @@
 import path from 'node:path';
 import {DuckDBInstance, StatementType} from '@duckdb/node-api';
 import type {CellReader} from './cells.js';
+import {duckdbSummary} from './duckdbSummary.js';
 import * as msg from './messages.js';
 import {QueryRows} from './queryRows.js';
+import type {LongVisitor} from './readLong.js';
 import type {RowVisitor} from './rowVisitor.js';
+import type {Wanted} from './sourceData.js';
 import type {InputFile} from './types.js';
 
 /** A SQL string literal. */
@@ -28,8 +31,15 @@ const quote = (s: string) => `'${s.replace(/'/g, "''")}'`;
  *
  * Engine failures become problems at the source's pack line: a syntax or binder error with DuckDB's own first
  * line, a file outside the allowed folders, a missing extension, no rows.
+ *
+ * A long source is first offered to {@link duckdbSummary}, which has the engine sum the rows up by key and period
+ * when that gives exactly what the rows would; otherwise (and for wide sources) the rows are read one by one.
  */
-export async function readDuckdb(cells: CellReader, visitor: RowVisitor): Promise<InputFile | undefined> {
+export async function readDuckdb(
+  cells: CellReader,
+  visitor: RowVisitor,
+  long?: {visitor: LongVisitor; wanted: Wanted},
+): Promise<InputFile | undefined> {
   const {source} = cells;
   const query = (source.query ?? '').trim().replace(/;\s*$/, '');
   const packDir = path.dirname(source.file);
@@ -66,6 +76,8 @@ export async function readDuckdb(cells: CellReader, visitor: RowVisitor): Promis
       return undefined;
     }
     prepared.destroySync();
+    const summary = long && (await duckdbSummary(connection, query, cells, long.visitor, long.wanted));
+    if (summary) return summary;
     const result = await connection.stream(`SELECT COLUMNS(*)::VARCHAR FROM (${query}\n)`);
     const rows = new QueryRows(source, visitor);
     if (!rows.header(result.columnNames())) return undefined;

@@ -4,7 +4,7 @@ import {CellReader} from './cells.js';
 import * as msg from './messages.js';
 import type {ProblemLog} from './problemLog.js';
 import {readCsv} from './readCsv.js';
-import {longVisitor} from './readLong.js';
+import {longVisitor, type LongVisitor} from './readLong.js';
 import {wideVisitor} from './readWide.js';
 import type {RowVisitor} from './rowVisitor.js';
 import type {SourceData, Wanted} from './sourceData.js';
@@ -26,7 +26,7 @@ export async function readSource(
   const data: SourceData = {input: undefined, stores: new Map(), headerLine: 1, columnNumbers: new Map(), notes: [], cells};
   const long = source.layout === 'long' ? longVisitor(cells, wanted, data) : undefined;
   const visitor = long ?? wideVisitor(cells, wanted, data);
-  data.input = await rowsOf(cells, visitor, problems);
+  data.input = await rowsOf(cells, visitor, problems, long && {visitor: long, wanted});
   if (data.input !== undefined) {
     if (long !== undefined && data.input.rows > 0) long.finish();
     data.notes.push(...cells.finish());
@@ -36,14 +36,19 @@ export async function readSource(
 }
 
 /** The reader of a source; the workbook and database libraries load only for packs that use them (about 1 s). */
-async function rowsOf(cells: CellReader, visitor: RowVisitor, problems: ProblemLog): Promise<InputFile | undefined> {
+async function rowsOf(
+  cells: CellReader,
+  visitor: RowVisitor,
+  problems: ProblemLog,
+  long: {visitor: LongVisitor; wanted: Wanted} | undefined,
+): Promise<InputFile | undefined> {
   switch (cells.source.reader) {
     case 'csv':
       return readCsv(cells.source, visitor, problems);
     case 'xlsx':
       return (await import('./readXlsx.js')).readXlsx(cells, visitor, problems);
     case 'duckdb':
-      return (await import('./readDuckdb.js')).readDuckdb(cells, visitor);
+      return (await import('./readDuckdb.js')).readDuckdb(cells, visitor, long);
     case 'postgres':
       return (await import('./readPostgres.js')).readPostgres(cells, visitor);
   }

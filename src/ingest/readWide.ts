@@ -44,7 +44,8 @@ export function wideVisitor(cells: CellReader, wanted: Wanted, data: SourceData)
         return;
       }
       if (fields.length < width) cells.report(line, null, msg.shortRow(fields.length, width));
-      if (stamp.at < previous && !outOfOrder) {
+      // A query's rows have no order of their own unless it sorts them: no note for them.
+      if (stamp.at < previous && !outOfOrder && cells.source.query === null) {
         outOfOrder = true;
         data.notes.push(cells.note(line, {code: 'outOfOrder', values: {line: String(line)}}));
       }

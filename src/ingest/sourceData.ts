@@ -25,4 +25,9 @@ export interface Wanted {
   all: boolean;
   /** Pack file and the pack line of the first series naming each key, so a missing key points at the pack. */
   pack?: {file: string; lines: Map<string, number>};
+  /**
+   * Whether some series reading the source takes the first or last value of a period (`aggregate: first|last`, or a
+   * stock's default): those depend on the rows' order, so an engine may not sum the rows up for ingest.
+   */
+  ordered?: boolean;
 }

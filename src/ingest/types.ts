@@ -41,8 +41,11 @@ export interface InputFile {
   bytes: number;
   /** Data rows read (header excluded). */
   rows: number;
-  /** Query sources: the engine and the query text as written in the pack (the hash is of the rows it returned). */
-  query?: {engine: 'duckdb' | 'postgres'; text: string};
+  /**
+   * Query sources: the engine and the query text as written in the pack. The hash is of the rows it returned, or,
+   * when `summarised`, of the per-key, per-period summaries the engine computed from them (ingest/duckdbSummary.ts).
+   */
+  query?: {engine: 'duckdb' | 'postgres'; text: string; summarised?: boolean};
 }
 
 /** Everything ingest produced for one pack. */

@@ -73,3 +73,18 @@ describe('properties', () => {
     }));
   });
 });
+
+describe('plain decimals read from their characters', () => {
+  it('equal Number(text) bit for bit on seeded random decimals (fast-check)', () => {
+    fc.assert(
+      fc.property(fc.bigInt({min: 0n, max: 999_999_999_999_999n}), fc.integer({min: 0, max: 15}), fc.boolean(), (m, k, neg) => {
+        const digits = m.toString().padStart(k + 1, '0');
+        const text = `${neg ? '-' : ''}${k === 0 ? digits : `${digits.slice(0, -k)}.${digits.slice(-k)}`}`;
+        expect(Object.is(parseNumberCell(text, '.'), Number(text)), text).toBe(true);
+      }),
+      {seed: 3, numRuns: 2000},
+    );
+    for (const text of ['.5', '7.', '-0', '-.25', '0.1', '9007199254740993', '1234567890.12345'])
+      expect(Object.is(parseNumberCell(text, '.'), Number(text)), text).toBe(true);
+  });
+});
