@@ -18,7 +18,10 @@ export const utf8BomInWindows1252 = (): string =>
   'the file starts with a UTF-8 byte-order mark but the source says `encoding: windows-1252`; remove that line (UTF-8 is the default)';
 
 export const missingColumn = (what: string, name: string, suggestion: string | undefined, header: string[]): string =>
-  `${what} "${name}" is not in the header` +
+  header.filter((h) => h.trim() !== '').length <= 1
+    ? `${what} "${name}" is not in the header, which holds only ${header.length === 0 || header[0].trim() === '' ? 'blanks' : `"${header[0].trim()}"`}: ` +
+      'if title lines stand above the column names, set `headerRow` on the source to the line that holds them'
+    : `${what} "${name}" is not in the header` +
   (suggestion !== undefined
     ? `; did you mean "${suggestion}"?`
     : `; the columns are: ${listed(header.map((h) => `"${h}"`))}`);
