@@ -5,7 +5,7 @@ import * as msg from '../ingest/messages.js';
 import type {PeriodStore} from '../ingest/periodStore.js';
 import type {SourceData} from '../ingest/sourceData.js';
 import type {DataNote, Dataset, Series} from '../ingest/types.js';
-import {formatPeriod} from '../time/period.js';
+import {civilFromDays, formatPeriod} from '../time/period.js';
 import {finerThan} from '../time/stamp.js';
 import {defaultAggregate, periodValue} from './aggregate.js';
 import {completePeriods} from './completeness.js';
@@ -71,6 +71,16 @@ export function derive(plan: Plan, readings: Readings): Dataset {
     const derived = aggregated(store, method, clip, data.cells.source.emptyMeans === 'zero');
     // A file without rows, or a column with unreadable cells, already has its problems.
     if (derived === undefined && (data.input.rows === 0 || store.rejected > 0)) continue;
+    if (derived === undefined && clip !== null && store.range('rows') !== undefined) {
+      // Rows there are, but only in periods cut at the data's ends (a few days of one month).
+      const span = data.cells.span!;
+      const day = (d: number) => {
+        const {year, month, day: dd} = civilFromDays(d);
+        return `${year}-${String(month).padStart(2, '0')}-${String(dd).padStart(2, '0')}`;
+      };
+      problems.add(data.input.file, null, null, msg.noCompletePeriod(s.id, day(span.from), day(span.to), plan.frequency));
+      continue;
+    }
     if (derived === undefined) {
       const at = data.columnNumbers.get(s.column);
       const where = at !== undefined ? `column "${s.column}"` : `the rows for "${s.column}"`;

@@ -51,6 +51,10 @@ export const notANumber = (text: string, column: string, advice: string): string
   `"${text}" in column "${column}" is not a number: ${advice}`;
 export const allMissing = (seriesId: string, where: string): string =>
   `series ${seriesId} has no values: every cell of ${where} is blank or missing`;
+export const noCompletePeriod = (seriesId: string, from: string, to: string, frequency: Frequency): string =>
+  `series ${seriesId} has no whole ${UNIT[frequency]}: the rows run from ${from} to ${to}, and a ${UNIT[frequency]} ` +
+  `the data start or stop inside is left out; give rows that cover at least one ${UNIT[frequency]} from its first day to its last`;
+const UNIT: Record<Frequency, string> = {monthly: 'month', quarterly: 'quarter', weekly: 'week'};
 export const periodBeforeData = (seriesId: string, period: string, first: string): string =>
   `the review period ${period} is before the first value of series ${seriesId} (${first}); choose a later \`period\``;
 export const noData = (): string => 'the pack names no series with data, so there is no review period';
