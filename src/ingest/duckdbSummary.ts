@@ -3,6 +3,7 @@ import {DuckDBDecimalType, DuckDBTypeId, type DuckDBConnection} from '@duckdb/no
 import {daysFromCivil} from '../time/period.js';
 import {periodOfDay} from '../time/stamp.js';
 import type {CellReader} from './cells.js';
+import {doubles, joined} from './duckdbDoubles.js';
 import {line} from './queryRows.js';
 import type {PeriodStore} from './periodStore.js';
 import type {LongVisitor} from './readLong.js';
@@ -43,8 +44,8 @@ const LAST_DAY = daysFromCivil(9999, 12, 31);
  *
  * The query is run as `SELECT … FROM (query) GROUP BY key, period`, with per group: rows, values (not NULL), the
  * exact sum in millionths (PeriodStore's rule; 128-bit integers, so no order of addition matters), minimum, maximum,
- * first and last day and instant. The summaries are read column by column from the engine's chunks. It is used
- * only when
+ * first and last day and instant, in no order (the engine's sort cost more than {@link keyOrder}). The numeric columns
+ * are copied from the engine's chunks as whole arrays (duckdbDoubles.ts), the keys item by item. It is used only when
  *
  * - the pack reads no series of the source by `first` or `last` (those follow the rows' order, which a query
  *   without ORDER BY does not have) and the source has no `dateFormat`;
@@ -52,11 +53,12 @@ const LAST_DAY = daysFromCivil(9999, 12, 31);
  *   and the value column DOUBLE, a DECIMAL of at most 15 digits, or an integer up to BIGINT (their DOUBLE is the
  *   number ingest reads from their text);
  * - every value is NULL or a whole number of millionths (decimalUnits.ts: no NaN, no 1/3, below about 9·10^9), every
- *   date within the years 1000–9999; keys are neither NULL nor blank, no two differ only by surrounding blanks, and rows are finer than the pack.
+ *   date within the years 1000–9999; keys are neither NULL nor blank, no two differ only by surrounding blanks, and
+ *   rows are finer than the pack.
  *
  * Then each period holds what the rows would have given, to the last bit, and the stores come in key order either
- * way. The manifest's SHA-256 is of the summaries in a canonical form ({@link SummaryHash}, ordered by key and
- * period): a change to the table that changes any count, sum, extreme or covered day changes it.
+ * way. The manifest's SHA-256 is of the summaries in a canonical form ({@link SummaryHash}, ordered by key in code
+ * units and by period): a change to the table that changes any count, sum, extreme or covered day changes it.
  */
 export async function duckdbSummary(
   connection: DuckDBConnection,
@@ -92,53 +94,72 @@ export async function duckdbSummary(
     `  CAST(${ident(names[keyAt])} AS VARCHAR) AS k, CAST(${d} AS DATE) AS d,`,
     timed ? `  epoch_ms(${d}) AS t, microsecond(${d}) % 1000 <> 0 AS partms,` : '',
     `  CAST(${ident(names[valueAt])} AS DOUBLE) AS v FROM (${query}\n)),`,
-    's AS (SELECT *, round(v * 1000000) AS u FROM r)',
-    'SELECT k, count(*)::DOUBLE AS n, count(v)::DOUBLE AS nv, sum(u::BIGINT) AS su, bool_and(u / 1000000 = v) AS exact,',
-    "  min(v) AS lo, max(v) AS hi, (min(d) - DATE '1970-01-01')::DOUBLE AS d0, (max(d) - DATE '1970-01-01')::DOUBLE AS d1,",
-    timed ? '  min(t)::DOUBLE AS t0, max(t)::DOUBLE AS t1, bool_or(partms) AS partms,' : '',
-    '  count(d)::DOUBLE AS dated',
-    `FROM s GROUP BY k, ${period} ORDER BY k, d0`,
+    's AS (SELECT *, round(v * 1000000) AS u FROM r),',
+    // ok: 1 when every value is a whole number of millionths (or NULL) and every instant whole milliseconds. (A group
+    // with an undated row has a NULL period and day, so ok NULL.)
+    `g AS (SELECT k, (coalesce(bool_and(u / 1000000 = v), true)${timed ? ' AND NOT bool_or(partms)' : ''}`,
+    "  AND min(d) IS NOT NULL)::DOUBLE AS ok,",
+    '  count(*)::DOUBLE AS n, count(v)::DOUBLE AS nv, sum(u::BIGINT) AS su, min(v) AS lo, max(v) AS hi,',
+    "  (min(d) - DATE '1970-01-01')::DOUBLE AS d0, (max(d) - DATE '1970-01-01')::DOUBLE AS d1",
+    timed ? '  , min(t)::DOUBLE AS t0, max(t)::DOUBLE AS t1' : '',
+    `  FROM s GROUP BY k, ${period})`,
+    // The exact sum as a DOUBLE while below 2^53 millionths, as text beyond.
+    `SELECT k, CASE WHEN abs(su) > ${Number.MAX_SAFE_INTEGER} THEN su::VARCHAR END AS big, ok, n, nv,`,
+    `  CASE WHEN abs(su) <= ${Number.MAX_SAFE_INTEGER} THEN su::DOUBLE END AS su, lo, hi, d0, d1${timed ? ', t0, t1' : ''}`,
+    'FROM g',
   ].join('\n');
-  const columns: unknown[][] = [];
+  const k: (string | null)[] = [];
+  const big = new Map<number, bigint>();
+  const parts: Float64Array[][] = [];
   try {
     const result = await connection.stream(sql);
     const width = result.columnCount;
-    for (let c = 0; c < width; c++) columns.push([]);
+    for (let c = 2; c < width; c++) parts.push([]);
     for (;;) {
       const chunk = await result.fetchChunk();
       if (chunk === null || chunk.rowCount === 0) break;
+      const keys = chunk.getColumnVector(0);
+      const bigs = chunk.getColumnVector(1);
+      for (let c = 2; c < width; c++) parts[c - 2].push(doubles(chunk, c));
+      const su = parts[3].at(-1)!;
+      // (rowCount is a call into the engine.)
       const rows = chunk.rowCount;
-      for (let c = 0; c < width; c++) {
-        const vector = chunk.getColumnVector(c);
-        const column = columns[c];
-        for (let j = 0; j < rows; j++) column.push(vector.getItem(j));
+      for (let j = 0; j < rows; j++) {
+        if (Number.isNaN(su[j]) && bigs.getItem(j) !== null) big.set(k.length + j, BigInt(bigs.getItem(j) as string));
       }
+      for (let j = 0; j < rows; j++) k.push(keys.getItem(j) as string | null);
     }
   } catch {
     // An engine error on a value (NaN, an infinite date, a value beyond 64 bits): the rows are read one by one and
     // any problem is reported there.
     return null;
   }
-  const [k, n, nv, su, exact, lo, hi, d0, d1] = columns;
-  const [t0, t1, partms] = timed ? columns.slice(9, 12) : [d0, d1, []];
-  const dated = columns[columns.length - 1];
+  const [ok, n, nv, su, lo, hi, d0, d1, t0 = d0, t1 = d1] = parts.map(joined);
   const groups = k.length;
   if (groups === 0) return null;
-  const trimmed = new Map<string, string>();
-  const spans = new Map<string, {first: number; last: number}>();
-  let instants = false;
   for (let g = 0; g < groups; g++) {
-    const key = k[g] as string | null;
-    if (key === null || dated[g] !== n[g] || exact[g] === false || partms[g] === true) return null;
-    if (nv[g] !== 0 && !(Math.abs(lo[g] as number) <= LARGEST && Math.abs(hi[g] as number) <= LARGEST)) return null;
-    if ((d0[g] as number) < FIRST_DAY || (d1[g] as number) > LAST_DAY) return null;
-    const t = key.trim();
-    if (t === '' || (trimmed.get(t) ?? key) !== key) return null;
-    trimmed.set(t, key);
-    const span = spans.get(t);
-    if (span === undefined) spans.set(t, {first: d0[g] as number, last: d1[g] as number});
-    else span.last = d1[g] as number;
-    if ((wanted.all || wanted.names.has(t)) && t0[g] !== t1[g]) instants = true;
+    if (k[g] === null || ok[g] !== 1 || d0[g] < FIRST_DAY || d1[g] > LAST_DAY) return null;
+    if (nv[g] !== 0 && !(Math.abs(lo[g]) <= LARGEST && Math.abs(hi[g]) <= LARGEST)) return null;
+  }
+  // The groups in key order, each key's by day: a key's first group starts it, end[i] is its last (positions in order).
+  const order = keyOrder(k as string[], d0);
+  const keyOf = (i: number) => (i >= 0 && i < groups ? k[order[i]] : null);
+  const end = new Int32Array(groups);
+  const trimmed = new Map<string, string>();
+  let instants = false;
+  let wantedKey = false;
+  for (let i = groups - 1, last = groups - 1; i >= 0; i--) {
+    const g = order[i];
+    const key = k[g] as string;
+    if (key !== keyOf(i + 1)) last = i;
+    end[i] = last;
+    if (key !== keyOf(i - 1)) {
+      const t = key.trim();
+      if (t === '' || (trimmed.get(t) ?? key) !== key) return null;
+      trimmed.set(t, key);
+      wantedKey = wanted.all || wanted.names.has(t);
+    }
+    if (wantedKey && t0[g] !== t1[g]) instants = true;
   }
   // Rows at the pack's own frequency may be duplicates, named by their lines: only the rows can tell.
   if (!instants) return null;
@@ -150,34 +171,37 @@ export async function duckdbSummary(
   let to = -Infinity;
   let previous = 0;
   let store: PeriodStore | undefined;
-  for (let g = 0; g < groups; g++) {
-    const first = d0[g] as number;
-    const last = d1[g] as number;
+  let keyLine = '';
+  for (let i = 0; i < groups; i++) {
+    const g = order[i];
+    const first = d0[g];
+    const last = d1[g];
     const p = periodOfDay(frequency, first);
+    const key = k[g] as string;
+    const sameKey = key === keyOf(i - 1);
     // The engine's grouping must be the pack's periods exactly: each group one period, no period in two groups.
-    if (periodOfDay(frequency, last) !== p || (k[g] === k[g - 1] && p <= previous)) {
-      throw new Error(`duckdb summary: days ${first} and ${last} of key ${k[g]} grouped apart from period ${p}`);
+    if (periodOfDay(frequency, last) !== p || (sameKey && p <= previous)) {
+      throw new Error(`duckdb summary: days ${first} and ${last} of key ${key} grouped apart from period ${p}`);
     }
     previous = p;
-    const units = su[g] === null ? 0n : (su[g] as bigint);
-    if (k[g] !== k[g - 1]) {
-      const key = (k[g] as string).trim();
-      const span = spans.get(key)!;
-      store = visitor.keep(key);
-      store?.reserve(periodOfDay(frequency, span.first), periodOfDay(frequency, span.last));
+    const units = big.get(g) ?? (Number.isNaN(su[g]) ? 0 : su[g]);
+    if (!sameKey) {
+      store = visitor.keep(key.trim());
+      store?.reserve(p, periodOfDay(frequency, d1[order[end[i]]]));
+      keyLine = line([key]);
     }
     store?.put(p, {
-      rows: n[g] as number,
-      values: nv[g] as number,
+      rows: n[g],
+      values: nv[g],
       units,
-      min: lo[g] === null ? NaN : (lo[g] as number),
-      max: hi[g] === null ? NaN : (hi[g] as number),
+      min: lo[g],
+      max: hi[g],
       instants: t0[g] !== t1[g],
     });
-    rows += n[g] as number;
+    rows += n[g];
     if (first < from) from = first;
     if (last > to) to = last;
-    hash.add(k[g] as string, units, [p, n[g], nv[g], lo[g], hi[g], first, last, t0[g], t1[g]] as (number | null)[]);
+    hash.add(keyLine, units, p, n[g], nv[g], lo[g], hi[g], first, last, t0[g], t1[g]);
   }
   cells.summarised(from, to, periodOfDay(frequency, from), periodOfDay(frequency, to));
   return {
@@ -187,6 +211,35 @@ export async function duckdbSummary(
     rows,
     query: {engine: 'duckdb', text: source.query ?? '', summarised: true},
   };
+}
+
+/**
+ * Indices of groups in order of key (code units, as ingest orders a query's keys) and, within a key, of first day:
+ * the keys are sorted once each and the groups counted into place, cheaper than having the engine sort its result
+ * (measured: 0.1–0.2 s of 0.9 s for the benchmark's 330,000 groups).
+ */
+function keyOrder(k: readonly string[], d0: Float64Array): Int32Array {
+  const rank = new Map<string, number>();
+  for (const key of k) rank.set(key, 0);
+  const keys = [...rank.keys()].sort((a, b) => (a < b ? -1 : a > b ? 1 : 0));
+  keys.forEach((key, r) => rank.set(key, r));
+  const ranks = new Int32Array(k.length);
+  const start = new Int32Array(keys.length + 1);
+  for (let g = 0; g < k.length; g++) start[(ranks[g] = rank.get(k[g])!) + 1]++;
+  for (let r = 0; r < keys.length; r++) start[r + 1] += start[r];
+  const order = new Int32Array(k.length);
+  const next = start.slice(0, keys.length);
+  for (let g = 0; g < k.length; g++) order[next[ranks[g]]++] = g;
+  // Each key's few groups by first day (insertion sort).
+  for (let r = 0; r < keys.length; r++) {
+    for (let i = start[r] + 1; i < start[r + 1]; i++) {
+      const g = order[i];
+      let j = i - 1;
+      for (; j >= start[r] && d0[order[j]] > d0[g]; j--) order[j + 1] = order[j];
+      order[j + 1] = g;
+    }
+  }
+  return order;
 }
 
 /**
@@ -206,13 +259,18 @@ class SummaryHash {
     this.keys = line(['key', 'period', 'rows', 'values', 'millionths', 'min', 'max', 'first day', 'last day', 'first ms', 'last ms']);
   }
 
-  add(key: string, units: bigint, numbers: (number | null)[]): void {
-    this.keys += line([key]);
-    const big = units > MAX_UNITS || units < -MAX_UNITS;
+  /** One group: its key as a line of COPY text (`line([key])`), its exact sum and its numbers (NaN for none). */
+  add(keyLine: string, units: number | bigint, period: number, rows: number, values: number, ...rest: number[]): void {
+    this.keys += keyLine;
+    const big = typeof units === 'bigint';
     if (big) this.keys += `${units}\n`;
-    const o = this.filled * FIELDS * 8;
-    const values = [numbers[0], numbers[1], numbers[2], big ? NaN : Number(units), ...numbers.slice(3)];
-    for (let f = 0; f < FIELDS; f++) this.numbers.setFloat64(o + 8 * f, values[f] ?? NaN, true);
+    const view = this.numbers;
+    let o = this.filled * FIELDS * 8;
+    view.setFloat64(o, period, true);
+    view.setFloat64((o += 8), rows, true);
+    view.setFloat64((o += 8), values, true);
+    view.setFloat64((o += 8), big ? NaN : Number(units), true);
+    for (let f = 0; f < rest.length; f++) view.setFloat64((o += 8), rest[f], true);
     if (++this.filled === BATCH) this.flush();
   }
 
@@ -233,4 +291,3 @@ class SummaryHash {
 
 const BATCH = 4096;
 const FIELDS = 10;
-const MAX_UNITS = BigInt(Number.MAX_SAFE_INTEGER);

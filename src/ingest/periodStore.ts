@@ -90,17 +90,21 @@ export class PeriodStore {
 
   /**
    * Set one period from a summary made elsewhere (a database that grouped the rows): rows and values counted, the
-   * exact sum in millionths (`units`), extremes, and whether its rows fell on more than one instant. For periods of
-   * day-dated rows only; the first and last values are not known (NaN).
+   * exact sum in millionths (`units`, a number while below 2^53), extremes, and whether its rows fell on more than one
+   * instant. For periods of day-dated rows only; the first and last values are not known (NaN).
    */
-  put(period: number, s: {rows: number; values: number; units: bigint; min: number; max: number; instants: boolean}): void {
+  put(
+    period: number,
+    s: {rows: number; values: number; units: number | bigint; min: number; max: number; instants: boolean},
+  ): void {
     this.ensure(period);
     const o = (period - this.base) * STRIDE;
     const a = this.slots;
     a[o + ROWS] = s.rows;
     a[o + VALUES] = s.values;
     a[o + EXACT] = 1;
-    if (s.units >= -MAX_UNITS && s.units <= MAX_UNITS) a[o + UNITS] = Number(s.units);
+    if (typeof s.units === 'number') a[o + UNITS] = s.units;
+    else if (s.units >= -MAX_UNITS && s.units <= MAX_UNITS) a[o + UNITS] = Number(s.units);
     else this.big.set(period, s.units);
     a[o + MIN] = s.min;
     a[o + MAX] = s.max;
