@@ -29,8 +29,9 @@ const WARM_EVALUATIONS = 300;
 /**
  * Automatic ETS as a method fit (method.ts): every model of the stable subset is fitted (selectEts); `weighted`
  * averages the forecasts of those with an Akaike weight of at least 1% by weight (the models that cannot reach
- * that cut are given up early, see etsScreen.ts), otherwise the model with the smallest AICc is kept. Seasonal models only with m ≤ 24 and at least two full years; for longer periods
- * (weekly data, m = 52) the series is seasonally adjusted first (classical decomposition, when the seasonality
+ * that cut are given up early, see etsScreen.ts; each search runs at most `selectionEvaluations`, default 2,000 as
+ * in the reference), otherwise the model with the smallest AICc is kept. Seasonal models only with m ≤ 24 and at
+ * least two full years; for longer periods (weekly data, m = 52) the series is seasonally adjusted first (classical decomposition, when the seasonality
  * test finds a pattern) and non-seasonal ETS forecasts the adjusted series. Running totals come from simulated
  * sample paths of the mixture (seeded).
  *
@@ -48,7 +49,12 @@ const WARM_EVALUATIONS = 300;
 export function fitEtsMethod(
   values: Float64Array,
   period: number,
-  {weighted, models, optimizer = 'nelder-mead'}: {weighted: boolean; models?: EtsStart[]; optimizer?: EtsOptimizer},
+  {
+    weighted,
+    models,
+    optimizer = 'nelder-mead',
+    selectionEvaluations = 2000,
+  }: {weighted: boolean; models?: EtsStart[]; optimizer?: EtsOptimizer; selectionEvaluations?: number},
 ): MethodFit {
   const gradient = optimizer === 'gradient';
   const n = values.length;
@@ -67,13 +73,15 @@ export function fitEtsMethod(
   if (fits.length === 0) {
     const options = {period: sa ? 1 : period, seasonal: !sa && seasonalOk};
     // Weighted: only the models that can reach the 1% cut are fitted to the end (etsScreen.ts).
-    fits = weighted ? selectEtsScreened(y, options) : (selectEts(y, options)?.fits ?? []);
+    fits = weighted
+      ? selectEtsScreened(y, {...options, maxEvaluations: selectionEvaluations})
+      : (selectEts(y, options)?.fits ?? []);
   }
   if (fits.length === 0) {
     // Nothing to keep: a refit tries the same models again, as given (or selects, when none were given).
     return {
       forecast: ({h, levels}) => ({forecast: forecastNaive(values, {h, levels}), details: {fallback: 'naive'}}),
-      refit: (next) => fitEtsMethod(next, period, {weighted, models, optimizer}),
+      refit: (next) => fitEtsMethod(next, period, {weighted, models, optimizer, selectionEvaluations}),
     };
   }
   const criteria = fits.map((f) => f.aicc);
@@ -91,7 +99,8 @@ export function fitEtsMethod(
     kept.map((f) => (warm ? {spec: f.spec, params: f.params, initialStates: f.initialStates} : {spec: f.spec}));
   return {
     forecast: (options) => ({forecast: forecastKept(values, kept, weights, sa, options), details}),
-    refit: (next, {warm}) => fitEtsMethod(next, period, {weighted, models: starts(warm), optimizer}),
+    refit: (next, {warm}) =>
+      fitEtsMethod(next, period, {weighted, models: starts(warm), optimizer, selectionEvaluations}),
   };
 }
 

@@ -23,7 +23,9 @@ const MARGINS = [350, 180, 120, 100, 50];
  * the checkpoint's margin, is still more than 2·ln 100 ≈ 9.21 above the best AICc known (of a finished fit, or
  * of a search so far, which its end can only lower). Such a model would end with a weight under 1% (the cut of
  * akaikeWeights), so it is not needed; every model kept is fitted exactly as selectEts fits it (a search's path
- * does not depend on its stages). The fits come back in selectEts' order, without the models given up.
+ * does not depend on its stages). The fits come back in selectEts' order, without the models given up. With
+ * `maxEvaluations` below 2,000 every fit and search stops there (the margins, measured to 2,000, then have room
+ * to spare), and the screen keeps what fitting every model with that budget keeps (etsScreen.test.ts).
  *
  * Why: a seasonal model's search takes 1,500–2,000 likelihood evaluations (against 150–500 for non-seasonal
  * ones) and most seasonal models end far outside the weights.
@@ -33,7 +35,7 @@ const MARGINS = [350, 180, 120, 100, 50];
  */
 export function selectEtsScreened(
   y: Float64Array,
-  {period, seasonal = true}: {period: number; seasonal?: boolean},
+  {period, seasonal = true, maxEvaluations = 2000}: {period: number; seasonal?: boolean; maxEvaluations?: number},
 ): EtsFit[] {
   const specs = etsCandidates(y, {period, seasonal});
   const fits: (EtsFit | null)[] = specs.map(() => null);
@@ -46,11 +48,11 @@ export function selectEtsScreened(
   };
   const active: {i: number; search: EtsSearch; stage: number}[] = [];
   specs.forEach((spec, i) => {
-    if (spec.season === 'N') keep(i, fitEts(y, spec));
+    if (spec.season === 'N') keep(i, fitEts(y, spec, {maxEvaluations}));
   });
   specs.forEach((spec, i) => {
     if (spec.season === 'N') return;
-    const search = etsSearch(y, spec);
+    const search = etsSearch(y, spec, maxEvaluations);
     if (!search) return;
     search.run(CHECKPOINTS[0]);
     if (search.stopped) keep(i, search.finish());
@@ -67,8 +69,9 @@ export function selectEtsScreened(
     for (let j = 1; j < active.length; j++) if (active[j].search.aicc() < active[next].search.aicc()) next = j;
     const a = active[next];
     a.stage++;
-    if (a.stage < CHECKPOINTS.length) a.search.run(CHECKPOINTS[a.stage]);
-    if (a.stage >= CHECKPOINTS.length || a.search.stopped) {
+    const last = a.stage >= CHECKPOINTS.length || CHECKPOINTS[a.stage] >= maxEvaluations;
+    if (!last) a.search.run(CHECKPOINTS[a.stage]);
+    if (last || a.search.stopped) {
       keep(a.i, a.search.finish());
       active.splice(next, 1);
     }

@@ -3,7 +3,7 @@ import {describe, expect, it} from 'vitest';
 import {akaikeWeights} from '../../../src/analyse/forecast/akaikeWeights.js';
 import {etsSearch, fitEts} from '../../../src/analyse/forecast/etsFit.js';
 import {selectEtsScreened} from '../../../src/analyse/forecast/etsScreen.js';
-import {selectEts} from '../../../src/analyse/forecast/etsSelect.js';
+import {etsCandidates, selectEts} from '../../../src/analyse/forecast/etsSelect.js';
 
 // Real data: the seasonal series among R's datasets in test/reference/ets.json (written by test/reference/ets.R).
 const ref = JSON.parse(readFileSync(new URL('../../reference/ets.json', import.meta.url), 'utf8'));
@@ -26,6 +26,21 @@ describe('selectEtsScreened', () => {
       for (const f of screened) expect(f).toEqual(all.find((g) => g.method === f.method));
     });
   }
+
+  // `auto` selects with searches of at most 1,000 evaluations: the screen must give what fitting every model with
+  // that budget gives.
+  for (const c of seasonal) {
+    it(`${c.name}, searches capped at 1,000 evaluations: the same as fitting every model with that cap`, () => {
+      const y = Float64Array.from(c.values);
+      const all = etsCandidates(y, {period: c.frequency}).flatMap((spec) => {
+        const fit = fitEts(y, spec, {maxEvaluations: 1000});
+        return fit && Number.isFinite(fit.aicc) ? [fit] : [];
+      });
+      const screened = selectEtsScreened(y, {period: c.frequency, maxEvaluations: 1000});
+      expect(weighted(screened)).toEqual(weighted(all));
+      for (const f of screened) expect(f).toEqual(all.find((g) => g.method === f.method));
+    });
+  }
 });
 
 describe('etsSearch', () => {
@@ -37,5 +52,8 @@ describe('etsSearch', () => {
     for (const limit of [250, 500, 1000]) search.run(limit);
     expect(search.aicc()).toBeGreaterThanOrEqual(fitEts(y, spec)!.aicc - 1e-9);
     expect(search.finish()).toEqual(fitEts(y, spec));
+    const capped = etsSearch(y, spec, 1000)!;
+    capped.run(250);
+    expect(capped.finish()).toEqual(fitEts(y, spec, {maxEvaluations: 1000}));
   });
 });

@@ -3,7 +3,7 @@ import {describe, expect, it} from 'vitest';
 import {loess} from '../../../src/analyse/numeric/loess.js';
 import {kernelHeap} from '../../../src/analyse/numeric/loessKernel.js';
 // @ts-expect-error: a plain ES module script without type declarations.
-import {kernelModuleText} from '../../../scripts/buildWasm.mjs';
+import {kernelModuleText} from '../../../src/analyse/numeric/buildWasm.mjs';
 
 describe('compiled LOESS kernel', () => {
   it('is the committed build of loessKernel.wat (run `npm run build:wasm` after editing it)', async () => {
