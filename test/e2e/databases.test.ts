@@ -161,6 +161,9 @@ describe('the same rows through CSV, DuckDB and PostgreSQL', () => {
     expect(pdf).toContain('Tills by region');
     const html = await readFile(join(folder, 'report.html'), 'utf8');
     expect(html).toContain('June 2025 has data for 14 of 30 days (the data stop inside it) and is left out');
+    // The data notes name the query source as it is, not as a path relative to the pack's folder.
+    expect(html).toContain('>tills (postgres query)<');
+    expect(html).not.toContain('/tills (postgres query)');
   }, 60_000);
 
   it('the query runs read-only and under the statement timeout', async () => {

@@ -1,4 +1,4 @@
-import {relative, dirname} from 'node:path';
+import {dirname, isAbsolute, relative, sep} from 'node:path';
 import {wordDataNote, wordsFor, type MessageKey, type Words} from '../../words/index.js';
 import {themeFor} from '../theme.js';
 import type {Report} from '../types.js';
@@ -77,13 +77,13 @@ export function buildView(report: Report, logo: string | null): ViewModel {
     },
     cautions: cautions(w),
     inputs: report.inputs.map((i) => ({
-      path: relative(dirname(plan.packFile), i.file) || i.file,
+      path: shownPath(plan.packFile, i.file),
       sha256: i.sha256,
       size: w.t('label.bytes', {size: w.number(i.bytes, 0)}),
       rows: w.number(i.rows, 0),
     })),
     notes: report.notes.map((n) => {
-      const file = relative(dirname(plan.packFile), n.file) || n.file;
+      const file = shownPath(plan.packFile, n.file);
       // The reader knows a series by its label, not by the id the pack file gives it.
       const note = n.series == null ? n : {...n, series: labels.get(n.series) ?? n.series};
       return {where: n.line != null ? w.t('label.lineOf', {file, line: String(n.line)}) : file, message: wordDataNote(w, note)};
@@ -164,4 +164,9 @@ function templateLabels(w: Words): Record<keyof typeof TEMPLATE_LABELS, string> 
   const out = {} as Record<keyof typeof TEMPLATE_LABELS, string>;
   for (const [name, key] of Object.entries(TEMPLATE_LABELS)) out[name as keyof typeof TEMPLATE_LABELS] = w.t(key);
   return out;
+}
+
+/** A file as the report names it: relative to the pack's folder; a query source's name (not a path) as it is. */
+function shownPath(packFile: string, file: string): string {
+  return isAbsolute(file) ? relative(dirname(packFile), file).split(sep).join('/') || file : file;
 }
