@@ -21,6 +21,8 @@ export interface RuleContext {
   combination: SeriesCombination | null;
   /** Every group with a total (contributions of its parts), in pack order. */
   groups: readonly GroupResult[];
+  /** Every series' label by id (built once per pack: a rule that builds it per series is quadratic). */
+  labels: ReadonlyMap<string, string>;
 }
 
 /**

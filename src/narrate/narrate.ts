@@ -50,6 +50,7 @@ export function narrate(input: NarrateInput): Narration {
   const words = wordsFor(input.plan.locale);
   const bySeries = new Map<string, Callout[]>();
   const all: {callout: Callout; order: [number, number]}[] = [];
+  const labels = new Map(input.plan.series.map((p) => [p.id, p.label]));
   input.series.forEach(({plan: series, analysis}, seriesOrder) => {
     if (series.hidden) return;
     const ctx: RuleContext = {
@@ -62,6 +63,7 @@ export function narrate(input: NarrateInput): Narration {
       isRate: series.unit === '%',
       combination: input.combined?.series.get(series.id) ?? null,
       groups: input.combined?.groups ?? [],
+      labels,
     };
     const ppy = periodsPerYear[analysis.frequency];
     const list: {callout: Callout; order: [number, number]}[] = [];

@@ -124,5 +124,6 @@ export function runRule(
     isRate: series.unit === '%',
     combination: args.combination ?? null,
     groups: args.groups ?? [],
+    labels: new Map(plan.series.map((p) => [p.id, p.label])),
   });
 }

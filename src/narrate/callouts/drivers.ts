@@ -11,9 +11,8 @@ export const MIN_DRIVER_POINTS = 0.05;
  */
 export const driversRule: Rule = {
   name: 'drivers',
-  run({series: s, groups, plan, words: w, analysis: a}) {
-    // A part's label looked up when named (a map of every series built for every series cost 34 s at 10,000).
-    const label = (id: string) => plan.series.find((p) => p.id === id)?.label ?? id;
+  run({series: s, groups, labels, words: w, analysis: a}) {
+    const label = (id: string) => labels.get(id) ?? id;
     return groups
       .filter((g) => g.total === s.id)
       .flatMap((g) => {
