@@ -95,8 +95,8 @@ export async function duckdbSummary(
     timed ? `  epoch_ms(${d}) AS t, microsecond(${d}) % 1000 <> 0 AS partms,` : '',
     `  CAST(${ident(names[valueAt])} AS DOUBLE) AS v FROM (${query}\n)),`,
     's AS (SELECT *, round(v * 1000000) AS u FROM r),',
-    // ok: 1 when every value is a whole number of millionths (or NULL) and every instant whole milliseconds. (A group
-    // with an undated row has a NULL period and day, so ok NULL.)
+    // ok: 1 when every value is a whole number of millionths (or NULL) and every instant whole milliseconds. (Undated
+    // rows share one group of NULL period, whose min(d) is NULL, so ok 0.)
     `g AS (SELECT k, (coalesce(bool_and(u / 1000000 = v), true)${timed ? ' AND NOT bool_or(partms)' : ''}`,
     "  AND min(d) IS NOT NULL)::DOUBLE AS ok,",
     '  count(*)::DOUBLE AS n, count(v)::DOUBLE AS nv, sum(u::BIGINT) AS su, min(v) AS lo, max(v) AS hi,',
