@@ -122,6 +122,15 @@ describe('a DuckDB query summed up by the engine', () => {
     }
   });
 
+  it('reads the rows instead when a row has no date, and notes it the same way', async () => {
+    const a = await read(`${SUMMED} UNION ALL SELECT NULL::DATE, ' Account 1', 1.00`, 'monthly', 'sum');
+    const b = await read(`${AS_TEXT} UNION ALL SELECT NULL, ' Account 1', 1.00`, 'monthly', 'sum');
+    expect(a.inputs[0].query?.summarised).toBeUndefined();
+    expect(a.series.map((x) => [...x.values])).toEqual(b.series.map((x) => [...x.values]));
+    expect(a.notes).toEqual(b.notes);
+    expect(a.notes.length).toBeGreaterThan(0);
+  });
+
   it('query rows have no order of their own: keys in text order, no note about date order, on both paths', async () => {
     const backwards = `${AS_TEXT} ORDER BY day DESC, account DESC`;
     const rows = await read(backwards, 'monthly', 'sum');
