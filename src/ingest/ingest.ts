@@ -33,12 +33,17 @@ export interface Readings {
 export async function ingest(plan: Plan): Promise<Readings> {
   const problems = new ProblemLog();
   const sources = new Map<string, SourceData>();
+  // Sources that reported a problem: their missing keys are its consequence, not one more problem.
+  const failed = new Set<string>();
   for (const source of plan.sources) {
+    const before = problems.size;
     sources.set(source.id, await readSource(source, wantedFrom(plan, source.id), plan.frequency, plan.locale, problems));
+    if (problems.size > before) failed.add(source.id);
   }
   const keysOf = (id: string): string[] | undefined => {
     const data = sources.get(id);
-    return data?.input ? [...data.stores.keys()] : undefined;
+    const keys = data?.input ? [...data.stores.keys()] : undefined;
+    return keys?.length === 0 && failed.has(id) ? undefined : keys;
   };
   const plans = expandSeries(plan, keysOf, problems);
   checkReferences(plan, plans, sources, problems);

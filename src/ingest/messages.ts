@@ -86,12 +86,12 @@ export const mixedGrains = (
 ): string =>
   `column "${column}" mixes ${GRAIN[first.grain]} ("${first.text}", line ${first.line}) and ${GRAIN[then.grain]} ` +
   `("${then.text}", line ${then.line}), which cannot be combined into one period; write every date of a source at one granularity, or split the rows into two sources`;
-export const dayMonthDate = (text: string, column: string, order: string): string =>
-  order === 'ambiguous'
-    ? `"${text}" in column "${column}" could be day first or month first; add \`dateFormat: DD/MM/YYYY\` or ` +
-      `\`dateFormat: MM/DD/YYYY\` to the source (whichever the export writes)`
-    : `"${text}" in column "${column}" is a ${order.startsWith('DD') ? 'day-first' : 'month-first'} date; ` +
-      `add \`dateFormat: ${order}\` to the source`;
+export const dayMonthDate = (text: string, column: string, formats: string[]): string =>
+  formats.length > 1
+    ? `"${text}" in column "${column}" could be day first or month first; add \`dateFormat: ${formats[0]}\` or ` +
+      `\`dateFormat: ${formats[1]}\` to the source (whichever the export writes)`
+    : `"${text}" in column "${column}" is a ${formats[0].startsWith('DD') ? 'day-first' : 'month-first'} date; ` +
+      `add \`dateFormat: ${formats[0]}\` to the source`;
 export const emptyHeader = (line: number): string =>
   `the header row (line ${line}) is empty; set \`headerRow\` on the source to the line that holds the column names`;
 export const headerBeyondEnd = (headerRow: number, lines: number): string =>

@@ -105,19 +105,22 @@ export function readDateCell(text: string, reading: DateReading = NONE): DateCel
 }
 
 /**
- * For a day-first or month-first date read without a `dateFormat`: the setting that reads it. A first field
- * above 12 can only be a day, and so can a second one; when both are ≤ 12 the text is `ambiguous`. Undefined
- * when the text is not such a date.
+ * For a day-first or month-first date read without a `dateFormat`: the settings that could read it, with the
+ * text's own separator. A first field above 12 can only be a day, and so can a second one; when both are ≤ 12
+ * either order could be meant. Undefined when the text is not such a date.
  *
- * @example dayMonthOrder('31/10/2026') // => 'DD/MM/YYYY'
+ * @example dayMonthOrder('31/10/2026') // => ['DD/MM/YYYY']
+ * @example dayMonthOrder('01.10.2026') // => ['DD.MM.YYYY', 'MM.DD.YYYY']
  */
-export function dayMonthOrder(text: string): string | undefined {
+export function dayMonthOrder(text: string): string[] | undefined {
   const m = text.trim().match(DAY_MONTH_YEAR);
   if (!m) return undefined;
   const [a, b, sep] = [Number(m[1]), Number(m[3]), m[2]];
-  if (a > 12 && b <= 12) return `DD${sep}MM${sep}YYYY`;
-  if (b > 12 && a <= 12) return `MM${sep}DD${sep}YYYY`;
-  return 'ambiguous';
+  const dayFirst = `DD${sep}MM${sep}YYYY`;
+  const monthFirst = `MM${sep}DD${sep}YYYY`;
+  if (a > 12 && b <= 12) return [dayFirst];
+  if (b > 12 && a <= 12) return [monthFirst];
+  return [dayFirst, monthFirst];
 }
 
 /** The frequency a date cell's label implies (`undefined` for full dates, which fit any frequency, and non-dates). */

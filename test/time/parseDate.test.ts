@@ -96,10 +96,11 @@ describe('dates as exports write them', () => {
   const months = (locale: string): DateReading => ({dateFormat: null, months: monthNames(locale)});
   it('day-first and month-first dates need dateFormat, and say which one', () => {
     expect(readDateCell('01/10/2026')).toBeUndefined();
-    expect(dayMonthOrder('01/10/2026')).toBe('ambiguous');
-    expect(dayMonthOrder('31/10/2026')).toBe('DD/MM/YYYY');
-    expect(dayMonthOrder('10/31/2026')).toBe('MM/DD/YYYY');
-    expect(dayMonthOrder('31.10.2026')).toBe('DD.MM.YYYY');
+    expect(dayMonthOrder('01/10/2026')).toEqual(['DD/MM/YYYY', 'MM/DD/YYYY']);
+    expect(dayMonthOrder('01.10.2026')).toEqual(['DD.MM.YYYY', 'MM.DD.YYYY']);
+    expect(dayMonthOrder('31/10/2026')).toEqual(['DD/MM/YYYY']);
+    expect(dayMonthOrder('10/31/2026')).toEqual(['MM/DD/YYYY']);
+    expect(dayMonthOrder('31.10.2026')).toEqual(['DD.MM.YYYY']);
     const dmy = {dateFormat: 'DD/MM/YYYY', months: new Map()};
     const mdy = {dateFormat: 'MM/DD/YYYY', months: new Map()};
     expect(parseDateCell('01/10/2026', 'monthly', dmy)).toBe(monthIndex(2026, 10));
