@@ -119,5 +119,8 @@ function queryProblem(e: unknown, seconds: number, env: string): string {
   if (sqlstate.startsWith('28')) return msg.authFailed(env);
   if (sqlstate === '') return msg.connectFailed(env, 'the connection was lost');
   const text = e instanceof Error ? e.message.split('\n')[0] : String(e);
-  return msg.queryFailed('postgres', `${text} (SQLSTATE ${sqlstate})`);
+  // The server's hint, when it has one ("Perhaps you meant to reference the column …").
+  const hint = typeof e === 'object' && e !== null ? (e as {hint?: unknown}).hint : undefined;
+  const more = typeof hint === 'string' && hint !== '' ? `; ${hint[0].toLowerCase()}${hint.slice(1).replace(/\.$/, '')}` : '';
+  return msg.queryFailed('postgres', `${text} (SQLSTATE ${sqlstate})${more}`);
 }
