@@ -35,6 +35,12 @@ export class CellReader {
   periods: {first: number; last: number} | undefined;
   /** XLSX: the worksheet being read, for places such as `budget.xlsx:Budget!B12`. */
   sheet: string | null = null;
+  /**
+   * XLSX: the cells of the row being read that hold no usable value (an error value, a formula saved without its
+   * result), by 0-based column, with their problem; handed over as blank fields. Reported only when the row's
+   * value, key or date is read from one of them, so a footer's or an unread column's cells do not matter.
+   */
+  unusable: ReadonlyMap<number, string> = new Map();
   private readonly dates = new Map<string, Stamp | undefined>();
   private readonly reading: DateReading;
   private readonly decimal: '.' | ',';
@@ -121,12 +127,20 @@ export class CellReader {
 
   /** Number in a cell (NaN when missing), or undefined (problem reported). */
   value(text: string, line: number, at: number, name: string): number | undefined {
+    if (this.reportUnusable(line, at)) return undefined;
     const value = parseNumberCell(text, this.decimal);
     if (value === undefined) {
       const advice = numberAdvice(text, this.decimal);
       this.report(line, at + 1, msg.notANumber(text.trim(), name, advice));
     }
     return value;
+  }
+
+  /** Report the problem of an unusable cell (see {@link CellReader.unusable}) when `at` is one; true if it was. */
+  reportUnusable(line: number, at: number): boolean {
+    const problem = this.unusable.get(at);
+    if (problem !== undefined) this.report(line, at + 1, problem);
+    return problem !== undefined;
   }
 
   /**

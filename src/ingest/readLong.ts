@@ -90,7 +90,7 @@ export function longVisitor(cells: CellReader, wanted: Wanted, data: SourceData)
       if (fields.length < width) cells.report(line, null, msg.shortRow(fields.length, width));
       if (store === undefined) {
         if (key === '') {
-          cells.report(line, keyAt + 1, msg.blankKey(keyLabel));
+          if (!cells.reportUnusable(line, keyAt)) cells.report(line, keyAt + 1, msg.blankKey(keyLabel));
           return;
         }
         store = keep(key);

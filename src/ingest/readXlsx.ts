@@ -16,7 +16,9 @@ import type {InputFile} from './types.js';
  * date cells (exceljs gives a `Date` anchored at UTC, honouring the workbook's 1900 or 1904 date system) as
  * `YYYY-MM-DD` or `YYYY-MM-DDTHH:mm:ss.sss` from their UTC fields, formulas through their cached result, rich
  * text as its plain text. A formula without a cached result, or an error value (`#DIV/0!`), is a problem at
- * `file.xlsx:Sheet!B12`; the row is then skipped.
+ * `file.xlsx:Sheet!B12` where the pack reads that cell: a data row's date (the row is then skipped), key or value
+ * (see CellReader.unusable). Such cells in columns no series reads, or in a totals row under the table, do not
+ * matter.
  *
  * Memory: the whole workbook (exceljs reads it into memory); rows are visited one by one.
  */
@@ -58,17 +60,17 @@ export async function readXlsx(
   for (let r = source.headerRow; r <= last; r++) {
     const row = sheet.getRow(r);
     const fields: string[] = [];
-    let bad = false;
+    const unusable = new Map<number, string>();
     for (let c = 1; c <= width; c++) {
       const text = cellText(row.getCell(c).value);
       if (typeof text === 'string') fields.push(text);
       else {
-        cells.report(r, c, text.problem);
+        unusable.set(c - 1, text.problem);
         fields.push('');
-        bad = true;
       }
     }
     if (r === source.headerRow) {
+      for (const [c, problem] of unusable) cells.report(r, c + 1, problem);
       const header = fields.map((f) => f.trim());
       if (header.every((f) => f === '')) {
         cells.report(r, null, msg.emptyHeader(r));
@@ -77,10 +79,14 @@ export async function readXlsx(
       if (!visitor.header(header, r)) return undefined;
       continue;
     }
-    if (bad) continue;
-    if (fields.some((f) => f !== '')) rows++;
-    visitor.record(fields, r);
+    cells.unusable = unusable;
+    // A date cell without a usable value: the row cannot be placed (nor told from a footer).
+    if (!cells.reportUnusable(r, cells.dateColumn)) {
+      if (fields.some((f) => f !== '')) rows++;
+      visitor.record(fields, r);
+    }
   }
+  cells.unusable = new Map();
   const sha256 = createHash('sha256').update(bytes).digest('hex');
   return {file: source.file, sha256, bytes: bytes.length, rows};
 }

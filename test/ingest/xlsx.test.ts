@@ -79,6 +79,32 @@ describe('XLSX problems at file.xlsx:Sheet!B12', () => {
     ]);
   });
 
+  it('unusable cells the pack does not read (a column no series uses, a totals row) are not problems', async () => {
+    const wb = new ExcelJS.Workbook();
+    const ws = wb.addWorksheet('Plan');
+    ws.addRow(['Month', 'Budget', 'Ratio']);
+    ws.addRow([new Date(Date.UTC(2026, 0, 1)), 10, {error: '#DIV/0!'}]);
+    ws.addRow([new Date(Date.UTC(2026, 1, 1)), 20, 0.5]);
+    ws.addRow(['Total', {formula: 'SUM(B2:B3)'}, {formula: 'B3/B2'}]);
+    const file = join(temp, 'footer.xlsx');
+    await wb.xlsx.writeFile(file);
+    const d = await readPack(plan('monthly', [source('p', file, {dateColumn: 'Month'})], [series('budget', 'p', {column: 'Budget'})]));
+    expect([...d.series[0].values]).toEqual([10, 20]);
+    expect(d.notes.map((n) => [n.file, n.note?.code])).toContainEqual([`${file}:Plan!4:4`, 'footerIgnored']);
+    // Read by a series, the error cell is a problem again; so is a date cell without a value.
+    const ratio = await problemsOf(plan('monthly', [source('p', file, {dateColumn: 'Month'})], [series('ratio', 'p', {column: 'Ratio'})]));
+    expect(ratio.map((p) => [p.file.replace(temp, ''), p.message.slice(0, 36)])).toEqual([
+      ['/footer.xlsx:Plan!C2', 'the cell holds the error #DIV/0!; fi'],
+    ]);
+    ws.getCell('A3').value = {formula: 'A2+31'} as ExcelJS.CellFormulaValue;
+    await wb.xlsx.writeFile(file);
+    const date = await problemsOf(plan('monthly', [source('p', file, {dateColumn: 'Month'})], [series('budget', 'p', {column: 'Budget'})]));
+    expect(date.map((p) => [p.file.replace(temp, ''), p.message.slice(0, 30)])).toContainEqual([
+      '/footer.xlsx:Plan!A3',
+      'the formula =A2+31 has no stor',
+    ]);
+  });
+
   it('a bad number points at its cell', async () => {
     const wb = new ExcelJS.Workbook();
     const ws = wb.addWorksheet('Plan');
