@@ -112,7 +112,7 @@ const TEMPLATE_LABELS = {
   seeChart: 'label.seeChart',
   series: 'label.series',
   latest: 'label.latest',
-  yoy: 'term.yearOnYear',
+  yoy: 'label.yearOnYearColumn',
   adjustedVsPrevious: 'label.adjustedVsPrevious',
   trend: 'label.trend',
   cycle: 'label.cycle',

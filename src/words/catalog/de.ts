@@ -79,7 +79,9 @@ export const de: Catalog = {
   'label.series': 'Reihe',
   'label.latest': 'Aktuell',
   'label.latestIn': 'Aktuell ({period})',
-  'label.adjustedVsPrevious': 'Saisonbereinigt gegenüber Vorperiode',
+  // Column headings of the overview table: soft hyphens (\u00ad) where a narrow column may break the long words.
+  'label.yearOnYearColumn': 'Gegen\u00adüber Vor\u00adjahr',
+  'label.adjustedVsPrevious': 'Saison\u00adberei\u00adnigt gegen\u00adüber Vor\u00adperiode',
   'label.adjustedOnPrevious': 'Saisonbereinigt gegenüber Vorperiode',
   'label.trend': 'Trend',
   'label.cycle': 'Zyklus',

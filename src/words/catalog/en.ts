@@ -83,6 +83,7 @@ export const en = {
   'label.series': 'Series',
   'label.latest': 'Latest',
   'label.latestIn': 'Latest ({period})',
+  'label.yearOnYearColumn': 'On a year earlier',
   'label.adjustedVsPrevious': 'Adjusted vs previous',
   'label.adjustedOnPrevious': 'Adjusted, on previous period',
   'label.trend': 'Trend',

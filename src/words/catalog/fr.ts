@@ -79,6 +79,7 @@ export const fr: Catalog = {
   'label.series': 'Série',
   'label.latest': 'Dernier',
   'label.latestIn': 'Dernier ({period})',
+  'label.yearOnYearColumn': 'En glissement annuel',
   'label.adjustedVsPrevious': 'CVS, sur la période précédente',
   'label.adjustedOnPrevious': 'CVS, sur la période précédente',
   'label.trend': 'Tendance',
