@@ -79,7 +79,7 @@ export const de: Catalog = {
   'label.series': 'Reihe',
   'label.latest': 'Aktuell',
   'label.latestIn': 'Aktuell ({period})',
-  // Column headings of the overview table: soft hyphens (\u00ad) where a narrow column may break the long words.
+  // Column headings of the overview tables: soft hyphens (\u00ad) where a narrow column may break the long words.
   'label.yearOnYearColumn': 'Gegen\u00adüber Vor\u00adjahr',
   'label.adjustedVsPrevious': 'Saison\u00adberei\u00adnigt gegen\u00adüber Vor\u00adperiode',
   'label.adjustedOnPrevious': 'Saisonbereinigt gegenüber Vorperiode',
