@@ -37,7 +37,8 @@ export async function ingest(plan: Plan): Promise<Readings> {
   const failed = new Set<string>();
   for (const source of plan.sources) {
     const before = problems.size;
-    sources.set(source.id, await readSource(source, wantedFrom(plan, source.id), plan.frequency, plan.locale, problems));
+    const data = await readSource(source, wantedFrom(plan, source.id), plan.frequency, plan.locale, problems);
+    sources.set(source.id, data);
     if (problems.size > before) failed.add(source.id);
   }
   const keysOf = (id: string): string[] | undefined => {

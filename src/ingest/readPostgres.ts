@@ -121,6 +121,7 @@ function queryProblem(e: unknown, seconds: number, env: string): string {
   const text = e instanceof Error ? e.message.split('\n')[0] : String(e);
   // The server's hint, when it has one ("Perhaps you meant to reference the column …").
   const hint = typeof e === 'object' && e !== null ? (e as {hint?: unknown}).hint : undefined;
-  const more = typeof hint === 'string' && hint !== '' ? `; ${hint[0].toLowerCase()}${hint.slice(1).replace(/\.$/, '')}` : '';
+  const more =
+    typeof hint === 'string' && hint !== '' ? `; ${hint[0].toLowerCase()}${hint.slice(1).replace(/\.$/, '')}` : '';
   return msg.queryFailed('postgres', `${text} (SQLSTATE ${sqlstate})${more}`);
 }
