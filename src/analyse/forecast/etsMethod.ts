@@ -32,8 +32,8 @@ const WARM_EVALUATIONS = 300;
  * that cut are given up early, see etsScreen.ts; each search runs at most `selectionEvaluations`, default 2,000 as
  * in the reference), otherwise the model with the smallest AICc is kept. Seasonal models only with m ≤ 24 and at
  * least two full years; for longer periods (weekly data, m = 52) the series is seasonally adjusted first (classical
- * decomposition, when the seasonality test finds a pattern) and non-seasonal ETS forecasts the adjusted series. Running totals come from simulated
- * sample paths of the mixture (seeded).
+ * decomposition, when the seasonality test finds a pattern) and non-seasonal ETS forecasts the adjusted series.
+ * Running totals come from simulated sample paths of the mixture (seeded).
  *
  * A refit keeps the model classes kept here and re-estimates them, warm-started from these estimates when asked
  * (at most 300 evaluations), re-weighted by their AICc on the new stretch of data; when none of them can be
