@@ -15,7 +15,7 @@ import {normalIntervals} from './normalIntervals.js';
  * exponential smoothing using two new classes of state space models, Journal of Forecasting 24, 17–37;
  * Hyndman et al. (2008), ch. 6.
  *
- * Complexity: O(h²) for classes 1–2; O(h·(km)³) for class 3 (k = 1 or 2 level/trend states), or O(h·km) when no
+ * Complexity: O(h²) for classes 1–2; O(h·(km)²) for class 3 (k = 1 or 2 level/trend states), or O(h·km) when no
  * level is asked for: the class 3 mean does not need the variance recursion, which is then skipped (variance NaN).
  * NaN policy: NaN in the fit → NaN out.
  */
@@ -81,13 +81,41 @@ function mul(a: Float64Array, b: Float64Array, d: number): Float64Array {
   return out;
 }
 
-function mulT(a: Float64Array, b: Float64Array, d: number): Float64Array {
+/** The non-zero entries of each row of a square row-major matrix (columns ascending): the factors of class 3. */
+interface SparseRows {
+  start: Int32Array;
+  column: Int32Array;
+  value: Float64Array;
+}
+
+function sparseRows(b: Float64Array, d: number): SparseRows {
+  const start = new Int32Array(d + 1);
+  const column: number[] = [];
+  const value: number[] = [];
+  for (let j = 0; j < d; j++) {
+    for (let k = 0; k < d; k++) {
+      if (b[j * d + k] === 0) continue;
+      column.push(k);
+      value.push(b[j * d + k]);
+    }
+    start[j + 1] = column.length;
+  }
+  return {start, column: Int32Array.from(column), value: Float64Array.from(value)};
+}
+
+/**
+ * A·Bᵀ for a sparse B: each sum runs over the columns where B's row is not zero, in ascending order, so it adds
+ * the same non-zero terms in the same order as the dense product (the factors have at most four a row).
+ */
+function mulT(a: Float64Array, b: SparseRows, d: number): Float64Array {
   const out = new Float64Array(d * d);
+  const {start, column, value} = b;
   for (let i = 0; i < d; i++) {
+    const row = i * d;
     for (let j = 0; j < d; j++) {
       let s = 0;
-      for (let k = 0; k < d; k++) s += a[i * d + k] * b[j * d + k];
-      out[i * d + j] = s;
+      for (let e = start[j]; e < start[j + 1]; e++) s += a[row + column[e]] * value[e];
+      out[row + j] = s;
     }
   }
   return out;
@@ -134,6 +162,7 @@ function etsClass3Moments(
   const kk = kron(g2, m, f1, k);
   const t = kron(f2, m, g1, k);
   for (let i = 0; i < d * d; i++) kk[i] += t[i];
+  const [f21Rows, g21Rows, kkRows] = [sparseRows(f21, d), sparseRows(g21, d), sparseRows(kk, d)];
   // M (k × m, row-major) = [l, b]ᵀ · seasonalᵀ.
   let mh = new Float64Array(k * m);
   for (let r = 0; r < k; r++) for (let c = 0; c < m; c++) mh[r * m + c] = x[r] * x[k + c];
@@ -158,17 +187,17 @@ function etsClass3Moments(
       for (let i = 0; i < d; i++) for (let j = 0; j < d; j++) outer[i * d + j] = vec[i] * vec[j];
       const fv = mul(f21, vh, d);
       const gv = mul(g21, vh, d);
-      const a1 = mulT(fv, f21, d);
-      const a2 = mulT(fv, g21, d);
-      const a3 = mulT(gv, f21, d);
+      const a1 = mulT(fv, f21Rows, d);
+      const a2 = mulT(fv, g21Rows, d);
+      const a3 = mulT(gv, f21Rows, d);
       const inner = new Float64Array(d * d);
       const inner2 = new Float64Array(d * d);
       for (let i = 0; i < d * d; i++) {
         inner[i] = vh[i] + outer[i];
         inner2[i] = 3 * vh[i] + 2 * outer[i];
       }
-      const a4 = mulT(mul(kk, inner, d), kk, d);
-      const a5 = mulT(mul(g21, inner2, d), g21, d);
+      const a4 = mulT(mul(kk, inner, d), kkRows, d);
+      const a5 = mulT(mul(g21, inner2, d), g21Rows, d);
       const next = new Float64Array(d * d);
       for (let i = 0; i < d * d; i++) next[i] = a1[i] + sigma2 * (a2[i] + a3[i] + a4[i] + sigma2 * a5[i]);
       vh = next;
