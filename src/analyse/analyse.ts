@@ -2,7 +2,7 @@ import {periodsPerYear} from '../time/period.js';
 import type {Note} from '../words/index.js';
 import {adjustSeries} from './decompose/index.js';
 import {analyseCycle} from './cycle/index.js';
-import {fiscalOutturn, forecastSeries} from './forecast/index.js';
+import {fiscalOutturn, forecastSeries, outturnUsesRunningTotals} from './forecast/index.js';
 import {computeChanges} from './changes.js';
 import {constantValue} from './numeric/constantValue.js';
 import type {SeriesAnalysis, SeriesInput} from './types.js';
@@ -78,8 +78,11 @@ export function analyseSeries(input: SeriesInput): SeriesAnalysis {
 
   const enough = hasData(values, periodsPerYear[frequency] > 12 ? 4 : 2);
   if (usable && !enough) notes.push({code: 'tooFewToForecast', values: {}});
+  const runningTotals = outturnUsesRunningTotals({values, start, frequency, fiscalYearStart: input.fiscalYearStart, kind});
   const forecast =
-    usable && enough ? guarded(notes, 'forecast', () => forecastSeries(values, {frequency, options: options.forecast})) : null;
+    usable && enough
+      ? guarded(notes, 'forecast', () => forecastSeries(values, {frequency, options: options.forecast, runningTotals}))
+      : null;
   const outturn = forecast
     ? guarded(notes, 'outturn', () =>
         fiscalOutturn({values, start, frequency, fiscalYearStart: input.fiscalYearStart, kind, forecast, target: input.target}),

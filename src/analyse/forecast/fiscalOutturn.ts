@@ -120,3 +120,25 @@ function targetOver(
   }
   return sum;
 }
+
+/**
+ * Whether {@link fiscalOutturn} will read the forecast's running totals for this series: a flow whose fiscal year
+ * is not complete at its last period. Forecasting skips simulating them otherwise (they are costly for ETS).
+ */
+export function outturnUsesRunningTotals({
+  values,
+  start,
+  frequency,
+  fiscalYearStart,
+  kind,
+}: {
+  values: Float64Array;
+  start: number;
+  frequency: Frequency;
+  fiscalYearStart: number;
+  kind: 'flow' | 'stock';
+}): boolean {
+  if (kind !== 'flow' || values.length === 0) return false;
+  const lastIndex = start + values.length - 1;
+  return fiscalYearOf(frequency, lastIndex, fiscalYearStart).last > lastIndex;
+}

@@ -20,6 +20,9 @@ import type {ForecastResult} from './types.js';
  * fewer than 4 values use the naive method; fewer than two full years exclude seasonal models; weekly data
  * (m = 52) are seasonally adjusted before non-seasonal models.
  *
+ * Running totals of the forecasts (for the fiscal-year outturn) come with the result unless `runningTotals` is
+ * false; ETS simulates sample paths for them, so a caller whose outturn does not read them leaves them out.
+ *
  * Complexity: one method run plus `backtestOrigins` refits of it and of two benchmarks.
  * NaN policy: skips leading/trailing NaN, fills interior NaN by linear interpolation (noted). Throws when no
  * value is present.
@@ -28,7 +31,11 @@ export const AUTO_METHOD: MethodName = 'ets-theta-arima';
 
 export function forecastSeries(
   values: Float64Array,
-  {frequency, options}: {frequency: Frequency; options: AnalysisOptions['forecast']},
+  {
+    frequency,
+    options,
+    runningTotals: wantTotals = true,
+  }: {frequency: Frequency; options: AnalysisOptions['forecast']; runningTotals?: boolean},
 ): ForecastResult {
   const notes: Note[] = [];
   const {horizon, levels: requestedLevels, backtestOrigins} = options;
@@ -60,7 +67,7 @@ export function forecastSeries(
     notes.push({code: 'forecastFewValues', values: {}});
     method = 'naive';
     fit = fitMethod('naive', y, {period});
-    run = fit.forecast({h, levels});
+    run = fit.forecast({h, levels, runningTotals: wantTotals});
   } else {
     if (method === 'seasonal-naive' && n <= period) {
       notes.push({code: 'naiveForSeasonalNaive', values: {}});
@@ -71,12 +78,12 @@ export function forecastSeries(
       notes.push({code: 'weeklyEts', values: {}});
     }
     fit = fitMethod(method, y, {period});
-    run = fit.forecast({h, levels});
+    run = fit.forecast({h, levels, runningTotals: wantTotals});
     if (!isFinitePath(run.forecast)) {
       notes.push({code: 'forecastNotFinite', values: {method: run.forecast.method}});
       method = 'naive';
       fit = fitMethod('naive', y, {period});
-      run = fit.forecast({h, levels});
+      run = fit.forecast({h, levels, runningTotals: wantTotals});
     }
   }
   const forecast = run.forecast;
@@ -87,7 +94,7 @@ export function forecastSeries(
     lower[String(level)] = cut(forecast.lower.get(level)!);
     upper[String(level)] = cut(forecast.upper.get(level)!);
   }
-  const runningTotals = forecast.runningTotals && gap === 0 ? forecast.runningTotals : undefined;
+  const runningTotals = wantTotals && forecast.runningTotals && gap === 0 ? forecast.runningTotals : undefined;
   const totals = runningTotals
     ? {
         lower: Object.fromEntries(levels.map((l) => [String(l), Array.from(runningTotals.lower.get(l)!)])),

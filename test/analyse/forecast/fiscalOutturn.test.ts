@@ -1,5 +1,5 @@
 import {describe, expect, it} from 'vitest';
-import {fiscalOutturn} from '../../../src/analyse/forecast/index.js';
+import {fiscalOutturn, outturnUsesRunningTotals} from '../../../src/analyse/forecast/index.js';
 import type {ForecastResult} from '../../../src/analyse/forecast/types.js';
 import {monthIndex, quarterIndex} from '../../../src/time/period.js';
 
@@ -90,5 +90,23 @@ describe('fiscalOutturn with running-total intervals', () => {
     };
     const o = fiscalOutturn({...monthlyApril, kind: 'flow', forecast: f, target: null})!;
     expect(o).toMatchObject({total: 110, lower: 107, upper: 113});
+  });
+});
+
+describe('outturnUsesRunningTotals', () => {
+  const values = new Float64Array(17).fill(5);
+  it('flows with months left in the fiscal year need them; a complete year or a stock does not', () => {
+    // Jan 2025 … May 2026: FY from April leaves Jun 2026 … Mar 2027; the calendar year leaves Jun … Dec 2026.
+    const start = monthIndex(2025, 1);
+    expect(outturnUsesRunningTotals({values, start, frequency: 'monthly', fiscalYearStart: 4, kind: 'flow'})).toBe(true);
+    expect(outturnUsesRunningTotals({values, start, frequency: 'monthly', fiscalYearStart: 1, kind: 'flow'})).toBe(true);
+    expect(outturnUsesRunningTotals({values, start, frequency: 'monthly', fiscalYearStart: 4, kind: 'stock'})).toBe(false);
+    // Ending in May 2026 with the fiscal year from June: the year is complete.
+    expect(outturnUsesRunningTotals({values, start, frequency: 'monthly', fiscalYearStart: 6, kind: 'flow'})).toBe(false);
+    // 8 quarters 2024 Q1 … 2025 Q4, calendar year: complete.
+    const q = new Float64Array(8).fill(1);
+    const qStart = quarterIndex(2024, 1);
+    expect(outturnUsesRunningTotals({values: q, start: qStart, frequency: 'quarterly', fiscalYearStart: 1, kind: 'flow'})).toBe(false);
+    expect(outturnUsesRunningTotals({values: q, start: qStart, frequency: 'quarterly', fiscalYearStart: 4, kind: 'flow'})).toBe(true);
   });
 });

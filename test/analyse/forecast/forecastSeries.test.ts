@@ -168,4 +168,14 @@ describe('forecastSeries running totals', () => {
     const naive = forecastSeries(air, {frequency: 'monthly', options: opts({method: 'seasonal-naive'})});
     expect(naive.runningTotals).toBeUndefined();
   });
+
+  it('leaves them out when not asked for, with the same forecast and back-test', () => {
+    for (const method of ['auto', 'theta'] as const) {
+      const full = forecastSeries(air, {frequency: 'monthly', options: opts({method})});
+      const bare = forecastSeries(air, {frequency: 'monthly', options: opts({method}), runningTotals: false});
+      expect(bare.runningTotals).toBeUndefined();
+      const {runningTotals: _, ...rest} = full;
+      expect(bare).toEqual(rest);
+    }
+  });
 });
