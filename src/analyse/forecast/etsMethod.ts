@@ -21,6 +21,15 @@ interface EtsStart {
 
 type EtsOptimizer = NonNullable<EtsFitOptions['optimizer']>;
 
+/** How the weighted selection searches: each search's budget, and whether the pool has the damped-additive-season models. */
+export interface EtsSelectionOptions {
+  maxEvaluations: number;
+  dampedAdditiveSeason: boolean;
+}
+
+/** The reference implementation's selection: 2,000 evaluations a search, every model of the stable subset. */
+const REFERENCE_SELECTION: EtsSelectionOptions = {maxEvaluations: 2000, dampedAdditiveSeason: true};
+
 /** Weights under this share are dropped from the Akaike-weighted ETS forecast (see akaikeWeights.ts). */
 const MIN_WEIGHT = 0.01;
 /** Evaluation budget of a warm-started refit (the start is already close to the optimum). */
@@ -29,8 +38,8 @@ const WARM_EVALUATIONS = 300;
 /**
  * Automatic ETS as a method fit (method.ts): every model of the stable subset is fitted (selectEts); `weighted`
  * averages the forecasts of those with an Akaike weight of at least 1% by weight (the models that cannot reach
- * that cut are given up early, see etsScreen.ts; each search runs at most `selectionEvaluations`, default 2,000 as
- * in the reference), otherwise the model with the smallest AICc is kept. Seasonal models only with m ≤ 24 and at
+ * that cut are given up early, see etsScreen.ts; `selection` sets each search's budget and the pool, by default
+ * 2,000 evaluations and every model, as in the reference), otherwise the model with the smallest AICc is kept. Seasonal models only with m ≤ 24 and at
  * least two full years; for longer periods (weekly data, m = 52) the series is seasonally adjusted first (classical
  * decomposition, when the seasonality test finds a pattern) and non-seasonal ETS forecasts the adjusted series.
  * Running totals come from simulated sample paths of the mixture (seeded).
@@ -53,8 +62,8 @@ export function fitEtsMethod(
     weighted,
     models,
     optimizer = 'nelder-mead',
-    selectionEvaluations = 2000,
-  }: {weighted: boolean; models?: EtsStart[]; optimizer?: EtsOptimizer; selectionEvaluations?: number},
+    selection = REFERENCE_SELECTION,
+  }: {weighted: boolean; models?: EtsStart[]; optimizer?: EtsOptimizer; selection?: EtsSelectionOptions},
 ): MethodFit {
   const gradient = optimizer === 'gradient';
   const n = values.length;
@@ -74,14 +83,14 @@ export function fitEtsMethod(
     const options = {period: sa ? 1 : period, seasonal: !sa && seasonalOk};
     // Weighted: only the models that can reach the 1% cut are fitted to the end (etsScreen.ts).
     fits = weighted
-      ? selectEtsScreened(y, {...options, maxEvaluations: selectionEvaluations})
+      ? selectEtsScreened(y, {...options, ...selection})
       : (selectEts(y, options)?.fits ?? []);
   }
   if (fits.length === 0) {
     // Nothing to keep: a refit tries the same models again, as given (or selects, when none were given).
     return {
       forecast: ({h, levels}) => ({forecast: forecastNaive(values, {h, levels}), details: {fallback: 'naive'}}),
-      refit: (next) => fitEtsMethod(next, period, {weighted, models, optimizer, selectionEvaluations}),
+      refit: (next) => fitEtsMethod(next, period, {weighted, models, optimizer, selection}),
     };
   }
   const criteria = fits.map((f) => f.aicc);
@@ -100,7 +109,7 @@ export function fitEtsMethod(
   return {
     forecast: (options) => ({forecast: forecastKept(values, kept, weights, sa, options), details}),
     refit: (next, {warm}) =>
-      fitEtsMethod(next, period, {weighted, models: starts(warm), optimizer, selectionEvaluations}),
+      fitEtsMethod(next, period, {weighted, models: starts(warm), optimizer, selection}),
   };
 }
 

@@ -17,7 +17,8 @@ const CHECKPOINTS = [250, 500, 750, 1000, 1500];
 const MARGINS = [350, 180, 120, 100, 50];
 
 /**
- * The fits of automatic ETS (the models and order of selectEts) for Akaike weighting, screened: the
+ * The fits of automatic ETS (the models and order of selectEts, or the pool of `dampedAdditiveSeason`, see
+ * etsCandidates) for Akaike weighting, screened: the
  * non-seasonal models, quick to fit, are fitted first; the seasonal models' searches then run in stages, the
  * most promising (lowest AICc so far) first, and a search is given up at a checkpoint when its AICc so far, less
  * the checkpoint's margin, is still more than 2·ln 100 ≈ 9.21 above the best AICc known (of a finished fit, or
@@ -35,9 +36,14 @@ const MARGINS = [350, 180, 120, 100, 50];
  */
 export function selectEtsScreened(
   y: Float64Array,
-  {period, seasonal = true, maxEvaluations = 2000}: {period: number; seasonal?: boolean; maxEvaluations?: number},
+  {
+    period,
+    seasonal = true,
+    maxEvaluations = 2000,
+    dampedAdditiveSeason = true,
+  }: {period: number; seasonal?: boolean; maxEvaluations?: number; dampedAdditiveSeason?: boolean},
 ): EtsFit[] {
-  const specs = etsCandidates(y, {period, seasonal});
+  const specs = etsCandidates(y, {period, seasonal, dampedAdditiveSeason});
   const fits: (EtsFit | null)[] = specs.map(() => null);
   let best = Infinity;
   const keep = (i: number, fit: EtsFit | null): void => {

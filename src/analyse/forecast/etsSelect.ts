@@ -38,10 +38,14 @@ export function selectEts(
   return best ? {best, fits, candidates} : null;
 }
 
-/** The models automatic ETS tries, in its fixed order (see {@link selectEts}). */
+/**
+ * The models automatic ETS tries, in its fixed order (see {@link selectEts}); without the two damped-trend models
+ * with additive season, ETS(A,Ad,A) and ETS(M,Ad,A), when `dampedAdditiveSeason` is false (the pool of `auto`,
+ * see methods.ts).
+ */
 export function etsCandidates(
   y: Float64Array,
-  {period, seasonal = true}: {period: number; seasonal?: boolean},
+  {period, seasonal = true, dampedAdditiveSeason = true}: {period: number; seasonal?: boolean; dampedAdditiveSeason?: boolean},
 ): EtsSpec[] {
   const n = y.length;
   let positive = true;
@@ -56,6 +60,7 @@ export function etsCandidates(
         for (const damped of [true, false]) {
           if (trend === 'N' && damped) continue;
           if (error === 'A' && season === 'M') continue;
+          if (!dampedAdditiveSeason && damped && season === 'A') continue;
           specs.push({error, trend, damped, season, period: season === 'N' ? 1 : period});
         }
       }

@@ -27,20 +27,34 @@ describe('selectEtsScreened', () => {
     });
   }
 
-  // `auto` selects with searches of at most 1,000 evaluations: the screen must give what fitting every model with
-  // that budget gives.
+  // `auto` selects with searches of at most 1,000 evaluations from a pool without the damped-trend models with
+  // additive season: the screen must give what fitting every model of that pool with that budget gives.
   for (const c of seasonal) {
-    it(`${c.name}, searches capped at 1,000 evaluations: the same as fitting every model with that cap`, () => {
+    it(`${c.name}, auto's pool and searches capped at 1,000 evaluations: the same as fitting every model so`, () => {
       const y = Float64Array.from(c.values);
-      const all = etsCandidates(y, {period: c.frequency}).flatMap((spec) => {
+      const pool = {period: c.frequency, dampedAdditiveSeason: false};
+      const all = etsCandidates(y, pool).flatMap((spec) => {
         const fit = fitEts(y, spec, {maxEvaluations: 1000});
         return fit && Number.isFinite(fit.aicc) ? [fit] : [];
       });
-      const screened = selectEtsScreened(y, {period: c.frequency, maxEvaluations: 1000});
+      const screened = selectEtsScreened(y, {...pool, maxEvaluations: 1000});
       expect(weighted(screened)).toEqual(weighted(all));
       for (const f of screened) expect(f).toEqual(all.find((g) => g.method === f.method));
     });
   }
+});
+
+describe('etsCandidates', () => {
+  it("auto's pool: the 15 models of the stable subset less ETS(A,Ad,A) and ETS(M,Ad,A), in the same order", () => {
+    const y = Float64Array.from(seasonal[0].values);
+    const name = (s: {error: string; trend: string; damped: boolean; season: string}) =>
+      `${s.error}${s.trend}${s.damped ? 'd' : ''}${s.season}`;
+    const every = etsCandidates(y, {period: 12}).map(name);
+    // selectEts' order for positive data: errors A, M; trends N, A (damped first); seasons N, A, M.
+    expect(every).toEqual('ANN ANA AAdN AAN AAdA AAA MNN MNA MNM MAdN MAN MAdA MAA MAdM MAM'.split(' '));
+    const pool = etsCandidates(y, {period: 12, dampedAdditiveSeason: false}).map(name);
+    expect(pool).toEqual(every.filter((m) => m !== 'AAdA' && m !== 'MAdA'));
+  });
 });
 
 describe('etsSearch', () => {
