@@ -48,6 +48,8 @@ export interface EtsFit {
   fitted: Float64Array;
   /** Resolved fitting options. */
   options: {optCrit: 'lik' | 'mse'; evaluations: number};
+  /** Gradient fits: the search's final inverse Hessian approximation, for a warm start of the next refit. */
+  inverseHessian?: Float64Array;
 }
 
 export interface EtsFitOptions {
@@ -60,9 +62,9 @@ export interface EtsFitOptions {
   /**
    * Warm start: begin the search at these smoothing parameters and initial states (e.g. the same model fitted
    * to a shorter stretch of the same series) instead of the heuristic start values; ignored when they are not
-   * feasible for this model.
+   * feasible for this model. A gradient fit also takes the `inverseHessian` of the fit it starts from.
    */
-  start?: {params: EtsParams; initialStates: Float64Array};
+  start?: {params: EtsParams; initialStates: Float64Array; inverseHessian?: Float64Array};
   /**
    * The search: `nelder-mead` (the reference implementation's, step for step) or `gradient` (projected BFGS on
    * the analytic gradient, etsGradient.ts; likelihood only, no fixed parameters). Default: 'nelder-mead'.
@@ -82,7 +84,7 @@ export function fitEts(
   if (!problem) return null;
   if (optimizer === 'gradient') {
     const warmStart = warm ? problem.warmVector(warm) : null;
-    return problem.gradientFit(warmStart, maxEvaluations);
+    return problem.gradientFit(warmStart, maxEvaluations, warm?.inverseHessian ?? null);
   }
   let result: NelderMeadResult | undefined;
   const warmStart = warm ? problem.warmVector(warm) : null;
@@ -150,7 +152,11 @@ function etsProblem(
   warmVector: (warm: {params: EtsParams; initialStates: Float64Array}) => Float64Array | null;
   aiccOf: (lik: number) => number;
   finish: (result: NelderMeadResult) => EtsFit | null;
-  gradientFit: (warm: Float64Array | null, maxEvaluations: number) => EtsFit | null;
+  gradientFit: (
+    warm: Float64Array | null,
+    maxEvaluations: number,
+    inverseHessian: Float64Array | null,
+  ) => EtsFit | null;
 } | null {
   const n = y.length;
   const seasonal = spec.season !== 'N';
@@ -288,7 +294,11 @@ function etsProblem(
     };
   };
   const startVector = Float64Array.from(start);
-  const gradientFit = (warmStart: Float64Array | null, maxEvaluations: number): EtsFit | null => {
+  const gradientFit = (
+    warmStart: Float64Array | null,
+    maxEvaluations: number,
+    inverseHessian: Float64Array | null,
+  ): EtsFit | null => {
     if (optCrit !== 'lik' || Object.values(fixed).some((v) => v !== undefined)) return null;
     const likelihood = etsLikelihoodGradient(y, spec);
     const gradParams = new Float64Array(4);
@@ -373,11 +383,14 @@ function etsProblem(
       other[0] = 0.5;
       starts.push(other);
     }
-    let best: {x: Float64Array; value: number} | null = null;
+    let best: {x: Float64Array; value: number; inverseHessian: Float64Array} | null = null;
     let evaluations = 0;
+    // A warm start also starts from the curvature learnt on the shorter stretch: its first step is then a
+    // quasi-Newton step instead of a short steepest-descent one.
+    const options = {lower: lo, upper: hi, scale: sc, maxIterations: maxEvaluations};
     for (const from of starts) {
       try {
-        const r = projectedBfgs(fg, from, {lower: lo, upper: hi, scale: sc, maxIterations: maxEvaluations});
+        const r = projectedBfgs(fg, from, warmOk ? {...options, inverseHessian} : options);
         evaluations += r.evaluations;
         if (!best || r.value < best.value) best = r;
       } catch {
@@ -386,7 +399,9 @@ function etsProblem(
     }
     if (!best) return null;
     const x = outer(best.x, new Float64Array(np));
-    return finish({x, value: best.value, evaluations, converged: true});
+    const fit = finish({x, value: best.value, evaluations, converged: true});
+    if (fit) fit.inverseHessian = best.inverseHessian;
+    return fit;
   };
   return {
     objective,

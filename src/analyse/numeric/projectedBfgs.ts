@@ -37,6 +37,12 @@ export interface ProjectedBfgsOptions {
   maxIterations?: number;
   /** Relative decrease of f below which the search stops. Default: 1e-10. */
   relTol?: number;
+  /**
+   * Inverse Hessian approximation to start from (k × k, row-major, in scaled coordinates), e.g. a search's
+   * `inverseHessian` on a slightly different function: the first step is then a quasi-Newton step. Ignored when
+   * its size is not k × k. Default: the identity, scaled after the first step.
+   */
+  inverseHessian?: Float64Array | null;
 }
 
 export interface ProjectedBfgsResult {
@@ -45,6 +51,8 @@ export interface ProjectedBfgsResult {
   /** Evaluations of f (each with its gradient). */
   evaluations: number;
   iterations: number;
+  /** The inverse Hessian approximation at the end (scaled coordinates), to warm-start a related search. */
+  inverseHessian: Float64Array;
 }
 
 const ARMIJO = 1e-4;
@@ -53,7 +61,7 @@ const MAX_BACKTRACKS = 40;
 export function projectedBfgs(
   fg: (x: Float64Array, gradient: Float64Array) => number,
   start: Float64Array,
-  {lower, upper, scale, maxIterations = 100, relTol = 1e-10}: ProjectedBfgsOptions = {},
+  {lower, upper, scale, maxIterations = 100, relTol = 1e-10, inverseHessian = null}: ProjectedBfgsOptions = {},
 ): ProjectedBfgsResult {
   const k = start.length;
   const sc = scale ?? new Float64Array(k).fill(1);
@@ -79,12 +87,19 @@ export function projectedBfgs(
   let f = evaluate(z, g);
   if (!Number.isFinite(f)) throw new RangeError('objective not finite at the start point');
   const H = new Float64Array(k * k);
+  // The last learnt approximation (a stop first starts again from the identity, which is no curvature to pass on).
+  let learnt: Float64Array | null = null;
   const resetH = (): void => {
+    if (updated) learnt = Float64Array.from(H);
     H.fill(0);
     for (let i = 0; i < k; i++) H[i * k + i] = 1;
   };
-  resetH();
   let updated = false;
+  resetH();
+  if (inverseHessian && inverseHessian.length === k * k) {
+    H.set(inverseHessian);
+    updated = true;
+  }
   const d = new Float64Array(k);
   const held = new Uint8Array(k);
   const zNew = new Float64Array(k);
@@ -189,5 +204,5 @@ export function projectedBfgs(
     }
   }
   const x = Float64Array.from(z, (v, i) => v * sc[i]);
-  return {x, value: f, evaluations, iterations};
+  return {x, value: f, evaluations, iterations, inverseHessian: updated ? H : (learnt ?? H)};
 }

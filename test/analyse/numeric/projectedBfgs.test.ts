@@ -55,6 +55,31 @@ describe('projectedBfgs', () => {
     expect(r.x[0]).toBeLessThan(0.51);
   });
 
+  it('from a given inverse Hessian: the exact one takes a quadratic to its minimum in one step', () => {
+    // f = (x₁ − 1)² + 10(x₂ + 2)² + x₁x₂: Hessian [[2, 1], [1, 20]], inverse [[20, −1], [−1, 2]] / 39; the minimum
+    // solves 2(x₁ − 1) + x₂ = 0, 20(x₂ + 2) + x₁ = 0: x₁ = 80/39, x₂ = −82/39.
+    const f = (x: Float64Array, g: Float64Array): number => {
+      g[0] = 2 * (x[0] - 1) + x[1];
+      g[1] = 20 * (x[1] + 2) + x[0];
+      return (x[0] - 1) ** 2 + 10 * (x[1] + 2) ** 2 + x[0] * x[1];
+    };
+    const inverseHessian = Float64Array.of(20 / 39, -1 / 39, -1 / 39, 2 / 39);
+    const r = projectedBfgs(f, Float64Array.of(5, 5), {inverseHessian});
+    expect(r.x[0]).toBeCloseTo(80 / 39, 12);
+    expect(r.x[1]).toBeCloseTo(-82 / 39, 12);
+    // The start, the Newton step, and the steps that confirm the stop.
+    expect(r.evaluations).toBeLessThanOrEqual(4);
+    expect(projectedBfgs(f, Float64Array.of(5, 5)).evaluations).toBeGreaterThan(r.evaluations);
+    // A Rosenbrock search passes on what it learnt: a restart near its end with it needs fewer evaluations.
+    const first = projectedBfgs(rosenbrock, Float64Array.of(-1.2, 1), {relTol: 1e-14, maxIterations: 500});
+    expect(first.inverseHessian).toHaveLength(4);
+    const near = Float64Array.of(1.01, 1.03);
+    const warm = projectedBfgs(rosenbrock, near, {relTol: 1e-14, inverseHessian: first.inverseHessian});
+    const cold = projectedBfgs(rosenbrock, near, {relTol: 1e-14});
+    expect(warm.value).toBeLessThan(1e-12);
+    expect(warm.evaluations).toBeLessThan(cold.evaluations);
+  });
+
   it('throws when the start is not feasible', () => {
     expect(() => projectedBfgs(() => Infinity, Float64Array.of(0))).toThrow(/objective not finite/);
   });
