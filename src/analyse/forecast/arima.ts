@@ -56,7 +56,12 @@ function arimaName({p, d, q, constant}: ArimaOrder): string {
   return `ARIMA(${p},${d},${q})${constant ? ` with ${what}` : ''}`;
 }
 
-export function fitArima(values: Float64Array, order: ArimaOrder): ArimaFit | null {
+/**
+ * With `start` (a fit of the same order to a shorter stretch of the same series, e.g. the back-test origin before)
+ * the search begins at its estimates with a small simplex (5% of each, 0.01 for a zero) instead of at zero with
+ * the usual step; an inadmissible start is ignored.
+ */
+export function fitArima(values: Float64Array, order: ArimaOrder, start?: ArimaFit): ArimaFit | null {
   const {p, d, q, constant} = order;
   for (const v of values) if (!Number.isFinite(v)) throw new RangeError('arima rejects NaN');
   if (p < 0 || q < 0) throw new RangeError(`invalid order: ${arimaName(order)}`);
@@ -84,7 +89,7 @@ export function fitArima(values: Float64Array, order: ArimaOrder): ArimaFit | nu
   };
   const k = p + q + (constant ? 1 : 0);
   const x0 = new Float64Array(k);
-  const x = k === 0 ? x0 : nelderMead(objective, x0, {maxEvaluations: 200 * k}).x;
+  const x = k === 0 ? x0 : search(objective, x0, warmVector(start, order, centre, spread), 200 * k);
   const mu = constant ? x[p + q] : shift;
   const css = sumOfSquares(z, x, p, q, mu, e) * spread * spread;
   return {
@@ -99,6 +104,34 @@ export function fitArima(values: Float64Array, order: ArimaOrder): ArimaFit | nu
     w,
     residuals: e.map((v) => v * spread),
   };
+}
+
+/** Nelder-Mead from the warm start when it is feasible, else from zero. */
+function search(
+  objective: (x: Float64Array, bound: number) => number,
+  cold: Float64Array,
+  warm: Float64Array | null,
+  maxEvaluations: number,
+): Float64Array {
+  if (warm && Number.isFinite(objective(warm, Infinity))) {
+    const steps = warm.map((v) => (v === 0 ? 0.01 : 0.05 * Math.abs(v)));
+    return nelderMead(objective, warm, {maxEvaluations, steps}).x;
+  }
+  return nelderMead(objective, cold, {maxEvaluations}).x;
+}
+
+/** A fit's estimates as the optimiser's vector for a series standardised by `centre` and `spread`. */
+function warmVector(
+  start: ArimaFit | undefined,
+  order: ArimaOrder,
+  centre: number,
+  spread: number,
+): Float64Array | null {
+  const same = start && start.order.p === order.p && start.order.q === order.q && start.order.d === order.d;
+  if (!start || !same || start.order.constant !== order.constant) return null;
+  const x = [...start.ar, ...start.ma];
+  if (order.constant) x.push((start.constant - centre) / spread);
+  return Float64Array.from(x);
 }
 
 /**

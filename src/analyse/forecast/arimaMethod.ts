@@ -11,13 +11,16 @@ export interface ArimaMember {
   forecast: (options: {h: number; levels: number[]}) => Forecast;
   /** The order given, or (when none was given) the one chosen here. */
   order: ArimaOrder;
+  /** The fit, to warm-start the refit at the next back-test origin. */
+  fit: ArimaFit;
 }
 
 /**
  * Automatic non-seasonal ARIMA (arimaSelect.ts) on seasonally adjusted data: the forecast is reseasonalised, with
  * running totals from the ARIMA error weights (and the seasonal factors when multiplicative). With `order` that
  * order is refitted instead of searched (falling back to the search when it cannot be fitted); the member keeps
- * the given order, so every back-test origin re-estimates the order chosen on the full series.
+ * the given order, so every back-test origin re-estimates the order chosen on the full series, starting from
+ * `start` (the fit at the origin before) when given.
  *
  * Used by the `arima` method on robust-STL-adjusted data and by `ets-theta-arima` on the adjustment its Theta
  * member shares (methods.ts). Null when the series is too short for any order.
@@ -27,8 +30,9 @@ export function fitArimaMember(
   values: Float64Array,
   adjustment: SeasonalAdjustment,
   order?: ArimaOrder,
+  start?: ArimaFit,
 ): ArimaMember | null {
-  const fit = (order && fitArima(adjustment.adjusted, order)) || selectArima(adjustment.adjusted);
+  const fit = (order && fitArima(adjustment.adjusted, order, start)) || selectArima(adjustment.adjusted);
   if (!fit) return null;
   const {p, d, q} = fit.order;
   return {
@@ -52,6 +56,7 @@ export function fitArimaMember(
       return forecast;
     },
     order: order ?? fit.order,
+    fit,
   };
 }
 

@@ -45,7 +45,11 @@ export function selectEts(
  */
 export function etsCandidates(
   y: Float64Array,
-  {period, seasonal = true, dampedAdditiveSeason = true}: {period: number; seasonal?: boolean; dampedAdditiveSeason?: boolean},
+  {
+    period,
+    seasonal = true,
+    dampedAdditiveSeason = true,
+  }: {period: number; seasonal?: boolean; dampedAdditiveSeason?: boolean},
 ): EtsSpec[] {
   const n = y.length;
   let positive = true;

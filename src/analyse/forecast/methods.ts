@@ -1,6 +1,6 @@
 import {averageForecasts} from './averageForecasts.js';
 import {forecastBenchmarks} from './benchmarks.js';
-import type {ArimaOrder} from './arima.js';
+import type {ArimaFit, ArimaOrder} from './arima.js';
 import {fitArimaMember, type ArimaMember} from './arimaMethod.js';
 import {fitEtsMethod, type EtsSelectionOptions} from './etsMethod.js';
 import type {MethodFit, MethodForecastOptions, MethodRun} from './method.js';
@@ -20,8 +20,8 @@ export type {MethodFit, MethodRun};
  * - `theta`: the Theta method (seasonal adjustment as in Theta's definition, any m).
  * - `arima`: automatic non-seasonal ARIMA (arimaMethod.ts) on robust-STL-adjusted data (stlSeasonalAdjustment.ts).
  * - `ets-theta-arima`: weighted mean of Akaike-weighted ETS (every model of automatic ETS with a weight of at
- *   least 1%, see akaikeWeights.ts, from a pool of 13, see AUTO_SELECTION) and Theta on STL-adjusted data, 45% each, and ARIMA on the same adjusted
- *   data, 10% — the most accurate of the combinations measured on M3 (test/bench/m3.ts: monthly sMAPE 13.48 and
+ *   least 1%, see akaikeWeights.ts, from a pool of 13, see AUTO_SELECTION) and Theta on STL-adjusted data, 45%
+ *   each, and ARIMA on the same adjusted data, 10% — the most accurate of the combinations measured on M3 (test/bench/m3.ts: monthly sMAPE 13.48 and
  *   MASE 0.827, against 14.14 for ETS, 13.86 for Theta, 13.59 for the mean of the single best ETS model and
  *   Theta, 13.47 and 0.832 without ARIMA; quarterly 8.75 against 9.69, 9.20, 8.92 and 8.81). Equal thirds
  *   measured 13.73 / 0.823 (monthly), 20% ARIMA 13.58 / 0.825: the ARIMA member lowers MASE and raises sMAPE,
@@ -142,15 +142,18 @@ function thetaFit(values: Float64Array, period: number): MethodFit {
   };
 }
 
-/** `arima`: the member on robust-STL-adjusted data, the naive method when no order fits; refits keep the order. */
-function arimaFit(values: Float64Array, period: number, order?: ArimaOrder): MethodFit {
-  const member = fitArimaMember(values, stlSeasonalAdjustment(values, period), order);
+/**
+ * `arima`: the member on robust-STL-adjusted data, the naive method when no order fits; refits keep the order and,
+ * warm, start from the estimates before.
+ */
+function arimaFit(values: Float64Array, period: number, order?: ArimaOrder, start?: ArimaFit): MethodFit {
+  const member = fitArimaMember(values, stlSeasonalAdjustment(values, period), order, start);
   return {
     forecast: (options) =>
       member
         ? {forecast: member.forecast(options), details: member.details}
         : {forecast: forecastNaive(values, {h: options.h, levels: options.levels}), details: {}},
-    refit: (next) => arimaFit(next, period, member?.order ?? order),
+    refit: (next, {warm}) => arimaFit(next, period, member?.order ?? order, warm ? member?.fit : undefined),
   };
 }
 
@@ -159,7 +162,8 @@ const AUTO_WEIGHTS = Float64Array.of(0.45, 0.45, 0.1);
 
 /**
  * `ets-theta-arima` and `combination` around a fitted weighted ETS: one robust STL adjustment of `values` shared
- * by the Theta and ARIMA members. A refit refits the ETS member (warm or not) and keeps the ARIMA order.
+ * by the Theta and ARIMA members. A refit refits the ETS member (warm or not) and keeps the ARIMA order (warm:
+ * starting from the ARIMA estimates here).
  */
 function combinationFit(
   name: 'ets-theta-arima' | 'combination',
@@ -167,10 +171,12 @@ function combinationFit(
   period: number,
   ets: MethodFit,
   order?: ArimaOrder,
+  start?: ArimaFit,
 ): MethodFit {
   const adjustment = stlSeasonalAdjustment(values, period);
   const theta = fitTheta(values, {period, adjust: () => adjustment});
-  const arima: ArimaMember | null = name === 'ets-theta-arima' ? fitArimaMember(values, adjustment, order) : null;
+  const arima: ArimaMember | null =
+    name === 'ets-theta-arima' ? fitArimaMember(values, adjustment, order, start) : null;
   return {
     forecast: (options) => {
       const {h, levels} = options;
@@ -196,7 +202,8 @@ function combinationFit(
       };
       return {forecast, details};
     },
-    refit: (next, {warm}) => combinationFit(name, next, period, ets.refit(next, {warm}), arima?.order ?? order),
+    refit: (next, {warm}) =>
+      combinationFit(name, next, period, ets.refit(next, {warm}), arima?.order ?? order, warm ? arima?.fit : undefined),
   };
 }
 

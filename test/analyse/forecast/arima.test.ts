@@ -39,6 +39,28 @@ describe('ARIMA by conditional sum of squares against stats::arima(method = "CSS
   }
 });
 
+describe('fitArima from the estimates on a shorter stretch (back-test refits)', () => {
+  for (const c of ref.cases) {
+    it(`${c.name}: started from the fit without the last two values, the same minimum as stats::arima`, () => {
+      const y = Float64Array.from(c.values);
+      const order = {p: c.p, d: c.d, q: c.q, constant: c.constant};
+      const shorter = fitArima(y.subarray(0, y.length - 2), order)!;
+      const fit = fitArima(y, order, shorter)!;
+      expect(relErr(fit.sigma2, c.sigma2)).toBeLessThan(1e-7);
+      c.ar.forEach((v: number, i: number) => expect(Math.abs(fit.ar[i] - v)).toBeLessThan(5e-4));
+      c.ma.forEach((v: number, i: number) => expect(Math.abs(fit.ma[i] - v)).toBeLessThan(5e-4));
+    });
+  }
+
+  it('a start of another order is ignored', () => {
+    const c = ref.cases[0];
+    const y = Float64Array.from(c.values);
+    const order = {p: c.p, d: c.d, q: c.q, constant: c.constant};
+    const other = fitArima(y, {...order, p: c.p + 1})!;
+    expect(fitArima(y, order, other)).toEqual(fitArima(y, order));
+  });
+});
+
 describe('forecastArima', () => {
   it('a random walk with drift forecasts the last value plus h drifts, variance h·σ²', () => {
     // ARIMA(0,1,0) with drift: the textbook case (Box & Jenkins 1970, ch. 5).
