@@ -52,6 +52,8 @@ const ALL_METHODS: {label: string; name: MethodName | 'auto'}[] = [
 ];
 const chosen = process.env.EBBFLOW_M3_METHODS?.split(',');
 const METHODS = chosen ? ALL_METHODS.filter((m) => chosen.includes(m.label)) : ALL_METHODS;
+/** Decimal places beyond the usual, for comparing two versions: `EBBFLOW_M3_PLACES=2` prints sMAPE as 13.4813. */
+const MORE = Number(process.env.EBBFLOW_M3_PLACES ?? 0);
 
 /** Published sMAPE (Makridakis & Hibon 2000; Hyndman 2018 for ETS; mean of ETS, ARIMA, Theta) and R 8.20 MASE. */
 const PUBLISHED: Record<string, {monthly: string; quarterly: string}> = {
@@ -180,8 +182,8 @@ async function main(): Promise<void> {
       const avg = (k: keyof Score) => sub.reduce((a, r) => a + r.scores[m.label][k], 0) / sub.length;
       const pub = PUBLISHED[m.label][name];
       console.log(
-        `| ${m.label} | ${avg('smape').toFixed(2)} | ${avg('mase').toFixed(3)} | ` +
-          `${(100 * avg('cover80')).toFixed(1)} | ${(100 * avg('cover95')).toFixed(1)} | ` +
+        `| ${m.label} | ${avg('smape').toFixed(2 + MORE)} | ${avg('mase').toFixed(3 + MORE)} | ` +
+          `${(100 * avg('cover80')).toFixed(1 + MORE)} | ${(100 * avg('cover95')).toFixed(1 + MORE)} | ` +
           `${avg('ms').toFixed(1)} | ${pub} |`,
       );
     }
