@@ -78,14 +78,15 @@ export function analyseSeries(input: SeriesInput): SeriesAnalysis {
 
   const enough = hasData(values, periodsPerYear[frequency] > 12 ? 4 : 2);
   if (usable && !enough) notes.push({code: 'tooFewToForecast', values: {}});
-  const runningTotals = outturnUsesRunningTotals({values, start, frequency, fiscalYearStart: input.fiscalYearStart, kind});
+  const {fiscalYearStart} = input;
+  const runningTotals = outturnUsesRunningTotals({values, start, frequency, fiscalYearStart, kind});
   const forecast =
     usable && enough
       ? guarded(notes, 'forecast', () => forecastSeries(values, {frequency, options: options.forecast, runningTotals}))
       : null;
   const outturn = forecast
     ? guarded(notes, 'outturn', () =>
-        fiscalOutturn({values, start, frequency, fiscalYearStart: input.fiscalYearStart, kind, forecast, target: input.target}),
+        fiscalOutturn({values, start, frequency, fiscalYearStart, kind, forecast, target: input.target}),
       )
     : null;
 

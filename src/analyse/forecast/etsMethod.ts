@@ -23,7 +23,7 @@ interface EtsStart {
 
 type EtsOptimizer = NonNullable<EtsFitOptions['optimizer']>;
 
-/** How the weighted selection searches: each search's budget, and whether the pool has the damped-additive-season models. */
+/** How the weighted selection searches: each search's budget, and whether the pool has ETS(A,Ad,A) and ETS(M,Ad,A). */
 export interface EtsSelectionOptions {
   maxEvaluations: number;
   dampedAdditiveSeason: boolean;

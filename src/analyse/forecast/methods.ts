@@ -21,11 +21,12 @@ export type {MethodFit, MethodRun};
  * - `arima`: automatic non-seasonal ARIMA (arimaMethod.ts) on robust-STL-adjusted data (stlSeasonalAdjustment.ts).
  * - `ets-theta-arima`: weighted mean of Akaike-weighted ETS (every model of automatic ETS with a weight of at
  *   least 1%, see akaikeWeights.ts, from a pool of 13, see AUTO_SELECTION) and Theta on STL-adjusted data, 45%
- *   each, and ARIMA on the same adjusted data, 10% — the most accurate of the combinations measured on M3 (test/bench/m3.ts: monthly sMAPE 13.48 and
- *   MASE 0.827, against 14.14 for ETS, 13.86 for Theta, 13.59 for the mean of the single best ETS model and
- *   Theta, 13.47 and 0.832 without ARIMA; quarterly 8.75 against 9.69, 9.20, 8.92 and 8.81). Equal thirds
- *   measured 13.73 / 0.823 (monthly), 20% ARIMA 13.58 / 0.825: the ARIMA member lowers MASE and raises sMAPE,
- *   and 10% is the largest share that kept monthly sMAPE below the Theta-and-ETS pair's level of 13.5.
+ *   each, and ARIMA on the same adjusted data, 10% — the most accurate of the combinations measured on M3
+ *   (test/bench/m3.ts: monthly sMAPE 13.48 and MASE 0.827, against 14.14 for ETS, 13.86 for Theta, 13.59 for
+ *   the mean of the single best ETS model and Theta, 13.47 and 0.832 without ARIMA; quarterly 8.75 against 9.69,
+ *   9.20, 8.92 and 8.81). Equal thirds measured 13.73 / 0.823 (monthly), 20% ARIMA 13.58 / 0.825: the ARIMA
+ *   member lowers MASE and raises sMAPE, and 10% is the largest share that kept monthly sMAPE below the
+ *   Theta-and-ETS pair's level of 13.5.
  *   The weights were chosen on the M3 data itself, so the measured figures flatter them a little.
  * - `combination`: ETS, Theta on STL-adjusted data and damped trend on adjusted data, equally weighted.
  *   Combination intervals average the members' bounds and widen them about the mean by
@@ -35,7 +36,7 @@ export type {MethodFit, MethodRun};
  * ETS, Theta and their combinations also give intervals for running totals of the forecasts (simulated ETS
  * sample paths, seeded; Theta's closed form), which the fiscal-year outturn uses.
  *
- * Complexity: dominated by automatic ETS (up to 15 fits, 13 for `auto`; a refit re-estimates only the models kept).
+ * Complexity: dominated by automatic ETS (up to 15 fits, 13 in `auto`; a refit re-estimates only the models kept).
  * NaN policy: rejects NaN. Needs n ≥ 4 except for the naive methods.
  */
 export type MethodName =
