@@ -6,6 +6,7 @@ import {afterAll, describe, expect, it} from 'vitest';
 import type {Plan} from '../../src/config/plan.js';
 import {InputError, type Problem} from '../../src/errors.js';
 import {monthIndex} from '../../src/time/period.js';
+import {sheetReference} from '../../src/ingest/places.js';
 import {FIXTURES, fromSource, plan, readPack, series, source} from './plan.js';
 
 /**
@@ -102,6 +103,32 @@ describe('XLSX problems at file.xlsx:Sheet!B12', () => {
     expect(date.map((p) => [p.file.replace(temp, ''), p.message.slice(0, 30)])).toContainEqual([
       '/footer.xlsx:Plan!A3',
       'the formula =A2+31 has no stor',
+    ]);
+  });
+
+  it('a sheet name with a space is quoted in the cell reference, as spreadsheet formulas write it', async () => {
+    const wb = new ExcelJS.Workbook();
+    const ws = wb.addWorksheet('Plan 2026');
+    ws.addRow(['Month', 'Budget']);
+    ws.addRow(['2026-01', 'ten']);
+    const file = join(temp, 'spaced.xlsx');
+    await wb.xlsx.writeFile(file);
+    const pack = plan('monthly', [source('p', file, {dateColumn: 'Month', sheet: 'Plan 2026'})], [series('b', 'p', {column: 'Budget'})]);
+    const problems = await problemsOf(pack);
+    expect(problems[0].file).toBe(`${file}:'Plan 2026'!B2`);
+  });
+
+  it('sheet references: plain names as they are, others quoted with quotes doubled', () => {
+    expect(['Budget', 'Plan_2026', 'FY.26', 'Plan 2026', "Tom's", '2026', 'Q1', 'Umsätze', 'Plan-B'].map(sheetReference)).toEqual([
+      'Budget',
+      'Plan_2026',
+      'FY.26',
+      "'Plan 2026'",
+      "'Tom''s'",
+      "'2026'",
+      "'Q1'",
+      'Umsätze',
+      "'Plan-B'",
     ]);
   });
 
