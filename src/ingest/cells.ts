@@ -9,6 +9,7 @@ import {numberAdvice, parseNumberCell} from './parseNumber.js';
 import {placeAt} from './places.js';
 import type {ProblemLog} from './problemLog.js';
 import {sniffDelimiter} from './sniffDelimiter.js';
+import {lineHoldingColumn} from './titleLines.js';
 import type {Note} from '../words/index.js';
 import type {DataNote} from './types.js';
 
@@ -81,10 +82,15 @@ export class CellReader {
     const declared = this.source.delimiter;
     const found =
       this.source.reader === 'csv' && header.length === 1 && declared !== 'auto' ? sniffDelimiter(header[0]) : declared;
+    // A title line read as the header: the line below that holds the name, if the first lines of the file have one.
+    const title = this.source.reader === 'csv' && header.filter((h) => h.trim() !== '').length <= 1;
+    const below = title ? lineHoldingColumn(this.source.file, this.source.encoding, line, name) : null;
     const message =
       found !== declared && header[0].includes(found)
         ? msg.missingColumnDelimiter(what, name, declared, found)
-        : msg.missingColumn(what, name, didYouMean(name, header), header);
+        : below !== null
+          ? msg.columnBelowTitle(what, name, header, below)
+          : msg.missingColumn(what, name, didYouMean(name, header), header);
     this.report(line, null, message);
     return at;
   }

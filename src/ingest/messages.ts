@@ -17,14 +17,21 @@ export const notUtf8 = (): string =>
 export const utf8BomInWindows1252 = (): string =>
   'the file starts with a UTF-8 byte-order mark but the source says `encoding: windows-1252`; remove that line (UTF-8 is the default)';
 
+/** What a header of one field (a title line) holds, for the messages below. */
+const onlyField = (header: string[]): string =>
+  header.length === 0 || header[0].trim() === '' ? 'blanks' : `"${header[0].trim()}"`;
+
 export const missingColumn = (what: string, name: string, suggestion: string | undefined, header: string[]): string =>
   header.filter((h) => h.trim() !== '').length <= 1
-    ? `${what} "${name}" is not in the header, which holds only ${header.length === 0 || header[0].trim() === '' ? 'blanks' : `"${header[0].trim()}"`}: ` +
+    ? `${what} "${name}" is not in the header, which holds only ${onlyField(header)}: ` +
       'if title lines stand above the column names, set `headerRow` on the source to the line that holds them'
     : `${what} "${name}" is not in the header` +
   (suggestion !== undefined
     ? `; did you mean "${suggestion}"?`
     : `; the columns are: ${listed(header.map((h) => `"${h}"`))}`);
+export const columnBelowTitle = (what: string, name: string, header: string[], line: number): string =>
+  `${what} "${name}" is not in the header, which holds only ${onlyField(header)}; line ${line} holds it: ` +
+  `set \`headerRow: ${line}\` on the source`;
 export const duplicateColumn = (name: string, columns: number[]): string =>
   `column "${name}" appears ${columns.length} times in the header (columns ${columns.join(', ')}); rename all but one`;
 export const missingKey = (column: string, key: string, seriesId: string, suggestion: string | undefined): string =>

@@ -28,6 +28,8 @@ export async function readCsv(
   const counter = {bytes: 0, lines: 1};
   const text = decodedText(source, hash, counter);
   let rows = 0;
+  // Set once the visitor rejects the header (its problems are reported): the rest is not read.
+  let stopped = false;
   try {
     let head = '';
     let lines: string[] = [];
@@ -51,7 +53,6 @@ export async function readCsv(
       return undefined;
     }
     let headerSeen = false;
-    let stopped = false;
     const records = new CsvRecords(
       delimiter,
       (record, line) => {
@@ -94,7 +95,9 @@ export async function readCsv(
     }
   } catch (e) {
     if (e instanceof DecodeFailure) problems.add(source.file, e.line, null, e.message);
-    else if (e instanceof CsvSyntaxError) problems.add(source.file, e.line, null, msg.csvSyntax(e.message));
+    // After a rejected header a syntax error further on is a follow-on (read with the wrong line's delimiter).
+    else if (e instanceof CsvSyntaxError && !stopped) problems.add(source.file, e.line, null, msg.csvSyntax(e.message));
+    else if (e instanceof CsvSyntaxError) return undefined;
     else if (isFileError(e)) problems.add(source.file, null, null, msg.unreadableFile(e.code));
     else throw e;
     return undefined;
