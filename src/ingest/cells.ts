@@ -9,7 +9,6 @@ import {numberAdvice, parseNumberCell} from './parseNumber.js';
 import {placeAt} from './places.js';
 import type {ProblemLog} from './problemLog.js';
 import {sniffDelimiter} from './sniffDelimiter.js';
-import {lineHoldingColumn} from './titleLines.js';
 import type {Note} from '../words/index.js';
 import type {DataNote} from './types.js';
 
@@ -26,6 +25,11 @@ const DATE_CACHE = 4096;
  * does, they were a footer (`Total;;1234`) and {@link CellReader.finish} turns them into one data note.
  */
 export class CellReader {
+  /**
+   * The line (CSV) or row (XLSX) below `after` that holds a column name, set by the reader: a missing column under
+   * a title line then names the line to give as `headerRow`. Null where the reader cannot look (queries).
+   */
+  headerBelow: ((name: string, after: number) => number | null) | null = null;
   /** 0-based index of the date column, once the header is known. */
   dateColumn = -1;
   /** Each grain of the dates read, with the first cell of that grain (derive decides whether a mix matters). */
@@ -82,14 +86,15 @@ export class CellReader {
     const declared = this.source.delimiter;
     const found =
       this.source.reader === 'csv' && header.length === 1 && declared !== 'auto' ? sniffDelimiter(header[0]) : declared;
-    // A title line read as the header: the line below that holds the name, if the first lines of the file have one.
-    const title = this.source.reader === 'csv' && header.filter((h) => h.trim() !== '').length <= 1;
-    const below = title ? lineHoldingColumn(this.source.file, this.source.encoding, line, name) : null;
+    // A title line read as the header: the line below that holds the name, if the reader can look for one.
+    const find = this.headerBelow;
+    const title = header.filter((h) => h.trim() !== '').length <= 1;
+    const below = find !== null && title ? find(name, line) : null;
     const message =
       found !== declared && header[0].includes(found)
         ? msg.missingColumnDelimiter(what, name, declared, found)
         : below !== null
-          ? msg.columnBelowTitle(what, name, header, below)
+          ? msg.columnBelowTitle(what, name, header, below, this.source.reader === 'xlsx' ? 'row' : 'line')
           : msg.missingColumn(what, name, didYouMean(name, header), header);
     this.report(line, null, message);
     return at;

@@ -29,8 +29,14 @@ export const missingColumn = (what: string, name: string, suggestion: string | u
   (suggestion !== undefined
     ? `; did you mean "${suggestion}"?`
     : `; the columns are: ${listed(header.map((h) => `"${h}"`))}`);
-export const columnBelowTitle = (what: string, name: string, header: string[], line: number): string =>
-  `${what} "${name}" is not in the header, which holds only ${onlyField(header)}; line ${line} holds it: ` +
+export const columnBelowTitle = (
+  what: string,
+  name: string,
+  header: string[],
+  line: number,
+  unit: 'line' | 'row',
+): string =>
+  `${what} "${name}" is not in the header, which holds only ${onlyField(header)}; ${unit} ${line} holds it: ` +
   `set \`headerRow: ${line}\` on the source`;
 export const duplicateColumn = (name: string, columns: number[]): string =>
   `column "${name}" appears ${columns.length} times in the header (columns ${columns.join(', ')}); rename all but one`;

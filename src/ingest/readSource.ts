@@ -4,6 +4,7 @@ import {CellReader} from './cells.js';
 import * as msg from './messages.js';
 import type {ProblemLog} from './problemLog.js';
 import {readCsv} from './readCsv.js';
+import {lineHoldingColumn} from './titleLines.js';
 import {longVisitor, type LongVisitor} from './readLong.js';
 import {wideVisitor} from './readWide.js';
 import type {RowVisitor} from './rowVisitor.js';
@@ -43,8 +44,11 @@ async function rowsOf(
   long: {visitor: LongVisitor; wanted: Wanted} | undefined,
 ): Promise<InputFile | undefined> {
   switch (cells.source.reader) {
-    case 'csv':
+    case 'csv': {
+      const {file, encoding} = cells.source;
+      cells.headerBelow = (name, after) => lineHoldingColumn(file, encoding, after, name);
       return readCsv(cells.source, visitor, problems);
+    }
     case 'xlsx':
       return (await import('./readXlsx.js')).readXlsx(cells, visitor, problems);
     case 'duckdb':

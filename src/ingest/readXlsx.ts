@@ -8,6 +8,9 @@ import type {ProblemLog} from './problemLog.js';
 import type {RowVisitor} from './rowVisitor.js';
 import type {InputFile} from './types.js';
 
+/** How many rows below a title row the column names are looked for (CellReader.headerBelow). */
+const TITLE_LOOK_ROWS = 50;
+
 /**
  * Read one worksheet of an `.xlsx` workbook through a visitor, as rows of text fields, from the source's
  * `headerRow` on (rows above it are titles). The file is read once: hashed (SHA-256) and handed to exceljs.
@@ -52,6 +55,16 @@ export async function readXlsx(
   cells.sheet = sheet.name;
   const width = sheet.columnCount;
   const last = sheet.rowCount;
+  cells.headerBelow = (name, after) => {
+    for (let r = after + 1; r <= Math.min(last, after + TITLE_LOOK_ROWS); r++) {
+      const row = sheet.getRow(r);
+      for (let c = 1; c <= width; c++) {
+        const text = cellText(row.getCell(c).value);
+        if (typeof text === 'string' && text.trim() === name) return r;
+      }
+    }
+    return null;
+  };
   if (last < source.headerRow) {
     cells.report(null, null, msg.headerBeyondEnd(source.headerRow, last));
     return undefined;

@@ -118,6 +118,24 @@ describe('XLSX problems at file.xlsx:Sheet!B12', () => {
     expect(problems[0].file).toBe(`${file}:'Plan 2026'!B2`);
   });
 
+  it('title rows above the header: the problem names the row that holds the column', async () => {
+    const wb = new ExcelJS.Workbook();
+    const ws = wb.addWorksheet('Plan');
+    ws.addRow(['Budget 2026, approved 3 November']);
+    ws.addRow([]);
+    ws.addRow(['Month', 'Budget']);
+    ws.addRow(['2026-01', 10]);
+    const file = join(temp, 'titled.xlsx');
+    await wb.xlsx.writeFile(file);
+    const problems = await problemsOf(plan('monthly', [source('p', file, {dateColumn: 'Month'})], [series('b', 'p', {column: 'Budget'})]));
+    expect(problems.map((p) => p.message)).toEqual([
+      'date column "Month" is not in the header, which holds only "Budget 2026, approved 3 November"; row 3 holds it: set `headerRow: 3` on the source',
+      'column of series b "Budget" is not in the header, which holds only "Budget 2026, approved 3 November"; row 3 holds it: set `headerRow: 3` on the source',
+    ]);
+    const d = await readPack(plan('monthly', [source('p', file, {dateColumn: 'Month', headerRow: 3})], [series('b', 'p', {column: 'Budget'})]));
+    expect([...d.series[0].values]).toEqual([10]);
+  });
+
   it('sheet references: plain names as they are, others quoted with quotes doubled', () => {
     expect(['Budget', 'Plan_2026', 'FY.26', 'Plan 2026', "Tom's", '2026', 'Q1', 'Umsätze', 'Plan-B'].map(sheetReference)).toEqual([
       'Budget',
