@@ -19,7 +19,8 @@ export function columnName(column: number): string {
 /**
  * A sheet's name as a cell reference writes it: as is when it is a plain name (letters of any script, digits, `_`
  * and `.`, not starting with a digit and not itself a cell address like `Q1`), else in single quotes with any
- * quote doubled, as spreadsheet formulas write it (`'Plan 2026'!B12`, `'Tom''s'!A1`; ECMA-376 / OpenFormula sheet references).
+ * quote doubled, as spreadsheet formulas write it (`'Plan 2026'!B12`, `'Tom''s'!A1`; the sheet references of
+ * ECMA-376 and OpenFormula).
  */
 export function sheetReference(sheet: string): string {
   const plain = /^[\p{L}_][\p{L}\p{N}_.]*$/u.test(sheet) && !/^[A-Za-z]{1,3}[0-9]+$/.test(sheet);

@@ -96,8 +96,9 @@ export async function readCsv(
   } catch (e) {
     if (e instanceof DecodeFailure) problems.add(source.file, e.line, null, e.message);
     // After a rejected header a syntax error further on is a follow-on (read with the wrong line's delimiter).
-    else if (e instanceof CsvSyntaxError && !stopped) problems.add(source.file, e.line, null, msg.csvSyntax(e.message));
-    else if (e instanceof CsvSyntaxError) return undefined;
+    else if (e instanceof CsvSyntaxError) {
+      if (!stopped) problems.add(source.file, e.line, null, msg.csvSyntax(e.message));
+    }
     else if (isFileError(e)) problems.add(source.file, null, null, msg.unreadableFile(e.code));
     else throw e;
     return undefined;

@@ -4,11 +4,11 @@ import {CellReader} from './cells.js';
 import * as msg from './messages.js';
 import type {ProblemLog} from './problemLog.js';
 import {readCsv} from './readCsv.js';
-import {lineHoldingColumn} from './titleLines.js';
 import {longVisitor, type LongVisitor} from './readLong.js';
 import {wideVisitor} from './readWide.js';
 import type {RowVisitor} from './rowVisitor.js';
 import type {SourceData, Wanted} from './sourceData.js';
+import {lineHoldingColumn} from './titleLines.js';
 import type {InputFile} from './types.js';
 
 /**
