@@ -101,11 +101,16 @@ export async function readDuckdb(
   }
 }
 
-/** A DuckDB error as a problem text: its kind decides the advice; its first line is DuckDB's own. */
+/**
+ * A DuckDB error as a problem text: its kind decides the advice; its first line is DuckDB's own, followed by the
+ * columns it offers for a misspelt one (its "Candidate bindings" line, nearest first).
+ */
 function engineProblem(e: unknown): string {
   const text = (e instanceof Error ? e.message : String(e)).replace(/^Failed to extract statements: /, '');
   const first = text.split('\n')[0].trim();
   if (/extension/i.test(first)) return msg.queryExtension(first);
   if (/^Permission Error/.test(first)) return msg.queryOutside(first.replace(/^Permission Error: /, ''));
-  return msg.queryFailed('duckdb', first);
+  const candidates = /^Candidate bindings: (.+)$/m.exec(text)?.[1].trim();
+  const detail = candidates ? `${first.replace(/!$/, '')} (the nearest columns: ${candidates})` : first;
+  return msg.queryFailed('duckdb', detail);
 }
