@@ -12,6 +12,15 @@ import {sniffDelimiter} from './sniffDelimiter.js';
 import type {Note} from '../words/index.js';
 import type {DataNote} from './types.js';
 
+/** A date that could be day first or month first, where it stands, and the later date that decides it. */
+interface HeldDayMonth {
+  line: number;
+  column: number;
+  text: string;
+  formats: string[];
+  decided?: {line: number; text: string; format: string};
+}
+
 /** Most distinct date texts remembered per file: long files repeat each date once per key. */
 const DATE_CACHE = 4096;
 
@@ -50,6 +59,11 @@ export class CellReader {
   private readonly reading: DateReading;
   private readonly decimal: '.' | ',';
   private mixedReported = false;
+  /**
+   * The first date that could be day first or month first, held until a later date of the same column that can
+   * only be one of them (`13/01/2025`) decides which `dateFormat` to name, or the source ends.
+   */
+  private dayMonth: HeldDayMonth | null = null;
   private lastText = '';
   private lastStamp: Stamp | undefined;
   private held: {line: number; text: string; report: () => void}[] = [];
@@ -193,6 +207,19 @@ export class CellReader {
     this.held = [];
   }
 
+  /** Report the held day-or-month date (see {@link CellReader.dayMonth}), with the later date that decides it. */
+  settleDates(): void {
+    const d = this.dayMonth;
+    if (d === null) return;
+    this.dayMonth = null;
+    const name = this.source.dateColumn;
+    const unit = this.source.reader === 'csv' ? 'line' : 'row';
+    const message = d.decided
+      ? msg.dayMonthDecided(d.text, name, {...d.decided, unit})
+      : msg.dayMonthDate(d.text, name, d.formats);
+    this.report(d.line, d.column, message);
+  }
+
   private badDate(text: string, line: number): void {
     const name = this.source.dateColumn;
     const column = this.dateColumn + 1;
@@ -203,7 +230,13 @@ export class CellReader {
       if (!this.mixedReported) this.report(line, column, msg.mixedFrequency(shown, name, found, this.frequency));
       this.mixedReported = true;
     } else if (order !== undefined) {
-      if (!this.mixedReported) this.report(line, column, msg.dayMonthDate(shown, name, order));
+      // One order: reported at once. Either order: held until a later date decides it or the source ends.
+      if (!this.mixedReported && order.length === 1) this.report(line, column, msg.dayMonthDate(shown, name, order));
+      else if (!this.mixedReported) this.dayMonth = {line, column, text: shown, formats: order};
+      else if (this.dayMonth !== null && order.length === 1) {
+        this.dayMonth.decided = {line, text: shown, format: order[0]};
+        this.settleDates();
+      }
       this.mixedReported = true;
     } else {
       const message = shown === '' ? msg.blankDate(name) : msg.badDate(shown, name, this.frequency);

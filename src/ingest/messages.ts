@@ -105,6 +105,14 @@ export const dayMonthDate = (text: string, column: string, formats: string[]): s
       `\`dateFormat: ${formats[1]}\` to the source (whichever the export writes)`
     : `"${text}" in column "${column}" is a ${formats[0].startsWith('DD') ? 'day-first' : 'month-first'} date; ` +
       `add \`dateFormat: ${formats[0]}\` to the source`;
+export const dayMonthDecided = (
+  text: string,
+  column: string,
+  decided: {line: number; text: string; format: string; unit: 'line' | 'row'},
+): string =>
+  `"${text}" in column "${column}" could be day first or month first, and ${decided.unit} ${decided.line} holds ` +
+  `"${decided.text}", which is ${decided.format.startsWith('DD') ? 'day first' : 'month first'}: ` +
+  `add \`dateFormat: ${decided.format}\` to the source`;
 export const emptyHeader = (line: number): string =>
   `the header row (line ${line}) is empty; set \`headerRow\` on the source to the line that holds the column names`;
 export const headerBeyondEnd = (headerRow: number, lines: number): string =>

@@ -28,6 +28,8 @@ export async function readSource(
   const long = source.layout === 'long' ? longVisitor(cells, wanted, data) : undefined;
   const visitor = long ?? wideVisitor(cells, wanted, data);
   data.input = await rowsOf(cells, visitor, problems, long && {visitor: long, wanted});
+  // Reported even when the read failed later on, so a date problem found first is not lost.
+  cells.settleDates();
   if (data.input !== undefined) {
     if (long !== undefined && data.input.rows > 0) long.finish();
     data.notes.push(...cells.finish());

@@ -102,7 +102,9 @@ describe('dates and layouts as exports write them', () => {
         file,
         line: 2,
         column: 1,
-        message: '"01/01/2026" in column "date" could be day first or month first; add `dateFormat: DD/MM/YYYY` or `dateFormat: MM/DD/YYYY` to the source (whichever the export writes)',
+        // 13/01/2026 (line 14) can only be day first, so it decides.
+        message:
+          '"01/01/2026" in column "date" could be day first or month first, and line 14 holds "13/01/2026", which is day first: add `dateFormat: DD/MM/YYYY` to the source',
       },
     ]);
     const d = await readPack(plan('monthly', [{...src, dateFormat: 'DD/MM/YYYY'}], [series('amount', 'd')]));
