@@ -229,7 +229,8 @@ function calendarRounds(
   const xm = x.map(scale.toModel);
   let estimates: CalendarRegressor[] | null = null;
   let calendarModel: Float64Array = new Float64Array(m);
-  let fit = decompose(x);
+  const plain = decompose(x);
+  let fit = plain;
   if (regressors.length > 0) {
     for (let round = 0; round < CALENDAR_ROUNDS; round++) {
       const e = xm.map((v, i) => (missing[i] ? NaN : v - scale.toModel(fit.trend[i]) - scale.toModel(fit.seasonal[i])));
@@ -240,9 +241,12 @@ function calendarRounds(
     }
     if (estimates !== null) {
       const significant = effectOf(regressors, estimates, m, true);
-      const anySignificant = estimates.some((r) => r.significant);
-      if (anySignificant) fit = decompose(xm.map((v, i) => scale.fromModel(v - significant[i])));
-      else fit = decompose(x);
+      // Decompositions already made are reused: with no effect significant it is the first one, with every effect
+      // significant the last round's (the same effect, summed in the same order, so the same input).
+      if (!estimates.some((r) => r.significant)) fit = plain;
+      else if (!estimates.every((r) => r.significant)) {
+        fit = decompose(xm.map((v, i) => scale.fromModel(v - significant[i])));
+      }
       calendarModel = significant;
     }
   }
