@@ -53,6 +53,14 @@ function firstWeek(year: number, s: number): number {
   return (thursday - 3 - periodStartDay('weekly', 0)) / 7;
 }
 
+/**
+ * The years of a fiscal year's label without its prefix, for the words of each language: `FY2026/27` → `2026/27`,
+ * `FY2026` → `2026`. A label of another form comes back as it is.
+ */
+export function fiscalYears(label: string): string {
+  return /^FY(\d{4}(?:\/\d{2})?)$/.exec(label)?.[1] ?? label;
+}
+
 function fiscalLabel(startYear: number, s: number): string {
   return s === 1 ? `FY${startYear}` : `FY${startYear}/${String((startYear + 1) % 100).padStart(2, '0')}`;
 }

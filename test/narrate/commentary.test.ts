@@ -94,7 +94,7 @@ describe('series paragraph', () => {
       'Net sales came to 2,025 EUR k in October 2026, +8.5% on a year earlier. ' +
         'Seasonally adjusted, the series rose 1.5% on the previous month, and the trend-cycle is rising at 0.8% a month. ' +
         'Its cycle is above trend and rising, +4.5% from the long-run trend. ' +
-        'On current forecasts the fiscal year FY2026/27 will close at 26,642 EUR k, in line with the target of 26,705 EUR k. ' +
+        'On current forecasts the fiscal year 2026/27 will close at 26,642 EUR k, in line with the target of 26,705 EUR k. ' +
         '2 values stand out: August 2026 (one-off) and January 2026 (level shift).',
     );
   });
@@ -104,14 +104,14 @@ describe('series paragraph', () => {
       'Net sales für Oktober 2026: 2.025 EUR k, +8,5\u00a0% gegenüber Vorjahr. ' +
         'Saisonbereinigt stieg die Reihe um 1,5\u00a0% gegenüber dem Vormonat, und die Trend-Konjunktur-Komponente steigt um 0,8\u00a0% je Monat. ' +
         'Zyklusphase: über dem Trend und steigend, Abstand zum langfristigen Trend +4,5\u00a0%. ' +
-        'Nach aktueller Prognose schließt das Geschäftsjahr FY2026/27 mit 26.642 EUR k, im Rahmen des Planwerts von 26.705 EUR k. ' +
+        'Nach aktueller Prognose schließt das Geschäftsjahr 2026/27 mit 26.642 EUR k, im Rahmen des Planwerts von 26.705 EUR k. ' +
         '2 Werte fallen auf: August 2026 (einmaliger Ausreißer) und Januar 2026 (Niveauverschiebung).',
     );
     expect(paragraph(rising(), 'fr-FR')).toBe(
       'Net sales pour octobre 2026 : 2\u202f025 EUR k, +8,5\u00a0% en glissement annuel. ' +
         'En données CVS, la série a progressé de 1,5\u00a0% sur le mois précédent, et la tendance-cycle est en hausse, de 0,8\u00a0% par mois. ' +
         'Son cycle est au-dessus de la tendance et en hausse, à +4,5\u00a0% de la tendance de long terme. ' +
-        'Selon les prévisions actuelles, l’exercice FY2026/27 se clôturera à 26\u202f642 EUR k, conforme à l’objectif de 26\u202f705 EUR k. ' +
+        'Selon les prévisions actuelles, l’exercice 2026/27 se clôturera à 26\u202f642 EUR k, conforme à l’objectif de 26\u202f705 EUR k. ' +
         '2 valeurs ressortent : août 2026 (valeur atypique ponctuelle) et janvier 2026 (rupture de niveau).',
     );
   });
@@ -126,7 +126,7 @@ describe('series paragraph', () => {
       'Net sales came to 2,025 EUR k in October 2026, -2.1% on a year earlier. ' +
         'Seasonally adjusted, the series fell 0.6% on the previous month, but the trend-cycle is rising at 0.3% a month. ' +
         'Its cycle is above trend and rising, +4.5% from the long-run trend. ' +
-        'On current forecasts the fiscal year FY2026/27 will close at 26,642 EUR k, 3.2% below the target of 26,705 EUR k. ' +
+        'On current forecasts the fiscal year 2026/27 will close at 26,642 EUR k, 3.2% below the target of 26,705 EUR k. ' +
         'One value stands out: October 2026 (temporary change).',
     );
     expect(paragraph(a, 'de-DE')).toContain('Saisonbereinigt fiel die Reihe um 0,6\u00a0% gegenüber dem Vormonat, doch die Trend-Konjunktur-Komponente steigt um 0,3\u00a0% je Monat');
@@ -242,12 +242,14 @@ describe('pack paragraph', () => {
     expect(packParagraph({series, callouts: [], period: OCT_2026, words: wordsFor('de-DE')})).toBe(
       'Für Oktober 2026 lag 1 von 2 Reihen über dem Vorjahr; am stärksten wuchs Net sales (+8,5\u00a0%), am schwächsten Shop footfall (-1,5\u00a0%). ' +
         'Die Trend-Konjunktur-Komponente steigt in 1 Reihe, fällt in 1 und verläuft seitwärts in keiner. ' +
-        'Nach aktueller Prognose schließt Net sales das Geschäftsjahr FY2026/27 im Rahmen des Planwerts. ' +
+        'Nach aktueller Prognose schließt Net sales das Geschäftsjahr 2026/27 im Rahmen des Planwerts. ' +
         'In dieser Periode gibt kein Wert Anlass zu einer Warnung. ' +
         'Für November 2026 zeigen die Prognosen einen Anstieg in 1 Reihe und einen Rückgang in 1.',
     );
-    expect(packParagraph({series, callouts: [alert], period: OCT_2026, words: wordsFor('fr-FR')})).toContain(
-      'Un chiffre appelle l’attention : Shop footfall (valeur atypique).',
-    );
+    const french = packParagraph({series, callouts: [alert], period: OCT_2026, words: wordsFor('fr-FR')});
+    expect(french).toContain('Un chiffre appelle l’attention : Shop footfall (valeur atypique).');
+    // The fiscal year in each language's words, not the English abbreviation.
+    expect(french).toContain('Net sales clôturera l’exercice 2026/27 conforme à son objectif');
+    expect(french).not.toContain('FY');
   });
 });

@@ -1,5 +1,5 @@
 import {describe, expect, it} from 'vitest';
-import {fiscalYearOf} from '../../src/time/fiscal.js';
+import {fiscalYearOf, fiscalYears} from '../../src/time/fiscal.js';
 import {isoWeekIndex, isoWeeksInYear, monthIndex, quarterIndex} from '../../src/time/period.js';
 
 describe('fiscalYearOf, monthly', () => {
@@ -99,5 +99,14 @@ describe('fiscalYearOf, weekly', () => {
         fy = next;
       }
     }
+  });
+});
+
+describe('fiscalYears', () => {
+  it('gives the years of a label for the words of each language, and any other text as it is', () => {
+    const label = (month: number) => fiscalYearOf('monthly', monthIndex(2099, month), 7).label;
+    expect([label(7), label(1)].map(fiscalYears)).toEqual(['2099/00', '2098/99']);
+    expect(fiscalYears(fiscalYearOf('monthly', monthIndex(2026, 5), 1).label)).toBe('2026');
+    expect(fiscalYears('2026')).toBe('2026');
   });
 });

@@ -1,4 +1,5 @@
 import type {Rule} from '../context.js';
+import {fiscalYears} from '../../time/fiscal.js';
 import type {Words} from '../../words/index.js';
 import {chartAnchor} from '../chartAnchor.js';
 
@@ -32,7 +33,7 @@ export const outturnRule: Rule = {
         text: outturnText(w, {
           label: s.label,
           stock: s.kind === 'stock',
-          year: o.fiscalYear,
+          years: fiscalYears(o.fiscalYear),
           total: w.value(o.total, s.unit),
           level: String(o.level),
           range: w.range(o.lower, o.upper, s.unit),
@@ -63,7 +64,7 @@ function outturnText(
   a: {
     label: string;
     stock: boolean;
-    year: string;
+    years: string;
     total: string;
     level: string;
     range: string;

@@ -1,5 +1,6 @@
 import type {SeriesPlan} from '../../config/plan.js';
 import type {SeriesAnalysis} from '../../analyse/types.js';
+import {fiscalYears} from '../../time/fiscal.js';
 import type {MessageKey, Words} from '../../words/index.js';
 import type {GroupResult} from '../../combine/index.js';
 import type {Callout} from '../types.js';
@@ -82,7 +83,7 @@ export function packParagraph({series, callouts, period, words: w, groups = []}:
     const o = a.outturn;
     if (!o || o.target === null || o.gapPct === null || !Number.isFinite(o.gapPct)) return [];
     const where = Math.abs(o.gapPct) < IN_LINE_PCT ? 'inline' : o.gapPct > 0 ? 'above' : 'below';
-    return [w.t('open.targetItem', {label: s.label, year: o.fiscalYear, where, gap: w.share(o.gapPct)})];
+    return [w.t('open.targetItem', {label: s.label, years: fiscalYears(o.fiscalYear), where, gap: w.share(o.gapPct)})];
   });
   if (targets.length > 0) sentences.push(w.t('open.target', {list: w.list(targets)}));
 

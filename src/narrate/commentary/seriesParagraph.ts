@@ -1,5 +1,6 @@
 import type {SeriesPlan} from '../../config/plan.js';
 import type {SeriesAnalysis} from '../../analyse/types.js';
+import {fiscalYears} from '../../time/fiscal.js';
 import {periodsPerYear, yearAgo} from '../../time/period.js';
 import {phaseWords, type Words} from '../../words/index.js';
 import type {Callout} from '../types.js';
@@ -118,7 +119,7 @@ export function seriesParagraph({series: s, analysis: a, callouts, words: w}: Pa
     if (o && o.target !== null && o.gapPct !== null && Number.isFinite(o.gapPct) && Number.isFinite(o.total)) {
       const where = Math.abs(o.gapPct) < IN_LINE_PCT ? 'inline' : o.gapPct > 0 ? 'above' : 'below';
       return w.t('para.outturnTarget', {
-        year: o.fiscalYear,
+        years: fiscalYears(o.fiscalYear),
         total: w.value(o.total, s.unit),
         where,
         gap: w.share(o.gapPct),

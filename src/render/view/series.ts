@@ -1,5 +1,6 @@
 import type {SeriesAnalysis} from '../../analyse/types.js';
 import type {Plan} from '../../config/plan.js';
+import {fiscalYears} from '../../time/fiscal.js';
 import {methodName, phaseWords, shortMethod, wordNote, type Words} from '../../words/index.js';
 import type {ReportSeries} from '../types.js';
 import {seriesFigureRows} from './figures.js';
@@ -77,7 +78,7 @@ function forecastTable(a: SeriesAnalysis, w: Words): SeriesView['forecast'] {
     outturn:
       o && Number.isFinite(o.total)
         ? w.t('forecast.outturn', {
-            year: o.fiscalYear,
+            years: fiscalYears(o.fiscalYear),
             actual: w.number(o.actualToDate),
             periodsActual: w.periods(a.frequency, o.periodsActual),
             forecast: w.number(o.forecastRemaining),

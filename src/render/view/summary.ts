@@ -1,4 +1,5 @@
 import type {SeriesAnalysis} from '../../analyse/types.js';
+import {fiscalYears} from '../../time/fiscal.js';
 import {periodsPerYear} from '../../time/period.js';
 import {phaseWords, type Words} from '../../words/index.js';
 import type {ReportSeries} from '../types.js';
@@ -40,7 +41,7 @@ export function summaryRow(s: ReportSeries, w: Words, theme: Theme): SummaryRow 
 function outlook(a: SeriesAnalysis, w: Words): string {
   const o = a.outturn;
   if (o && o.target !== null) {
-    return w.t('summary.outturn', {year: o.fiscalYear, total: w.number(o.total), target: w.number(o.target), gap: w.percent(o.gapPct)});
+    return w.t('summary.outturn', {years: fiscalYears(o.fiscalYear), total: w.number(o.total), target: w.number(o.target), gap: w.percent(o.gapPct)});
   }
   const fc = a.forecast;
   if (fc && fc.mean.length > 0) {

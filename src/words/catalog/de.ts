@@ -144,7 +144,7 @@ export const de: Catalog = {
   'flag.notes': '{n, plural, one {# Datenhinweis} other {# Datenhinweise}}',
   'summary.note':
     'Veränderungen in Prozent. „Saisonbereinigt gegenüber Vorperiode“ vergleicht den saisonbereinigten Wert mit {previous}. Der Ausblick zeigt das voraussichtliche Geschäftsjahresergebnis gegenüber dem Planwert, wo einer gesetzt ist, sonst die Prognose für die nächste Periode mit ihrem 80-%-Intervall.',
-  'summary.outturn': '{year}: {total} gegenüber Plan {target} ({gap})',
+  'summary.outturn': 'GJ {years}: {total} gegenüber Plan {target} ({gap})',
   'summary.forecast': '{period}: {mean} ({low}–{high})',
   'summary.forecastNoRange': '{period}: {mean}',
   'summary.spark': '{label}: letzte {n} Perioden',
@@ -200,7 +200,7 @@ export const de: Catalog = {
     'Backtest: von {origins, plural, one {# früheren Zeitpunkt} other {# früheren Zeitpunkten}} der Daten aus wiederholt, bis zu {horizon, plural, one {# Periode} other {# Perioden}} voraus, erreichte die Prognose einen MASE von {mase} und einen sMAPE von {smape}, {better, select, yes {besser} other {nicht besser}} als die Fortschreibung der Vorjahreswerte (MASE 1){benchmarks, select, none {} other {; einfachere Verfahren: {benchmarks}}}.',
   'forecast.benchmark': '{method} {mase}',
   'forecast.outturn':
-    '{year}: {actual} Istwerte über {periodsActual} und {forecast} Prognose für die restlichen {periodsRemaining}, zusammen {total} ({level}-%-Intervall {range}){target, select, none {} other {, gegenüber einem Planwert von {target} ({gap})}}.',
+    'GJ {years}: {actual} Istwerte über {periodsActual} und {forecast} Prognose für die restlichen {periodsRemaining}, zusammen {total} ({level}-%-Intervall {range}){target, select, none {} other {, gegenüber einem Planwert von {target} ({gap})}}.',
   'label.aboutSeries': 'Zu dieser Reihe',
   'history.smallerOne': '1 kleinere Revision (unter {threshold}) ist nicht aufgeführt; sie steht in exports/revisions.csv.',
   'history.smallerMany':
@@ -241,9 +241,9 @@ export const de: Catalog = {
   'benchmark.constant': 'konstant',
   'callout.combination': 'eine Kombination aus {families}',
   'callout.dampedTrend': 'gedämpftem Trend',
-  'callout.outturnStock': 'Nach aktueller Prognose: {label} zum Ende von {year} bei {total} ({level}-%-Intervall {range})',
+  'callout.outturnStock': 'Nach aktueller Prognose: {label} zum Ende des Geschäftsjahres {years} bei {total} ({level}-%-Intervall {range})',
   'callout.outturnFlow':
-    'Nach aktueller Prognose: {label} im {year} insgesamt {total} ({level}-%-Intervall {range}), aus {actual} Istwerten und {forecast} Prognose',
+    'Nach aktueller Prognose: {label} im Geschäftsjahr {years} insgesamt {total} ({level}-%-Intervall {range}), aus {actual} Istwerten und {forecast} Prognose',
   'callout.outturnEnd': '{base}.',
   'callout.outturnInLine': '{base}, im Rahmen des Planwerts von {target}.',
   'callout.outturnGap': '{base}, {gap} {above, select, yes {über} other {unter}} dem Planwert von {target}.',
@@ -285,12 +285,9 @@ export const de: Catalog = {
   'para.trendOnly':
     'Ihre Trend-Konjunktur-Komponente {direction, select, rising {steigt} falling {fällt} other {verläuft seitwärts}}.',
   'para.cycle': 'Zyklusphase: {phase}, Abstand zum langfristigen Trend {gap}',
-  'para.cycleChanged': 'Zyklusphase: Wechsel von „{from}“ zu „{to}“, Abstand zum langfristigen Trend {gap}',
   'para.turn': 'die Reihe hat für {period} {provisional, select, yes {möglicherweise } other {}}einen {type} durchlaufen',
   'para.outturnTarget':
-    'Nach aktueller Prognose schließt das Geschäftsjahr {year} mit {total}, {where, select, inline {im Rahmen des Planwerts von {target}} above {{gap} über dem Planwert von {target}} other {{gap} unter dem Planwert von {target}}}.',
-  'para.outturnNoTarget':
-    'Nach aktueller Prognose schließt das Geschäftsjahr {year} mit {total}, ohne gesetzten Planwert ({level}-%-Intervall {range}).',
+    'Nach aktueller Prognose schließt das Geschäftsjahr {years} mit {total}, {where, select, inline {im Rahmen des Planwerts von {target}} above {{gap} über dem Planwert von {target}} other {{gap} unter dem Planwert von {target}}}.',
   'para.forecast': 'Die Prognose für {period} lautet {mean} ({level}-%-Intervall {range}).',
   'para.noForecast': 'Für die Reihe wurde keine Prognose erstellt.',
   'para.unusual': '{n, plural, one {Ein Wert fällt auf: {list}.} other {# Werte fallen auf: {list}.}}',
@@ -306,7 +303,7 @@ export const de: Catalog = {
     'Die Trend-Konjunktur-Komponente steigt in {rising, plural, =0 {keiner Reihe} one {# Reihe} other {# Reihen}}, fällt in {falling, plural, =0 {keiner} other {#}} und verläuft seitwärts in {flat, plural, =0 {keiner} other {#}}.',
   'open.target': 'Nach aktueller Prognose {list}.',
   'open.targetItem':
-    'schließt {label} das Geschäftsjahr {year} {where, select, inline {im Rahmen des Planwerts} above {{gap} über Plan} other {{gap} unter Plan}}',
+    'schließt {label} das Geschäftsjahr {years} {where, select, inline {im Rahmen des Planwerts} above {{gap} über Plan} other {{gap} unter Plan}}',
   'open.surprises':
     '{n, plural, one {Ein Wert verlangt Aufmerksamkeit: {list}.} other {# Werte verlangen Aufmerksamkeit, vor allem {list}.}}',
   'open.surpriseItem': '{label} ({what})',

@@ -148,7 +148,7 @@ export const en = {
   'flag.notes': '{n, plural, one {# data note} other {# data notes}}',
   'summary.note':
     'Changes are in percent. “Adjusted” compares the seasonally adjusted figure with {previous}. The outlook shows the fiscal-year outturn against target where a target is set, otherwise the forecast for the next period with its 80% range.',
-  'summary.outturn': '{year}: {total} vs target {target} ({gap})',
+  'summary.outturn': 'FY{years}: {total} vs target {target} ({gap})',
   'summary.forecast': '{period}: {mean} ({low}–{high})',
   'summary.forecastNoRange': '{period}: {mean}',
   'summary.spark': '{label}: last {n} periods',
@@ -201,7 +201,7 @@ export const en = {
     'Back-test: re-run from {origins, plural, one {# earlier point} other {# earlier points}} in the data, up to {horizon, plural, one {# period} other {# periods}} ahead, the forecast scored MASE {mase} and sMAPE {smape}, {better, select, yes {better} other {no better}} than repeating last year’s figures (MASE 1){benchmarks, select, none {} other {; simpler methods: {benchmarks}}}.',
   'forecast.benchmark': '{method} {mase}',
   'forecast.outturn':
-    '{year}: {actual} actual over {periodsActual} plus {forecast} forecast for the remaining {periodsRemaining}, a total of {total} ({level}% range {range}){target, select, none {} other {, against a target of {target} ({gap})}}.',
+    'FY{years}: {actual} actual over {periodsActual} plus {forecast} forecast for the remaining {periodsRemaining}, a total of {total} ({level}% range {range}){target, select, none {} other {, against a target of {target} ({gap})}}.',
   'label.aboutSeries': 'About this series',
   'history.smallerOne': '1 smaller revision (under {threshold}) is not listed; it is in exports/revisions.csv.',
   'history.smallerMany': '{count} smaller revisions (each under {threshold}) are not listed; all of them are in exports/revisions.csv.',
@@ -240,9 +240,9 @@ export const en = {
   'benchmark.constant': 'constant',
   'callout.combination': 'a combination of {families}',
   'callout.dampedTrend': 'damped trend',
-  'callout.outturnStock': 'On current forecasts, {label} will end {year} at {total} ({level}% range {range})',
+  'callout.outturnStock': 'On current forecasts, {label} will end FY{years} at {total} ({level}% range {range})',
   'callout.outturnFlow':
-    'On current forecasts, {label} will total {total} in {year} ({level}% range {range}), from {actual} of actuals and {forecast} of forecast',
+    'On current forecasts, {label} will total {total} in FY{years} ({level}% range {range}), from {actual} of actuals and {forecast} of forecast',
   'callout.outturnEnd': '{base}.',
   'callout.outturnInLine': '{base}: in line with the target of {target}.',
   'callout.outturnGap': '{base}: {gap} {above, select, yes {above} other {below}} the target of {target}.',
@@ -283,11 +283,9 @@ export const en = {
   'para.notAdjustedPlain': 'The series was not seasonally adjusted.',
   'para.trendOnly': 'Its trend-cycle is {direction, select, rising {rising} falling {falling} other {flat}}.',
   'para.cycle': 'Its cycle is {phase}, {gap} from the long-run trend',
-  'para.cycleChanged': 'Its cycle moved from {from} to {to} this period, {gap} from the long-run trend',
   'para.turn': '{provisional, select, yes {it may have passed a {type} in {period}} other {it passed a {type} in {period}}}',
   'para.outturnTarget':
-    'On current forecasts the fiscal year {year} will close at {total}, {where, select, inline {in line with the target of {target}} above {{gap} above the target of {target}} other {{gap} below the target of {target}}}.',
-  'para.outturnNoTarget': 'On current forecasts the fiscal year {year} will close at {total}, with no target set ({level}% range {range}).',
+    'On current forecasts the fiscal year {years} will close at {total}, {where, select, inline {in line with the target of {target}} above {{gap} above the target of {target}} other {{gap} below the target of {target}}}.',
   'para.forecast': 'The forecast for {period} is {mean} ({level}% range {range}).',
   'para.noForecast': 'No forecast was made for the series.',
   'para.unusual':
@@ -304,7 +302,7 @@ export const en = {
     'The trend-cycle is rising in {rising, plural, one {# series} other {# series}}, falling in {falling, plural, =0 {none} one {#} other {#}} and flat in {flat, plural, =0 {none} one {#} other {#}}.',
   'open.target': 'On current forecasts, {list}.',
   'open.targetItem':
-    '{label} will close {year} {where, select, inline {in line with its target} above {{gap} above target} other {{gap} below target}}',
+    '{label} will close FY{years} {where, select, inline {in line with its target} above {{gap} above target} other {{gap} below target}}',
   'open.surprises': '{n, plural, one {One figure calls for attention: {list}.} other {# figures call for attention, above all {list}.}}',
   'open.surpriseItem': '{label} ({what})',
   'open.calm': 'No figure calls for an alert this period.',

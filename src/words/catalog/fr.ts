@@ -145,7 +145,7 @@ export const fr: Catalog = {
   'flag.notes': '{n, plural, one {# remarque} other {# remarques}}',
   'summary.note':
     'Évolutions en pourcentage. « CVS, sur la période précédente » compare la valeur corrigée des variations saisonnières avec {previous}. Les perspectives donnent le résultat attendu de l’exercice par rapport à l’objectif lorsqu’un objectif est fixé, sinon la prévision pour la période suivante avec son intervalle à 80 %.',
-  'summary.outturn': '{year} : {total} pour un objectif de {target} ({gap})',
+  'summary.outturn': 'Exercice {years} : {total} pour un objectif de {target} ({gap})',
   'summary.forecast': '{period} : {mean} ({low}–{high})',
   'summary.forecastNoRange': '{period} : {mean}',
   'summary.spark': '{label} : {n} dernières périodes',
@@ -201,7 +201,7 @@ export const fr: Catalog = {
     'Rétro-test : refaite depuis {origins, plural, one {# point antérieur} other {# points antérieurs}} des données, jusqu’à {horizon, plural, one {# période} other {# périodes}} en avant, la prévision obtient un MASE de {mase} et un sMAPE de {smape}, {better, select, yes {mieux} other {pas mieux}} que la reconduction des chiffres de l’année précédente (MASE 1){benchmarks, select, none {} other { ; méthodes plus simples : {benchmarks}}}.',
   'forecast.benchmark': '{method} {mase}',
   'forecast.outturn':
-    '{year} : {actual} de réalisé sur {periodsActual} et {forecast} de prévision pour les {periodsRemaining} restants, soit {total} au total (intervalle à {level} % : {range}){target, select, none {} other {, pour un objectif de {target} ({gap})}}.',
+    'Exercice {years} : {actual} de réalisé sur {periodsActual} et {forecast} de prévision pour les {periodsRemaining} restants, soit {total} au total (intervalle à {level} % : {range}){target, select, none {} other {, pour un objectif de {target} ({gap})}}.',
   'label.aboutSeries': 'À propos de cette série',
   'history.smallerOne': '1 révision plus petite (sous {threshold}) n’est pas listée ; elle figure dans exports/revisions.csv.',
   'history.smallerMany':
@@ -242,9 +242,9 @@ export const fr: Catalog = {
   'benchmark.constant': 'constante',
   'callout.combination': 'une combinaison de {families}',
   'callout.dampedTrend': 'tendance amortie',
-  'callout.outturnStock': 'Selon les prévisions actuelles, {label} à la fin de {year} : {total} (intervalle à {level} % : {range})',
+  'callout.outturnStock': 'Selon les prévisions actuelles, {label} à la fin de l’exercice {years} : {total} (intervalle à {level} % : {range})',
   'callout.outturnFlow':
-    'Selon les prévisions actuelles, {label} sur {year} : {total} au total (intervalle à {level} % : {range}), dont {actual} de réalisé et {forecast} de prévision',
+    'Selon les prévisions actuelles, {label} sur l’exercice {years} : {total} au total (intervalle à {level} % : {range}), dont {actual} de réalisé et {forecast} de prévision',
   'callout.outturnEnd': '{base}.',
   'callout.outturnInLine': '{base}, conforme à l’objectif de {target}.',
   'callout.outturnGap': '{base}, {gap} {above, select, yes {au-dessus} other {au-dessous}} de l’objectif de {target}.',
@@ -284,12 +284,9 @@ export const fr: Catalog = {
   'para.notAdjustedPlain': 'La série n’a pas été corrigée des variations saisonnières.',
   'para.trendOnly': 'Sa tendance-cycle est {direction, select, rising {en hausse} falling {en baisse} other {stable}}.',
   'para.cycle': 'Son cycle est {phase}, à {gap} de la tendance de long terme',
-  'para.cycleChanged': 'Son cycle est passé de « {from} » à « {to} » sur cette période, à {gap} de la tendance de long terme',
   'para.turn': '{provisional, select, yes {il a peut-être passé un {type} pour {period}} other {il a passé un {type} pour {period}}}',
   'para.outturnTarget':
-    'Selon les prévisions actuelles, l’exercice {year} se clôturera à {total}, {where, select, inline {conforme à l’objectif de {target}} above {{gap} au-dessus de l’objectif de {target}} other {{gap} au-dessous de l’objectif de {target}}}.',
-  'para.outturnNoTarget':
-    'Selon les prévisions actuelles, l’exercice {year} se clôturera à {total}, sans objectif fixé (intervalle à {level} % : {range}).',
+    'Selon les prévisions actuelles, l’exercice {years} se clôturera à {total}, {where, select, inline {conforme à l’objectif de {target}} above {{gap} au-dessus de l’objectif de {target}} other {{gap} au-dessous de l’objectif de {target}}}.',
   'para.forecast': 'La prévision pour {period} est de {mean} (intervalle à {level} % : {range}).',
   'para.noForecast': 'Aucune prévision n’a été établie pour la série.',
   'para.unusual': '{n, plural, one {Une valeur ressort : {list}.} other {# valeurs ressortent : {list}.}}',
@@ -305,7 +302,7 @@ export const fr: Catalog = {
     'La tendance-cycle est en hausse pour {rising, plural, =0 {aucune série} one {# série} other {# séries}}, en baisse pour {falling, plural, =0 {aucune} other {#}} et stable pour {flat, plural, =0 {aucune} other {#}}.',
   'open.target': 'Selon les prévisions actuelles, {list}.',
   'open.targetItem':
-    '{label} clôturera {year} {where, select, inline {conforme à son objectif} above {{gap} au-dessus de l’objectif} other {{gap} au-dessous de l’objectif}}',
+    '{label} clôturera l’exercice {years} {where, select, inline {conforme à son objectif} above {{gap} au-dessus de l’objectif} other {{gap} au-dessous de l’objectif}}',
   'open.surprises':
     '{n, plural, one {Un chiffre appelle l’attention : {list}.} other {# chiffres appellent l’attention, en premier lieu {list}.}}',
   'open.surpriseItem': '{label} ({what})',

@@ -77,6 +77,15 @@ describe('outturn rule', () => {
     expect(d.text).toBe('On current forecasts, Inventory will end FY2026/27 at 3,732 EUR k (80% range 3,600 to 3,850 EUR k).');
   });
 
+  it('names the fiscal year in German and French words', () => {
+    const text = (locale: string, kind: 'flow' | 'stock') =>
+      runRule(outturnRule, makeAnalysis(history, {outturn: outturn()}), {plan: {locale}, series: {label: 'Umsatz', kind}})[0].text;
+    expect(text('de-DE', 'flow')).toMatch(/^Nach aktueller Prognose: Umsatz im Geschäftsjahr 2026\/27 insgesamt 24\.100 EUR k /);
+    expect(text('de-DE', 'stock')).toMatch(/^Nach aktueller Prognose: Umsatz zum Ende des Geschäftsjahres 2026\/27 bei 24\.100 EUR k /);
+    expect(text('fr-FR', 'flow')).toMatch(/^Selon les prévisions actuelles, Umsatz sur l’exercice 2026\/27 : 24\u202f100 EUR k au total /);
+    expect(text('fr-FR', 'stock')).toMatch(/^Selon les prévisions actuelles, Umsatz à la fin de l’exercice 2026\/27 : 24\u202f100 EUR k /);
+  });
+
   it('grades the gap: alert from −5%, info above target, watch when the target is above the whole range', () => {
     const sev = (o: Partial<Outturn>) => runRule(outturnRule, makeAnalysis(history, {outturn: outturn(o)}))[0].severity;
     expect(sev({gapPct: -5.2})).toBe('alert');
