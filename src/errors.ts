@@ -4,6 +4,8 @@ export interface Problem {
   line: number | null;
   column: number | null;
   message: string;
+  /** How many problems the line stands for, when it counts ones not listed (`12 more like the 3 above`). */
+  count?: number;
 }
 
 /** Bad input (config or data): the CLI prints every problem and exits with code 2. */

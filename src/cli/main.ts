@@ -65,7 +65,7 @@ function fail(error: unknown, io: Io, json = false, kept = 0): Failure {
   if (failure.code === 2) {
     if (json) return failure;
     for (const p of failure.problems) io.stderr.write(`${formatProblem(p)}\n`);
-    const n = failure.problems.length;
+    const n = failure.problems.reduce((sum, p) => sum + (p.count ?? 1), 0);
     const after =
       kept > 0 ? `the ${kept} period folder${kept === 1 ? '' : 's'} built before were kept` : 'nothing was written';
     io.stderr.write(`${n} problem${n === 1 ? '' : 's'}; ${after}\n`);

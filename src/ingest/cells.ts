@@ -7,7 +7,7 @@ import {stampOf, type Grain, type Stamp} from '../time/stamp.js';
 import * as msg from './messages.js';
 import {numberAdvice, parseNumberCell} from './parseNumber.js';
 import {placeAt} from './places.js';
-import type {ProblemLog} from './problemLog.js';
+import {REPEATS_LISTED, type ProblemLog} from './problemLog.js';
 import {sniffDelimiter} from './sniffDelimiter.js';
 import type {Note} from '../words/index.js';
 import type {DataNote} from './types.js';
@@ -79,10 +79,28 @@ export class CellReader {
     this.decimal = source.reader === 'csv' ? source.decimal : '.';
   }
 
-  /** Report a problem at a line (or row) and 1-based column of this source. */
-  report(line: number | null, column: number | null, message: string): void {
+  /**
+   * Report a problem at a line (or row) and 1-based column of this source. A problem that can recur row after row
+   * names its kind (`repeat.key`, and the column it is in as `repeat.where`): after the first few of a kind, the
+   * log counts the rest in one line (problemLog.ts).
+   */
+  report(line: number | null, column: number | null, message: string, repeat?: {key: string; where?: string}): void {
     const p = placeAt(this.source, this.sheet, line, column);
-    this.problems.add(p.file, p.line, p.column, p.prefix + message);
+    const whole = placeAt(this.source, this.sheet, null, null);
+    const unit = this.source.reader === 'csv' ? 'line' : this.source.reader === 'xlsx' ? 'row' : 'query row';
+    this.problems.add(p.file, p.line, p.column, p.prefix + message, {
+      source: whole.file,
+      row: line,
+      ...(repeat && {
+        repeat: {
+          key: repeat.key,
+          file: whole.file,
+          line: whole.line,
+          summary: (count: number, last: number | null) =>
+            whole.prefix + msg.moreLikeThese(count, REPEATS_LISTED, repeat.where ?? null, unit, last),
+        },
+      }),
+    });
   }
 
   /** A data note at a line (or row) of this source; a query source's note names the source and row. */
@@ -156,7 +174,8 @@ export class CellReader {
     const value = parseNumberCell(text, this.decimal);
     if (value === undefined) {
       const advice = numberAdvice(text, this.decimal);
-      this.report(line, at + 1, msg.notANumber(text.trim(), name, advice));
+      const repeat = {key: `number ${at} ${advice}`, where: `column "${name}"`};
+      this.report(line, at + 1, msg.notANumber(text.trim(), name, advice), repeat);
     }
     return value;
   }
@@ -164,7 +183,7 @@ export class CellReader {
   /** Report the problem of an unusable cell (see {@link CellReader.unusable}) when `at` is one; true if it was. */
   reportUnusable(line: number, at: number): boolean {
     const problem = this.unusable.get(at);
-    if (problem !== undefined) this.report(line, at + 1, problem);
+    if (problem !== undefined) this.report(line, at + 1, problem, {key: `unusable ${at}`});
     return problem !== undefined;
   }
 
@@ -240,7 +259,8 @@ export class CellReader {
       this.mixedReported = true;
     } else {
       const message = shown === '' ? msg.blankDate(name) : msg.badDate(shown, name, this.frequency);
-      this.held.push({line, text: shown, report: () => this.report(line, column, message)});
+      const repeat = {key: 'date', where: `column "${name}"`};
+      this.held.push({line, text: shown, report: () => this.report(line, column, message, repeat)});
     }
   }
 }

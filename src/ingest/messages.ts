@@ -60,6 +60,8 @@ export const missingColumnDelimiter = (what: string, name: string, declared: str
   `${shown(found)}; set \`delimiter: "${found === '\t' ? '\\t' : found}"\` (or \`auto\`) on the source`;
 export const shortRow = (fields: number, header: number): string =>
   `the row has ${fields} fields but the header has ${header}; a delimiter or quote may be missing`;
+export const moreLikeThese = (count: number, listed: number, where: string | null, unit: string, last: number | null): string =>
+  `${count} more like the ${listed} above${where === null ? '' : ` in ${where}`}${last === null ? '' : `, the last on ${unit} ${last}`}`;
 export const notANumber = (text: string, column: string, advice: string): string =>
   `"${text}" in column "${column}" is not a number: ${advice}`;
 export const allMissing = (seriesId: string, where: string): string =>

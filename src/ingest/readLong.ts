@@ -87,10 +87,11 @@ export function longVisitor(cells: CellReader, wanted: Wanted, data: SourceData)
         if (store !== undefined) store.rejected++;
         return;
       }
-      if (fields.length < width) cells.report(line, null, msg.shortRow(fields.length, width));
+      if (fields.length < width) cells.report(line, null, msg.shortRow(fields.length, width), {key: 'short row'});
       if (store === undefined) {
         if (key === '') {
-          if (!cells.reportUnusable(line, keyAt)) cells.report(line, keyAt + 1, msg.blankKey(keyLabel));
+          const repeat = {key: 'blank key', where: `column "${keyLabel}"`};
+          if (!cells.reportUnusable(line, keyAt)) cells.report(line, keyAt + 1, msg.blankKey(keyLabel), repeat);
           return;
         }
         store = keep(key);

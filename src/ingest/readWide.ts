@@ -43,7 +43,7 @@ export function wideVisitor(cells: CellReader, wanted: Wanted, data: SourceData)
         for (const {store} of columns) store.rejected++;
         return;
       }
-      if (fields.length < width) cells.report(line, null, msg.shortRow(fields.length, width));
+      if (fields.length < width) cells.report(line, null, msg.shortRow(fields.length, width), {key: 'short row'});
       // A query's rows have no order of their own unless it sorts them: no note for them.
       if (stamp.at < previous && !outOfOrder && cells.source.query === null) {
         outOfOrder = true;

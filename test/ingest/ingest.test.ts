@@ -261,12 +261,28 @@ describe('problems', () => {
     expect(new Set(files)).toEqual(new Set(['duplicates.csv', 'bad-cells.csv', 'missing-column.csv']));
   });
 
-  it('at most 50 problems per file, then a count', async () => {
-    const rows = Array.from({length: 80}, (_, i) => `${monthLabel(i)},x`);
-    const src = source('s', write('many.csv', `month,sales\n${rows.join('\n')}\n`));
+  it('of one kind, the first three problems, then one line counting the rest where the fourth was', async () => {
+    // 80 bad cells in column sales, then one short row: 3 listed, 77 counted, the short row after them.
+    const rows = Array.from({length: 80}, (_, i) => `${monthLabel(i)},x,1`);
+    const src = source('s', write('many.csv', `month,sales,cost\n${rows.join('\n')}\n${monthLabel(80)},1\n`));
     const problems = await problemsOf(plan('monthly', [src], [series('sales', 's')]));
+    expect(problems.map((p) => [p.line, p.message.slice(0, 40), p.count])).toEqual([
+      [2, '"x" in column "sales" is not a number: w', undefined],
+      [3, '"x" in column "sales" is not a number: w', undefined],
+      [4, '"x" in column "sales" is not a number: w', undefined],
+      [null, '77 more like the 3 above in column "sale', 77],
+      [82, 'the row has 2 fields but the header has ', undefined],
+    ]);
+    expect(problems[3].message).toBe('77 more like the 3 above in column "sales", the last on line 81');
+  });
+
+  it('at most 50 problems per file, then a count', async () => {
+    // One bad cell in each of 80 columns: 80 kinds, 50 listed.
+    const names = Array.from({length: 80}, (_, i) => `c${i}`);
+    const src = source('s', write('many.csv', `month,${names.join(',')}\n2024-01,${names.map(() => 'x').join(',')}\n`));
+    const problems = await problemsOf(plan('monthly', [src], names.map((n) => series(n, 's'))));
     expect(problems).toHaveLength(51);
-    expect(problems[50].message).toBe('30 more problems not listed'); // 80 bad cells, 50 listed
+    expect(problems[50]).toMatchObject({message: '30 more problems not listed', count: 30, line: null});
   });
 
   it('short rows are reported', async () => {

@@ -157,4 +157,17 @@ describe('XLSX problems at file.xlsx:Sheet!B12', () => {
       expect(problems[0].message).toMatch(/^"ten" in column "Budget" is not a number/);
     }
   });
+
+  it('bad cells of one kind: three listed, the rest counted in one line at the sheet, by row', async () => {
+    const wb = new ExcelJS.Workbook();
+    const ws = wb.addWorksheet('Plan 2026');
+    ws.addRow(['Month', 'Budget']);
+    for (let m = 1; m <= 60; m++) ws.addRow([`${2021 + Math.floor((m - 1) / 12)}-${String(((m - 1) % 12) + 1).padStart(2, '0')}`, `${m} EUR`]);
+    const file = join(temp, 'units.xlsx');
+    await wb.xlsx.writeFile(file);
+    const pack = plan('monthly', [source('p', file, {dateColumn: 'Month', sheet: 'Plan 2026'})], [series('budget', 'p', {column: 'Budget'})]);
+    const problems = await problemsOf(pack);
+    expect(problems.map((p) => p.file)).toEqual([2, 3, 4].map((r) => `${file}:'Plan 2026'!B${r}`).concat(`${file}:Plan 2026`));
+    expect(problems[3]).toMatchObject({message: '57 more like the 3 above in column "Budget", the last on row 61', count: 57});
+  });
 });
