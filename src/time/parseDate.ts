@@ -47,26 +47,37 @@ const ENGLISH_MONTHS = new Map<string, number>([
 const NONE: DateReading = {dateFormat: null, months: new Map()};
 
 const TIME = String.raw`(?:[T ](\d{1,2}):(\d{2})(?::(\d{2})(?:[.,](\d{1,9}))?)?\s?(Z|[+-]\d{2}(?::?\d{2})?)?)?`;
-const YEAR_MONTH = /^(\d{4})-(\d{1,2})$/;
+const YEAR_MONTH = /^(\d{4})(?:[-/]|M)(\d{1,2})$/i;
 const MONTH_SLASH_YEAR = /^(\d{1,2})\/(\d{4})$/;
 const NAME_YEAR = /^(\p{L}+\.?)[ -](\d{4})$/u;
+/** A spreadsheet's month-year display (`mmm-yy`): `Jan-24`. Only with a hyphen: `Jan 24` reads as a day as well. */
+const NAME_SHORT_YEAR = /^(\p{L}+\.?)-(\d{2})$/u;
 const YEAR_QUARTER = /^(\d{4})-?Q([1-4])$/i;
 const QUARTER_YEAR = /^Q([1-4])[ -]?(\d{4})$/i;
 const YEAR_WEEK = /^(\d{4})-?W(\d{1,2})(?:-?[1-7])?$/i;
 const YEAR_MONTH_DAY = new RegExp(String.raw`^(\d{4})([-/.])(\d{1,2})\2(\d{1,2})${TIME}$`);
 const DAY_MONTH_YEAR = new RegExp(String.raw`^(\d{1,2})([-/.])(\d{1,2})\2(\d{4})${TIME}$`);
+/** A day with its month's name: `31 Jan 2024`, `31-JAN-24`, `31. Januar 2024`, `31 janv. 2024`. */
+const DAY_NAME_YEAR = new RegExp(String.raw`^(\d{1,2})\.?([ -])(\p{L}+\.?)\2(\d{4}|\d{2})${TIME}$`, 'u');
+/** `January 31, 2024`, `Jan 31 2024`. */
+const NAME_DAY_YEAR = new RegExp(String.raw`^(\p{L}+\.?) (\d{1,2}),? (\d{4})${TIME}$`, 'u');
+/** ISO 8601's basic format: `20240131`. */
+const BASIC_DAY = new RegExp(String.raw`^(\d{4})(\d{2})(\d{2})${TIME}$`);
 
 /**
  * Read a date cell into what it names, without deciding the frequency.
  *
  * Accepted (case-insensitive, surrounding blanks ignored):
- * - months: `2026-10`, `10/2026`, `Oct 2026`, `October 2026`, `Sept 2026`, `Oct-2026`, and the month names of the
- *   pack's locale given in `reading.months` (`Okt 2026`, `janv. 2026`)
+ * - months: `2026-10`, `2026/10`, `2026M10`, `10/2026`, `Oct 2026`, `October 2026`, `Sept 2026`, `Oct-2026`, a
+ *   spreadsheet's `Oct-26`, and the month names of the pack's locale given in `reading.months` (`Okt 2026`,
+ *   `janv. 2026`)
  * - quarters: `2026-Q3`, `2026Q3`, `Q3 2026`, `Q3-2026`
  * - ISO weeks: `2026-W41`, `2026W41`, and ISO week dates `2026-W41-3`
  * - days: `2026-10-31`, `2026/10/31`, and with `reading.dateFormat` day-first or month-first dates (`31/10/2026`,
  *   `10/31/2026`, `31.10.2026`); each with an optional time of day (`2015/01/01 01:00:00`,
- *   `2026-10-31T22:15:00.5+01:00`), kept with the UTC offset when one is written (ISO 8601)
+ *   `2026-10-31T22:15:00.5+01:00`), kept with the UTC offset when one is written (ISO 8601); `20261031` (ISO 8601's
+ *   basic format); days with their month's name, `31 Oct 2026`, `31-OCT-26`, `31. Oktober 2026`, `October 31, 2026`
+ * - a two-digit year (`Oct-26`, `31-OCT-26`) is 1969–2068
  *
  * Day-first and month-first dates without a `dateFormat` give undefined: they are ambiguous between locales
  * (see {@link dayMonthOrder}). Values outside the calendar (month 13, 31 April, week 53 of a 52-week year,
@@ -80,12 +91,21 @@ export function readDateCell(text: string, reading: DateReading = NONE): DateCel
   const s = text.trim();
   let m: RegExpMatchArray | null;
   if ((m = s.match(YEAR_MONTH))) return month(Number(m[1]), Number(m[2]));
-  if ((m = s.match(YEAR_MONTH_DAY))) return day(Number(m[1]), Number(m[3]), Number(m[4]), m);
+  if ((m = s.match(YEAR_MONTH_DAY))) return day(Number(m[1]), Number(m[3]), Number(m[4]), m.slice(5));
   if ((m = s.match(DAY_MONTH_YEAR))) {
     const order = reading.dateFormat?.slice(0, 2);
-    if (order === 'DD') return day(Number(m[4]), Number(m[3]), Number(m[1]), m);
-    if (order === 'MM') return day(Number(m[4]), Number(m[1]), Number(m[3]), m);
+    if (order === 'DD') return day(Number(m[4]), Number(m[3]), Number(m[1]), m.slice(5));
+    if (order === 'MM') return day(Number(m[4]), Number(m[1]), Number(m[3]), m.slice(5));
     return undefined;
+  }
+  if ((m = s.match(BASIC_DAY))) return day(Number(m[1]), Number(m[2]), Number(m[3]), m.slice(4));
+  if ((m = s.match(DAY_NAME_YEAR))) {
+    const index = monthOfName(m[3], reading);
+    return index === undefined ? undefined : day(fullYear(m[4]), index, Number(m[1]), m.slice(5));
+  }
+  if ((m = s.match(NAME_DAY_YEAR))) {
+    const index = monthOfName(m[1], reading);
+    return index === undefined ? undefined : day(Number(m[3]), index, Number(m[2]), m.slice(4));
   }
   if ((m = s.match(MONTH_SLASH_YEAR))) return month(Number(m[2]), Number(m[1]));
   if ((m = s.match(YEAR_QUARTER))) return {kind: 'quarter', year: Number(m[1]), quarter: Number(m[2])};
@@ -95,13 +115,27 @@ export function readDateCell(text: string, reading: DateReading = NONE): DateCel
     const week = Number(m[2]);
     return week >= 1 && week <= isoWeeksInYear(year) ? {kind: 'week', year, week} : undefined;
   }
-  if ((m = s.match(NAME_YEAR))) {
-    const name = m[1].toLowerCase();
-    const bare = name.replace(/\.$/, '');
-    const index = ENGLISH_MONTHS.get(bare) ?? reading.months.get(name) ?? reading.months.get(bare);
-    return index === undefined ? undefined : month(Number(m[2]), index);
+  if ((m = s.match(NAME_YEAR) ?? s.match(NAME_SHORT_YEAR))) {
+    const index = monthOfName(m[1], reading);
+    return index === undefined ? undefined : month(fullYear(m[2]), index);
   }
   return undefined;
+}
+
+/** The month (1–12) a month name names, in English or in the pack's locale (`Okt`, `janv.`), case-insensitive. */
+function monthOfName(text: string, reading: DateReading): number | undefined {
+  const name = text.toLowerCase();
+  const bare = name.replace(/\.$/, '');
+  return ENGLISH_MONTHS.get(bare) ?? reading.months.get(name) ?? reading.months.get(bare);
+}
+
+/**
+ * A year of four digits as written; of two, 1969–2068, the rule of the POSIX `strptime` `%y` conversion (recalled
+ * from memory), which spreadsheets and databases also follow for the years business data hold.
+ */
+function fullYear(text: string): number {
+  const y = Number(text);
+  return text.length === 4 ? y : y < 69 ? 2000 + y : 1900 + y;
 }
 
 /**
@@ -134,12 +168,12 @@ function month(year: number, m: number): DateCell | undefined {
   return m >= 1 && m <= 12 ? {kind: 'month', year, month: m} : undefined;
 }
 
-/** A day cell, with the time of day and offset from match groups 5–9 (hour, minute, second, fraction, offset). */
-function day(year: number, m: number, d: number, match: RegExpMatchArray): DateCell | undefined {
+/** A day cell, with the time of day and offset from the time's match groups (hour, minute, second, fraction, offset). */
+function day(year: number, m: number, d: number, time: (string | undefined)[]): DateCell | undefined {
   if (m < 1 || m > 12 || d < 1) return undefined;
   const next = m === 12 ? daysFromCivil(year + 1, 1, 1) : daysFromCivil(year, m + 1, 1);
   if (d > next - daysFromCivil(year, m, 1)) return undefined;
-  const [hour, minute, second, fraction, zone] = match.slice(5, 10);
+  const [hour, minute, second, fraction, zone] = time;
   let ms = 0;
   if (hour !== undefined) {
     const [h, mi, sec] = [Number(hour), Number(minute), Number(second ?? 0)];

@@ -121,6 +121,25 @@ describe('dates as exports write them', () => {
     // English names are read whatever the locale.
     expect(parseDateCell('Oct 2026', 'monthly', months('de-DE'))).toBe(monthIndex(2026, 10));
   });
+  it('the forms exports and spreadsheets write besides ISO dates', () => {
+    const at = (text: string, locale = 'en-GB') => readDateCell(text, months(locale));
+    const jan31 = {kind: 'day', year: 2024, month: 1, day: 31, ms: 0, offset: null};
+    // ISO 8601 basic format (the standard's form without separators).
+    expect(at('20240131')).toEqual(jan31);
+    expect(at('20240230')).toBeUndefined();
+    // Days written with their month's name: unambiguous in any order of day and month.
+    for (const text of ['31 Jan 2024', '31-Jan-2024', '31-JAN-24', 'January 31, 2024', 'Jan 31 2024']) expect(at(text)).toEqual(jan31);
+    expect(at('31. Januar 2024', 'de-DE')).toEqual(jan31);
+    expect(at('31 janv. 2024', 'fr-FR')).toEqual(jan31);
+    expect(at('31 Jan 2024 14:30')).toMatchObject({day: 31, ms: (14 * 60 + 30) * 60_000});
+    // Months: year first with a slash or M (as statistical tables write them), and a spreadsheet's mmm-yy display.
+    for (const text of ['2024/01', '2024M01', '2024m1', 'Jan-24']) expect(at(text)).toEqual({kind: 'month', year: 2024, month: 1});
+    expect(at('Okt-26', 'de-DE')).toEqual({kind: 'month', year: 2026, month: 10});
+    // Two-digit years 1969–2068: the POSIX strptime %y rule (recalled from memory).
+    expect([at('Dec-68'), at('Jan-69')].map((c) => c && 'year' in c && c.year)).toEqual([2068, 1969]);
+    // `Jan 24` could be 24 January as well as January 2024: not read.
+    expect(at('Jan 24')).toBeUndefined();
+  });
   it('timestamps with times and ISO 8601 offsets take the date in the source time zone', () => {
     const at = (text: string, zone: string) => stampOf(readDateCell(text)!, 'monthly', zone)!;
     expect(readDateCell('2015/01/01 01:00:00')).toEqual({kind: 'day', year: 2015, month: 1, day: 1, ms: 3_600_000, offset: null});
