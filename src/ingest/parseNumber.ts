@@ -4,7 +4,8 @@
  * Accepted: an optional sign (`-`, `+` or the minus sign U+2212), digits with the source's decimal mark,
  * thousands grouped in threes by one consistent separator (`,` space, no-break space, narrow no-break
  * space or `'` when the decimal mark is `.`; `.` space, no-break spaces or `'` when it is `,`), an
- * exponent (`1.5e3`, only without grouping), and accounting negatives in parentheses (`(1,234.5)`).
+ * exponent (`1.5e3`, only without grouping), accounting negatives in parentheses (`(1,234.5)`) and the trailing
+ * minus some ledgers export (`1.234,50-`).
  *
  * Missing (NaN, never 0): blank, `NA`, `N/A`, `#N/A`, `-`, `–`, `—`, `null`, `NaN` (any case).
  *
@@ -39,6 +40,9 @@ function readNumber(text: string, decimal: '.' | ','): number | undefined {
   if (/^[-+\u2212]/.test(s)) {
     if (s[0] !== '+') sign = -sign;
     s = s.slice(1);
+  } else if (/\d[-\u2212]$/.test(s)) {
+    sign = -sign;
+    s = s.slice(0, -1);
   }
   if (bracketed && sign > 0) return undefined;
   const grouped = (decimal === '.' ? DOT_GROUPED : COMMA_GROUPED).exec(s);
@@ -87,6 +91,9 @@ export function numberAdvice(text: string, decimal: '.' | ','): string {
     return 'remove the currency symbol or code and put the unit in the series `unit`';
   }
   if (/%$/.test(s)) return 'write percentages as plain numbers (12.5, not 12.5%) and put % in the series `unit`';
+  if (/^#(DIV\/0!|VALUE!|REF!|NAME\?|NUM!|NULL!|SPILL!|CALC!)$/i.test(s)) {
+    return 'it is a spreadsheet error value: correct the formula in the workbook the file came from and export it again, or leave the cell blank';
+  }
   if (Math.abs(readNumber(s, decimal) ?? 0) === Infinity) {
     return 'it is too large to compute with (the limit is about 1.8e308); check the exponent';
   }

@@ -21,12 +21,15 @@ describe('parseNumberCell with decimal point', () => {
     ['(1,234.5)', -1234.5],
     ['( 12 )', -12],
     ['  42  ', 42],
+    // A trailing minus, as some ledger exports write negatives.
+    ['1,234.5-', -1234.5],
+    ['12-', -12],
   ])('%s → %d', (text, value) => expect(parseNumberCell(text, '.')).toBe(value));
 
   const missing = ['', '  ', 'NA', 'na', 'N/A', 'n/a', '#N/A', '-', '\u2013', 'null', 'NULL', 'NaN'];
   it.each(missing)('%j is missing (NaN)', (text) => expect(parseNumberCell(text, '.')).toBeNaN());
 
-  const rejected = ['12x', '1,23', '1,2345', '1,234 567', '€12', '12 EUR', '$1,200', '5%', '1.2.3', '(-5)', '--5'];
+  const rejected = ['12x', '1,23', '1,2345', '1,234 567', '€12', '12 EUR', '$1,200', '5%', '1.2.3', '(-5)', '--5', '-5-', '(5-)'];
   it.each([...rejected, 'abc', '1,234e3'])('%s is rejected', (text) =>
     expect(parseNumberCell(text, '.')).toBeUndefined(),
   );
@@ -42,6 +45,7 @@ describe('parseNumberCell with decimal comma', () => {
     ['-3,5', -3.5],
     ['1,5e3', 1500],
     ['12', 12],
+    ['1.234,50-', -1234.5],
   ])('%s → %d', (text, value) => expect(parseNumberCell(text, ',')).toBe(value));
   it.each(['1.5', '1,234.5', '1.23'])('%s is rejected', (text) => expect(parseNumberCell(text, ',')).toBeUndefined());
 });
@@ -54,6 +58,8 @@ describe('numberAdvice', () => {
     expect(numberAdvice('1,5', '.')).toMatch(/set `decimal: ","`/);
     expect(numberAdvice('1.5', ',')).toMatch(/set `decimal: "."`/);
     expect(numberAdvice('abc', '.')).toMatch(/write a number/);
+    expect(numberAdvice('#DIV/0!', '.')).toMatch(/^it is a spreadsheet error value: correct the formula/);
+    expect(numberAdvice('#value!', ',')).toMatch(/spreadsheet error value/);
   });
 });
 
