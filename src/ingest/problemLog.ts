@@ -29,7 +29,7 @@ interface Entry {
 
 /**
  * Collects every problem across all sources, at most {@link PROBLEMS_PER_FILE} per file; of one kind (see
- * {@link Repeat}), the first {@link REPEATS_LISTED}, then one line counting the rest where the third was.
+ * {@link Repeat}), the first {@link REPEATS_LISTED}, then one line counting the rest in place of the next.
  */
 export class ProblemLog {
   private readonly entries: Entry[] = [];
