@@ -197,9 +197,16 @@ export class CellReader {
     this.periods = {first, last};
   }
 
-  /** Rows still held back at the end of the data: a footer, told in one note (or nothing when there is none). */
+  /**
+   * Rows still held back at the end of the data: a footer, told in one note (or nothing when there is none). When
+   * no row had a date they are no footer but the data, and each is a problem.
+   */
   finish(): DataNote[] {
     if (this.held.length === 0) return [];
+    if (this.span === undefined) {
+      this.release();
+      return [];
+    }
     const {line, text} = this.held[0];
     const last = this.held[this.held.length - 1].line;
     this.held = [];

@@ -48,7 +48,7 @@ const NONE: DateReading = {dateFormat: null, months: new Map()};
 
 const TIME = String.raw`(?:[T ](\d{1,2}):(\d{2})(?::(\d{2})(?:[.,](\d{1,9}))?)?\s?(Z|[+-]\d{2}(?::?\d{2})?)?)?`;
 const YEAR_MONTH = /^(\d{4})(?:[-/]|M)(\d{1,2})$/i;
-const MONTH_SLASH_YEAR = /^(\d{1,2})\/(\d{4})$/;
+const MONTH_SLASH_YEAR = /^(\d{1,2})[/.-](\d{4})$/;
 const NAME_YEAR = /^(\p{L}+\.?)[ -](\d{4})$/u;
 /** A spreadsheet's month-year display (`mmm-yy`): `Jan-24`. Only with a hyphen: `Jan 24` reads as a day as well. */
 const NAME_SHORT_YEAR = /^(\p{L}+\.?)-(\d{2})$/u;
@@ -68,7 +68,7 @@ const BASIC_DAY = new RegExp(String.raw`^(\d{4})(\d{2})(\d{2})${TIME}$`);
  * Read a date cell into what it names, without deciding the frequency.
  *
  * Accepted (case-insensitive, surrounding blanks ignored):
- * - months: `2026-10`, `2026/10`, `2026M10`, `10/2026`, `Oct 2026`, `October 2026`, `Sept 2026`, `Oct-2026`, a
+ * - months: `2026-10`, `2026/10`, `2026M10`, `10/2026`, `10.2026`, `10-2026`, `Oct 2026`, `October 2026`, `Sept 2026`, `Oct-2026`, a
  *   spreadsheet's `Oct-26`, and the month names of the pack's locale given in `reading.months` (`Okt 2026`,
  *   `janv. 2026`)
  * - quarters: `2026-Q3`, `2026Q3`, `Q3 2026`, `Q3-2026`

@@ -5,7 +5,7 @@ import {afterAll, describe, expect, it} from 'vitest';
 import type {Plan} from '../../src/config/plan.js';
 import {InputError, type Problem} from '../../src/errors.js';
 import {monthIndex} from '../../src/time/period.js';
-import {plan, readPack, series, source} from './plan.js';
+import {fromSource, plan, readPack, series, source} from './plan.js';
 import {worded} from '../fixtures/notes.js';
 
 const temp = mkdtempSync(join(tmpdir(), 'ebbflow-exported-'));
@@ -121,6 +121,29 @@ describe('dates and layouts as exports write them', () => {
     expect(d.notes.map((n) => [n.line, worded(n)])).toContainEqual([
       7,
       '1 row after the data ignored ("Total"): not a date, so taken as a footer',
+    ]);
+  });
+
+  it('an ERP long export with periods as MM.YYYY, a byte-order mark, CRLF and a trailing ; reads; unread periods are problems', async () => {
+    const rows = ['01.2026;001 Nord;1.000,50;', '01.2026;002 Süd;2.000;', '02.2026;001 Nord;1.100;', '02.2026;002 Süd;2.100,25;'];
+    const text = `\ufeffPeriode;Filiale;Umsatz;\r\n${rows.join('\r\n')}\r\n`;
+    const long = (file: string) =>
+      plan('monthly', [source('u', file, {layout: 'long', dateColumn: 'Periode', keyColumn: 'Filiale', valueColumn: 'Umsatz', decimal: ','})], [], {
+        fromSource: [fromSource('u', 0)],
+      });
+    const d = await readPack(long(write('erp.csv', text)));
+    expect(d.plans.map((x) => x.label)).toEqual(['001 Nord', '002 Süd']);
+    expect(d.series.map((x) => [x.id, x.start, [...x.values]])).toEqual([
+      ['001-nord', monthIndex(2026, 1), [1000.5, 1100]],
+      ['002-sud', monthIndex(2026, 1), [2000, 2100.25]],
+    ]);
+    // No row has a date the pack can read: they are the data, not a footer, so each is a problem (three, then a count).
+    const problems = await problemsOf(long(write('erp-bad.csv', text.replaceAll('.2026;', '|2026;'))));
+    expect(problems.map((p) => [p.line, p.message])).toEqual([
+      [2, '"01|2026" in column "Periode" is not a date; write 2026-10 or a full date such as 2026-10-31'],
+      [3, '"01|2026" in column "Periode" is not a date; write 2026-10 or a full date such as 2026-10-31'],
+      [4, '"02|2026" in column "Periode" is not a date; write 2026-10 or a full date such as 2026-10-31'],
+      [null, '1 more like the 3 above in column "Periode", the last on line 5'],
     ]);
   });
 

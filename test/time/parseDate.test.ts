@@ -133,7 +133,7 @@ describe('dates as exports write them', () => {
     expect(at('31 janv. 2024', 'fr-FR')).toEqual(jan31);
     expect(at('31 Jan 2024 14:30')).toMatchObject({day: 31, ms: (14 * 60 + 30) * 60_000});
     // Months: year first with a slash or M (as statistical tables write them), and a spreadsheet's mmm-yy display.
-    for (const text of ['2024/01', '2024M01', '2024m1', 'Jan-24']) expect(at(text)).toEqual({kind: 'month', year: 2024, month: 1});
+    for (const text of ['2024/01', '2024M01', '2024m1', '01.2024', '1-2024', 'Jan-24']) expect(at(text)).toEqual({kind: 'month', year: 2024, month: 1});
     expect(at('Okt-26', 'de-DE')).toEqual({kind: 'month', year: 2026, month: 10});
     // Two-digit years 1969–2068: the POSIX strptime %y rule (recalled from memory).
     expect([at('Dec-68'), at('Jan-69')].map((c) => c && 'year' in c && c.year)).toEqual([2068, 1969]);
