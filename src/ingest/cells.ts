@@ -75,8 +75,9 @@ export class CellReader {
     locale: string,
   ) {
     this.reading = {dateFormat: source.dateFormat, months: monthNames(locale)};
-    // Workbook and query cells hold numbers as numbers, which readers write with a `.` decimal mark.
-    this.decimal = source.reader === 'csv' ? source.decimal : '.';
+    // Query cells hold numbers as numbers, which the readers write with a `.` decimal mark; a workbook's text cells
+    // may be written with either, and its number cells are written with the source's (readXlsx.ts).
+    this.decimal = source.reader === 'csv' || source.reader === 'xlsx' ? source.decimal : '.';
   }
 
   /**

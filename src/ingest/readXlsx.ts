@@ -59,7 +59,7 @@ export async function readXlsx(
     for (let r = after + 1; r <= Math.min(last, after + TITLE_LOOK_ROWS); r++) {
       const row = sheet.getRow(r);
       for (let c = 1; c <= width; c++) {
-        const text = cellText(row.getCell(c).value);
+        const text = cellText(row.getCell(c).value, source.decimal);
         if (typeof text === 'string' && text.trim() === name) return r;
       }
     }
@@ -75,7 +75,7 @@ export async function readXlsx(
     const fields: string[] = [];
     const unusable = new Map<number, string>();
     for (let c = 1; c <= width; c++) {
-      const text = cellText(row.getCell(c).value);
+      const text = cellText(row.getCell(c).value, source.decimal);
       if (typeof text === 'string') fields.push(text);
       else {
         unusable.set(c - 1, text.problem);
@@ -106,10 +106,13 @@ export async function readXlsx(
 
 type CellValue = ExcelJS.CellValue;
 
-/** A cell's value as text, or the problem it has. */
-function cellText(value: CellValue): string | {problem: string} {
+/**
+ * A cell's value as text, or the problem it has. A number is written with the source's decimal mark, so that number
+ * cells and numbers typed as text (`1.234,50` in a workbook kept with decimal commas) read alike.
+ */
+function cellText(value: CellValue, decimal: '.' | ','): string | {problem: string} {
   if (value === null || value === undefined) return '';
-  if (typeof value === 'number') return String(value);
+  if (typeof value === 'number') return decimal === '.' ? String(value) : String(value).replace('.', ',');
   if (typeof value === 'string') return value;
   if (typeof value === 'boolean') return value ? 'TRUE' : 'FALSE';
   if (value instanceof Date) return dateText(value);
@@ -121,7 +124,7 @@ function cellText(value: CellValue): string | {problem: string} {
       const formula = String('formula' in value ? value.formula : (value as {sharedFormula: string}).sharedFormula);
       return {problem: msg.formulaWithoutResult(formula)};
     }
-    return cellText(result as CellValue);
+    return cellText(result as CellValue, decimal);
   }
   if ('text' in value) return String((value as {text: unknown}).text);
   return '';

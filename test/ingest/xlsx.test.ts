@@ -41,6 +41,26 @@ describe('XLSX sources written by openpyxl', () => {
     expect(fromXlsx.inputs[0]).toMatchObject({file: join(FIXTURES, name), rows: 30});
   });
 
+  it('numbers typed as text with decimal commas read with `decimal: ","`; number cells read the same either way', async () => {
+    const byDot = await readPack(wide('openpyxl-1900.xlsx', {sheet: 'Budget', headerRow: 3}));
+    const byComma = await readPack(wide('openpyxl-1900.xlsx', {sheet: 'Budget', headerRow: 3, decimal: ','}));
+    expect(values(byComma)).toEqual(values(byDot));
+    const wb = new ExcelJS.Workbook();
+    const ws = wb.addWorksheet('Umsatz');
+    ws.addRow(['Month', 'Budget', 'Stock']);
+    ws.addRow(['2026-01', '1.234,50', 0.1 + 0.2]);
+    ws.addRow(['2026-02', 1001.25, '-2,5']);
+    const file = join(temp, 'text-numbers.xlsx');
+    await wb.xlsx.writeFile(file);
+    const d = await readPack(wide(file, {decimal: ','}));
+    expect(values(d)).toEqual([
+      ['budget', monthIndex(2026, 1), [1234.5, 1001.25]],
+      ['stock', monthIndex(2026, 1), [0.1 + 0.2, -2.5]],
+    ]);
+    // Without the setting, the problem names it, as for a CSV.
+    expect((await problemsOf(wide(file)))[0].message).toMatch(/"1\.234,50" .* set `decimal: ","` on the source$/);
+  });
+
   it.each(['openpyxl-1900.xlsx', 'openpyxl-1904.xlsx'])('%s, long sheet of timestamps aggregated to months, equals the CSV', async (name) => {
     const fromCsv = await readPack(long('openpyxl-long.csv'));
     const fromXlsx = await readPack(long(name, {sheet: 'Long'}));
