@@ -7,11 +7,11 @@ import {regressCalendar, type RegressorColumn} from './calendarRegression.js';
 import {chooseModel} from './chooseModel.js';
 import {classicalDecomposition} from './classical.js';
 import {residualSeasonality, seasonalStability, varianceShares} from './diagnostics.js';
-import {detectOutliers} from './outliers.js';
+import {detectOutliers, levelShiftSizes} from './outliers.js';
 import {constantValue} from '../numeric/constantValue.js';
 import {median} from '../numeric/median.js';
 import {stl} from './stl.js';
-import type {Adjustment, CalendarRegressor} from './types.js';
+import type {Adjustment, CalendarRegressor, Outlier} from './types.js';
 import {weeklyFourier} from './weeklyFourier.js';
 
 export interface AdjustContext {
@@ -73,20 +73,29 @@ export function adjust(values: Float64Array, ctx: AdjustContext): AdjustOutcome 
   const missing = span.map((v) => (Number.isNaN(v) ? 1 : 0));
   const x = fillMissing(span, missing, decompose, scale);
   const regressors = calendarRegressors(ctx, start, span.length);
-  const calendar = calendarRounds(x, missing, regressors, decompose, scale);
+  const unusual = (p: ReturnType<typeof components>) =>
+    ctx.outliers
+      ? detectOutliers(p.irregularModel, p.adjustedModel, ctx.residualSigma, outlierFloor(p.adjustedModel, scale.mult))
+      : [];
+  let calendar = calendarRounds(x, missing, regressors, decompose, scale);
+  let parts = components(span, missing, calendar.fit, calendar, scale);
+  let found = unusual(parts);
+  // Level shifts are taken out before decomposing again and given back to the trend-cycle (see levelSteps).
+  const shifts = levelSteps(parts.adjustedModel, found);
+  if (shifts !== null) {
+    const {step} = shifts;
+    const rounds = calendarRounds(x.map((v, i) => scale.fromModel(scale.toModel(v) - step[i])), missing, regressors, decompose, scale);
+    const trend = rounds.fit.trend.map((v, i) => scale.fromModel(scale.toModel(v) + step[i]));
+    calendar = {...rounds, fit: {...rounds.fit, trend}};
+    parts = components(span, missing, calendar.fit, calendar, scale);
+    found = unusual(parts);
+  }
   const {fit, anyCalendar} = calendar;
-  const parts = components(span, missing, fit, calendar, scale);
-  const outliers = ctx.outliers
-    ? detectOutliers(
-        parts.irregularModel,
-        parts.adjustedModel,
-        ctx.residualSigma,
-        outlierFloor(parts.adjustedModel, scale.mult),
-      ).map((o) => ({...o, index: o.index + first}))
-    : [];
+  const outliers = found.map((o) => ({...o, index: o.index + first}));
+  const step = shifts?.step ?? new Float64Array(span.length);
   const revision = revisionDiagnostic(x, span, parts.adjusted, (sub) => {
     const cal = calendar.model.subarray(0, sub.length);
-    const f = decompose(sub.map((v, i) => scale.fromModel(scale.toModel(v) - (anyCalendar ? cal[i] : 0))));
+    const f = decompose(sub.map((v, i) => scale.fromModel(scale.toModel(v) - (anyCalendar ? cal[i] : 0) - step[i])));
     return sub.map((v, i) => scale.remove(scale.remove(v, f.seasonal[i]), calendar.at(i)));
   }, REVISION_ENDS[frequency], minimum, scale.mult);
 
@@ -132,7 +141,13 @@ export function adjust(values: Float64Array, ctx: AdjustContext): AdjustOutcome 
         scale: scale.mult ? 'log' : 'level',
       },
       missing: {filled: filledCount, method: `linear interpolation, then trend and seasonal of the fit (${FILL_ROUNDS} rounds)`},
-      outliers: {enabled: ctx.outliers, thresholdSigmas: ctx.residualSigma, sigma: '1.4826 × MAD of the irregular'},
+      outliers: {
+        enabled: ctx.outliers,
+        thresholdSigmas: ctx.residualSigma,
+        sigma: '1.4826 × MAD of the irregular',
+        levelShiftsRemoved: (shifts?.shifts ?? []).map(({index, size}) => ({index: index + first, size})),
+        levelShiftRule: 'removed before the final decomposition (model scale) and restored to the trend-cycle',
+      },
       minimumObservations: minimum,
       revisionEnds: revision?.periodsTested ?? 0,
       calendarInIrregular: !anyCalendar,
@@ -215,6 +230,24 @@ interface CalendarRounds {
   factor: Float64Array;
   /** The calendar effect removed at position i: the factor when any is significant, else neutral. */
   at: (i: number) => number;
+}
+
+/**
+ * The level shifts among `found` as a step on the model scale (each shift's size from then on, summed), or null
+ * when there is none. A decomposition's trend smooths a lasting jump over its window, so the irregular swings to
+ * either side of it and the periods before and after read as one-offs; with the step taken out first and put back
+ * into the trend-cycle afterwards, the seasonal and the irregular are those of the series without the jump (the
+ * prior adjustment for level shifts of official seasonal adjustment practice).
+ */
+function levelSteps(adjustedModel: Float64Array, found: Outlier[]): {step: Float64Array; shifts: {index: number; size: number}[]} | null {
+  const at = found.filter((o) => o.kind === 'level-shift').map((o) => o.index);
+  if (at.length === 0) return null;
+  const sizes = levelShiftSizes(adjustedModel, at);
+  const step = new Float64Array(adjustedModel.length);
+  at.forEach((k, j) => {
+    for (let t = k; t < step.length; t++) step[t] += sizes[j];
+  });
+  return {step, shifts: at.map((index, j) => ({index, size: sizes[j]}))};
 }
 
 /** Calendar: decompose → regress the irregular (model scale) on the regressors → remove → decompose again. */

@@ -32,8 +32,7 @@ export function detectOutliers(
 ): Outlier[] {
   const n = irregular.length;
   const sigma = Math.max(mad(irregular), meanAbsoluteSigma(irregular), floor);
-  const changes = new Float64Array(n).fill(NaN);
-  for (let t = 1; t < n; t++) changes[t] = adjusted[t] - adjusted[t - 1];
+  const changes = changesOf(adjusted);
   const drift = median(changes);
   const sigmaChange = Math.max(mad(changes), floor);
   if (!(sigma > 0) || !(sigmaChange > 0)) return [];
@@ -41,7 +40,7 @@ export function detectOutliers(
   for (let t = 0; t < n; t++) {
     const jump = changes[t] - drift;
     if (t >= SIDE && t + SIDE <= n && Math.abs(jump) >= threshold * sigmaChange) {
-      const shift = median(adjusted.subarray(t, t + SIDE)) - median(adjusted.subarray(t - SIDE, t)) - SIDE * drift;
+      const shift = shiftAt(adjusted, t, drift);
       const next = adjusted[t + 1] - adjusted[t - 1] - 2 * drift;
       const lasting = (x: number): boolean => Math.sign(x) === Math.sign(jump) && Math.abs(x) >= 0.5 * Math.abs(jump);
       if (lasting(shift) && lasting(next)) {
@@ -53,6 +52,25 @@ export function detectOutliers(
     if (Math.abs(score) >= threshold) out.push({index: t, kind: 'additive', score});
   }
   return out;
+}
+
+/**
+ * Sizes of level shifts at `indices` of the adjusted series (model scale), as the rule above measures them: the
+ * median of the 3 periods from t less the median of the 3 before, less 3 periods of the median drift.
+ */
+export function levelShiftSizes(adjusted: Float64Array, indices: number[]): number[] {
+  const drift = median(changesOf(adjusted));
+  return indices.map((t) => shiftAt(adjusted, t, drift));
+}
+
+function changesOf(adjusted: Float64Array): Float64Array {
+  const changes = new Float64Array(adjusted.length).fill(NaN);
+  for (let t = 1; t < adjusted.length; t++) changes[t] = adjusted[t] - adjusted[t - 1];
+  return changes;
+}
+
+function shiftAt(adjusted: Float64Array, t: number, drift: number): number {
+  return median(adjusted.subarray(t, t + SIDE)) - median(adjusted.subarray(t - SIDE, t)) - SIDE * drift;
 }
 
 /** √(π/2) · mean |x − median(x)|: a Gaussian-consistent scale that does not collapse when most values are zero. */

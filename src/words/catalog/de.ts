@@ -330,7 +330,7 @@ export const de: Catalog = {
   'methods.adjustment':
     'Die Saisonbereinigung entfernt das Muster, das sich jedes Jahr wiederholt, sodass eine Periode mit der vorherigen verglichen werden kann. Monats- und Quartalsreihen werden mit STL zerlegt, der saisonalen Trendzerlegung mittels LOESS (Cleveland, Cleveland, McRae und Terpenning, 1990, Journal of Official Statistics 6), oder mit klassischen gleitenden Durchschnitten, wo das Paket es verlangt; Wochenreihen verwenden ein jährliches Fourier-Muster im Datum. Ein multiplikatives Modell wird gewählt, wenn die Saisonausschläge mit dem Niveau wachsen, sonst ein additives.',
   'methods.calendar':
-    'Arbeitstage, Feiertage und die Lage von Ostern werden per Regression auf die irreguläre Komponente geschätzt und nur entfernt, wo sie auf dem 5-%-Niveau signifikant sind. Auffällige Werte (einmalige Ausreißer, Niveauverschiebungen und vorübergehende Änderungen) werden über robuste Kennzahlen der irregulären Komponente gefunden und aus der Schätzung der Saisonfigur herausgehalten.',
+    'Arbeitstage, Feiertage und die Lage von Ostern werden per Regression auf die irreguläre Komponente geschätzt und nur entfernt, wo sie auf dem 5-%-Niveau signifikant sind. Auffällige Werte (einmalige Ausreißer, Niveauverschiebungen und vorübergehende Änderungen) werden über robuste Kennzahlen der irregulären Komponente gefunden und aus der Schätzung der Saisonfigur herausgehalten; eine Niveauverschiebung wird vor einer erneuten Zerlegung herausgerechnet und danach der Trend-Konjunktur-Komponente zugeschlagen, damit die Perioden davor und danach nicht als Ausreißer erscheinen.',
   'methods.cycle':
     'Der Zyklus ist der prozentuale Abstand der saisonbereinigten Reihe zu einem langfristigen Trend aus dem Hodrick-Prescott-Filter (Hodrick und Prescott, 1997, Journal of Money, Credit and Banking 29) oder dem Christiano-Fitzgerald-Bandpassfilter (2003, International Economic Review 44); die Wendepunkte folgen den Regeln von Bry und Boschan (1971, NBER).',
   'methods.forecast':
@@ -354,6 +354,7 @@ export const de: Catalog = {
   'caution.cell.backtest': 'Prognose schwächer als Vorjahreswerte',
   'caution.cell.filled': '{n, plural, one {# Lücke geschlossen} other {# Lücken geschlossen}}',
   'caution.cell.notAdjusted': 'nicht bereinigt',
+  'caution.cell.break': 'Niveauverschiebung: {periods}',
   'caution.cell.noForecast': 'keine Prognose',
 
   'note.infinite':

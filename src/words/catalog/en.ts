@@ -329,7 +329,7 @@ export const en = {
   'methods.adjustment':
     'Seasonal adjustment removes the pattern that repeats every year, so that one period can be compared with the one before. Monthly and quarterly series are decomposed by STL, seasonal-trend decomposition by LOESS (Cleveland, Cleveland, McRae and Terpenning, 1990, Journal of Official Statistics 6), or by classical moving averages where the pack asks for it; weekly series use a yearly Fourier pattern in the date. A multiplicative model is used when the seasonal swing grows with the level, an additive one otherwise.',
   'methods.calendar':
-    'Working days, public holidays and the date of Easter are estimated by regression on the irregular and removed only where they are significant at the 5% level. Unusual values (one-offs, level shifts and temporary changes) are found from robust scores of the irregular and kept out of the seasonal estimate.',
+    'Working days, public holidays and the date of Easter are estimated by regression on the irregular and removed only where they are significant at the 5% level. Unusual values (one-offs, level shifts and temporary changes) are found from robust scores of the irregular and kept out of the seasonal estimate; a level shift is taken out before the series is decomposed again and put back into the trend-cycle, so the periods either side of it are not mistaken for one-offs.',
   'methods.cycle':
     'The cycle is the percentage gap between the seasonally adjusted series and a long-run trend from the Hodrick-Prescott filter (Hodrick and Prescott, 1997, Journal of Money, Credit and Banking 29) or the Christiano-Fitzgerald band-pass filter (2003, International Economic Review 44); turning points follow the rules of Bry and Boschan (1971, NBER).',
   'methods.forecast':
@@ -352,6 +352,7 @@ export const en = {
   'caution.cell.backtest': 'forecast weaker than last year’s figures',
   'caution.cell.filled': '{n, plural, one {# gap filled} other {# gaps filled}}',
   'caution.cell.notAdjusted': 'not adjusted',
+  'caution.cell.break': 'level shift: {periods}',
   'caution.cell.noForecast': 'no forecast',
 
   // Notes from the analysis and from reading the data, by code

@@ -329,7 +329,7 @@ export const fr: Catalog = {
   'methods.adjustment':
     'La correction des variations saisonnières retire le profil qui se répète chaque année, afin de comparer une période à la précédente. Les séries mensuelles et trimestrielles sont décomposées par STL, décomposition saisonnière et tendancielle par LOESS (Cleveland, Cleveland, McRae et Terpenning, 1990, Journal of Official Statistics 6), ou par moyennes mobiles classiques lorsque le dossier le demande ; les séries hebdomadaires utilisent un profil de Fourier annuel dans la date. Un modèle multiplicatif est retenu lorsque l’amplitude saisonnière croît avec le niveau, un modèle additif sinon.',
   'methods.calendar':
-    'Les jours ouvrés, les jours fériés et la date de Pâques sont estimés par régression sur la composante irrégulière et retirés seulement lorsqu’ils sont significatifs au seuil de 5 %. Les valeurs atypiques (ponctuelles, ruptures de niveau et changements temporaires) sont repérées par des scores robustes de la composante irrégulière et écartées de l’estimation saisonnière.',
+    'Les jours ouvrés, les jours fériés et la date de Pâques sont estimés par régression sur la composante irrégulière et retirés seulement lorsqu’ils sont significatifs au seuil de 5 %. Les valeurs atypiques (ponctuelles, ruptures de niveau et changements temporaires) sont repérées par des scores robustes de la composante irrégulière et écartées de l’estimation saisonnière ; une rupture de niveau est retirée avant une nouvelle décomposition puis rendue à la tendance-cycle, afin que les périodes qui l’entourent ne passent pas pour des valeurs ponctuelles.',
   'methods.cycle':
     'Le cycle est l’écart en pourcentage entre la série CVS et une tendance de long terme issue du filtre de Hodrick-Prescott (Hodrick et Prescott, 1997, Journal of Money, Credit and Banking 29) ou du filtre passe-bande de Christiano-Fitzgerald (2003, International Economic Review 44) ; les points de retournement suivent les règles de Bry et Boschan (1971, NBER).',
   'methods.forecast':
@@ -353,6 +353,7 @@ export const fr: Catalog = {
   'caution.cell.backtest': 'prévision moins bonne que l’année précédente',
   'caution.cell.filled': '{n, plural, one {# lacune comblée} other {# lacunes comblées}}',
   'caution.cell.notAdjusted': 'non corrigé',
+  'caution.cell.break': 'rupture de niveau : {periods}',
   'caution.cell.noForecast': 'pas de prévision',
 
   'note.infinite':

@@ -216,6 +216,21 @@ describe('missing values, outliers, edge cases', () => {
     expect(Math.abs(a.seasonal[30] - pattern[30 % 12])).toBeLessThan(1);
     expect(ok(run(values, {robust: true}, {outliers: false})).outliers).toEqual([]);
   });
+  it('takes a level shift out before decomposing again and gives it to the trend-cycle, so its neighbours are no one-offs', () => {
+    // A takeover: the level steps up 40% in month 40 of 60; multiplicative season, robust STL with the pack defaults.
+    const values = Array.from({length: 60}, (_, i) => (i < 40 ? 1000 : 1400) * (1 + 0.1 * Math.sin((i / 12) * 2 * Math.PI)) + 3 * Math.sin(i * 5));
+    const a = ok(run(values, {robust: true, model: 'multiplicative'}, {outliers: true}));
+    expect(a.outliers.map((o) => [o.index, o.kind])).toEqual([[40, 'level-shift']]);
+    const removed = (a.options.outliers as {levelShiftsRemoved: {index: number; size: number}[]}).levelShiftsRemoved;
+    expect(removed).toHaveLength(1);
+    expect(removed[0].index).toBe(40);
+    expect(removed[0].size).toBeCloseTo(Math.log(1.4), 2);
+    // The trend-cycle carries the jump, and the seasonal factors stay those of the pattern on both sides of it.
+    expect(a.trend[40] / a.trend[39]).toBeGreaterThan(1.35);
+    for (const i of [34, 39, 40, 46]) expect(a.seasonal[i]).toBeCloseTo(1 + 0.1 * Math.sin((i / 12) * 2 * Math.PI), 2);
+    // Without the outlier rules nothing is taken out.
+    expect(ok(run(values, {robust: true, model: 'multiplicative'}, {outliers: false})).options.outliers).toMatchObject({levelShiftsRemoved: []});
+  });
   it('gives a plain reason for too-short series and never throws on odd input', () => {
     for (const values of [[], [1], [1, 2], [1, 2, 3], new Array(24).fill(1).map((_, i) => i)]) {
       const r = run(values);
