@@ -49,7 +49,10 @@ export const slugClash = (id: string, key: string, other: string): string =>
   `key "${key}" becomes series id "${id}", which ${other} already uses; rename one of them`;
 
 export const badDate = (text: string, column: string, frequency: Frequency): string =>
-  `"${text}" in column "${column}" is not a date; write ${EXAMPLE[frequency]} or a full date such as 2026-10-31`;
+  /^\p{L}+\.? \d{2}$/u.test(text)
+    ? `"${text}" in column "${column}" is not a date: two digits after a month name could be a day or a year; ` +
+      `write the year in full (${text.replace(/\d{2}$/, (yy) => `${Number(yy) < 69 ? 20 : 19}${yy}`)}) or as a spreadsheet writes it (${text.replace(' ', '-')})`
+    : `"${text}" in column "${column}" is not a date; write ${EXAMPLE[frequency]} or a full date such as 2026-10-31`;
 export const blankKey = (column: string): string => `the key in column "${column}" is blank`;
 export const blankDate = (column: string): string => `the date in column "${column}" is blank`;
 export const mixedFrequency = (text: string, column: string, found: Frequency, pack: Frequency): string =>

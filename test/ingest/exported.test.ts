@@ -147,6 +147,14 @@ describe('dates and layouts as exports write them', () => {
     ]);
   });
 
+  it('a month name with two digits could be a day or a year: the problem gives both ways to write it', async () => {
+    const file = write('short-years.csv', 'month,v\nJan 24,1\nFeb 24,2\n');
+    const problems = await problemsOf(plan('monthly', [source('s', file)], [series('v', 's')]));
+    expect(problems[0].message).toBe(
+      '"Jan 24" in column "month" is not a date: two digits after a month name could be a day or a year; write the year in full (Jan 2024) or as a spreadsheet writes it (Jan-24)',
+    );
+  });
+
   it('a bad date in the middle stays a problem; an empty header row is a problem naming headerRow', async () => {
     const mid = write('mid.csv', 'month,v\n2026-01,1\nTotal,2\n2026-03,3\n');
     const problems = await problemsOf(plan('monthly', [source('m', mid)], [series('v', 'm')]));
