@@ -52,7 +52,13 @@ export const badDate = (text: string, column: string, frequency: Frequency): str
   /^\p{L}+\.? \d{2}$/u.test(text)
     ? `"${text}" in column "${column}" is not a date: two digits after a month name could be a day or a year; ` +
       `write the year in full (${text.replace(/\d{2}$/, (yy) => `${Number(yy) < 69 ? 20 : 19}${yy}`)}) or as a spreadsheet writes it (${text.replace(' ', '-')})`
-    : `"${text}" in column "${column}" is not a date; write ${EXAMPLE[frequency]} or a full date such as 2026-10-31`;
+    : /^\d{5}$/.test(text) && Number(text) >= 20000 && Number(text) <= 80000
+      ? `"${text}" in column "${column}" is not a date: it looks like a spreadsheet's day number (${serialExample(text)}); ` +
+        `format the column as dates in the workbook before saving or exporting it, or write ${EXAMPLE[frequency]}`
+      : `"${text}" in column "${column}" is not a date; write ${EXAMPLE[frequency]} or a full date such as 2026-10-31`;
+/** The date a spreadsheet day number stands for in the 1900 date system (day 1 = 1900-01-01, day 61 = 1900-03-01). */
+const serialExample = (text: string): string =>
+  `${text} is ${new Date(Date.UTC(1899, 11, 30) + Number(text) * 86_400_000).toISOString().slice(0, 10)} there`;
 export const blankKey = (column: string): string => `the key in column "${column}" is blank`;
 export const blankDate = (column: string): string => `the date in column "${column}" is blank`;
 export const mixedFrequency = (text: string, column: string, found: Frequency, pack: Frequency): string =>

@@ -155,6 +155,16 @@ describe('dates and layouts as exports write them', () => {
     );
   });
 
+  it('a spreadsheet day number in a date column: the problem names the date it stands for and the fix', async () => {
+    // 45658 is 2025-01-01 in the 1900 date system (day 0 = 1899-12-30, recalled from memory; Python's datetime gives
+    // (date(2025, 1, 1) - date(1899, 12, 30)).days == 45658).
+    const file = write('serials.csv', 'month,v\n45658,1\n45689,2\n');
+    const problems = await problemsOf(plan('monthly', [source('s', file)], [series('v', 's')]));
+    expect(problems[0].message).toBe(
+      '"45658" in column "month" is not a date: it looks like a spreadsheet\'s day number (45658 is 2025-01-01 there); format the column as dates in the workbook before saving or exporting it, or write 2026-10',
+    );
+  });
+
   it('a bad date in the middle stays a problem; an empty header row is a problem naming headerRow', async () => {
     const mid = write('mid.csv', 'month,v\n2026-01,1\nTotal,2\n2026-03,3\n');
     const problems = await problemsOf(plan('monthly', [source('m', mid)], [series('v', 'm')]));
