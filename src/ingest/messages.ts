@@ -56,7 +56,7 @@ export const badDate = (text: string, column: string, frequency: Frequency): str
       ? `"${text}" in column "${column}" is not a date: it looks like a spreadsheet's day number (${serialExample(text)}); ` +
         `format the column as dates in the workbook before saving or exporting it, or write ${EXAMPLE[frequency]}`
       : `"${text}" in column "${column}" is not a date; write ${EXAMPLE[frequency]} or a full date such as 2026-10-31`;
-/** The date a spreadsheet day number stands for in the 1900 date system (day 1 = 1900-01-01, day 61 = 1900-03-01). */
+/** The date a spreadsheet day number from 61 on stands for in the 1900 date system: 1899-12-30 plus that many days. */
 const serialExample = (text: string): string =>
   `${text} is ${new Date(Date.UTC(1899, 11, 30) + Number(text) * 86_400_000).toISOString().slice(0, 10)} there`;
 export const blankKey = (column: string): string => `the key in column "${column}" is blank`;
