@@ -8,12 +8,14 @@ import type {ProblemLog} from './problemLog.js';
 import {sniffDelimiter} from './sniffDelimiter.js';
 import * as msg from './messages.js';
 import type {RowVisitor} from './rowVisitor.js';
+import {utf16Order} from './utf16.js';
 
 
 /**
  * Stream one CSV source through a visitor, reading the file once: the raw bytes are hashed (SHA-256)
  * and counted, decoded (UTF-8 validated strictly, or Windows-1252 through iconv-lite because Node 20's
- * TextDecoder maps 0x80–0x9F to control characters), the delimiter is sniffed from the header line when
+ * TextDecoder maps 0x80–0x9F to control characters, or UTF-16 when the file starts with its byte-order mark, see
+ * utf16.ts), the delimiter is sniffed from the header line when
  * `auto`, and {@link CsvRecords} cuts the text into records from the source's `headerRow` on (title lines above it
  * are skipped). Memory stays bounded by the stream's chunk size.
  *
@@ -122,12 +124,14 @@ async function* decodedText(
   counter: {bytes: number; lines: number},
 ): AsyncGenerator<string> {
   const win1252 = source.encoding === 'windows-1252';
-  const decoder = win1252 ? iconv.getDecoder('win1252') : undefined;
+  let decoder = win1252 ? iconv.getDecoder('win1252') : undefined;
   const utf8 = new TextDecoder('utf-8', {fatal: true});
   for await (const chunk of createReadStream(source.file) as AsyncIterable<Buffer>) {
     if (counter.bytes === 0 && win1252 && chunk[0] === 0xef && chunk[1] === 0xbb && chunk[2] === 0xbf) {
       throw new DecodeFailure(msg.utf8BomInWindows1252(), 1);
     }
+    const wide = counter.bytes === 0 ? utf16Order(chunk) : null;
+    if (wide) decoder = iconv.getDecoder(wide);
     hash.update(chunk);
     counter.bytes += chunk.length;
     let text: string;

@@ -1,6 +1,7 @@
 import {closeSync, openSync, readSync} from 'node:fs';
 import iconv from 'iconv-lite';
 import {sniffDelimiter} from './sniffDelimiter.js';
+import {utf16Order} from './utf16.js';
 
 /** How far past a title line the column names are looked for: the first lines of the file, at most 64 KiB. */
 const LOOK_LINES = 50;
@@ -30,7 +31,8 @@ export function lineHoldingColumn(
   } catch {
     return null;
   }
-  const text = encoding === 'windows-1252' ? iconv.decode(bytes, 'win1252') : bytes.toString('utf8');
+  const wide = utf16Order(bytes);
+  const text = wide ? iconv.decode(bytes, wide) : encoding === 'windows-1252' ? iconv.decode(bytes, 'win1252') : bytes.toString('utf8');
   const lines = text.replace(/^\ufeff/, '').split(/\r\n|\r|\n/, LOOK_LINES);
   for (let i = after; i < lines.length; i++) {
     const fields = lines[i].split(sniffDelimiter(lines[i])).map((f) => f.trim().replace(/^"(.*)"$/, '$1').trim());

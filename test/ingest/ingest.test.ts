@@ -142,6 +142,20 @@ describe('encodings', () => {
     ]);
   });
 
+  it('UTF-16 with its byte-order mark (a spreadsheet\'s Unicode text export, tab-separated) reads as its UTF-8 twin', async () => {
+    // Big chunks of rows so the stream's chunks end inside characters; Node's Buffer writes the UTF-16 bytes.
+    const rows = Array.from({length: 4000}, (_, i) => `${2000 + Math.floor(i / 12)}-${String((i % 12) + 1).padStart(2, '0')}\t${i}.5\tCafé ${i % 3}`);
+    const text = `Monat\tUmsatz\tFiliale\r\n${rows.join('\r\n')}\r\n`;
+    const little = Buffer.concat([Buffer.from([0xff, 0xfe]), Buffer.from(text, 'utf16le')]);
+    const big = Buffer.concat([Buffer.from([0xfe, 0xff]), Buffer.from(text, 'utf16le').swap16()]);
+    const read = (file: string) =>
+      readPack(plan('monthly', [source('u', file, {dateColumn: 'Monat'})], [series('umsatz', 'u', {column: 'Umsatz'})]));
+    const utf8 = values(await read(write('utf8.csv', text)), 'umsatz');
+    expect(utf8.length).toBeGreaterThan(1000);
+    expect(values(await read(write('utf16le.csv', little)), 'umsatz')).toEqual(utf8);
+    expect(values(await read(write('utf16be.csv', big)), 'umsatz')).toEqual(utf8);
+  });
+
   it('a UTF-8 BOM in a file declared windows-1252 is a problem', async () => {
     const src = source('t', 'wide-bom.csv', {encoding: 'windows-1252'});
     const problems = await problemsOf(plan('monthly', [src], [series('orders', 't')]));
