@@ -51,7 +51,8 @@ export const slugClash = (id: string, key: string, other: string): string =>
 export const badDate = (text: string, column: string, frequency: Frequency): string =>
   /^\p{L}+\.? \d{2}$/u.test(text)
     ? `"${text}" in column "${column}" is not a date: two digits after a month name could be a day or a year; ` +
-      `write the year in full (${text.replace(/\d{2}$/, (yy) => `${Number(yy) < 69 ? 20 : 19}${yy}`)}) or as a spreadsheet writes it (${text.replace(' ', '-')})`
+      `write the year in full (${text.replace(/\d{2}$/, (yy) => `${Number(yy) < 69 ? 20 : 19}${yy}`)}) ` +
+      `or as a spreadsheet writes it (${text.replace(' ', '-')})`
     : /^\d{5}$/.test(text) && Number(text) >= 20000 && Number(text) <= 80000
       ? `"${text}" in column "${column}" is not a date: it looks like a spreadsheet's day number (${serialExample(text)}); ` +
         `format the column as dates in the workbook before saving or exporting it, or write ${EXAMPLE[frequency]}`
@@ -69,8 +70,15 @@ export const missingColumnDelimiter = (what: string, name: string, declared: str
   `${shown(found)}; set \`delimiter: "${found === '\t' ? '\\t' : found}"\` (or \`auto\`) on the source`;
 export const shortRow = (fields: number, header: number): string =>
   `the row has ${fields} fields but the header has ${header}; a delimiter or quote may be missing`;
-export const moreLikeThese = (count: number, listed: number, where: string | null, unit: string, last: number | null): string =>
-  `${count} more like the ${listed} above${where === null ? '' : ` in ${where}`}${last === null ? '' : `, the last on ${unit} ${last}`}`;
+export const moreLikeThese = (
+  count: number,
+  listed: number,
+  where: string | null,
+  unit: string,
+  last: number | null,
+): string =>
+  `${count} more like the ${listed} above${where === null ? '' : ` in ${where}`}` +
+  (last === null ? '' : `, the last on ${unit} ${last}`);
 export const notANumber = (text: string, column: string, advice: string): string =>
   `"${text}" in column "${column}" is not a number: ${advice}`;
 export const allMissing = (seriesId: string, where: string): string =>

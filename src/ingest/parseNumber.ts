@@ -92,7 +92,10 @@ export function numberAdvice(text: string, decimal: '.' | ','): string {
   }
   if (/%$/.test(s)) return 'write percentages as plain numbers (12.5, not 12.5%) and put % in the series `unit`';
   if (/^#(DIV\/0!|VALUE!|REF!|NAME\?|NUM!|NULL!|SPILL!|CALC!)$/i.test(s)) {
-    return 'it is a spreadsheet error value: correct the formula in the workbook the file came from and export it again, or leave the cell blank';
+    return (
+      'it is a spreadsheet error value: correct the formula in the workbook the file came from and export it ' +
+      'again, or leave the cell blank'
+    );
   }
   if (Math.abs(readNumber(s, decimal) ?? 0) === Infinity) {
     return 'it is too large to compute with (the limit is about 1.8e308); check the exponent';

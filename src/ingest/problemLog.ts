@@ -58,7 +58,8 @@ export class ProblemLog {
           kind.rest.count++;
           kind.rest.last = row;
         } else {
-          kind.rest = {problem: {file: repeat.file, line: repeat.line, column: null, message: ''}, source, count: 1, repeat, last: row};
+          const problem = {file: repeat.file, line: repeat.line, column: null, message: ''};
+          kind.rest = {problem, source, count: 1, repeat, last: row};
           this.keep(kind.rest);
         }
         return;
@@ -86,7 +87,9 @@ export class ProblemLog {
     const more: Problem[] = [];
     for (const [source, total] of this.totals) {
       const n = total - (shown.get(source) ?? 0);
-      if (n > 0) more.push({file: source, line: null, column: null, message: `${n} more problems not listed`, count: n});
+      if (n > 0) {
+        more.push({file: source, line: null, column: null, message: `${n} more problems not listed`, count: n});
+      }
     }
     return [...listed, ...more];
   }

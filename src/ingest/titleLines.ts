@@ -32,7 +32,11 @@ export function lineHoldingColumn(
     return null;
   }
   const wide = utf16Order(bytes);
-  const text = wide ? iconv.decode(bytes, wide) : encoding === 'windows-1252' ? iconv.decode(bytes, 'win1252') : bytes.toString('utf8');
+  const text = wide
+    ? iconv.decode(bytes, wide)
+    : encoding === 'windows-1252'
+      ? iconv.decode(bytes, 'win1252')
+      : bytes.toString('utf8');
   const lines = text.replace(/^\ufeff/, '').split(/\r\n|\r|\n/, LOOK_LINES);
   for (let i = after; i < lines.length; i++) {
     const fields = lines[i].split(sniffDelimiter(lines[i])).map((f) => f.trim().replace(/^"(.*)"$/, '$1').trim());

@@ -68,9 +68,9 @@ const BASIC_DAY = new RegExp(String.raw`^(\d{4})(\d{2})(\d{2})${TIME}$`);
  * Read a date cell into what it names, without deciding the frequency.
  *
  * Accepted (case-insensitive, surrounding blanks ignored):
- * - months: `2026-10`, `2026/10`, `2026M10`, `10/2026`, `10.2026`, `10-2026`, `Oct 2026`, `October 2026`, `Sept 2026`, `Oct-2026`, a
- *   spreadsheet's `Oct-26`, and the month names of the pack's locale given in `reading.months` (`Okt 2026`,
- *   `janv. 2026`)
+ * - months: `2026-10`, `2026/10`, `2026M10`, `10/2026`, `10.2026`, `10-2026`, `Oct 2026`, `October 2026`,
+ *   `Sept 2026`, `Oct-2026`, a spreadsheet's `Oct-26`, and the month names of the pack's locale given in
+ *   `reading.months` (`Okt 2026`, `janv. 2026`)
  * - quarters: `2026-Q3`, `2026Q3`, `Q3 2026`, `Q3-2026`
  * - ISO weeks: `2026-W41`, `2026W41`, and ISO week dates `2026-W41-3`
  * - days: `2026-10-31`, `2026/10/31`, and with `reading.dateFormat` day-first or month-first dates (`31/10/2026`,
@@ -168,7 +168,7 @@ function month(year: number, m: number): DateCell | undefined {
   return m >= 1 && m <= 12 ? {kind: 'month', year, month: m} : undefined;
 }
 
-/** A day cell, with the time of day and offset from the time's match groups (hour, minute, second, fraction, offset). */
+/** A day cell, with the time of day and offset from the time match's groups (hour, minute, second, fraction, zone). */
 function day(year: number, m: number, d: number, time: (string | undefined)[]): DateCell | undefined {
   if (m < 1 || m > 12 || d < 1) return undefined;
   const next = m === 12 ? daysFromCivil(year + 1, 1, 1) : daysFromCivil(year, m + 1, 1);

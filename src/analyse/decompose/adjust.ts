@@ -84,7 +84,8 @@ export function adjust(values: Float64Array, ctx: AdjustContext): AdjustOutcome 
   const shifts = levelSteps(parts.adjustedModel, found);
   if (shifts !== null) {
     const {step} = shifts;
-    const rounds = calendarRounds(x.map((v, i) => scale.fromModel(scale.toModel(v) - step[i])), missing, regressors, decompose, scale);
+    const level = x.map((v, i) => scale.fromModel(scale.toModel(v) - step[i]));
+    const rounds = calendarRounds(level, missing, regressors, decompose, scale);
     const trend = rounds.fit.trend.map((v, i) => scale.fromModel(scale.toModel(v) + step[i]));
     calendar = {...rounds, fit: {...rounds.fit, trend}};
     parts = components(span, missing, calendar.fit, calendar, scale);
@@ -95,7 +96,9 @@ export function adjust(values: Float64Array, ctx: AdjustContext): AdjustOutcome 
   const step = shifts?.step ?? new Float64Array(span.length);
   const revision = revisionDiagnostic(x, span, parts.adjusted, (sub) => {
     const cal = calendar.model.subarray(0, sub.length);
-    const f = decompose(sub.map((v, i) => scale.fromModel(scale.toModel(v) - (anyCalendar ? cal[i] : 0) - step[i])));
+    const f = decompose(
+      sub.map((v, i) => scale.fromModel(scale.toModel(v) - (anyCalendar ? cal[i] : 0) - step[i])),
+    );
     return sub.map((v, i) => scale.remove(scale.remove(v, f.seasonal[i]), calendar.at(i)));
   }, REVISION_ENDS[frequency], minimum, scale.mult);
 
@@ -239,7 +242,10 @@ interface CalendarRounds {
  * into the trend-cycle afterwards, the seasonal and the irregular are those of the series without the jump (the
  * prior adjustment for level shifts of official seasonal adjustment practice).
  */
-function levelSteps(adjustedModel: Float64Array, found: Outlier[]): {step: Float64Array; shifts: {index: number; size: number}[]} | null {
+function levelSteps(
+  adjustedModel: Float64Array,
+  found: Outlier[],
+): {step: Float64Array; shifts: {index: number; size: number}[]} | null {
   const at = found.filter((o) => o.kind === 'level-shift').map((o) => o.index);
   if (at.length === 0) return null;
   const sizes = levelShiftSizes(adjustedModel, at);

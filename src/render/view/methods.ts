@@ -47,7 +47,9 @@ export function methodsRow(s: ReportSeries, w: Words): MethodsRow {
   if (!adj) notes.push(w.t('caution.cell.notAdjusted'));
   if (adj?.diagnostics.residualSeasonality.detected) notes.push(w.t('caution.cell.residualSeasonality'));
   // A level shift breaks the series: what came before says less about what follows.
-  const breaks = (adj?.outliers ?? []).filter((o) => o.kind === 'level-shift').map((o) => w.period(a.frequency, a.start + o.index));
+  const breaks = (adj?.outliers ?? [])
+    .filter((o) => o.kind === 'level-shift')
+    .map((o) => w.period(a.frequency, a.start + o.index));
   if (breaks.length > 0) notes.push(w.t('caution.cell.break', {periods: w.list(breaks)}));
   const filled = adj?.filled.filter(Boolean).length ?? 0;
   if (filled > 0) notes.push(w.t('caution.cell.filled', {n: filled}));

@@ -41,7 +41,8 @@ export function summaryRow(s: ReportSeries, w: Words, theme: Theme): SummaryRow 
 function outlook(a: SeriesAnalysis, w: Words): string {
   const o = a.outturn;
   if (o && o.target !== null) {
-    return w.t('summary.outturn', {years: fiscalYears(o.fiscalYear), total: w.number(o.total), target: w.number(o.target), gap: w.percent(o.gapPct)});
+    const years = fiscalYears(o.fiscalYear);
+    return w.t('summary.outturn', {years, total: w.number(o.total), target: w.number(o.target), gap: w.percent(o.gapPct)});
   }
   const fc = a.forecast;
   if (fc && fc.mean.length > 0) {
