@@ -1,4 +1,5 @@
 import type {CycleResult} from '../../analyse/types.js';
+import {phaseWords} from '../../words/index.js';
 import type {Rule} from '../context.js';
 import {chartAnchor} from '../chartAnchor.js';
 import {robustZ} from '../robustZ.js';
@@ -48,7 +49,7 @@ export const cyclePhaseRule: Rule = {
       {
         key: null,
         severity: 'info',
-        text: w.t('callout.cyclePhase', {label: s.label, phase: w.t(`phase.${c.phase}`), gap: w.percent(gap)}),
+        text: w.t('callout.cyclePhase', {label: s.label, phase: phaseWords(w, c), gap: w.percent(gap)}),
         figures: {gap},
         chart,
         magnitude: Math.min(magnitude, 2),

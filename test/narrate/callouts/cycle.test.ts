@@ -29,6 +29,13 @@ describe('cycle-phase rule', () => {
     expect(d.chart).toBe('chart-net-sales-cycle');
   });
 
+  it('says "on trend" for a gap that never moves, as the commentary and the tables do', () => {
+    const gap = [0, 0, 0, 0, 0, 0, 0];
+    const cycle = cycleOf(gap, {phase: 'rising-above', phaseLabel: 'on trend, no cycle to speak of'});
+    const [d] = runRule(cyclePhaseRule, makeAnalysis(gap, {cycle}));
+    expect(d.text).toBe('For Net sales, the cycle is on trend, no cycle to speak of: the gap to the long-run trend is 0.0%.');
+  });
+
   it('reports a change of phase in the review period', () => {
     const gap = [-1, -0.5, 0, 0.5, 1, 2, 1.8];
     const [d] = runRule(cyclePhaseRule, makeAnalysis(gap, {cycle: cycleOf(gap, {phase: 'falling-above'})}));
