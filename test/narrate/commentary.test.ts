@@ -174,6 +174,14 @@ describe('series paragraph', () => {
     );
   });
 
+  it('tells a fiscal year that closes with the review period as closed, in each language', () => {
+    const closed = rising({outturn: outturn({actualToDate: 26642, periodsActual: 12, forecastRemaining: 0, periodsRemaining: 0})});
+    const last = (locale: string) => paragraph(closed, locale).split(/(?<=\.) /).at(-2);
+    expect(last('en-GB')).toBe('The fiscal year 2026/27 closed at 26,642 EUR k, in line with the target of 26,705 EUR k.');
+    expect(last('de-DE')).toBe('Das Geschäftsjahr 2026/27 schloss mit 26.642 EUR k, im Rahmen des Planwerts von 26.705 EUR k.');
+    expect(last('fr-FR')).toBe('L’exercice 2026/27 s’est clôturé à 26\u202f642 EUR k, conforme à l’objectif de 26\u202f705 EUR k.');
+  });
+
   it('names the series once and keeps to five sentences', () => {
     const text = paragraph(rising());
     expect(text.split('Net sales')).toHaveLength(2);
@@ -213,6 +221,16 @@ describe('pack paragraph', () => {
         'One figure calls for attention: Shop footfall (unusual value). ' +
         'For November 2026, the forecasts point to a rise in 1 series and a fall in 1.',
     );
+  });
+
+  it('tells closed fiscal years without "on current forecasts"', () => {
+    const closed = outturn({actualToDate: 26642, periodsActual: 12, forecastRemaining: 0, periodsRemaining: 0});
+    const year = [{plan: makeSeriesPlan(), analysis: rising({outturn: closed})}, series[1]];
+    const sentence = (locale: string) =>
+      packParagraph({series: year, callouts: [alert], period: OCT_2026, words: wordsFor(locale)}).split(/(?<=\.) /)[2];
+    expect(sentence('en-GB')).toBe('Net sales closed FY2026/27 in line with its target.');
+    expect(sentence('de-DE')).toBe('Net sales schloss das Geschäftsjahr 2026/27 im Rahmen des Planwerts ab.');
+    expect(sentence('fr-FR')).toBe('Net sales a clôturé l’exercice 2026/27 conforme à son objectif.');
   });
 
   it('names the part that drove a group’s total, in each language', () => {

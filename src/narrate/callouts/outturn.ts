@@ -33,6 +33,7 @@ export const outturnRule: Rule = {
         text: outturnText(w, {
           label: s.label,
           stock: s.kind === 'stock',
+          closed: o.periodsRemaining === 0,
           years: fiscalYears(o.fiscalYear),
           total: w.value(o.total, s.unit),
           level: String(o.level),
@@ -64,6 +65,7 @@ function outturnText(
   a: {
     label: string;
     stock: boolean;
+    closed: boolean;
     years: string;
     total: string;
     level: string;
@@ -73,8 +75,8 @@ function outturnText(
     target: {value: string; gap: number} | null;
   },
 ): string {
-  const {target, stock, ...values} = a;
-  const base = w.t(stock ? 'callout.outturnStock' : 'callout.outturnFlow', values);
+  const {target, stock, closed, ...values} = a;
+  const base = w.t(closed ? 'callout.outturnClosed' : stock ? 'callout.outturnStock' : 'callout.outturnFlow', values);
   if (!target) return w.t('callout.outturnEnd', {base});
   if (Math.abs(target.gap) < 0.5) return w.t('callout.outturnInLine', {base, target: target.value});
   const above = target.gap > 0 ? 'yes' : 'no';

@@ -79,13 +79,21 @@ export function packParagraph({series, callouts, period, words: w, groups = []}:
     sentences.push(w.t('open.trend', {rising: count('rising'), falling: count('falling'), flat: count('flat')}));
   }
 
+  // Fiscal years that close with the review period are told as closed, without "on current forecasts".
+  let open = false;
   const targets = series.flatMap(({plan: s, analysis: a}) => {
     const o = a.outturn;
     if (!o || o.target === null || o.gapPct === null || !Number.isFinite(o.gapPct)) return [];
     const where = Math.abs(o.gapPct) < IN_LINE_PCT ? 'inline' : o.gapPct > 0 ? 'above' : 'below';
-    return [w.t('open.targetItem', {label: s.label, years: fiscalYears(o.fiscalYear), where, gap: w.share(o.gapPct)})];
+    const closed = o.periodsRemaining === 0;
+    open ||= !closed;
+    const values = {label: s.label, years: fiscalYears(o.fiscalYear), where, gap: w.share(o.gapPct)};
+    return [w.t(closed ? 'open.targetItemClosed' : 'open.targetItem', values)];
   });
-  if (targets.length > 0) sentences.push(w.t('open.target', {list: w.list(targets)}));
+  if (targets.length > 0) {
+    const list = w.list(targets);
+    sentences.push(open ? w.t('open.target', {list}) : w.t('para.sentence', {text: list}));
+  }
 
   const labels = new Map(series.map((s) => [s.plan.id, s.plan.label]));
   const alerts = callouts.filter((c) => c.severity === 'alert' && c.seriesId !== null && labels.has(c.seriesId));

@@ -118,7 +118,8 @@ export function seriesParagraph({series: s, analysis: a, callouts, words: w}: Pa
     const o = a.outturn;
     if (o && o.target !== null && o.gapPct !== null && Number.isFinite(o.gapPct) && Number.isFinite(o.total)) {
       const where = Math.abs(o.gapPct) < IN_LINE_PCT ? 'inline' : o.gapPct > 0 ? 'above' : 'below';
-      return w.t('para.outturnTarget', {
+      // A fiscal year that ends with the review period has closed: its outturn is all actual.
+      return w.t(o.periodsRemaining === 0 ? 'para.outturnClosed' : 'para.outturnTarget', {
         years: fiscalYears(o.fiscalYear),
         total: w.value(o.total, s.unit),
         where,

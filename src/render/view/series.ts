@@ -77,7 +77,7 @@ function forecastTable(a: SeriesAnalysis, w: Words): SeriesView['forecast'] {
       : null,
     outturn:
       o && Number.isFinite(o.total)
-        ? w.t('forecast.outturn', {
+        ? w.t(o.periodsRemaining === 0 ? 'forecast.outturnClosed' : 'forecast.outturn', {
             years: fiscalYears(o.fiscalYear),
             actual: w.number(o.actualToDate),
             periodsActual: w.periods(a.frequency, o.periodsActual),

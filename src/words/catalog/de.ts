@@ -199,6 +199,8 @@ export const de: Catalog = {
   'forecast.accuracy':
     'Backtest: von {origins, plural, one {# früheren Zeitpunkt} other {# früheren Zeitpunkten}} der Daten aus wiederholt, bis zu {horizon, plural, one {# Periode} other {# Perioden}} voraus, erreichte die Prognose einen MASE von {mase} und einen sMAPE von {smape}, {better, select, yes {besser} other {nicht besser}} als die Fortschreibung der Vorjahreswerte (MASE 1){benchmarks, select, none {} other {; einfachere Verfahren: {benchmarks}}}.',
   'forecast.benchmark': '{method} {mase}',
+  'forecast.outturnClosed':
+    'GJ {years} abgeschlossen mit {total}, vollständig Istwerte ({periodsActual}){target, select, none {} other {, gegenüber einem Planwert von {target} ({gap})}}.',
   'forecast.outturn':
     'GJ {years}: {actual} Istwerte über {periodsActual} und {forecast} Prognose für die restlichen {periodsRemaining}, zusammen {total} ({level}-%-Intervall {range}){target, select, none {} other {, gegenüber einem Planwert von {target} ({gap})}}.',
   'label.aboutSeries': 'Zu dieser Reihe',
@@ -244,6 +246,7 @@ export const de: Catalog = {
   'callout.outturnStock': 'Nach aktueller Prognose: {label} zum Ende des Geschäftsjahres {years} bei {total} ({level}-%-Intervall {range})',
   'callout.outturnFlow':
     'Nach aktueller Prognose: {label} im Geschäftsjahr {years} insgesamt {total} ({level}-%-Intervall {range}), aus {actual} Istwerten und {forecast} Prognose',
+  'callout.outturnClosed': '{label} schloss das Geschäftsjahr {years} mit {total} ab',
   'callout.outturnEnd': '{base}.',
   'callout.outturnInLine': '{base}, im Rahmen des Planwerts von {target}.',
   'callout.outturnGap': '{base}, {gap} {above, select, yes {über} other {unter}} dem Planwert von {target}.',
@@ -286,6 +289,8 @@ export const de: Catalog = {
     'Ihre Trend-Konjunktur-Komponente {direction, select, rising {steigt} falling {fällt} other {verläuft seitwärts}}.',
   'para.cycle': 'Zyklusphase: {phase}, Abstand zum langfristigen Trend {gap}',
   'para.turn': 'die Reihe hat für {period} {provisional, select, yes {möglicherweise } other {}}einen {type} durchlaufen',
+  'para.outturnClosed':
+    'Das Geschäftsjahr {years} schloss mit {total}, {where, select, inline {im Rahmen des Planwerts von {target}} above {{gap} über dem Planwert von {target}} other {{gap} unter dem Planwert von {target}}}.',
   'para.outturnTarget':
     'Nach aktueller Prognose schließt das Geschäftsjahr {years} mit {total}, {where, select, inline {im Rahmen des Planwerts von {target}} above {{gap} über dem Planwert von {target}} other {{gap} unter dem Planwert von {target}}}.',
   'para.forecast': 'Die Prognose für {period} lautet {mean} ({level}-%-Intervall {range}).',
@@ -302,6 +307,8 @@ export const de: Catalog = {
   'open.trend':
     'Die Trend-Konjunktur-Komponente steigt in {rising, plural, =0 {keiner Reihe} one {# Reihe} other {# Reihen}}, fällt in {falling, plural, =0 {keiner} other {#}} und verläuft seitwärts in {flat, plural, =0 {keiner} other {#}}.',
   'open.target': 'Nach aktueller Prognose {list}.',
+  'open.targetItemClosed':
+    '{label} schloss das Geschäftsjahr {years} {where, select, inline {im Rahmen des Planwerts} above {{gap} über Plan} other {{gap} unter Plan}} ab',
   'open.targetItem':
     'schließt {label} das Geschäftsjahr {years} {where, select, inline {im Rahmen des Planwerts} above {{gap} über Plan} other {{gap} unter Plan}}',
   'open.surprises':

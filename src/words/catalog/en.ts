@@ -200,6 +200,8 @@ export const en = {
   'forecast.accuracy':
     'Back-test: re-run from {origins, plural, one {# earlier point} other {# earlier points}} in the data, up to {horizon, plural, one {# period} other {# periods}} ahead, the forecast scored MASE {mase} and sMAPE {smape}, {better, select, yes {better} other {no better}} than repeating last year’s figures (MASE 1){benchmarks, select, none {} other {; simpler methods: {benchmarks}}}.',
   'forecast.benchmark': '{method} {mase}',
+  'forecast.outturnClosed':
+    'FY{years} closed at {total}, all of it actual ({periodsActual}){target, select, none {} other {, against a target of {target} ({gap})}}.',
   'forecast.outturn':
     'FY{years}: {actual} actual over {periodsActual} plus {forecast} forecast for the remaining {periodsRemaining}, a total of {total} ({level}% range {range}){target, select, none {} other {, against a target of {target} ({gap})}}.',
   'label.aboutSeries': 'About this series',
@@ -243,6 +245,7 @@ export const en = {
   'callout.outturnStock': 'On current forecasts, {label} will end FY{years} at {total} ({level}% range {range})',
   'callout.outturnFlow':
     'On current forecasts, {label} will total {total} in FY{years} ({level}% range {range}), from {actual} of actuals and {forecast} of forecast',
+  'callout.outturnClosed': '{label} closed FY{years} at {total}',
   'callout.outturnEnd': '{base}.',
   'callout.outturnInLine': '{base}: in line with the target of {target}.',
   'callout.outturnGap': '{base}: {gap} {above, select, yes {above} other {below}} the target of {target}.',
@@ -284,6 +287,8 @@ export const en = {
   'para.trendOnly': 'Its trend-cycle is {direction, select, rising {rising} falling {falling} other {flat}}.',
   'para.cycle': 'Its cycle is {phase}, {gap} from the long-run trend',
   'para.turn': '{provisional, select, yes {it may have passed a {type} in {period}} other {it passed a {type} in {period}}}',
+  'para.outturnClosed':
+    'The fiscal year {years} closed at {total}, {where, select, inline {in line with the target of {target}} above {{gap} above the target of {target}} other {{gap} below the target of {target}}}.',
   'para.outturnTarget':
     'On current forecasts the fiscal year {years} will close at {total}, {where, select, inline {in line with the target of {target}} above {{gap} above the target of {target}} other {{gap} below the target of {target}}}.',
   'para.forecast': 'The forecast for {period} is {mean} ({level}% range {range}).',
@@ -301,6 +306,8 @@ export const en = {
   'open.trend':
     'The trend-cycle is rising in {rising, plural, one {# series} other {# series}}, falling in {falling, plural, =0 {none} one {#} other {#}} and flat in {flat, plural, =0 {none} one {#} other {#}}.',
   'open.target': 'On current forecasts, {list}.',
+  'open.targetItemClosed':
+    '{label} closed FY{years} {where, select, inline {in line with its target} above {{gap} above target} other {{gap} below target}}',
   'open.targetItem':
     '{label} will close FY{years} {where, select, inline {in line with its target} above {{gap} above target} other {{gap} below target}}',
   'open.surprises': '{n, plural, one {One figure calls for attention: {list}.} other {# figures call for attention, above all {list}.}}',

@@ -200,6 +200,8 @@ export const fr: Catalog = {
   'forecast.accuracy':
     'Rétro-test : refaite depuis {origins, plural, one {# point antérieur} other {# points antérieurs}} des données, jusqu’à {horizon, plural, one {# période} other {# périodes}} en avant, la prévision obtient un MASE de {mase} et un sMAPE de {smape}, {better, select, yes {mieux} other {pas mieux}} que la reconduction des chiffres de l’année précédente (MASE 1){benchmarks, select, none {} other { ; méthodes plus simples : {benchmarks}}}.',
   'forecast.benchmark': '{method} {mase}',
+  'forecast.outturnClosed':
+    'Exercice {years} clôturé à {total}, entièrement en réalisé ({periodsActual}){target, select, none {} other {, pour un objectif de {target} ({gap})}}.',
   'forecast.outturn':
     'Exercice {years} : {actual} de réalisé sur {periodsActual} et {forecast} de prévision pour les {periodsRemaining} restants, soit {total} au total (intervalle à {level} % : {range}){target, select, none {} other {, pour un objectif de {target} ({gap})}}.',
   'label.aboutSeries': 'À propos de cette série',
@@ -245,6 +247,7 @@ export const fr: Catalog = {
   'callout.outturnStock': 'Selon les prévisions actuelles, {label} à la fin de l’exercice {years} : {total} (intervalle à {level} % : {range})',
   'callout.outturnFlow':
     'Selon les prévisions actuelles, {label} sur l’exercice {years} : {total} au total (intervalle à {level} % : {range}), dont {actual} de réalisé et {forecast} de prévision',
+  'callout.outturnClosed': '{label} a clôturé l’exercice {years} à {total}',
   'callout.outturnEnd': '{base}.',
   'callout.outturnInLine': '{base}, conforme à l’objectif de {target}.',
   'callout.outturnGap': '{base}, {gap} {above, select, yes {au-dessus} other {au-dessous}} de l’objectif de {target}.',
@@ -285,6 +288,8 @@ export const fr: Catalog = {
   'para.trendOnly': 'Sa tendance-cycle est {direction, select, rising {en hausse} falling {en baisse} other {stable}}.',
   'para.cycle': 'Son cycle est {phase}, à {gap} de la tendance de long terme',
   'para.turn': '{provisional, select, yes {il a peut-être passé un {type} pour {period}} other {il a passé un {type} pour {period}}}',
+  'para.outturnClosed':
+    'L’exercice {years} s’est clôturé à {total}, {where, select, inline {conforme à l’objectif de {target}} above {{gap} au-dessus de l’objectif de {target}} other {{gap} au-dessous de l’objectif de {target}}}.',
   'para.outturnTarget':
     'Selon les prévisions actuelles, l’exercice {years} se clôturera à {total}, {where, select, inline {conforme à l’objectif de {target}} above {{gap} au-dessus de l’objectif de {target}} other {{gap} au-dessous de l’objectif de {target}}}.',
   'para.forecast': 'La prévision pour {period} est de {mean} (intervalle à {level} % : {range}).',
@@ -301,6 +306,8 @@ export const fr: Catalog = {
   'open.trend':
     'La tendance-cycle est en hausse pour {rising, plural, =0 {aucune série} one {# série} other {# séries}}, en baisse pour {falling, plural, =0 {aucune} other {#}} et stable pour {flat, plural, =0 {aucune} other {#}}.',
   'open.target': 'Selon les prévisions actuelles, {list}.',
+  'open.targetItemClosed':
+    '{label} a clôturé l’exercice {years} {where, select, inline {conforme à son objectif} above {{gap} au-dessus de l’objectif} other {{gap} au-dessous de l’objectif}}',
   'open.targetItem':
     '{label} clôturera l’exercice {years} {where, select, inline {conforme à son objectif} above {{gap} au-dessus de l’objectif} other {{gap} au-dessous de l’objectif}}',
   'open.surprises':

@@ -77,6 +77,15 @@ describe('outturn rule', () => {
     expect(d.text).toBe('On current forecasts, Inventory will end FY2026/27 at 3,732 EUR k (80% range 3,600 to 3,850 EUR k).');
   });
 
+  it('a fiscal year that closes with the review period: its closing figure against the target, in each language', () => {
+    const closed = outturn({actualToDate: 24100, periodsActual: 12, forecastRemaining: 0, periodsRemaining: 0, lower: 24100, upper: 24100});
+    const text = (locale: string) =>
+      runRule(outturnRule, makeAnalysis(history, {outturn: closed}), {plan: {locale}})[0].text;
+    expect(text('en-GB')).toBe('Net sales closed FY2026/27 at 24,100 EUR k: 2.3% below the target of 24,670 EUR k.');
+    expect(text('de-DE')).toBe('Net sales schloss das Geschäftsjahr 2026/27 mit 24.100 EUR k ab, 2,3\u00a0% unter dem Planwert von 24.670 EUR k.');
+    expect(text('fr-FR')).toBe('Net sales a clôturé l’exercice 2026/27 à 24\u202f100 EUR k, 2,3\u00a0% au-dessous de l’objectif de 24\u202f670 EUR k.');
+  });
+
   it('names the fiscal year in German and French words', () => {
     const text = (locale: string, kind: 'flow' | 'stock') =>
       runRule(outturnRule, makeAnalysis(history, {outturn: outturn()}), {plan: {locale}, series: {label: 'Umsatz', kind}})[0].text;
