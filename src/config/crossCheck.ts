@@ -68,16 +68,20 @@ export async function crossCheck(
       else sourceIndex.set(id, i);
       layouts.set(id, s.layout);
     }
-    if (s.layout === 'long') {
-      for (const key of ['keyColumn', 'valueColumn']) {
-        if (s[key] === undefined || s[key] === null)
-          add(['sources', i, 'layout'], `sources[${i}] has layout long, which needs ${key}`);
+    const needs = s.layout === 'long' ? ['keyColumn', 'valueColumn'] : s.layout === 'across' ? ['keyColumn'] : [];
+    for (const key of needs) {
+      if (s[key] === undefined || s[key] === null)
+        add(['sources', i, 'layout'], `sources[${i}] has layout ${String(s.layout)}, which needs ${key}`);
+    }
+    for (const key of ['keyColumn', 'valueColumn'].filter((k) => !needs.includes(k))) {
+      if (s[key] !== undefined && s[key] !== null) {
+        const where = key === 'keyColumn' ? 'layout long or across' : 'layout long';
+        add(['sources', i, key], `sources[${i}].${key} only applies to ${where}`);
       }
-    } else {
-      for (const key of ['keyColumn', 'valueColumn']) {
-        if (s[key] !== undefined && s[key] !== null)
-          add(['sources', i, key], `sources[${i}].${key} only applies to layout long`);
-      }
+    }
+    if (s.layout === 'across' && s.dateColumn !== undefined && s.dateColumn !== null) {
+      const message = `sources[${i}].dateColumn does not apply to layout across: its periods are the header's cells`;
+      add(['sources', i, 'dateColumn'], message);
     }
     for (const [at, message] of sourceKindProblems(s, i)) add(['sources', i, at], message);
     const file = text(s.file);
@@ -99,8 +103,11 @@ export async function crossCheck(
       if (src === undefined) return;
       if (!sourceIndex.has(src))
         add(['series', i, 'fromSource'], `series[${i}].fromSource names no source: ${src}${hint(src, sourceIds)}`);
-      else if (layouts.get(src) !== 'long')
-        add(['series', i, 'fromSource'], `series[${i}].fromSource needs a source with layout long; ${src} is wide`);
+      else if (layouts.get(src) !== 'long' && layouts.get(src) !== 'across')
+        add(
+          ['series', i, 'fromSource'],
+          `series[${i}].fromSource needs a source with layout long or across; ${src} is wide`,
+        );
       return;
     }
     const id = text(s.id);

@@ -82,7 +82,7 @@ export interface SourcePlan {
   id: string;
   /** Absolute path of the CSV or XLSX file; for a query source, the pack file (problems point at its line). */
   file: string;
-  layout: 'wide' | 'long';
+  layout: 'wide' | 'long' | 'across';
   dateColumn: string;
   /** Long layout: the column naming the series. */
   keyColumn: string | null;

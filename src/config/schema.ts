@@ -320,13 +320,18 @@ const sourceEntry = z.strictObject({
     ),
   ),
   layout: z
-    .enum(['wide', 'long'])
+    .enum(['wide', 'long', 'across'])
     .nullish()
-    .meta(doc('wide: one column per series; long: key and value columns.', d.source.layout)),
+    .meta(
+      doc(
+        'wide: one column per series; long: key and value columns; across: one row per series, named in keyColumn, with the periods across the header (a budget sheet).',
+        d.source.layout,
+      ),
+    ),
   dateColumn: optionalText.meta(
     doc('Column holding the period (2026-10, 2026-10-01, Oct 2026, 2026-Q3, 2026-W41).', d.source.dateColumn),
   ),
-  keyColumn: optionalText.meta(doc('The column naming the series. Required when layout is long.')),
+  keyColumn: optionalText.meta(doc('The column naming the series. Required when layout is long or across.')),
   valueColumn: optionalText.meta(doc('The column holding the values. Required when layout is long.')),
   delimiter: z
     .enum(['auto', ',', ';', '\t'])

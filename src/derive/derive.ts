@@ -186,7 +186,7 @@ function duplicates(s: SeriesPlan, data: SourceData, store: PeriodStore, plan: P
     reported.add(key);
     const label = formatPeriod(plan.frequency, p);
     const message =
-      cells.source.layout === 'long'
+      cells.source.layout !== 'wide'
         ? msg.duplicateKeyAtPack(s.column, label, line, secondLine, place)
         : msg.duplicateAtPack(label, line, secondLine, place);
     cells.report(secondLine, cells.dateColumn + 1, message);

@@ -1,7 +1,7 @@
 import type {SourcePlan} from '../config/plan.js';
 import {didYouMean} from '../config/suggest.js';
 import {monthNames} from '../time/monthNames.js';
-import type {Frequency} from '../time/period.js';
+import {periodStartDay, type Frequency} from '../time/period.js';
 import {dayMonthOrder, labelFrequency, readDateCell, type DateReading} from '../time/parseDate.js';
 import {stampOf, type Grain, type Stamp} from '../time/stamp.js';
 import * as msg from './messages.js';
@@ -20,6 +20,9 @@ interface HeldDayMonth {
   formats: string[];
   decided?: {line: number; text: string; format: string};
 }
+
+/** The grain of a whole pack period. */
+const PERIOD_GRAIN: Record<Frequency, Grain> = {monthly: 'month', quarterly: 'quarter', weekly: 'week'};
 
 /** Most distinct date texts remembered per file: long files repeat each date once per key. */
 const DATE_CACHE = 4096;
@@ -157,6 +160,35 @@ export class CellReader {
     }
     this.badDate(text, line);
     return undefined;
+  }
+
+  /**
+   * The stamp of a header cell that names a period (layout across), recorded as a date cell's is; undefined when the
+   * cell names none (a label column such as `Unit` or `Total`). A day that starts or ends a pack period (a workbook's
+   * `2026-01-01` or `2026-01-31` over a month's column) names that period. A coarser period than the pack's (a
+   * quarter's column in a monthly pack) is a problem.
+   */
+  headerStamp(text: string, line: number, column: number): Stamp | undefined {
+    const cell = readDateCell(text, this.reading);
+    let stamp = cell === undefined ? undefined : stampOf(cell, this.frequency, this.source.timeZone);
+    if (stamp === undefined) {
+      const found = labelFrequency(text.trim(), this.reading);
+      if (found !== undefined && found !== this.frequency && !this.mixedReported) {
+        this.report(line, column, msg.mixedFrequencyHeader(text.trim(), found, this.frequency));
+        this.mixedReported = true;
+      }
+      return undefined;
+    }
+    if (stamp.grain === 'day') {
+      const from = periodStartDay(this.frequency, stamp.period);
+      const to = periodStartDay(this.frequency, stamp.period + 1) - 1;
+      if (stamp.from === from || stamp.from === to) {
+        stamp = {period: stamp.period, at: from * 86_400_000, from, to, grain: PERIOD_GRAIN[this.frequency]};
+      }
+    }
+    if (!this.grains.has(stamp.grain)) this.grains.set(stamp.grain, {line, text: text.trim()});
+    this.cover(stamp);
+    return stamp;
   }
 
   /**

@@ -65,6 +65,12 @@ export const blankDate = (column: string): string => `the date in column "${colu
 export const mixedFrequency = (text: string, column: string, found: Frequency, pack: Frequency): string =>
   `column "${column}" holds ${found} periods ("${text}") but the pack is ${pack}; a pack has one frequency, ` +
   `so read this file from a ${found} pack, or give full dates or ${pack} periods such as ${EXAMPLE[pack]}`;
+export const mixedFrequencyHeader = (text: string, found: Frequency, pack: Frequency): string =>
+  `the header holds ${found} periods ("${text}") but the pack is ${pack}; a pack has one frequency, so read this ` +
+  `file from a ${found} pack, or head the columns with ${pack} periods such as ${EXAMPLE[pack]}`;
+export const noPeriodColumns = (header: string[]): string =>
+  `no column of the header names a period (it holds ${header.map((h) => `"${h}"`).join(', ')}); with layout ` +
+  `across, head each column of values with its period, such as 2026-10, Oct 2026 or a date cell`;
 export const missingColumnDelimiter = (what: string, name: string, declared: string, found: string): string =>
   `${what} "${name}" is not in the header: split at ${shown(declared)} the header is one column, but it splits at ` +
   `${shown(found)}; set \`delimiter: "${found === '\t' ? '\\t' : found}"\` (or \`auto\`) on the source`;

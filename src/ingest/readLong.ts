@@ -114,18 +114,32 @@ export function longVisitor(cells: CellReader, wanted: Wanted, data: SourceData)
         data.stores.clear();
         for (const [key, store] of sorted) data.stores.set(key, store);
       }
-      const keys = [...data.stores.keys(), ...skipped];
-      for (const [key, ids] of wanted.names) {
-        if (data.stores.has(key)) continue;
-        const message = msg.missingKey(keyLabel, key, ids.join(', '), didYouMean(key, keys));
-        // The key is written in the pack, so the problem points at the series entry that names it.
-        const line = wanted.pack?.lines.get(key);
-        if (wanted.pack !== undefined && line !== undefined)
-          cells.problems.add(wanted.pack.file, line, null, `${basename(cells.source.file)}: ${message}`);
-        else cells.report(null, null, message);
-      }
+      missingKeys(cells, wanted, data, skipped, keyLabel);
     },
   };
+}
+
+/**
+ * Report the keys the pack names but the source lacks (read and `skipped` keys are suggested), at the pack line of
+ * the series that names the key when `wanted.pack` gives it, else at the source.
+ */
+export function missingKeys(
+  cells: CellReader,
+  wanted: Wanted,
+  data: SourceData,
+  skipped: Set<string>,
+  keyLabel: string,
+): void {
+  const keys = [...data.stores.keys(), ...skipped];
+  for (const [key, ids] of wanted.names) {
+    if (data.stores.has(key)) continue;
+    const message = msg.missingKey(keyLabel, key, ids.join(', '), didYouMean(key, keys));
+    // The key is written in the pack, so the problem points at the series entry that names it.
+    const line = wanted.pack?.lines.get(key);
+    if (wanted.pack !== undefined && line !== undefined)
+      cells.problems.add(wanted.pack.file, line, null, `${basename(cells.source.file)}: ${message}`);
+    else cells.report(null, null, message);
+  }
 }
 
 /** The long visitor: rows one by one, or a key's store for a summary made by the engine (`keep`, undefined when the

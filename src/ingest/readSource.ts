@@ -3,6 +3,7 @@ import type {Frequency} from '../time/period.js';
 import {CellReader} from './cells.js';
 import * as msg from './messages.js';
 import type {ProblemLog} from './problemLog.js';
+import {acrossVisitor} from './readAcross.js';
 import {readCsv} from './readCsv.js';
 import {longVisitor, type LongVisitor} from './readLong.js';
 import {wideVisitor} from './readWide.js';
@@ -26,12 +27,13 @@ export async function readSource(
   const cells = new CellReader(source, frequency, problems, locale);
   const data: SourceData = {input: undefined, stores: new Map(), headerLine: 1, columnNumbers: new Map(), notes: [], cells};
   const long = source.layout === 'long' ? longVisitor(cells, wanted, data) : undefined;
-  const visitor = long ?? wideVisitor(cells, wanted, data);
+  const across = source.layout === 'across' ? acrossVisitor(cells, wanted, data) : undefined;
+  const visitor = long ?? across ?? wideVisitor(cells, wanted, data);
   data.input = await rowsOf(cells, visitor, problems, long && {visitor: long, wanted});
   // Reported even when the read failed later on, so a date problem found first is not lost.
   cells.settleDates();
   if (data.input !== undefined) {
-    if (long !== undefined && data.input.rows > 0) long.finish();
+    if (data.input.rows > 0) (long ?? across)?.finish();
     data.notes.push(...cells.finish());
     if (data.input.rows === 0) cells.report(source.reader === 'csv' ? data.headerLine : null, null, msg.noRows());
   }

@@ -172,10 +172,19 @@ describe('cross-checks', () => {
     ]);
   });
 
+  test('an across source needs its key column, and takes neither a value nor a date column', async () => {
+    const across = head.replace('layout: long', 'layout: across');
+    expect(await problems(`${across}${okSeries}`)).toEqual(['9:5: sources[1] has layout across, which needs keyColumn']);
+    expect(await problems(`${across}${longKeys}\n    dateColumn: month${okSeries}`)).toEqual([
+      '11:5: sources[1].valueColumn only applies to layout long',
+      '12:5: sources[1].dateColumn does not apply to layout across: its periods are the header\'s cells',
+    ]);
+  });
+
   test('key and value columns on a wide source', async () => {
     const yaml = `${head}${longKeys}${okSeries}`.replace('data/trading.csv', 'data/trading.csv\n    keyColumn: k');
     expect(await problems(yaml)).toEqual([
-      '7:5: sources[0].keyColumn only applies to layout long',
+      '7:5: sources[0].keyColumn only applies to layout long or across',
     ]);
   });
 
@@ -213,7 +222,7 @@ groups:
     title: G
     series: [web-visits]`;
     expect(await problems(yaml)).toEqual([
-      '13:5: series[0].fromSource needs a source with layout long; trading is wide',
+      '13:5: series[0].fromSource needs a source with layout long or across; trading is wide',
       '14:5: series[1].fromSource names no source: webb; did you mean web?',
     ]);
   });

@@ -1,0 +1,75 @@
+import type {CellReader} from './cells.js';
+import * as msg from './messages.js';
+import {PeriodStore} from './periodStore.js';
+import {missingKeys, type LongVisitor} from './readLong.js';
+import {blankRow} from './rowVisitor.js';
+import type {Stamp} from '../time/stamp.js';
+import type {SourceData, Wanted} from './sourceData.js';
+
+/**
+ * Visitor for an across source (a budget or plan sheet): one row per series, named in the key column, and one
+ * column per period, headed by it (`Oct 2026`, `2026-10`, a workbook's date cell). Header cells that name no period
+ * (`Unit`, `FY total`, a notes column) are columns the source does not read. Each value goes into its row's store at
+ * its column's period, so such a source reads like the long source of the same figures; only the rows the pack asks
+ * for are kept (all of them for `fromSource`), and `finish` reports rows the pack names but the sheet lacks.
+ *
+ * Complexity: O(rows × columns). NaN policy: blank and missing cells are missing values, as in any source.
+ */
+export function acrossVisitor(cells: CellReader, wanted: Wanted, data: SourceData): LongVisitor {
+  const keyLabel = cells.source.keyColumn ?? '';
+  let keyAt = -1;
+  let names: string[] = [];
+  const periods: {at: number; stamp: Stamp}[] = [];
+  const skipped = new Set<string>();
+  const keep = (key: string): PeriodStore | undefined => {
+    const known = data.stores.get(key);
+    if (known !== undefined) return known;
+    if (!wanted.all && !wanted.names.has(key)) {
+      skipped.add(key);
+      return undefined;
+    }
+    const store = new PeriodStore();
+    data.stores.set(key, store);
+    return store;
+  };
+  return {
+    keep,
+    header(header, line) {
+      data.headerLine = line;
+      names = header;
+      keyAt = cells.column(header, line, 'key column', keyLabel);
+      if (keyAt < 0) return false;
+      // The key column stands in for the date column in problems about a row.
+      cells.dateColumn = keyAt;
+      header.forEach((text, at) => {
+        if (at === keyAt || text.trim() === '') return;
+        const stamp = cells.headerStamp(text, line, at + 1);
+        if (stamp !== undefined) periods.push({at, stamp});
+      });
+      if (periods.length === 0) cells.report(line, null, msg.noPeriodColumns(header));
+      return periods.length > 0;
+    },
+    record(fields, line) {
+      if (blankRow(fields)) return;
+      const key = (fields[keyAt] ?? '').trim();
+      if (key === '') {
+        // A row without a name holds no series (a spacer or a heading over a block of rows) unless it has values.
+        if (periods.some(({at}) => (fields[at] ?? '').trim() !== '')) {
+          const repeat = {key: 'blank key', where: `column "${keyLabel}"`};
+          if (!cells.reportUnusable(line, keyAt)) cells.report(line, keyAt + 1, msg.blankKey(keyLabel), repeat);
+        }
+        return;
+      }
+      const store = keep(key);
+      if (store === undefined) return;
+      for (const {at, stamp} of periods) {
+        const value = cells.value(fields[at] ?? '', line, at, names[at]);
+        if (value === undefined) store.rejected++;
+        else store.add(stamp, value, line);
+      }
+    },
+    finish() {
+      missingKeys(cells, wanted, data, skipped, keyLabel);
+    },
+  };
+}

@@ -1,0 +1,113 @@
+import {mkdtempSync, rmSync, writeFileSync} from 'node:fs';
+import {tmpdir} from 'node:os';
+import {join} from 'node:path';
+import ExcelJS from 'exceljs';
+import {afterAll, describe, expect, it} from 'vitest';
+import type {Plan} from '../../src/config/plan.js';
+import {InputError, type Problem} from '../../src/errors.js';
+import {monthIndex} from '../../src/time/period.js';
+import {fromSource, plan, readPack, series, source} from './plan.js';
+
+/**
+ * Layout across: a budget sheet, one row per series and the periods across the header. The same figures written as
+ * a long CSV (the layout the other tests check against R and openpyxl) must read into the same series.
+ */
+const temp = mkdtempSync(join(tmpdir(), 'ebbflow-across-'));
+afterAll(() => rmSync(temp, {recursive: true, force: true}));
+const write = (name: string, text: string): string => {
+  const file = join(temp, name);
+  writeFileSync(file, text);
+  return file;
+};
+async function problemsOf(p: Plan): Promise<Problem[]> {
+  const error = await readPack(p).then(
+    () => undefined,
+    (e: unknown) => e,
+  );
+  expect(error).toBeInstanceOf(InputError);
+  return (error as InputError).problems;
+}
+const values = (d: Awaited<ReturnType<typeof readPack>>) => d.series.map((s) => [s.id, s.start, [...s.values]]);
+
+const MONTHS = ['Jan 2026', 'Feb 2026', 'Mar 2026', 'Apr 2026'];
+const ROWS: [string, number[]][] = [
+  ['Net sales', [1000.5, 1100, 1250.25, 1300]],
+  ['Payroll', [400, 410, 0, 430]],
+];
+
+describe('layout across', () => {
+  it('reads a budget sheet as its long twin: title lines, a unit and a total column, a spacer row', async () => {
+    const lines = [
+      'Budget 2026',
+      '',
+      `Line item,Unit,${MONTHS.join(',')},Total`,
+      ...ROWS.map(([k, v]) => `${k},EUR k,${v.join(',')},${v.reduce((a, b) => a + b, 0)}`),
+      `,,${MONTHS.map(() => '').join(',')},`,
+    ];
+    const across = write('budget.csv', `${lines.join('\n')}\n`);
+    const longText = ROWS.flatMap(([k, v]) => v.map((x, i) => `2026-${String(i + 1).padStart(2, '0')},${k},${x}`));
+    const long = write('budget-long.csv', `month,item,amount\n${longText.join('\n')}\n`);
+    const fromAcross = await readPack(
+      plan('monthly', [source('b', across, {layout: 'across', keyColumn: 'Line item', headerRow: 3})], [], {
+        fromSource: [fromSource('b', 0)],
+      }),
+    );
+    const fromLong = await readPack(
+      plan('monthly', [source('b', long, {layout: 'long', keyColumn: 'item', valueColumn: 'amount'})], [], {
+        fromSource: [fromSource('b', 0)],
+      }),
+    );
+    expect(values(fromAcross)).toEqual(values(fromLong));
+    expect(fromAcross.plans.map((p) => [p.id, p.label])).toEqual([
+      ['net-sales', 'Net sales'],
+      ['payroll', 'Payroll'],
+    ]);
+    expect(fromAcross.series[0].start).toBe(monthIndex(2026, 1));
+  });
+
+  it('a row the pack names and the sheet lacks is a problem with the nearest name; a bad cell points at its column', async () => {
+    const text = `item,${MONTHS.join(',')}\nNet sales,1,2,3,4\nPayroll,5,6,7x,8\n`;
+    const file = write('names.csv', text);
+    const src = source('b', file, {layout: 'across', keyColumn: 'item'});
+    const problems = await problemsOf(
+      plan('monthly', [src], [series('sales', 'b', {column: 'Net Sales'}), series('payroll', 'b', {column: 'Payroll'})]),
+    );
+    expect(problems.map((p) => [p.line, p.column, p.message])).toEqual([
+      [3, 4, '"7x" in column "Mar 2026" is not a number: write a number such as 1234.5, or leave the cell blank or NA when the value is missing'],
+      [expect.any(Number), null, expect.stringMatching(/"Net Sales".*did you mean "Net sales"/)],
+    ]);
+  });
+
+  it('a header without periods, and a quarter over a monthly pack, are problems that say what to write', async () => {
+    const none = write('none.csv', 'item,Unit,Total\nNet sales,EUR,10\n');
+    const p1 = await problemsOf(plan('monthly', [source('b', none, {layout: 'across', keyColumn: 'item'})], [series('s', 'b', {column: 'Net sales'})]));
+    expect(p1[0].message).toBe(
+      'no column of the header names a period (it holds "item", "Unit", "Total"); with layout across, head each column of values with its period, such as 2026-10, Oct 2026 or a date cell',
+    );
+    const quarters = write('quarters.csv', 'item,2026-Q1,2026-Q2\nNet sales,10,11\n');
+    const p2 = await problemsOf(plan('monthly', [source('b', quarters, {layout: 'across', keyColumn: 'item'})], [series('s', 'b', {column: 'Net sales'})]));
+    expect(p2[0]).toMatchObject({line: 1, column: 2});
+    expect(p2[0].message).toMatch(/^the header holds quarterly periods \("2026-Q1"\) but the pack is monthly/);
+  });
+
+  it('a workbook headed by date cells (first or last day of each month) names whole months', async () => {
+    const wb = new ExcelJS.Workbook();
+    const ws = wb.addWorksheet('Plan 2026');
+    const firsts = [0, 1, 2].map((m) => new Date(Date.UTC(2026, m, 1)));
+    const lasts = [0, 1, 2].map((m) => new Date(Date.UTC(2026, m + 1, 0)));
+    ws.addRow(['Account', ...firsts, 'FY total']);
+    ws.addRow(['Revenue', 10, 11, 12, 33]);
+    const first = join(temp, 'firsts.xlsx');
+    await wb.xlsx.writeFile(first);
+    ws.getRow(1).values = ['Account', ...lasts, 'FY total'];
+    const last = join(temp, 'lasts.xlsx');
+    await wb.xlsx.writeFile(last);
+    for (const file of [first, last]) {
+      const d = await readPack(
+        plan('monthly', [source('p', file, {layout: 'across', keyColumn: 'Account', sheet: 'Plan 2026'})], [series('revenue', 'p', {column: 'Revenue'})]),
+      );
+      // Whole months, none left out as incomplete.
+      expect(values(d)).toEqual([['revenue', monthIndex(2026, 1), [10, 11, 12]]]);
+    }
+  });
+});
