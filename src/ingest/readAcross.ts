@@ -1,7 +1,6 @@
 import type {CellReader} from './cells.js';
 import * as msg from './messages.js';
-import {PeriodStore} from './periodStore.js';
-import {missingKeys, type LongVisitor} from './readLong.js';
+import {keyStores, missingKeys, type LongVisitor} from './readLong.js';
 import {blankRow} from './rowVisitor.js';
 import type {Stamp} from '../time/stamp.js';
 import type {SourceData, Wanted} from './sourceData.js';
@@ -21,17 +20,7 @@ export function acrossVisitor(cells: CellReader, wanted: Wanted, data: SourceDat
   let names: string[] = [];
   const periods: {at: number; stamp: Stamp}[] = [];
   const skipped = new Set<string>();
-  const keep = (key: string): PeriodStore | undefined => {
-    const known = data.stores.get(key);
-    if (known !== undefined) return known;
-    if (!wanted.all && !wanted.names.has(key)) {
-      skipped.add(key);
-      return undefined;
-    }
-    const store = new PeriodStore();
-    data.stores.set(key, store);
-    return store;
-  };
+  const keep = keyStores(wanted, data, skipped);
   return {
     keep,
     header(header, line) {

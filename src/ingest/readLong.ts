@@ -27,17 +27,7 @@ export function longVisitor(cells: CellReader, wanted: Wanted, data: SourceData)
   let outOfOrder = 0;
   const skipped = new Set<string>();
   const query = cells.source.query !== null;
-  const keep = (key: string): PeriodStore | undefined => {
-    let store = data.stores.get(key);
-    if (store !== undefined) return store;
-    if (!wanted.all && !wanted.names.has(key)) {
-      skipped.add(key);
-      return undefined;
-    }
-    store = new PeriodStore();
-    data.stores.set(key, store);
-    return store;
-  };
+  const keep = keyStores(wanted, data, skipped);
   /**
    * A clean row read in place (no arrays, no cut fields but the key): a key already seen, the date of the row before,
    * a plain decimal value. Anything else is left to `record`, which reads it the same way or reports its problem.
@@ -116,6 +106,28 @@ export function longVisitor(cells: CellReader, wanted: Wanted, data: SourceData)
       }
       missingKeys(cells, wanted, data, skipped, keyLabel);
     },
+  };
+}
+
+/**
+ * The store of a key, made on first sight when the pack wants the key (every key for `fromSource`); undefined, and
+ * the key remembered in `skipped` (for suggestions), when it does not.
+ */
+export function keyStores(
+  wanted: Wanted,
+  data: SourceData,
+  skipped: Set<string>,
+): (key: string) => PeriodStore | undefined {
+  return (key) => {
+    let store = data.stores.get(key);
+    if (store !== undefined) return store;
+    if (!wanted.all && !wanted.names.has(key)) {
+      skipped.add(key);
+      return undefined;
+    }
+    store = new PeriodStore();
+    data.stores.set(key, store);
+    return store;
   };
 }
 

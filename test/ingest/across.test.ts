@@ -3,10 +3,8 @@ import {tmpdir} from 'node:os';
 import {join} from 'node:path';
 import ExcelJS from 'exceljs';
 import {afterAll, describe, expect, it} from 'vitest';
-import type {Plan} from '../../src/config/plan.js';
-import {InputError, type Problem} from '../../src/errors.js';
 import {monthIndex} from '../../src/time/period.js';
-import {fromSource, plan, readPack, series, source} from './plan.js';
+import {fromSource, plan, problemsOf, readPack, series, source} from './plan.js';
 
 /**
  * Layout across: a budget sheet, one row per series and the periods across the header. The same figures written as
@@ -19,14 +17,6 @@ const write = (name: string, text: string): string => {
   writeFileSync(file, text);
   return file;
 };
-async function problemsOf(p: Plan): Promise<Problem[]> {
-  const error = await readPack(p).then(
-    () => undefined,
-    (e: unknown) => e,
-  );
-  expect(error).toBeInstanceOf(InputError);
-  return (error as InputError).problems;
-}
 const values = (d: Awaited<ReturnType<typeof readPack>>) => d.series.map((s) => [s.id, s.start, [...s.values]]);
 
 const MONTHS = ['Jan 2026', 'Feb 2026', 'Mar 2026', 'Apr 2026'];

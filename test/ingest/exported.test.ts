@@ -2,10 +2,8 @@ import {mkdtempSync, rmSync, writeFileSync} from 'node:fs';
 import {tmpdir} from 'node:os';
 import {join} from 'node:path';
 import {afterAll, describe, expect, it} from 'vitest';
-import type {Plan} from '../../src/config/plan.js';
-import {InputError, type Problem} from '../../src/errors.js';
 import {monthIndex} from '../../src/time/period.js';
-import {fromSource, plan, readPack, series, source} from './plan.js';
+import {fromSource, plan, problemsOf, readPack, series, source} from './plan.js';
 import {worded} from '../fixtures/notes.js';
 
 const temp = mkdtempSync(join(tmpdir(), 'ebbflow-exported-'));
@@ -15,14 +13,6 @@ const write = (name: string, text: string): string => {
   writeFileSync(file, text);
   return file;
 };
-async function problemsOf(p: Plan): Promise<Problem[]> {
-  const error = await readPack(p).then(
-    () => undefined,
-    (e: unknown) => e,
-  );
-  expect(error).toBeInstanceOf(InputError);
-  return (error as InputError).problems;
-}
 /** Daily rows `date,amount` from a start day for n days, amount = day number + 1. */
 function daily(from: string, n: number, format = (iso: string) => iso): string {
   const start = Date.parse(`${from}T00:00:00Z`);

@@ -2,23 +2,12 @@ import {mkdtempSync, rmSync, writeFileSync} from 'node:fs';
 import {tmpdir} from 'node:os';
 import {join} from 'node:path';
 import {afterAll, describe, expect, it} from 'vitest';
-import {InputError} from '../../src/errors.js';
-import type {Problem} from '../../src/errors.js';
 
 import type {Dataset} from '../../src/ingest/index.js';
-import type {Plan} from '../../src/config/plan.js';
 import {isoWeekIndex, monthIndex, quarterIndex} from '../../src/time/period.js';
-import {FIXTURES, fromSource, plan, readPack, series, source} from './plan.js';
+import {FIXTURES, fromSource, plan, problemsOf, readPack, series, source} from './plan.js';
 import {placed, worded} from '../fixtures/notes.js';
 
-async function problemsOf(p: Plan): Promise<Problem[]> {
-  const error = await readPack(p).then(
-    () => undefined,
-    (e: unknown) => e,
-  );
-  expect(error).toBeInstanceOf(InputError);
-  return (error as InputError).problems;
-}
 
 const values = (d: Dataset, id: string): number[] => [...d.series.find((s) => s.id === id)!.values];
 const notes = (d: Dataset, id: string): string[] => d.notes.filter((n) => n.series === id).map(worded);

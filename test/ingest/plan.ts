@@ -1,9 +1,11 @@
 import {dirname, join} from 'node:path';
+import {expect} from 'vitest';
 import {fileURLToPath} from 'node:url';
 import type {AnalysisOptions, FromSourcePlan, Plan, SeriesPlan, SourcePlan} from '../../src/config/plan.js';
 import type {Frequency} from '../../src/time/period.js';
 import {derive} from '../../src/derive/index.js';
 import {ingest, type Dataset} from '../../src/ingest/index.js';
+import {InputError, type Problem} from '../../src/errors.js';
 import {analysisOptions, planFixture, seriesPlanFixture} from '../fixtures/plans.js';
 
 export const FIXTURES = join(dirname(fileURLToPath(import.meta.url)), '..', 'fixtures', 'ingest');
@@ -53,4 +55,14 @@ export function plan(frequency: Frequency, sources: SourcePlan[], list: SeriesPl
 /** Ingest and derive, as a build runs them: the plan's sources read into series. */
 export async function readPack(p: Plan): Promise<Dataset> {
   return derive(p, await ingest(p));
+}
+
+/** The problems of a plan that must fail with bad input. */
+export async function problemsOf(p: Plan): Promise<Problem[]> {
+  const error = await readPack(p).then(
+    () => undefined,
+    (e: unknown) => e,
+  );
+  expect(error).toBeInstanceOf(InputError);
+  return (error as InputError).problems;
 }

@@ -3,11 +3,9 @@ import {tmpdir} from 'node:os';
 import {join} from 'node:path';
 import ExcelJS from 'exceljs';
 import {afterAll, describe, expect, it} from 'vitest';
-import type {Plan} from '../../src/config/plan.js';
-import {InputError, type Problem} from '../../src/errors.js';
 import {monthIndex} from '../../src/time/period.js';
 import {sheetReference} from '../../src/ingest/places.js';
-import {FIXTURES, fromSource, plan, readPack, series, source} from './plan.js';
+import {FIXTURES, fromSource, plan, problemsOf, readPack, series, source} from './plan.js';
 
 /**
  * Workbooks written by a second, independent writer: test/reference/xlsx.py (openpyxl, version in
@@ -16,14 +14,6 @@ import {FIXTURES, fromSource, plan, readPack, series, source} from './plan.js';
  */
 const temp = mkdtempSync(join(tmpdir(), 'ebbflow-xlsx-'));
 afterAll(() => rmSync(temp, {recursive: true, force: true}));
-async function problemsOf(p: Plan): Promise<Problem[]> {
-  const error = await readPack(p).then(
-    () => undefined,
-    (e: unknown) => e,
-  );
-  expect(error).toBeInstanceOf(InputError);
-  return (error as InputError).problems;
-}
 const wide = (file: string, more = {}) =>
   plan('monthly', [source('b', file, {dateColumn: 'Month', ...more})], [series('budget', 'b', {column: 'Budget'}), series('stock', 'b', {column: 'Stock', kind: 'stock'})]);
 const long = (file: string, more = {}) =>
