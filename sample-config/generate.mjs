@@ -5,7 +5,8 @@
 // Writes sample-config/data/trading.csv (wide, monthly), data/web.csv (long, monthly, dates like `Oct 2026`),
 // data/quarterly.csv (wide, quarterly, `;` delimiter and `,` decimal mark), data/repairs.parquet (the repair
 // workshop's job log, one row per finished job with its time, written through the embedded DuckDB) and
-// data/budget.xlsx (the sales budget as the finance team keeps it, a workbook written with exceljs). Node and the
+// data/budget.xlsx (the sales budget as the finance team keeps it, and a cost plan sheet with the months across; a
+// workbook written with exceljs). Node and the
 // project's own dependencies, seeded PRNG: the same script always writes the same CSV and Parquet bytes and the same
 // workbook cells.
 //
@@ -28,7 +29,8 @@
 //   Gaps: footfall is blank for 2019-08, 2023-02 and 2023-03 (door counter fault).
 //   Budget: sales_budget runs to 2027-03 (the end of fiscal year 2026/27; the fiscal year starts in April), and so
 //     do payroll_budget and marketing_budget (cost lines: below budget is favourable). The sales budget is also in
-//     budget.xlsx, which the monthly pack reads.
+//     budget.xlsx, which the monthly pack reads, and so are the cost budgets, on its sheet "Cost plan" (one row per
+//     account, the months across).
 //   Structure: net sales are the sum of three shop regions (North, Lakes, Coast), each rounded to 0.1, and the web
 //     store (the rest of net sales, also in tenths), so the parts add up exactly; cost of goods sold (cogs) gives a gross margin near 46%, falling by
 //     about a point in the 2023-11 flash sale; transactions give the average basket (net sales / transactions).
@@ -365,4 +367,15 @@ for (const r of trading) {
 }
 sheet.getColumn(1).numFmt = 'mmm yyyy';
 sheet.getColumn(1).width = 12;
+// The cost budgets as a plan sheet: one row per account, the months across (date cells), a unit column before them.
+const plan = book.addWorksheet('Cost plan');
+plan.addRow(['Tarnwick Outdoor Co. — cost plan, EUR k']);
+const firstDay = (month) => {
+  const [y, m] = month.split('-').map(Number);
+  return new Date(Date.UTC(y, m - 1, 1));
+};
+plan.addRow(['Account', 'Unit', ...trading.map((r) => firstDay(r.month))]);
+plan.addRow(['Payroll', 'EUR k', ...trading.map((r) => r.payroll_budget)]);
+plan.addRow(['Marketing', 'EUR k', ...trading.map((r) => r.marketing_budget)]);
+plan.getRow(2).numFmt = 'mmm yyyy';
 await book.xlsx.writeFile(join(dataDir, 'budget.xlsx'));

@@ -7,6 +7,7 @@ import {tmpdir} from 'node:os';
 import {join, resolve} from 'node:path';
 import {parse} from 'csv-parse/sync';
 import {loadPlan} from '../../src/config/index.js';
+import {readPack} from '../ingest/plan.js';
 
 const dir = resolve(import.meta.dirname, '../../sample-config');
 const read = (name: string) => readFileSync(join(dir, 'data', name), 'utf8');
@@ -112,10 +113,27 @@ describe('sample packs', () => {
       ['regions', 'shop-sales', 'indirect'],
     ]);
     expect(plan.series.find((s) => s.id === 'payroll')).toMatchObject({target: 'payroll-budget', better: 'lower'});
-    // The sales budget comes from the workbook, the repairs from the Parquet job log through DuckDB.
-    expect(plan.sources.map((s) => [s.id, s.reader])).toEqual([
-      ['trading', 'csv'], ['web', 'csv'], ['budget', 'xlsx'], ['repairs', 'duckdb'],
+    // The budgets come from the workbook (the cost plan with the months across), the repairs from the Parquet job
+    // log through DuckDB.
+    expect(plan.sources.map((s) => [s.id, s.reader, s.layout])).toEqual([
+      ['trading', 'csv', 'wide'], ['web', 'csv', 'long'], ['budget', 'xlsx', 'wide'], ['cost-plan', 'xlsx', 'across'],
+      ['repairs', 'duckdb', 'wide'],
     ]);
+    expect(plan.series.filter((s) => s.source === 'cost-plan').map((s) => [s.id, s.column])).toEqual([
+      ['payroll-budget', 'Payroll'], ['marketing-budget', 'Marketing'],
+    ]);
+    // The plan sheet holds the trading file's budget columns, month for month: read either way, the same series.
+    const fromCsv = {
+      ...plan,
+      series: plan.series.map((s) =>
+        s.source === 'cost-plan' ? {...s, source: 'trading', column: s.id.replace('-', '_')} : s,
+      ),
+    };
+    const [across, wide] = [await readPack(plan), await readPack(fromCsv)];
+    for (const id of ['payroll-budget', 'marketing-budget']) {
+      const [a, w] = [across, wide].map((d) => d.series[d.plans.findIndex((s) => s.id === id)]);
+      expect([a.start, [...a.values], [...a.ahead]]).toEqual([w.start, [...w.values], [...w.ahead]]);
+    }
     expect(plan.series.filter((s) => s.source === 'repairs').map((s) => s.aggregate)).toEqual(['sum', 'count']);
     // The `fromSource: web` entry is expanded by ingest into web-sessions and web-orders.
     expect((plan as unknown as {fromSource: {source: string}[]}).fromSource.map((f) => f.source)).toEqual(['web']);
