@@ -59,6 +59,7 @@ export function buildManifest(args: {
         bytes: f.bytes,
         sha256: f.sha256,
         rows: f.rows,
+        ...(f.sheet === undefined ? {} : {sheet: f.sheet}),
         ...(f.query ? {engine: f.query.engine, query: f.query.text} : {}),
         ...(f.query?.summarised ? {hashed: 'period summaries' as const} : {}),
       }))

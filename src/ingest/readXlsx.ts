@@ -101,7 +101,7 @@ export async function readXlsx(
   }
   cells.unusable = new Map();
   const sha256 = createHash('sha256').update(bytes).digest('hex');
-  return {file: source.file, sha256, bytes: bytes.length, rows};
+  return {file: source.file, sha256, bytes: bytes.length, rows, sheet: sheet.name};
 }
 
 type CellValue = ExcelJS.CellValue;

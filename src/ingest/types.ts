@@ -41,6 +41,8 @@ export interface InputFile {
   bytes: number;
   /** Data rows read (header excluded). */
   rows: number;
+  /** Workbooks: the sheet read (a workbook two sources read is listed once per sheet). */
+  sheet?: string;
   /**
    * Query sources: the engine and the query text as written in the pack. The hash is of the rows it returned, or,
    * when `summarised`, of the per-key, per-period summaries the engine computed from them (ingest/duckdbSummary.ts).

@@ -98,6 +98,7 @@ describe('layout across', () => {
       );
       // Whole months, none left out as incomplete.
       expect(values(d)).toEqual([['revenue', monthIndex(2026, 1), [10, 11, 12]]]);
+      expect(d.inputs[0]).toMatchObject({sheet: 'Plan 2026', rows: 1});
     }
   });
 });

@@ -123,9 +123,17 @@ describe('buildView', () => {
     expect(view.summary[0].yoy).toMatch(/^[+-]\d+,\d\s%$/);
   });
 
-  test('input paths are shown relative to the pack file', () => {
+  test('input paths are shown relative to the pack file, a workbook with the sheet read, in the pack\'s language', () => {
     const view = buildView(makeReport({count: 1}), null);
     expect(view.inputs[0].path).toBe('data/trading.csv');
+    const sheets = (locale: string) => {
+      const report = makeReport({count: 1, locale});
+      const book = {file: '/packs/harbourline/data/budget.xlsx', sha256: 'cd'.repeat(32), bytes: 100, rows: 2};
+      report.inputs = [{...book, sheet: 'Budget'}, {...book, sheet: 'Cost plan'}];
+      return buildView(report, null).inputs.map((i) => i.path);
+    };
+    expect(sheets('en-GB')).toEqual(['data/budget.xlsx, sheet Budget', 'data/budget.xlsx, sheet Cost plan']);
+    expect(sheets('de-DE')[1]).toBe('data/budget.xlsx, Blatt Cost plan');
   });
 
   test('history tables and chart when history is present', () => {

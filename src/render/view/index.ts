@@ -77,7 +77,10 @@ export function buildView(report: Report, logo: string | null): ViewModel {
     },
     cautions: cautions(w),
     inputs: report.inputs.map((i) => ({
-      path: shownPath(plan.packFile, i.file),
+      path:
+        i.sheet === undefined
+          ? shownPath(plan.packFile, i.file)
+          : w.t('label.sheetOf', {file: shownPath(plan.packFile, i.file), sheet: i.sheet}),
       sha256: i.sha256,
       size: w.t('label.bytes', {size: w.number(i.bytes, 0)}),
       rows: w.number(i.rows, 0),

@@ -120,6 +120,7 @@ export const de: Catalog = {
   'label.dataNotesHeading': 'Hinweise zu den Daten',
   'label.noDataNotes': 'Die Eingabedateien ergaben keine Datenhinweise.',
   'label.lineOf': '{file}, Zeile {line}',
+  'label.sheetOf': '{file}, Blatt {sheet}',
   'label.builtWith': 'Erstellt mit ebbflow {version} für den Berichtszeitraum {period}. Pfade sind relativ zur Paketdatei.',
   'label.page': 'Seite {page} von {pages}',
   'label.fallback':

@@ -123,6 +123,7 @@ export const en = {
   'label.dataNotesHeading': 'Notes on the data',
   'label.noDataNotes': 'The input files raised no data notes.',
   'label.lineOf': '{file}, line {line}',
+  'label.sheetOf': '{file}, sheet {sheet}',
   'label.builtWith': 'Built with ebbflow {version} for the review period {period}. Paths are relative to the pack file.',
   'label.page': 'Page {page} of {pages}',
   'label.fallback':

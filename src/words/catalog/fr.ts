@@ -120,6 +120,7 @@ export const fr: Catalog = {
   'label.dataNotesHeading': 'Remarques sur les données',
   'label.noDataNotes': 'Les fichiers d’entrée n’ont donné lieu à aucune remarque.',
   'label.lineOf': '{file}, ligne {line}',
+  'label.sheetOf': '{file}, feuille {sheet}',
   'label.builtWith':
     'Établi avec ebbflow {version} pour la période sous revue {period}. Les chemins sont relatifs au fichier du dossier.',
   'label.page': 'Page {page} sur {pages}',
