@@ -68,6 +68,12 @@ export const mixedFrequency = (text: string, column: string, found: Frequency, p
 export const mixedFrequencyHeader = (text: string, found: Frequency, pack: Frequency): string =>
   `the header holds ${found} periods ("${text}") but the pack is ${pack}; a pack has one frequency, so read this ` +
   `file from a ${found} pack, or head the columns with ${pack} periods such as ${EXAMPLE[pack]}`;
+export const dayMonthHeader = (text: string, formats: string[]): string =>
+  formats.length > 1
+    ? `the header's periods are dates such as "${text}", which could be day first or month first: add ` +
+      `\`dateFormat: ${formats[0]}\` or \`dateFormat: ${formats[1]}\` to the source (whichever the export writes)`
+    : `the header's periods are ${formats[0].startsWith('DD') ? 'day-first' : 'month-first'} dates such as ` +
+      `"${text}": add \`dateFormat: ${formats[0]}\` to the source`;
 export const noPeriodColumns = (header: string[]): string =>
   `no column of the header names a period (it holds ${header.map((h) => `"${h}"`).join(', ')}); with layout ` +
   `across, head each column of values with its period, such as 2026-10, Oct 2026 or a date cell`;

@@ -2,6 +2,7 @@ import type {CellReader} from './cells.js';
 import * as msg from './messages.js';
 import {keyStores, missingKeys, type LongVisitor} from './readLong.js';
 import {blankRow} from './rowVisitor.js';
+import {dayMonthOrder} from '../time/parseDate.js';
 import type {Stamp} from '../time/stamp.js';
 import type {SourceData, Wanted} from './sourceData.js';
 
@@ -35,7 +36,17 @@ export function acrossVisitor(cells: CellReader, wanted: Wanted, data: SourceDat
         const stamp = cells.headerStamp(text, line, at + 1);
         if (stamp !== undefined) periods.push({at, stamp});
       });
-      if (periods.length === 0) cells.report(line, null, msg.noPeriodColumns(header));
+      if (periods.length === 0) {
+        // Day-first or month-first dates are read only with a dateFormat (parseDate.ts): say which one, from a
+        // date that can only be read one way when the header has one.
+        const dated = header.flatMap((h) => {
+          const formats = dayMonthOrder(h);
+          return formats ? [{text: h.trim(), formats}] : [];
+        });
+        const decisive = dated.find((d) => d.formats.length === 1) ?? dated[0];
+        const message = decisive ? msg.dayMonthHeader(decisive.text, decisive.formats) : msg.noPeriodColumns(header);
+        cells.report(line, null, message);
+      }
       return periods.length > 0;
     },
     record(fields, line) {

@@ -80,6 +80,24 @@ describe('layout across', () => {
     expect(p2[0].message).toMatch(/^the header holds quarterly periods \("2026-Q1"\) but the pack is monthly/);
   });
 
+  it('slash dates across the header: the problem names the dateFormat, from a date that shows the order', async () => {
+    const text = 'item,01/01/2026,01/02/2026,01/03/2026\nNet sales,1,2,3\n';
+    const file = write('slashes.csv', text);
+    const src = source('b', file, {layout: 'across', keyColumn: 'item'});
+    const wanted = [series('s', 'b', {column: 'Net sales'})];
+    expect((await problemsOf(plan('monthly', [src], wanted)))[0].message).toBe(
+      'the header\'s periods are dates such as "01/01/2026", which could be day first or month first: add `dateFormat: DD/MM/YYYY` or `dateFormat: MM/DD/YYYY` to the source (whichever the export writes)',
+    );
+    const later = write('slashes-later.csv', text.replace('01/03/2026', '31/03/2026'));
+    const withDay = plan('monthly', [source('b', later, {layout: 'across', keyColumn: 'item'})], wanted);
+    expect((await problemsOf(withDay))[0].message).toBe(
+      'the header\'s periods are day-first dates such as "31/03/2026": add `dateFormat: DD/MM/YYYY` to the source',
+    );
+    // With it, the last day of March names March.
+    const read = await readPack(plan('monthly', [source('b', later, {layout: 'across', keyColumn: 'item', dateFormat: 'DD/MM/YYYY'})], wanted));
+    expect(values(read)).toEqual([['s', monthIndex(2026, 1), [1, 2, 3]]]);
+  });
+
   it('a workbook headed by date cells (first or last day of each month) names whole months', async () => {
     const wb = new ExcelJS.Workbook();
     const ws = wb.addWorksheet('Plan 2026');
