@@ -59,7 +59,8 @@ export class CellReader {
    */
   unusable: ReadonlyMap<number, string> = new Map();
   private readonly dates = new Map<string, Stamp | undefined>();
-  private readonly reading: DateReading;
+  /** How its date cells are read (the source's `dateFormat`, the locale's month names). */
+  readonly reading: DateReading;
   private readonly decimal: '.' | ',';
   private mixedReported = false;
   /**
@@ -166,19 +167,12 @@ export class CellReader {
    * The stamp of a header cell that names a period (layout across), recorded as a date cell's is; undefined when the
    * cell names none (a label column such as `Unit` or `Total`). A day that starts or ends a pack period (a workbook's
    * `2026-01-01` or `2026-01-31` over a month's column) names that period. A coarser period than the pack's (a
-   * quarter's column in a monthly pack) is a problem.
+   * quarter's subtotal among months) names none here.
    */
-  headerStamp(text: string, line: number, column: number): Stamp | undefined {
+  headerStamp(text: string, line: number): Stamp | undefined {
     const cell = readDateCell(text, this.reading);
     let stamp = cell === undefined ? undefined : stampOf(cell, this.frequency, this.source.timeZone);
-    if (stamp === undefined) {
-      const found = labelFrequency(text.trim(), this.reading);
-      if (found !== undefined && found !== this.frequency && !this.mixedReported) {
-        this.report(line, column, msg.mixedFrequencyHeader(text.trim(), found, this.frequency));
-        this.mixedReported = true;
-      }
-      return undefined;
-    }
+    if (stamp === undefined) return undefined;
     if (stamp.grain === 'day') {
       const from = periodStartDay(this.frequency, stamp.period);
       const to = periodStartDay(this.frequency, stamp.period + 1) - 1;

@@ -2,7 +2,7 @@ import type {CellReader} from './cells.js';
 import * as msg from './messages.js';
 import {keyStores, missingKeys, type LongVisitor} from './readLong.js';
 import {blankRow} from './rowVisitor.js';
-import {dayMonthOrder} from '../time/parseDate.js';
+import {dayMonthOrder, labelFrequency} from '../time/parseDate.js';
 import type {Stamp} from '../time/stamp.js';
 import type {SourceData, Wanted} from './sourceData.js';
 
@@ -31,23 +31,23 @@ export function acrossVisitor(cells: CellReader, wanted: Wanted, data: SourceDat
       if (keyAt < 0) return false;
       // The key column stands in for the date column in problems about a row.
       cells.dateColumn = keyAt;
+      const unread: string[] = [];
       header.forEach((text, at) => {
         if (at === keyAt || text.trim() === '') return;
-        const stamp = cells.headerStamp(text, line, at + 1);
+        const stamp = cells.headerStamp(text, line);
         if (stamp !== undefined) periods.push({at, stamp});
+        else unread.push(text.trim());
       });
       if (periods.length === 0) {
-        // Day-first or month-first dates are read only with a dateFormat (parseDate.ts): say which one, from a
-        // date that can only be read one way when the header has one.
-        const dated = header.flatMap((h) => {
-          const formats = dayMonthOrder(h);
-          return formats ? [{text: h.trim(), formats}] : [];
-        });
-        const decisive = dated.find((d) => d.formats.length === 1) ?? dated[0];
-        const message = decisive ? msg.dayMonthHeader(decisive.text, decisive.formats) : msg.noPeriodColumns(header);
-        cells.report(line, null, message);
+        cells.report(line, null, noPeriodsProblem(header, cells));
+        return false;
       }
-      return periods.length > 0;
+      // Columns a reader may have meant as periods (a month name of another language) are named, not passed over.
+      if (unread.length > 0) {
+        const list = unread.map((t) => `"${t}"`).join(', ');
+        data.notes.push(cells.note(line, {code: 'columnsNotRead', values: {n: unread.length, list}}));
+      }
+      return true;
     },
     record(fields, line) {
       if (blankRow(fields)) return;
@@ -72,4 +72,23 @@ export function acrossVisitor(cells: CellReader, wanted: Wanted, data: SourceDat
       missingKeys(cells, wanted, data, skipped, keyLabel);
     },
   };
+}
+
+/**
+ * Why a header names no period: day-first or month-first dates without a `dateFormat` (parseDate.ts; the setting
+ * named from a date that can only be read one way, when the header has one), periods coarser than the pack's, or
+ * no dates at all.
+ */
+function noPeriodsProblem(header: string[], cells: CellReader): string {
+  const dated = header.flatMap((h) => {
+    const formats = dayMonthOrder(h);
+    return formats ? [{text: h.trim(), formats}] : [];
+  });
+  const decisive = dated.find((d) => d.formats.length === 1) ?? dated[0];
+  if (decisive) return msg.dayMonthHeader(decisive.text, decisive.formats);
+  for (const h of header) {
+    const found = labelFrequency(h.trim(), cells.reading);
+    if (found !== undefined && found !== cells.frequency) return msg.mixedFrequencyHeader(h.trim(), found, cells.frequency);
+  }
+  return msg.noPeriodColumns(header);
 }

@@ -5,6 +5,7 @@ import ExcelJS from 'exceljs';
 import {afterAll, describe, expect, it} from 'vitest';
 import {monthIndex} from '../../src/time/period.js';
 import {fromSource, plan, problemsOf, readPack, series, source} from './plan.js';
+import {worded} from '../fixtures/notes.js';
 
 /**
  * Layout across: a budget sheet, one row per series and the periods across the header. The same figures written as
@@ -76,8 +77,13 @@ describe('layout across', () => {
     );
     const quarters = write('quarters.csv', 'item,2026-Q1,2026-Q2\nNet sales,10,11\n');
     const p2 = await problemsOf(plan('monthly', [source('b', quarters, {layout: 'across', keyColumn: 'item'})], [series('s', 'b', {column: 'Net sales'})]));
-    expect(p2[0]).toMatchObject({line: 1, column: 2});
+    expect(p2[0]).toMatchObject({line: 1});
     expect(p2[0].message).toMatch(/^the header holds quarterly periods \("2026-Q1"\) but the pack is monthly/);
+    // Among months, a quarter's subtotal column is only a column not read, and a data note names it.
+    const subtotals = write('subtotals.csv', 'item,Jan 2026,Feb 2026,Mar 2026,Q1 2026,Mrz 2026\nNet sales,1,2,3,6,3\n');
+    const d = await readPack(plan('monthly', [source('b', subtotals, {layout: 'across', keyColumn: 'item'})], [series('s', 'b', {column: 'Net sales'})]));
+    expect(values(d)).toEqual([['s', monthIndex(2026, 1), [1, 2, 3]]]);
+    expect(d.notes.map((n) => worded(n))).toContain('2 columns of the header name no period and were not read: "Q1 2026", "Mrz 2026"');
   });
 
   it('slash dates across the header: the problem names the dateFormat, from a date that shows the order', async () => {

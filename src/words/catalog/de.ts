@@ -412,6 +412,8 @@ export const de: Catalog = {
   'note.notReconciled':
     'Gruppe {group}: Prognosen nicht abgestimmt ({why, select, noForecast {{series} hat keine Prognose} other {die Prognosen sind nicht endlich}})',
   'note.divisionByZero': 'Division durch null in {n, plural, one {Periode} other {den Perioden}} {list}; als fehlend belassen',
+  'note.columnsNotRead':
+    '{n, plural, one {1 Spalte} other {# Spalten}} der Kopfzeile {n, plural, one {nennt} other {nennen}} keine Periode und {n, plural, one {wurde} other {wurden}} nicht gelesen: {list}',
   'note.footerIgnored':
     '{rows, plural, one {1 Zeile} other {# Zeilen}} nach den Daten nicht berücksichtigt ({blank, select, yes {leere Spalte „{column}“} other {„{text}“}}{rows, plural, one {} other { bis Zeile {last}}}): kein Datum, daher als Fußzeile gewertet',
   'note.combined':

@@ -411,6 +411,8 @@ export const en = {
   'note.notReconciled':
     'group {group}: forecasts not reconciled ({why, select, noForecast {{series} has no forecast} other {the forecasts are not finite}})',
   'note.divisionByZero': 'division by zero in {n, plural, one {period} other {periods}} {list}; left missing',
+  'note.columnsNotRead':
+    '{n, plural, one {1 column} other {# columns}} of the header {n, plural, one {names} other {name}} no period and {n, plural, one {was} other {were}} not read: {list}',
   'note.footerIgnored':
     '{rows, plural, one {1 row} other {# rows}} after the data ignored ({blank, select, yes {blank "{column}"} other {"{text}"}}{rows, plural, one {} other { to line {last}}}): not a date, so taken as a footer',
   'note.combined':

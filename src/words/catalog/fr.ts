@@ -411,6 +411,8 @@ export const fr: Catalog = {
   'note.notReconciled':
     'groupe {group} : prévisions non réconciliées ({why, select, noForecast {{series} n’a pas de prévision} other {les prévisions ne sont pas finies}})',
   'note.divisionByZero': 'division par zéro pour {n, plural, one {la période} other {les périodes}} {list} ; laissé manquant',
+  'note.columnsNotRead':
+    '{n, plural, one {1 colonne} other {# colonnes}} de l’en-tête {n, plural, one {ne nomme} other {ne nomment}} aucune période et {n, plural, one {n’a pas été lue} other {n’ont pas été lues}} : {list}',
   'note.footerIgnored':
     '{rows, plural, one {1 ligne ignorée} other {# lignes ignorées}} après les données ({blank, select, yes {« {column} » vide} other {« {text} »}}{rows, plural, one {} other { jusqu’à la ligne {last}}}) : {rows, plural, one {ce n’est pas une date, elle est donc lue} other {ce ne sont pas des dates, elles sont donc lues}} comme un pied de tableau',
   'note.combined':
