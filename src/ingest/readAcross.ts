@@ -9,7 +9,8 @@ import type {SourceData, Wanted} from './sourceData.js';
 /**
  * Visitor for an across source (a budget or plan sheet): one row per series, named in the key column, and one
  * column per period, headed by it (`Oct 2026`, `2026-10`, a workbook's date cell). Header cells that name no period
- * (`Unit`, `FY total`, a notes column) are columns the source does not read. Each value goes into its row's store at
+ * (`Unit`, `FY total`, a quarter's subtotal among months, notes) are columns the source does not read, named in one
+ * data note. Each value goes into its row's store at
  * its column's period, so such a source reads like the long source of the same figures; only the rows the pack asks
  * for are kept (all of them for `fromSource`), and `finish` reports rows the pack names but the sheet lacks.
  *
