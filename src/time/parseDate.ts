@@ -55,6 +55,11 @@ const NAME_SHORT_YEAR = /^(\p{L}+\.?)-(\d{2})$/u;
 const YEAR_QUARTER = /^(\d{4})-?Q([1-4])$/i;
 const QUARTER_YEAR = /^Q([1-4])[ -]?(\d{4})$/i;
 const YEAR_WEEK = /^(\d{4})-?W(\d{1,2})(?:-?[1-7])?$/i;
+/**
+ * Week labels as reports write them: `W41 2026`, `KW 41/2026` (German). Not the French `S41 2026`: `S1 2026` and
+ * `S2 2026` are just as often the year's halves.
+ */
+const WEEK_YEAR = /^(?:KW|W) ?(\d{1,2})[ /](\d{4})$/i;
 const YEAR_MONTH_DAY = new RegExp(String.raw`^(\d{4})([-/.])(\d{1,2})\2(\d{1,2})${TIME}$`);
 const DAY_MONTH_YEAR = new RegExp(String.raw`^(\d{1,2})([-/.])(\d{1,2})\2(\d{4})${TIME}$`);
 /** A day with its month's name: `31 Jan 2024`, `31-JAN-24`, `31. Januar 2024`, `31 janv. 2024`. */
@@ -72,7 +77,8 @@ const BASIC_DAY = new RegExp(String.raw`^(\d{4})(\d{2})(\d{2})${TIME}$`);
  *   `Sept 2026`, `Oct-2026`, a spreadsheet's `Oct-26`, and the month names of the pack's locale given in
  *   `reading.months` (`Okt 2026`, `janv. 2026`)
  * - quarters: `2026-Q3`, `2026Q3`, `Q3 2026`, `Q3-2026`
- * - ISO weeks: `2026-W41`, `2026W41`, and ISO week dates `2026-W41-3`
+ * - ISO weeks: `2026-W41`, `2026W41`, ISO week dates `2026-W41-3`, and the labels reports write, `W41 2026` and
+ *   `KW 41/2026`
  * - days: `2026-10-31`, `2026/10/31`, and with `reading.dateFormat` day-first or month-first dates (`31/10/2026`,
  *   `10/31/2026`, `31.10.2026`); each with an optional time of day (`2015/01/01 01:00:00`,
  *   `2026-10-31T22:15:00.5+01:00`), kept with the UTC offset when one is written (ISO 8601); `20261031` (ISO 8601's
@@ -110,9 +116,11 @@ export function readDateCell(text: string, reading: DateReading = NONE): DateCel
   if ((m = s.match(MONTH_SLASH_YEAR))) return month(Number(m[2]), Number(m[1]));
   if ((m = s.match(YEAR_QUARTER))) return {kind: 'quarter', year: Number(m[1]), quarter: Number(m[2])};
   if ((m = s.match(QUARTER_YEAR))) return {kind: 'quarter', year: Number(m[2]), quarter: Number(m[1])};
-  if ((m = s.match(YEAR_WEEK))) {
-    const year = Number(m[1]);
-    const week = Number(m[2]);
+  const yearWeek = s.match(YEAR_WEEK);
+  const weekYear = yearWeek ? null : s.match(WEEK_YEAR);
+  if (yearWeek || weekYear) {
+    const year = Number(yearWeek ? yearWeek[1] : weekYear![2]);
+    const week = Number(yearWeek ? yearWeek[2] : weekYear![1]);
     return week >= 1 && week <= isoWeeksInYear(year) ? {kind: 'week', year, week} : undefined;
   }
   if ((m = s.match(NAME_YEAR) ?? s.match(NAME_SHORT_YEAR))) {

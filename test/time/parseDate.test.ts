@@ -139,6 +139,14 @@ describe('dates as exports write them', () => {
     expect([at('Dec-68'), at('Jan-69')].map((c) => c && 'year' in c && c.year)).toEqual([2068, 1969]);
     // `Jan 24` could be 24 January as well as January 2024: not read.
     expect(at('Jan 24')).toBeUndefined();
+    // Week labels as the report itself writes them in English and German (words.ts: period.week); not the French
+    // S41 2026, since S1 and S2 are also the halves of a year.
+    for (const text of ['W41 2026', 'KW 41/2026', 'kw41 2026']) expect(at(text)).toEqual({kind: 'week', year: 2026, week: 41});
+    expect(at('S1 2026')).toBeUndefined();
+    // 2025 has 52 ISO weeks, 2026 has 53 (Python's date(2025, 12, 28).isocalendar() is week 52, and
+    // date(2026, 12, 28).isocalendar() week 53).
+    expect(at('W53 2025')).toBeUndefined();
+    expect(at('KW 53/2026')).toEqual({kind: 'week', year: 2026, week: 53});
   });
   it('timestamps with times and ISO 8601 offsets take the date in the source time zone', () => {
     const at = (text: string, zone: string) => stampOf(readDateCell(text)!, 'monthly', zone)!;
