@@ -84,7 +84,7 @@ export interface SourcePlan {
   file: string;
   layout: 'wide' | 'long' | 'across';
   dateColumn: string;
-  /** Long layout: the column naming the series. */
+  /** Long and across layouts: the column naming the series. */
   keyColumn: string | null;
   /** Long layout: the column holding the values. */
   valueColumn: string | null;

@@ -337,7 +337,10 @@ const sourceEntry = z.strictObject({
     .enum(['auto', ',', ';', '\t'])
     .nullish()
     .meta(doc('CSV field separator; auto sniffs it from the header line.', d.source.delimiter)),
-  decimal: z.enum(['.', ',']).nullish().meta(doc('Decimal mark of the numbers (CSV, and numbers typed as text in a workbook).', d.source.decimal)),
+  decimal: z
+    .enum(['.', ','])
+    .nullish()
+    .meta(doc('Decimal mark of the numbers (CSV, and numbers typed as text in a workbook).', d.source.decimal)),
   encoding: z
     .enum(['utf-8', 'windows-1252'])
     .nullish()

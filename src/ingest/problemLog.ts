@@ -36,6 +36,7 @@ export class ProblemLog {
   private readonly totals = new Map<string, number>();
   private readonly kinds = new Map<string, {listed: number; rest: Entry | null}>();
   private readonly listedPerSource = new Map<string, number>();
+  private added = 0;
 
   /**
    * Add a problem at `file` (a workbook's `file` names its cell). `source` is the file it counts against, when
@@ -48,6 +49,7 @@ export class ProblemLog {
     message: string,
     {source = file, repeat, row = line}: {source?: string; repeat?: Repeat; row?: number | null} = {},
   ): void {
+    this.added++;
     this.totals.set(source, (this.totals.get(source) ?? 0) + 1);
     if (repeat) {
       const id = `${source}\u0000${repeat.key}`;
@@ -69,8 +71,9 @@ export class ProblemLog {
     this.keep({problem: {file, line, column, message}, source, count: 1});
   }
 
+  /** Problems added so far, listed or not. */
   get size(): number {
-    return this.entries.length;
+    return this.added;
   }
 
   /**

@@ -15,9 +15,9 @@ import {utf16Order} from './utf16.js';
  * Stream one CSV source through a visitor, reading the file once: the raw bytes are hashed (SHA-256)
  * and counted, decoded (UTF-8 validated strictly, or Windows-1252 through iconv-lite because Node 20's
  * TextDecoder maps 0x80–0x9F to control characters, or UTF-16 when the file starts with its byte-order mark, see
- * utf16.ts), the delimiter is sniffed from the header line when
- * `auto`, and {@link CsvRecords} cuts the text into records from the source's `headerRow` on (title lines above it
- * are skipped). Memory stays bounded by the stream's chunk size.
+ * utf16.ts), the delimiter is sniffed from the header line when `auto`, and {@link CsvRecords} cuts the text into
+ * records from the source's `headerRow` on (title lines above it are skipped). Memory stays bounded by the
+ * stream's chunk size.
  *
  * File, decoding and CSV-syntax failures go to `problems`; the result is then undefined.
  */

@@ -1,4 +1,4 @@
-import {nelderMead} from '../numeric/nelderMead.js';
+import {nelderMead, warmSteps} from '../numeric/nelderMead.js';
 import {rootsWithinUnitCircle} from '../numeric/rootsWithinUnitCircle.js';
 import {checkForecastOptions, type Forecast, type ForecastOptions} from './model.js';
 import {normalIntervals} from './normalIntervals.js';
@@ -58,7 +58,7 @@ function arimaName({p, d, q, constant}: ArimaOrder): string {
 
 /**
  * With `start` (a fit of the same order to a shorter stretch of the same series, e.g. the back-test origin before)
- * the search begins at its estimates with a small simplex (5% of each, 0.01 for a zero) instead of at zero with
+ * the search begins at its estimates with a small simplex (warmSteps in nelderMead.ts) instead of at zero with
  * the usual step; an inadmissible start is ignored.
  */
 export function fitArima(values: Float64Array, order: ArimaOrder, start?: ArimaFit): ArimaFit | null {
@@ -114,8 +114,7 @@ function search(
   maxEvaluations: number,
 ): Float64Array {
   if (warm && Number.isFinite(objective(warm, Infinity))) {
-    const steps = warm.map((v) => (v === 0 ? 0.01 : 0.05 * Math.abs(v)));
-    return nelderMead(objective, warm, {maxEvaluations, steps}).x;
+    return nelderMead(objective, warm, {maxEvaluations, steps: warmSteps(warm)}).x;
   }
   return nelderMead(objective, cold, {maxEvaluations}).x;
 }

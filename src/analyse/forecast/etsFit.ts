@@ -1,4 +1,4 @@
-import {nelderMead, nelderMeadSearch, type NelderMeadResult} from '../numeric/nelderMead.js';
+import {nelderMead, nelderMeadSearch, warmSteps, type NelderMeadResult} from '../numeric/nelderMead.js';
 import {projectedBfgs} from '../numeric/projectedBfgs.js';
 import {etsAdmissible} from './etsAdmissible.js';
 import {etsFilter, etsRecurse} from './etsFilter.js';
@@ -90,12 +90,9 @@ export function fitEts(
   const warmStart = warm ? problem.warmVector(warm) : null;
   if (warmStart && Number.isFinite(problem.objective(warmStart, Infinity))) {
     try {
-      // A simplex of 5% of each coordinate: the start is close, and the usual single step (a tenth of the largest
-      // coordinate, say the level) would throw the smoothing parameters out of range and spend the budget coming
-      // back. On back-test refits of 12 seasonal monthly series this reached a better likelihood in 300
-      // evaluations than the usual start in 500 (median −2·log-likelihood 0.8 lower).
-      const steps = warmStart.map((x) => (x === 0 ? 0.01 : 0.05 * Math.abs(x)));
-      result = nelderMead(problem.objective, warmStart, {maxEvaluations, steps});
+      // A small simplex (warmSteps): on back-test refits of 12 seasonal monthly series this reached a better
+      // likelihood in 300 evaluations than the usual start in 500 (median −2·log-likelihood 0.8 lower).
+      result = nelderMead(problem.objective, warmStart, {maxEvaluations, steps: warmSteps(warmStart)});
     } catch {
       result = undefined;
     }

@@ -20,10 +20,10 @@ const MARGINS = [350, 180, 120, 100, 50];
  * The fits of automatic ETS (the models and order of selectEts, or the pool of `dampedAdditiveSeason`, see
  * etsCandidates) for Akaike weighting, screened: the non-seasonal models, quick to fit, are fitted first; the
  * seasonal models' searches then run in stages, the most promising (lowest AICc so far) first, and a search is
- * given up at a checkpoint when its AICc so far, less the checkpoint's margin, is still more than 2·ln 100 ≈ 9.21 above the best AICc known (of a finished fit, or
- * of a search so far, which its end can only lower). Such a model would end with a weight under 1% (the cut of
- * akaikeWeights), so it is not needed; every model kept is fitted exactly as selectEts fits it (a search's path
- * does not depend on its stages). The fits come back in selectEts' order, without the models given up. With
+ * given up at a checkpoint when its AICc so far, less the checkpoint's margin, is still more than
+ * 2·ln 100 ≈ 9.21 above the best AICc known (of a finished fit, or of a search so far, which its end can only
+ * lower). Such a model would end with a weight under 1% (the cut of akaikeWeights), so it is not needed; every
+ * model kept is fitted exactly as selectEts fits it (a search's path does not depend on its stages). The fits come back in selectEts' order, without the models given up. With
  * `maxEvaluations` below 2,000 every fit and search stops there (the margins, measured to 2,000, then have room
  * to spare), and the screen keeps what fitting every model with that budget keeps (etsScreen.test.ts).
  *

@@ -50,6 +50,15 @@ export interface NelderMeadResult {
 
 const BIG = 1e35;
 
+/**
+ * Start steps for a search that begins at a previous fit's estimates (`steps` above): 5% of each coordinate, 0.01
+ * for a zero. The start is close, and the usual single step (a tenth of the largest coordinate) would throw the
+ * small ones out of range.
+ */
+export function warmSteps(start: Float64Array): Float64Array {
+  return start.map((x) => (x === 0 ? 0.01 : 0.05 * Math.abs(x)));
+}
+
 export function nelderMead(
   f: (x: Float64Array, bound: number) => number,
   start: Float64Array,
