@@ -74,6 +74,14 @@ export function fitArima(values: Float64Array, order: ArimaOrder, start?: ArimaF
   let spread = 0;
   for (const v of w) spread += (v - centre) ** 2;
   spread = Math.sqrt(spread / w.length);
+  if (!(spread > 0)) {
+    // The squares underflowed (deviations below about 1e-162): the same spread from deviations scaled by the largest.
+    let peak = 0;
+    for (const v of w) peak = Math.max(peak, Math.abs(v - centre));
+    let scaled = 0;
+    for (const v of w) scaled += peak > 0 ? ((v - centre) / peak) ** 2 : 0;
+    spread = peak * Math.sqrt(scaled / w.length);
+  }
   if (!(spread > 0)) spread = Math.abs(centre) || 1;
   // Standardised w, so that every parameter the optimiser sees is of order one.
   const z = w.map((v) => (v - centre) / spread);

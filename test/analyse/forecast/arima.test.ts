@@ -119,14 +119,14 @@ describe('selectArima', () => {
   });
 
   it('returns null or a finite forecast for any short or odd series (property)', () => {
-    fc.assert(
-      fc.property(fc.array(fc.double({min: -1e6, max: 1e6, noNaN: true}), {minLength: 1, maxLength: 12}), (xs) => {
-        const fit = selectArima(Float64Array.from(xs));
-        if (!fit) return true;
-        const f = forecastArima(fit, {h: 3});
-        return f.mean.every(Number.isFinite);
-      }),
-    );
+    const finite = (xs: number[]) => {
+      const fit = selectArima(Float64Array.from(xs));
+      return !fit || forecastArima(fit, {h: 3}).mean.every(Number.isFinite);
+    };
+    // Differences so small that their squares underflow (the fast-check counterexample of seed 247, kept).
+    expect(finite([0, 4.684113814540591e-170, 0, -1e-323])).toBe(true);
+    const series = fc.array(fc.double({min: -1e6, max: 1e6, noNaN: true}), {minLength: 1, maxLength: 12});
+    fc.assert(fc.property(series, finite), {seed: 247, numRuns: 500});
   });
 
   it('rejects NaN', () => {
