@@ -1,23 +1,16 @@
-import {mkdtempSync, rmSync, writeFileSync} from 'node:fs';
-import {tmpdir} from 'node:os';
 import {join} from 'node:path';
 import ExcelJS from 'exceljs';
-import {afterAll, describe, expect, it} from 'vitest';
+import {describe, expect, it} from 'vitest';
 import {monthIndex} from '../../src/time/period.js';
-import {fromSource, plan, problemsOf, readPack, series, source} from './plan.js';
+import {fromSource, plan, problemsOf, readPack, scratch, series, source} from './plan.js';
 import {worded} from '../fixtures/notes.js';
+
+const {dir: temp, write} = scratch('across');
 
 /**
  * Layout across: a budget sheet, one row per series and the periods across the header. The same figures written as
  * a long CSV (the layout the other tests check against R and openpyxl) must read into the same series.
  */
-const temp = mkdtempSync(join(tmpdir(), 'ebbflow-across-'));
-afterAll(() => rmSync(temp, {recursive: true, force: true}));
-const write = (name: string, text: string): string => {
-  const file = join(temp, name);
-  writeFileSync(file, text);
-  return file;
-};
 const values = (d: Awaited<ReturnType<typeof readPack>>) => d.series.map((s) => [s.id, s.start, [...s.values]]);
 
 const MONTHS = ['Jan 2026', 'Feb 2026', 'Mar 2026', 'Apr 2026'];

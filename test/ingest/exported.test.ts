@@ -1,18 +1,11 @@
-import {mkdtempSync, rmSync, writeFileSync} from 'node:fs';
-import {tmpdir} from 'node:os';
 import {join} from 'node:path';
-import {afterAll, describe, expect, it} from 'vitest';
+import {describe, expect, it} from 'vitest';
 import {monthIndex} from '../../src/time/period.js';
-import {fromSource, plan, problemsOf, readPack, series, source} from './plan.js';
+import {fromSource, plan, problemsOf, readPack, scratch, series, source} from './plan.js';
 import {worded} from '../fixtures/notes.js';
 
-const temp = mkdtempSync(join(tmpdir(), 'ebbflow-exported-'));
-afterAll(() => rmSync(temp, {recursive: true, force: true}));
-const write = (name: string, text: string): string => {
-  const file = join(temp, name);
-  writeFileSync(file, text);
-  return file;
-};
+const {write} = scratch('exported');
+
 /** Daily rows `date,amount` from a start day for n days, amount = day number + 1. */
 function daily(from: string, n: number, format = (iso: string) => iso): string {
   const start = Date.parse(`${from}T00:00:00Z`);

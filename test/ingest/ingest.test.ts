@@ -1,25 +1,16 @@
-import {mkdtempSync, rmSync, writeFileSync} from 'node:fs';
-import {tmpdir} from 'node:os';
 import {join} from 'node:path';
-import {afterAll, describe, expect, it} from 'vitest';
-
+import {describe, expect, it} from 'vitest';
 import type {Dataset} from '../../src/ingest/index.js';
 import {isoWeekIndex, monthIndex, quarterIndex} from '../../src/time/period.js';
-import {FIXTURES, fromSource, plan, problemsOf, readPack, series, source} from './plan.js';
+import {FIXTURES, fromSource, plan, problemsOf, readPack, scratch, series, source} from './plan.js';
 import {placed, worded} from '../fixtures/notes.js';
 
+const {dir: temp, write} = scratch('ingest');
 
 const values = (d: Dataset, id: string): number[] => [...d.series.find((s) => s.id === id)!.values];
 const notes = (d: Dataset, id: string): string[] => d.notes.filter((n) => n.series === id).map(worded);
-const temp = mkdtempSync(join(tmpdir(), 'ebbflow-ingest-'));
-afterAll(() => rmSync(temp, {recursive: true, force: true}));
 /** `2000-01` for i = 0, one month per step. */
 const monthLabel = (i: number): string => `${2000 + Math.floor(i / 12)}-${String((i % 12) + 1).padStart(2, '0')}`;
-const write = (name: string, text: string | Buffer): string => {
-  const file = join(temp, name);
-  writeFileSync(file, text);
-  return file;
-};
 
 describe('wide layout', () => {
   it('reads a UTF-8 file with BOM, CRLF, thousands separators and missing markers', async () => {

@@ -1,5 +1,7 @@
+import {mkdtempSync, rmSync, writeFileSync} from 'node:fs';
+import {tmpdir} from 'node:os';
 import {dirname, join} from 'node:path';
-import {expect} from 'vitest';
+import {afterAll, expect} from 'vitest';
 import {fileURLToPath} from 'node:url';
 import type {AnalysisOptions, FromSourcePlan, Plan, SeriesPlan, SourcePlan} from '../../src/config/plan.js';
 import type {Frequency} from '../../src/time/period.js';
@@ -65,4 +67,18 @@ export async function problemsOf(p: Plan): Promise<Problem[]> {
   );
   expect(error).toBeInstanceOf(InputError);
   return (error as InputError).problems;
+}
+
+/** A fresh temporary folder for the calling test file, removed after its tests, and a writer of files into it. */
+export function scratch(prefix: string): {dir: string; write: (name: string, text: string | Buffer) => string} {
+  const dir = mkdtempSync(join(tmpdir(), `ebbflow-${prefix}-`));
+  afterAll(() => rmSync(dir, {recursive: true, force: true}));
+  return {
+    dir,
+    write: (name, text) => {
+      const file = join(dir, name);
+      writeFileSync(file, text);
+      return file;
+    },
+  };
 }

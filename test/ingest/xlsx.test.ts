@@ -1,19 +1,17 @@
-import {mkdtempSync, rmSync} from 'node:fs';
-import {tmpdir} from 'node:os';
 import {join} from 'node:path';
 import ExcelJS from 'exceljs';
-import {afterAll, describe, expect, it} from 'vitest';
+import {describe, expect, it} from 'vitest';
 import {monthIndex} from '../../src/time/period.js';
 import {sheetReference} from '../../src/ingest/places.js';
-import {FIXTURES, fromSource, plan, problemsOf, readPack, series, source} from './plan.js';
+import {FIXTURES, fromSource, plan, problemsOf, readPack, scratch, series, source} from './plan.js';
+
+const {dir: temp} = scratch('xlsx');
 
 /**
  * Workbooks written by a second, independent writer: test/reference/xlsx.py (openpyxl, version in
  * test/fixtures/ingest/openpyxl.json) writes the same data as two workbooks (1900 and 1904 date systems) and as CSV.
  * Read through ingest and derive, the workbooks must give exactly the CSV's values.
  */
-const temp = mkdtempSync(join(tmpdir(), 'ebbflow-xlsx-'));
-afterAll(() => rmSync(temp, {recursive: true, force: true}));
 const wide = (file: string, more = {}) =>
   plan('monthly', [source('b', file, {dateColumn: 'Month', ...more})], [series('budget', 'b', {column: 'Budget'}), series('stock', 'b', {column: 'Stock', kind: 'stock'})]);
 const long = (file: string, more = {}) =>
